@@ -1,0 +1,238 @@
+package sdf
+
+import (
+	"math"
+	"sort"
+
+	"coilwright/cam/geom"
+)
+
+// A HelixSweep carries a plane profile along a helix about the z axis whose
+// radius r(φ) and height z(φ) are arbitrary smooth functions of the turning
+// angle φ. The distance is found by local minimisation over the curve
+// parameter:
+//
+//  1. The point's azimuth θ and a table of z(φ) give the two turns whose
+//     crossings of the point's meridian bracket its height; their angles
+//     θ + 2πk start two Newton searches for the minimum of |C(φ) − p|²,
+//     each confined to its own turn (φ within ±π of the start) and to the
+//     sweep's ends. Derivatives of r and z are central differences.
+//  2. The nearer foot C(φ*) fixes a frame: T along the curve, u the radial
+//     direction made normal to T, v = T × u turned to point up (+z). The
+//     offset q = p − C(φ*) read in (u, v) is handed to the profile, and its
+//     component along T past either end closes the sweep with a flat cap.
+//
+// Within the sweep's reach (half the least rise per turn or half the least
+// radius, whichever is smaller) the foot found is the nearest point of the
+// curve, so for a round profile the distance is the exact tube distance; the
+// tests compare it with a dense search. Farther out the value is capped at
+// reach − extent (extent is the profile's farthest point from its origin),
+// which is a lower bound on the true distance, so the sweep stays a valid
+// distance bound everywhere.
+
+// Helix is a centreline wound about the z axis: the point at angle φ is
+// (r cos φ, Hand·r sin φ, z) with r = Radius(φ) > 0 and z = Z(φ) rising
+// strictly with φ, for φ from Start to End radians. Hand is +1 for a right-
+// hand helix and −1 for a left-hand one.
+type Helix struct {
+	Radius     func(phi float64) float64
+	Z          func(phi float64) float64
+	Hand       int
+	Start, End float64
+}
+
+// Point returns the centreline point at angle phi in mm.
+func (h Helix) Point(phi float64) geom.Vec3 {
+	s, c := math.Sincos(phi)
+	r := h.Radius(phi)
+	return geom.Vec3{X: r * c, Y: float64(h.Hand) * r * s, Z: h.Z(phi)}
+}
+
+// HelixSweep is a profile swept along a Helix. The profile's X runs outward
+// from the axis and its Y upward, both in the plane normal to the curve.
+type HelixSweep struct {
+	h          Helix
+	prof       SDF2
+	extent     float64
+	reach      float64
+	zs         []float64
+	dphi       float64
+	rmin, rmax float64
+	b          geom.Box3
+}
+
+// helixSamples is the number of table samples per turn.
+const helixSamples = 64
+
+// NewHelixSweep returns prof swept along h. It checks that the radius stays
+// above zero, that z rises strictly, and that the profile fits inside the
+// sweep's reach so neighbouring turns cannot be confused.
+func NewHelixSweep(h Helix, prof SDF2) (*HelixSweep, error) {
+	if h.Hand != 1 && h.Hand != -1 {
+		return nil, &ArgError{"helix", "hand", float64(h.Hand), "must be +1 (right) or −1 (left)"}
+	}
+	if !(h.End > h.Start) || math.IsInf(h.End-h.Start, 0) {
+		return nil, &ArgError{"helix", "angle span", h.End - h.Start, "end must be above start"}
+	}
+	n := int(math.Ceil((h.End-h.Start)/(2*math.Pi)*helixSamples)) + 1
+	s := &HelixSweep{h: h, prof: prof, zs: make([]float64, n), dphi: (h.End - h.Start) / float64(n-1)}
+	s.rmin, s.rmax = math.Inf(1), 0
+	for i := range s.zs {
+		phi := h.Start + float64(i)*s.dphi
+		r := h.Radius(phi)
+		if !(r > 0) || math.IsInf(r, 0) {
+			return nil, &ArgError{"helix", "radius", r, "must be finite and above 0"}
+		}
+		s.rmin, s.rmax = math.Min(s.rmin, r), math.Max(s.rmax, r)
+		s.zs[i] = h.Z(phi)
+		if i > 0 && !(s.zs[i] > s.zs[i-1]) {
+			return nil, &ArgError{"helix", "z step", s.zs[i] - s.zs[i-1], "z must rise strictly with the angle"}
+		}
+	}
+	rise := math.Inf(1)
+	per := int(math.Round(2 * math.Pi / s.dphi)) // table samples per turn
+	for i := 0; i+per < n; i++ {
+		rise = math.Min(rise, s.zs[i+per]-s.zs[i])
+	}
+	s.reach = math.Min(rise, s.rmin) / 2
+	pb := prof.Bounds()
+	for _, c := range []geom.Vec2{pb.Min, pb.Max, {X: pb.Min.X, Y: pb.Max.Y}, {X: pb.Max.X, Y: pb.Min.Y}} {
+		s.extent = math.Max(s.extent, c.Len())
+	}
+	if s.extent >= s.reach {
+		return nil, &ArgError{"helix sweep", "profile extent", s.extent,
+			"profile must fit within half the rise per turn and half the radius"}
+	}
+	e := s.rmax + s.extent
+	s.b = geom.Box3{
+		Min: geom.Vec3{X: -e, Y: -e, Z: s.zs[0] - s.extent},
+		Max: geom.Vec3{X: e, Y: e, Z: s.zs[n-1] + s.extent},
+	}
+	return s, nil
+}
+
+// Reach returns the distance from the centreline, in mm, within which Eval
+// is the profile distance about the nearest curve point.
+func (s *HelixSweep) Reach() float64 { return s.reach }
+
+// Bounds returns the sweep's bounding box.
+func (s *HelixSweep) Bounds() geom.Box3 { return s.b }
+
+// Eval returns the signed distance bound from p to the sweep.
+func (s *HelixSweep) Eval(p geom.Vec3) float64 {
+	h := &s.h
+	capv := s.reach - s.extent
+	q := geom.Vec3{X: p.X, Y: float64(h.Hand) * p.Y, Z: p.Z} // right-hand frame
+	rho := math.Hypot(q.X, q.Y)
+	zlo, zhi := s.zs[0], s.zs[len(s.zs)-1]
+	if lb := math.Max(math.Max(zlo-q.Z, q.Z-zhi), math.Max(s.rmin-rho, rho-s.rmax)); lb >= s.reach {
+		return capv
+	}
+	theta := math.Atan2(q.Y, q.X)
+	k := math.Floor((s.phiOfZ(q.Z) - theta) / (2 * math.Pi))
+	best, bestD := 0.0, math.Inf(1)
+	for _, kk := range [2]float64{k, k + 1} {
+		c := theta + 2*math.Pi*kk
+		if c < h.Start-math.Pi || c > h.End+math.Pi {
+			continue
+		}
+		lo, hi := math.Max(h.Start, c-math.Pi), math.Min(h.End, c+math.Pi)
+		phi := s.foot(q, math.Max(lo, math.Min(hi, c)), lo, hi)
+		if d := q.Sub(s.rightPoint(phi)).Len(); d < bestD {
+			best, bestD = phi, d
+		}
+	}
+	if bestD >= s.reach {
+		return capv
+	}
+	return math.Min(s.profileDist(q, best), capv)
+}
+
+// rightPoint returns the centreline point at phi in the right-hand frame.
+func (s *HelixSweep) rightPoint(phi float64) geom.Vec3 {
+	sn, cs := math.Sincos(phi)
+	r := s.h.Radius(phi)
+	return geom.Vec3{X: r * cs, Y: r * sn, Z: s.h.Z(phi)}
+}
+
+// derivStep is the angle step for central differences, in radians.
+const derivStep = 1e-4
+
+// diff returns f(x), f′(x) and f″(x) by central differences.
+func diff(f func(float64) float64, x float64) (v, d1, d2 float64) {
+	a, v, b := f(x-derivStep), f(x), f(x+derivStep)
+	return v, (b - a) / (2 * derivStep), (b - 2*v + a) / (derivStep * derivStep)
+}
+
+// tangent returns dC/dφ at phi in the right-hand frame.
+func (s *HelixSweep) tangent(phi float64) geom.Vec3 {
+	_, r1, _ := diff(s.h.Radius, phi)
+	_, z1, _ := diff(s.h.Z, phi)
+	sn, cs := math.Sincos(phi)
+	r := s.h.Radius(phi)
+	return geom.Vec3{X: r1*cs - r*sn, Y: r1*sn + r*cs, Z: z1}
+}
+
+// foot runs Newton's method on g(φ) = ½|C(φ) − q|² from phi, keeping φ in
+// [lo, hi], and returns the local minimiser. A step against a non-positive
+// second derivative falls back to a short downhill step.
+func (s *HelixSweep) foot(q geom.Vec3, phi, lo, hi float64) float64 {
+	const maxStep, tol = 0.25, 1e-10
+	for range 16 {
+		r, r1, r2 := diff(s.h.Radius, phi)
+		z, z1, z2 := diff(s.h.Z, phi)
+		sn, cs := math.Sincos(phi)
+		cx, cy, cz := r*cs-q.X, r*sn-q.Y, z-q.Z
+		ax, ay := r1*cs-r*sn, r1*sn+r*cs
+		bx, by := r2*cs-2*r1*sn-r*cs, r2*sn+2*r1*cs-r*sn
+		g1 := cx*ax + cy*ay + cz*z1
+		g2 := ax*ax + ay*ay + z1*z1 + cx*bx + cy*by + cz*z2
+		step := -math.Copysign(maxStep, g1)
+		if g2 > 0 {
+			step = math.Max(-maxStep, math.Min(maxStep, -g1/g2))
+		}
+		next := math.Max(lo, math.Min(hi, phi+step))
+		if math.Abs(next-phi) < tol {
+			return next
+		}
+		phi = next
+	}
+	return phi
+}
+
+// profileDist reads q's offset from the foot at phi in the (u, v) frame and
+// returns the profile distance, capped flat past the sweep's ends.
+func (s *HelixSweep) profileDist(q geom.Vec3, phi float64) float64 {
+	d := q.Sub(s.rightPoint(phi))
+	t := s.tangent(phi).Normalize()
+	sn, cs := math.Sincos(phi)
+	er := geom.Vec3{X: cs, Y: sn}
+	u := er.Sub(t.Scale(er.Dot(t))).Normalize()
+	v := t.Cross(u)
+	if v.Z < 0 {
+		v = v.Scale(-1)
+	}
+	d2 := s.prof.Eval(geom.Vec2{X: d.Dot(u), Y: d.Dot(v)})
+	w := d.Dot(t)
+	switch {
+	case phi <= s.h.Start:
+		return extrudeDist(d2, -w)
+	case phi >= s.h.End:
+		return extrudeDist(d2, w)
+	}
+	return d2
+}
+
+// phiOfZ returns the angle at which the centreline reaches height z, clamped
+// to the sweep's ends, by linear interpolation in the z table.
+func (s *HelixSweep) phiOfZ(z float64) float64 {
+	i := sort.SearchFloat64s(s.zs, z)
+	switch {
+	case i == 0:
+		return s.h.Start
+	case i == len(s.zs):
+		return s.h.End
+	}
+	t := (z - s.zs[i-1]) / (s.zs[i] - s.zs[i-1])
+	return s.h.Start + (float64(i-1)+t)*s.dphi
+}

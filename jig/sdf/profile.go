@@ -1,0 +1,125 @@
+package sdf
+
+import (
+	"math"
+
+	"coilwright/cam/geom"
+)
+
+// Circle is a disc in the plane. Its distance is exact.
+type Circle struct {
+	c geom.Vec2
+	r float64
+}
+
+// NewCircle returns the disc of radius r mm (above zero) centred on c.
+func NewCircle(c geom.Vec2, r float64) (*Circle, error) {
+	if err := positive("circle", "radius", r); err != nil {
+		return nil, err
+	}
+	return &Circle{c, r}, nil
+}
+
+// Eval returns the exact signed distance from p to the disc.
+func (c *Circle) Eval(p geom.Vec2) float64 { return p.Sub(c.c).Len() - c.r }
+
+// Bounds returns the disc's bounding square.
+func (c *Circle) Bounds() Box2 {
+	d := geom.Vec2{X: c.r, Y: c.r}
+	return Box2{c.c.Sub(d), c.c.Add(d)}
+}
+
+// Polygon is a simple polygon in the plane (either winding). Its distance is
+// exact: the nearest edge gives the magnitude and a crossing count the sign.
+//
+// Source: the polygon distance in I. Quilez, "distance functions"
+// (iquilezles.org).
+type Polygon struct {
+	v []geom.Vec2
+	b Box2
+}
+
+// NewPolygon returns the polygon through the points (at least 3; the last
+// point joins the first). The points are copied.
+func NewPolygon(pts geom.Polyline) (*Polygon, error) {
+	if len(pts) < 3 {
+		return nil, &ArgError{"polygon", "points", float64(len(pts)), "needs at least 3"}
+	}
+	if a := pts.Area(); a == 0 || math.IsNaN(a) || math.IsInf(a, 0) {
+		return nil, &ArgError{"polygon", "area", a, "must be finite and not 0"}
+	}
+	v := append([]geom.Vec2(nil), pts...)
+	b := Box2{v[0], v[0]}
+	for _, p := range v[1:] {
+		b = b.Union(Box2{p, p})
+	}
+	return &Polygon{v, b}, nil
+}
+
+// Eval returns the exact signed distance from p to the polygon.
+func (g *Polygon) Eval(p geom.Vec2) float64 {
+	v := g.v
+	w0 := p.Sub(v[0])
+	d := w0.Dot(w0)
+	s := 1.0
+	for i, j := 0, len(v)-1; i < len(v); j, i = i, i+1 {
+		e := v[j].Sub(v[i])
+		w := p.Sub(v[i])
+		t := math.Max(0, math.Min(1, w.Dot(e)/e.Dot(e)))
+		b := w.Sub(e.Scale(t))
+		d = math.Min(d, b.Dot(b))
+		c1, c2, c3 := p.Y >= v[i].Y, p.Y < v[j].Y, e.X*w.Y > e.Y*w.X
+		if (c1 && c2 && c3) || (!c1 && !c2 && !c3) {
+			s = -s
+		}
+	}
+	return s * math.Sqrt(d)
+}
+
+// Bounds returns the polygon's bounding rectangle.
+func (g *Polygon) Bounds() Box2 { return g.b }
+
+// Strokes is a set of line segments drawn with a round pen of the given
+// radius: the union of their capsules. Its distance is exact.
+type Strokes struct {
+	seg [][2]geom.Vec2
+	r   float64
+	b   Box2
+}
+
+// NewStrokes returns the strokes drawn through the segments (at least one)
+// with pen radius r mm (above zero). The segments are copied.
+func NewStrokes(seg [][2]geom.Vec2, r float64) (*Strokes, error) {
+	if err := positive("strokes", "pen radius", r); err != nil {
+		return nil, err
+	}
+	if len(seg) == 0 {
+		return nil, &ArgError{"strokes", "segments", 0, "needs at least 1"}
+	}
+	s := append([][2]geom.Vec2(nil), seg...)
+	b := Box2{s[0][0], s[0][0]}
+	for _, e := range s {
+		b = b.Union(Box2{e[0], e[0]}).Union(Box2{e[1], e[1]})
+	}
+	d := geom.Vec2{X: r, Y: r}
+	return &Strokes{s, r, Box2{b.Min.Sub(d), b.Max.Add(d)}}, nil
+}
+
+// Eval returns the exact signed distance from p to the strokes.
+func (s *Strokes) Eval(p geom.Vec2) float64 {
+	d := math.Inf(1)
+	for _, e := range s.seg {
+		ab := e[1].Sub(e[0])
+		ap := p.Sub(e[0])
+		t := 0.0
+		if l := ab.Dot(ab); l > 0 {
+			t = math.Max(0, math.Min(1, ap.Dot(ab)/l))
+		}
+		q := ap.Sub(ab.Scale(t))
+		d = math.Min(d, q.Dot(q))
+	}
+	return math.Sqrt(d) - s.r
+}
+
+// Bounds returns the strokes' bounding rectangle, pen included.
+func (s *Strokes) Bounds() Box2 { return s.b }
