@@ -47,12 +47,16 @@ import (
 // zero, in mm.
 const DefaultTolerance = 0.05
 
-// cellPerTolerance is the grid cell edge as a multiple of the tolerance. A
-// 45° chamfer or a concave edge cut by one cell leaves a facet whose centroid
-// lies about a fifth of the cell off the true surface, and rounded edges of
-// radius ≥ 0.5 mm keep the chord error below a tenth of that; measured on
-// the demo formers, 4 keeps every vertex and centroid within the tolerance.
-const cellPerTolerance = 4
+// Grid cell from tolerance. Creases and corners are rebuilt by feature
+// vertices, so the error left is the chord error of curved parts: a facet
+// of span s on a surface of radius R lies s²/(8R) inside it, and marching
+// cubes facets span up to about √2 cells, so a cell of √(4·tol·R) keeps
+// curved parts within tol. Without a known smallest radius the cell is
+// cellPerTolerance tolerances.
+const (
+	cellPerTolerance    = 4
+	maxCellPerTolerance = 8
+)
 
 // rootTol is the distance, as a fraction of the cell, at which an edge
 // crossing counts as found.
@@ -65,7 +69,8 @@ const blockCells = 8
 // every core.
 type MeshOptions struct {
 	Tolerance float64 // largest wanted distance of the mesh from the surface, mm; 0 for DefaultTolerance
-	Cell      float64 // grid cell edge in mm; 0 derives it from Tolerance
+	MinRadius float64 // smallest radius of curvature of the smooth parts, mm; 0 if unknown
+	Cell      float64 // grid cell edge in mm; 0 derives it from Tolerance and MinRadius
 	Workers   int     // goroutines; 0 for GOMAXPROCS
 }
 
@@ -86,7 +91,10 @@ func Mesh(s sdf.SDF3, opt MeshOptions) (*geom.Mesh, error) {
 		return nil, fmt.Errorf("jig: mesh tolerance %g mm must be above 0", tol)
 	}
 	cell := opt.Cell
-	if cell == 0 {
+	switch {
+	case cell == 0 && opt.MinRadius > 0:
+		cell = min(math.Sqrt(4*tol*opt.MinRadius), maxCellPerTolerance*tol)
+	case cell == 0:
 		cell = cellPerTolerance * tol
 	}
 	if !(cell > 0) || math.IsInf(cell, 0) {
@@ -139,8 +147,13 @@ type grid struct {
 	np     [3]int // points per axis
 }
 
+// gridShift offsets the lattice from the solid's box by an irrational part
+// of a cell, so that faces lying on round coordinates (a flange on z = 0)
+// do not fall exactly on grid planes.
+const gridShift = 0.3183098861837907
+
 func newGrid(b geom.Box3, h float64) grid {
-	b = b.Enlarge(2 * h)
+	b = b.Enlarge((2 + gridShift) * h)
 	var g grid
 	g.origin, g.h = b.Min, h
 	size := b.Size()
@@ -575,6 +588,7 @@ func (w *blockWorker) fanAbout(c []int32, ci, cj, ck, no int) {
 			p = q
 		}
 	}
+	p = w.project(p)
 	idx := int32(len(w.p.pos))
 	cellKey := (uint64(ck)*uint64(w.g.np[1])+uint64(cj))*uint64(w.g.np[0]) + uint64(ci)
 	w.p.keys = append(w.p.keys, w.g.featureBase()+cellKey*4+uint64(no))
@@ -583,6 +597,29 @@ func (w *blockWorker) fanAbout(c []int32, ci, cj, ck, no int) {
 	for i := range c {
 		w.p.tris = append(w.p.tris, [3]int32{idx, c[i], c[(i+1)%len(c)]})
 	}
+}
+
+// project moves p onto the surface by up to three Newton steps along the
+// gradient when it lies more than a hundredth of a cell off it; a step that
+// would leave the neighbourhood of p is not taken.
+func (w *blockWorker) project(p geom.Vec3) geom.Vec3 {
+	for range 3 {
+		f := w.s.Eval(p)
+		if math.Abs(f) < 0.01*w.g.h {
+			break
+		}
+		g := w.gradient(p)
+		l2 := g.Dot(g)
+		if l2 < 0.25 {
+			break
+		}
+		step := g.Scale(-f / l2)
+		if step.Len() > w.g.h {
+			break
+		}
+		p = p.Add(step)
+	}
+	return p
 }
 
 // solve3 solves m·x = r by Cramer's rule, reporting false for a singular m.
@@ -607,20 +644,24 @@ func solve3(m [3][3]float64, r [3]float64) ([3]float64, bool) {
 	return x, true
 }
 
+// gradient returns the distance gradient at p by central differences.
+func (w *blockWorker) gradient(p geom.Vec3) geom.Vec3 {
+	e := w.g.h * 1e-3
+	f := w.s.Eval
+	return geom.Vec3{
+		X: f(p.Add(geom.Vec3{X: e})) - f(p.Sub(geom.Vec3{X: e})),
+		Y: f(p.Add(geom.Vec3{Y: e})) - f(p.Sub(geom.Vec3{Y: e})),
+		Z: f(p.Add(geom.Vec3{Z: e})) - f(p.Sub(geom.Vec3{Z: e})),
+	}.Scale(1 / (2 * e))
+}
+
 // normal returns the unit surface normal at local vertex i from central
 // differences of the distance, computed once per vertex.
 func (w *blockWorker) normal(i int32) geom.Vec3 {
 	if n := w.p.norm[i]; n != (geom.Vec3{}) {
 		return n
 	}
-	e := w.g.h * 1e-3
-	p := w.p.pos[i]
-	f := w.s.Eval
-	n := geom.Vec3{
-		X: f(p.Add(geom.Vec3{X: e})) - f(p.Sub(geom.Vec3{X: e})),
-		Y: f(p.Add(geom.Vec3{Y: e})) - f(p.Sub(geom.Vec3{Y: e})),
-		Z: f(p.Add(geom.Vec3{Z: e})) - f(p.Sub(geom.Vec3{Z: e})),
-	}.Normalize()
+	n := w.gradient(w.p.pos[i]).Normalize()
 	if n == (geom.Vec3{}) {
 		n = geom.Vec3{Z: 1}
 	}
@@ -676,7 +717,7 @@ func (w *blockWorker) vertex(i0, j0, k0, x, y, z, e int, v *[8]float64) int32 {
 		t = lo + (hi-lo)*flo/(flo-fhi)
 	}
 	const edgeMargin = 1e-3
-	t = math.Max(edgeMargin, math.Min(1-edgeMargin, t))
+	t = max(edgeMargin, min(1-edgeMargin, t))
 	idx := int32(len(w.p.pos))
 	w.vert[slot] = idx
 	w.p.keys = append(w.p.keys, g.edgeKey(gi, gj, gk, a))

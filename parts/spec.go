@@ -29,6 +29,7 @@ type Spec struct {
 	Dowel     DowelSpec     `toml:"dowel"`
 	Coax      CoaxSpec      `toml:"coax"`
 	RF        RFSpec        `toml:"rf"`
+	Former    FormerSpec    `toml:"former"`
 
 	pos positions // where each key was written; empty for a Spec built in code
 }
@@ -93,8 +94,12 @@ func (s *Spec) Validate() error {
 	s.Dowel.validate(c, s)
 	s.Coax.validate(c, s)
 	s.RF.validate(c, s)
+	s.Former.validate(c, s)
 	if len(c.errs) == 0 {
 		s.Coil.validateFit(c, s)
+	}
+	if len(c.errs) == 0 {
+		s.Former.validateFit(c, s)
 	}
 	return c.result()
 }

@@ -22,10 +22,10 @@ import (
 // for k = 0).
 func smin(a, b, k float64) float64 {
 	if k <= 0 {
-		return math.Min(a, b)
+		return min(a, b)
 	}
-	h := math.Max(k-math.Abs(a-b), 0) / k
-	return math.Min(a, b) - h*h*k/4
+	h := max(k-math.Abs(a-b), 0) / k
+	return min(a, b) - h*h*k/4
 }
 
 // blendArg checks a blend radius.
@@ -187,7 +187,7 @@ func (u *union2) Eval(p geom.Vec2) float64 {
 		if boxDist2(c.Bounds(), p) >= d {
 			continue
 		}
-		d = math.Min(d, c.Eval(p))
+		d = min(d, c.Eval(p))
 	}
 	return d
 }

@@ -31,8 +31,8 @@ func (b *Box) Eval(p geom.Vec3) float64 {
 	qx := math.Abs(p.X) - b.half.X
 	qy := math.Abs(p.Y) - b.half.Y
 	qz := math.Abs(p.Z) - b.half.Z
-	out := geom.Vec3{X: math.Max(qx, 0), Y: math.Max(qy, 0), Z: math.Max(qz, 0)}.Len()
-	return out + math.Min(math.Max(qx, math.Max(qy, qz)), 0)
+	out := geom.Vec3{X: max(qx, 0), Y: max(qy, 0), Z: max(qz, 0)}.Len()
+	return out + min(max(qx, max(qy, qz)), 0)
 }
 
 // Bounds returns the block itself.

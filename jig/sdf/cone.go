@@ -19,7 +19,7 @@ func NewCone(h, r0, r1 float64) (*Cone, error) {
 		return nil, err
 	}
 	if !(r0 >= 0) || !(r1 >= 0) || r0+r1 == 0 || math.IsInf(r0+r1, 0) {
-		return nil, &ArgError{"cone", "radius", math.Max(r0, r1), "radii must be finite, at least 0 and not both 0"}
+		return nil, &ArgError{"cone", "radius", max(r0, r1), "radii must be finite, at least 0 and not both 0"}
 	}
 	return &Cone{h / 2, r0, r1}, nil
 }
@@ -36,25 +36,25 @@ func (c *Cone) Eval(p geom.Vec3) float64 {
 	if qy < 0 {
 		rc = c.r0
 	}
-	cax := qx - math.Min(qx, rc)
+	cax := qx - min(qx, rc)
 	cay := math.Abs(qy) - c.half
 	// Side: segment from (r1, h/2) to (r0, −h/2).
 	k1x, k1y := c.r1, c.half
 	k2x, k2y := c.r1-c.r0, 2*c.half
 	t := ((k1x-qx)*k2x + (k1y-qy)*k2y) / (k2x*k2x + k2y*k2y)
-	t = math.Max(0, math.Min(1, t))
+	t = max(0, min(1, t))
 	cbx := qx - k1x + k2x*t
 	cby := qy - k1y + k2y*t
 	s := 1.0
 	if cbx < 0 && cay < 0 {
 		s = -1
 	}
-	return s * math.Sqrt(math.Min(cax*cax+cay*cay, cbx*cbx+cby*cby))
+	return s * math.Sqrt(min(cax*cax+cay*cay, cbx*cbx+cby*cby))
 }
 
 // Bounds returns the frustum's bounding box.
 func (c *Cone) Bounds() geom.Box3 {
-	r := math.Max(c.r0, c.r1)
+	r := max(c.r0, c.r1)
 	return geom.Box3{
 		Min: geom.Vec3{X: -r, Y: -r, Z: -c.half},
 		Max: geom.Vec3{X: r, Y: r, Z: c.half},

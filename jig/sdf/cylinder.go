@@ -40,5 +40,5 @@ func (c *Cylinder) Bounds() geom.Box3 {
 // extrudeDist combines an in-plane distance a and an axial distance b (both
 // signed) into the exact distance to the extruded solid.
 func extrudeDist(a, b float64) float64 {
-	return math.Min(math.Max(a, b), 0) + math.Hypot(math.Max(a, 0), math.Max(b, 0))
+	return min(max(a, b), 0) + math.Hypot(max(a, 0), max(b, 0))
 }

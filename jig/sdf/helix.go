@@ -16,7 +16,10 @@ import (
 //     crossings of the point's meridian bracket its height; their angles
 //     θ + 2πk start two Newton searches for the minimum of |C(φ) − p|²,
 //     each confined to its own turn (φ within ±π of the start) and to the
-//     sweep's ends. Derivatives of r and z are central differences.
+//     sweep's ends. r and z are tabulated at 256 points a turn when the
+//     sweep is made and read back through Catmull–Rom cubics, which give
+//     the value and both derivatives at once and are exact for quadratics;
+//     the sweep is exact to that interpolated curve.
 //  2. The nearer foot C(φ*) fixes a frame: T along the curve, u the radial
 //     direction made normal to T, v = T × u turned to point up (+z). The
 //     offset q = p − C(φ*) read in (u, v) is handed to the profile, and its
@@ -55,14 +58,14 @@ type HelixSweep struct {
 	prof       SDF2
 	extent     float64
 	reach      float64
-	zs         []float64
+	zs, rs     []float64 // tabulated z and r, one entry per dphi from Start
 	dphi       float64
 	rmin, rmax float64
 	b          geom.Box3
 }
 
 // helixSamples is the number of table samples per turn.
-const helixSamples = 64
+const helixSamples = 256
 
 // NewHelixSweep returns prof swept along h. It checks that the radius stays
 // above zero, that z rises strictly, and that the profile fits inside the
@@ -75,7 +78,7 @@ func NewHelixSweep(h Helix, prof SDF2) (*HelixSweep, error) {
 		return nil, &ArgError{"helix", "angle span", h.End - h.Start, "end must be above start"}
 	}
 	n := int(math.Ceil((h.End-h.Start)/(2*math.Pi)*helixSamples)) + 1
-	s := &HelixSweep{h: h, prof: prof, zs: make([]float64, n), dphi: (h.End - h.Start) / float64(n-1)}
+	s := &HelixSweep{h: h, prof: prof, zs: make([]float64, n), rs: make([]float64, n), dphi: (h.End - h.Start) / float64(n-1)}
 	s.rmin, s.rmax = math.Inf(1), 0
 	for i := range s.zs {
 		phi := h.Start + float64(i)*s.dphi
@@ -83,7 +86,8 @@ func NewHelixSweep(h Helix, prof SDF2) (*HelixSweep, error) {
 		if !(r > 0) || math.IsInf(r, 0) {
 			return nil, &ArgError{"helix", "radius", r, "must be finite and above 0"}
 		}
-		s.rmin, s.rmax = math.Min(s.rmin, r), math.Max(s.rmax, r)
+		s.rmin, s.rmax = min(s.rmin, r), max(s.rmax, r)
+		s.rs[i] = r
 		s.zs[i] = h.Z(phi)
 		if i > 0 && !(s.zs[i] > s.zs[i-1]) {
 			return nil, &ArgError{"helix", "z step", s.zs[i] - s.zs[i-1], "z must rise strictly with the angle"}
@@ -92,12 +96,12 @@ func NewHelixSweep(h Helix, prof SDF2) (*HelixSweep, error) {
 	rise := math.Inf(1)
 	per := int(math.Round(2 * math.Pi / s.dphi)) // table samples per turn
 	for i := 0; i+per < n; i++ {
-		rise = math.Min(rise, s.zs[i+per]-s.zs[i])
+		rise = min(rise, s.zs[i+per]-s.zs[i])
 	}
-	s.reach = math.Min(rise, s.rmin) / 2
+	s.reach = min(rise, s.rmin) / 2
 	pb := prof.Bounds()
 	for _, c := range []geom.Vec2{pb.Min, pb.Max, {X: pb.Min.X, Y: pb.Max.Y}, {X: pb.Max.X, Y: pb.Min.Y}} {
-		s.extent = math.Max(s.extent, c.Len())
+		s.extent = max(s.extent, c.Len())
 	}
 	if s.extent >= s.reach {
 		return nil, &ArgError{"helix sweep", "profile extent", s.extent,
@@ -125,7 +129,7 @@ func (s *HelixSweep) Eval(p geom.Vec3) float64 {
 	q := geom.Vec3{X: p.X, Y: float64(h.Hand) * p.Y, Z: p.Z} // right-hand frame
 	rho := math.Hypot(q.X, q.Y)
 	zlo, zhi := s.zs[0], s.zs[len(s.zs)-1]
-	if lb := math.Max(math.Max(zlo-q.Z, q.Z-zhi), math.Max(s.rmin-rho, rho-s.rmax)); lb >= s.reach {
+	if lb := max(max(zlo-q.Z, q.Z-zhi), max(s.rmin-rho, rho-s.rmax)); lb >= s.reach {
 		return capv
 	}
 	theta := math.Atan2(q.Y, q.X)
@@ -136,8 +140,8 @@ func (s *HelixSweep) Eval(p geom.Vec3) float64 {
 		if c < h.Start-math.Pi || c > h.End+math.Pi {
 			continue
 		}
-		lo, hi := math.Max(h.Start, c-math.Pi), math.Min(h.End, c+math.Pi)
-		phi := s.foot(q, math.Max(lo, math.Min(hi, c)), lo, hi)
+		lo, hi := max(h.Start, c-math.Pi), min(h.End, c+math.Pi)
+		phi := s.foot(q, max(lo, min(hi, c)), lo, hi)
 		if d := q.Sub(s.rightPoint(phi)).Len(); d < bestD {
 			best, bestD = phi, d
 		}
@@ -145,31 +149,53 @@ func (s *HelixSweep) Eval(p geom.Vec3) float64 {
 	if bestD >= s.reach {
 		return capv
 	}
-	return math.Min(s.profileDist(q, best), capv)
+	return min(s.profileDist(q, best), capv)
+}
+
+// curve returns r and z with their first and second derivatives at phi from
+// the Catmull–Rom cubic through the four table entries around it; past the
+// table's ends the end segments are extended.
+func (s *HelixSweep) curve(phi float64) (r, r1, r2, z, z1, z2 float64) {
+	x := (phi - s.h.Start) / s.dphi
+	n := len(s.zs)
+	i := int(math.Floor(x))
+	i = max(0, min(n-2, i))
+	t := x - float64(i)
+	at := func(tab []float64, k int) float64 {
+		switch {
+		case k < 0:
+			return 2*tab[0] - tab[1]
+		case k >= n:
+			return 2*tab[n-1] - tab[n-2]
+		}
+		return tab[k]
+	}
+	cr := func(tab []float64) (v, d1, d2 float64) {
+		p0, p1, p2, p3 := at(tab, i-1), tab[i], tab[i+1], at(tab, i+2)
+		a := -0.5*p0 + 1.5*p1 - 1.5*p2 + 0.5*p3
+		b := p0 - 2.5*p1 + 2*p2 - 0.5*p3
+		c := -0.5*p0 + 0.5*p2
+		v = ((a*t+b)*t+c)*t + p1
+		d1 = ((3*a*t+2*b)*t + c) / s.dphi
+		d2 = (6*a*t + 2*b) / (s.dphi * s.dphi)
+		return
+	}
+	r, r1, r2 = cr(s.rs)
+	z, z1, z2 = cr(s.zs)
+	return
 }
 
 // rightPoint returns the centreline point at phi in the right-hand frame.
 func (s *HelixSweep) rightPoint(phi float64) geom.Vec3 {
+	r, _, _, z, _, _ := s.curve(phi)
 	sn, cs := math.Sincos(phi)
-	r := s.h.Radius(phi)
-	return geom.Vec3{X: r * cs, Y: r * sn, Z: s.h.Z(phi)}
-}
-
-// derivStep is the angle step for central differences, in radians.
-const derivStep = 1e-4
-
-// diff returns f(x), f′(x) and f″(x) by central differences.
-func diff(f func(float64) float64, x float64) (v, d1, d2 float64) {
-	a, v, b := f(x-derivStep), f(x), f(x+derivStep)
-	return v, (b - a) / (2 * derivStep), (b - 2*v + a) / (derivStep * derivStep)
+	return geom.Vec3{X: r * cs, Y: r * sn, Z: z}
 }
 
 // tangent returns dC/dφ at phi in the right-hand frame.
 func (s *HelixSweep) tangent(phi float64) geom.Vec3 {
-	_, r1, _ := diff(s.h.Radius, phi)
-	_, z1, _ := diff(s.h.Z, phi)
+	r, r1, _, _, z1, _ := s.curve(phi)
 	sn, cs := math.Sincos(phi)
-	r := s.h.Radius(phi)
 	return geom.Vec3{X: r1*cs - r*sn, Y: r1*sn + r*cs, Z: z1}
 }
 
@@ -179,8 +205,7 @@ func (s *HelixSweep) tangent(phi float64) geom.Vec3 {
 func (s *HelixSweep) foot(q geom.Vec3, phi, lo, hi float64) float64 {
 	const maxStep, tol = 0.25, 1e-10
 	for range 16 {
-		r, r1, r2 := diff(s.h.Radius, phi)
-		z, z1, z2 := diff(s.h.Z, phi)
+		r, r1, r2, z, z1, z2 := s.curve(phi)
 		sn, cs := math.Sincos(phi)
 		cx, cy, cz := r*cs-q.X, r*sn-q.Y, z-q.Z
 		ax, ay := r1*cs-r*sn, r1*sn+r*cs
@@ -189,9 +214,9 @@ func (s *HelixSweep) foot(q geom.Vec3, phi, lo, hi float64) float64 {
 		g2 := ax*ax + ay*ay + z1*z1 + cx*bx + cy*by + cz*z2
 		step := -math.Copysign(maxStep, g1)
 		if g2 > 0 {
-			step = math.Max(-maxStep, math.Min(maxStep, -g1/g2))
+			step = max(-maxStep, min(maxStep, -g1/g2))
 		}
-		next := math.Max(lo, math.Min(hi, phi+step))
+		next := max(lo, min(hi, phi+step))
 		if math.Abs(next-phi) < tol {
 			return next
 		}

@@ -34,10 +34,10 @@ func NewHexPrism(acrossFlats, height float64) (*HexPrism, error) {
 func (h *HexPrism) Eval(p geom.Vec3) float64 {
 	const kx, ky, kz = -0.8660254037844386, 0.5, 0.5773502691896258
 	x, y := math.Abs(p.X), math.Abs(p.Y)
-	m := 2 * math.Min(kx*x+ky*y, 0)
+	m := 2 * min(kx*x+ky*y, 0)
 	x -= m * kx
 	y -= m * ky
-	cx := math.Max(-kz*h.apothem, math.Min(kz*h.apothem, x))
+	cx := max(-kz*h.apothem, min(kz*h.apothem, x))
 	a := math.Hypot(x-cx, y-h.apothem)
 	if y < h.apothem {
 		a = -a

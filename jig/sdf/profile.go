@@ -65,9 +65,9 @@ func (g *Polygon) Eval(p geom.Vec2) float64 {
 	for i, j := 0, len(v)-1; i < len(v); j, i = i, i+1 {
 		e := v[j].Sub(v[i])
 		w := p.Sub(v[i])
-		t := math.Max(0, math.Min(1, w.Dot(e)/e.Dot(e)))
+		t := max(0, min(1, w.Dot(e)/e.Dot(e)))
 		b := w.Sub(e.Scale(t))
-		d = math.Min(d, b.Dot(b))
+		d = min(d, b.Dot(b))
 		c1, c2, c3 := p.Y >= v[i].Y, p.Y < v[j].Y, e.X*w.Y > e.Y*w.X
 		if (c1 && c2 && c3) || (!c1 && !c2 && !c3) {
 			s = -s
@@ -113,10 +113,10 @@ func (s *Strokes) Eval(p geom.Vec2) float64 {
 		ap := p.Sub(e[0])
 		t := 0.0
 		if l := ab.Dot(ab); l > 0 {
-			t = math.Max(0, math.Min(1, ap.Dot(ab)/l))
+			t = max(0, min(1, ap.Dot(ab)/l))
 		}
 		q := ap.Sub(ab.Scale(t))
-		d = math.Min(d, q.Dot(q))
+		d = min(d, q.Dot(q))
 	}
 	return math.Sqrt(d) - s.r
 }

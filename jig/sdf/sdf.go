@@ -27,8 +27,8 @@ type Box2 struct{ Min, Max geom.Vec2 }
 // Union returns the smallest rectangle holding both b and c.
 func (b Box2) Union(c Box2) Box2 {
 	return Box2{
-		geom.Vec2{X: math.Min(b.Min.X, c.Min.X), Y: math.Min(b.Min.Y, c.Min.Y)},
-		geom.Vec2{X: math.Max(b.Max.X, c.Max.X), Y: math.Max(b.Max.Y, c.Max.Y)},
+		geom.Vec2{X: min(b.Min.X, c.Min.X), Y: min(b.Min.Y, c.Min.Y)},
+		geom.Vec2{X: max(b.Max.X, c.Max.X), Y: max(b.Max.Y, c.Max.Y)},
 	}
 }
 
@@ -57,15 +57,15 @@ func positive(shape, arg string, v float64) error {
 // boxDist returns the Euclidean distance from p to box b (0 inside). It is a
 // lower bound on the distance to any solid b holds.
 func boxDist(b geom.Box3, p geom.Vec3) float64 {
-	dx := math.Max(math.Max(b.Min.X-p.X, p.X-b.Max.X), 0)
-	dy := math.Max(math.Max(b.Min.Y-p.Y, p.Y-b.Max.Y), 0)
-	dz := math.Max(math.Max(b.Min.Z-p.Z, p.Z-b.Max.Z), 0)
+	dx := max(max(b.Min.X-p.X, p.X-b.Max.X), 0)
+	dy := max(max(b.Min.Y-p.Y, p.Y-b.Max.Y), 0)
+	dz := max(max(b.Min.Z-p.Z, p.Z-b.Max.Z), 0)
 	return math.Sqrt(dx*dx + dy*dy + dz*dz)
 }
 
 // boxDist2 is boxDist in the plane.
 func boxDist2(b Box2, p geom.Vec2) float64 {
-	dx := math.Max(math.Max(b.Min.X-p.X, p.X-b.Max.X), 0)
-	dy := math.Max(math.Max(b.Min.Y-p.Y, p.Y-b.Max.Y), 0)
+	dx := max(max(b.Min.X-p.X, p.X-b.Max.X), 0)
+	dy := max(max(b.Min.Y-p.Y, p.Y-b.Max.Y), 0)
 	return math.Hypot(dx, dy)
 }

@@ -1,0 +1,53 @@
+package jig
+
+import (
+	"math"
+	"strconv"
+
+	"coilwright/parts"
+)
+
+// FormerFromDesign builds the former for a design from its [former] table,
+// winding it to the design's coil centreline.
+func FormerFromDesign(d *parts.Design) (*Former, error) {
+	s := d.Spec
+	f := &s.Former
+	deg := math.Pi / 180
+	p := FormerParams{
+		Hand:            int(d.Coil.Hand),
+		Wire:            s.Wire.DiameterMM,
+		Clearance:       f.ClearanceMM,
+		GrooveDepth:     f.GrooveDepthRatio * s.Wire.DiameterMM,
+		RoundGroove:     f.GrooveProfile == "round",
+		LeadIn:          f.LeadInDeg * deg,
+		RunOut:          f.RunOutDeg * deg,
+		LockDepth:       f.LockHoleDepthMM,
+		NotchWidth:      f.StopNotchMM,
+		FlangeMargin:    f.FlangeMarginMM,
+		FlangeThickness: f.FlangeThicknessMM,
+		FlatDepth:       f.FlatDepthMM,
+		Chamfer:         f.ChamferMM,
+		Fillet:          f.FilletMM,
+		HexAcrossFlats:  f.HexAcrossFlatsMM,
+		HexDepth:        f.HexDepthMM,
+		BoreDiameter:    f.BoreDiameterMM,
+		EngraveDepth:    f.EngraveDepthMM,
+		TextHeight:      f.TextHeightMM,
+		EndMargin:       f.EndMarginMM,
+		MinWall:         parts.MinFormerWallMM,
+		Labels:          [2]string{d.Coil.Hand.String(), FrequencyLabel(s.FrequencyMHz)},
+	}
+	if f.Drive == "bore" {
+		p.Drive = ThroughBore
+	}
+	return NewFormer(d.Coil, p)
+}
+
+// FrequencyLabel returns the frequency as engraved: "5.8 GHz" from 1000 MHz
+// up (to 1 MHz), "433.9 MHz" below (to 0.1 MHz).
+func FrequencyLabel(mhz float64) string {
+	if mhz >= 1000 {
+		return strconv.FormatFloat(math.Round(mhz)/1000, 'f', -1, 64) + " GHz"
+	}
+	return strconv.FormatFloat(math.Round(mhz*10)/10, 'f', -1, 64) + " MHz"
+}

@@ -1,0 +1,172 @@
+package parts
+
+import (
+	"fmt"
+	"math"
+)
+
+// FormerSpec is the [former] table: the printed winding former. Every size
+// is in mm and every angle in degrees; an absent or zero key takes the
+// default given beside it (a zero written in the spec stays zero where zero
+// is allowed). The defaults suit a 0.4 mm FDM nozzle and 0.2 mm layers.
+type FormerSpec struct {
+	ClearanceMM       float64 `toml:"clearance_mm"`        // groove width over the wire, default 0.2, 0–1
+	GrooveDepthRatio  float64 `toml:"groove_depth_ratio"`  // groove depth in wire diameters, default 0.6, 0.3–0.9
+	GrooveProfile     string  `toml:"groove_profile"`      // "teardrop" (45° roof, default) or "round"
+	LeadInDeg         float64 `toml:"lead_in_deg"`         // groove before the start, rising out, default 45, 0–180
+	RunOutDeg         float64 `toml:"run_out_deg"`         // groove past the end, rising out, default 90, 0–360
+	LockHoleDepthMM   float64 `toml:"lock_hole_depth_mm"`  // radial wire-lock hole below the groove, default 5, 1–30
+	StopNotchMM       float64 `toml:"stop_notch_mm"`       // width of the stop notch at the end, default 1.2, 0.5–5
+	FlangeMarginMM    float64 `toml:"flange_margin_mm"`    // flange beyond the core, default 7, 3–50
+	FlangeThicknessMM float64 `toml:"flange_thickness_mm"` // default 4, 2–20
+	FlatDepthMM       float64 `toml:"flat_depth_mm"`       // depth of each vice flat, default 1.5, 0–10
+	ChamferMM         float64 `toml:"chamfer_mm"`          // 45° chamfer on outer edges, default 0.6, 0–3
+	FilletMM          float64 `toml:"fillet_mm"`           // rounding of inner corners and groove lips, default 0.5, 0–3
+	Drive             string  `toml:"drive"`               // "hex" (1/4 in socket, default) or "bore" (through-bore)
+	HexAcrossFlatsMM  float64 `toml:"hex_across_flats_mm"` // socket across flats, default 6.6 (6.35 + clearance), 3–20
+	HexDepthMM        float64 `toml:"hex_depth_mm"`        // socket depth, default 10, 3–50
+	BoreDiameterMM    float64 `toml:"bore_diameter_mm"`    // through-bore, default the dowel diameter or 6.5, 1–100
+	EngraveDepthMM    float64 `toml:"engrave_depth_mm"`    // depth of the flange lettering, default 0.6, 0.2–2
+	TextHeightMM      float64 `toml:"text_height_mm"`      // flange letter height, default 3.5, 2–10
+	EndMarginMM       float64 `toml:"end_margin_mm"`       // core beyond the groove at the free end, default 3, 0.5–50
+	ToleranceMM       float64 `toml:"tolerance_mm"`        // mesh distance from the true surface, default 0.05, 0.01–0.5
+}
+
+// Former defaults and limits. The wall and land minima are three 0.4 mm
+// perimeters. Common practice (no published source).
+const (
+	DefaultFormerToleranceMM = 0.05
+	MinFormerWallMM          = 1.2
+	MinGrooveLandMM          = 0.8
+	hexDriveMM               = 6.35 // 1/4 inch hex drive across flats
+)
+
+func (f *FormerSpec) validate(c *checker, s *Spec) {
+	def := func(key string, v *float64, d float64) {
+		if *v == 0 && !c.has(key) {
+			*v = d
+		}
+	}
+	def("former.clearance_mm", &f.ClearanceMM, 0.2)
+	def("former.groove_depth_ratio", &f.GrooveDepthRatio, 0.6)
+	def("former.lead_in_deg", &f.LeadInDeg, 45)
+	def("former.run_out_deg", &f.RunOutDeg, 90)
+	def("former.lock_hole_depth_mm", &f.LockHoleDepthMM, 5)
+	def("former.stop_notch_mm", &f.StopNotchMM, 1.2)
+	def("former.flange_margin_mm", &f.FlangeMarginMM, 7)
+	def("former.flange_thickness_mm", &f.FlangeThicknessMM, 4)
+	def("former.flat_depth_mm", &f.FlatDepthMM, 1.5)
+	def("former.chamfer_mm", &f.ChamferMM, 0.6)
+	def("former.fillet_mm", &f.FilletMM, 0.5)
+	def("former.hex_across_flats_mm", &f.HexAcrossFlatsMM, hexDriveMM+0.25)
+	def("former.hex_depth_mm", &f.HexDepthMM, 10)
+	bore := 6.5
+	if s.Dowel.DiameterMM != nil {
+		bore = *s.Dowel.DiameterMM
+	}
+	def("former.bore_diameter_mm", &f.BoreDiameterMM, bore)
+	def("former.engrave_depth_mm", &f.EngraveDepthMM, 0.6)
+	def("former.text_height_mm", &f.TextHeightMM, 3.5)
+	def("former.end_margin_mm", &f.EndMarginMM, 3)
+	def("former.tolerance_mm", &f.ToleranceMM, DefaultFormerToleranceMM)
+	c.oneOf("former.groove_profile", &f.GrooveProfile, "teardrop", "teardrop", "round")
+	c.oneOf("former.drive", &f.Drive, "hex", "hex", "bore")
+	for _, r := range []struct {
+		key    string
+		v      float64
+		lo, hi float64
+		unit   string
+	}{
+		{"former.clearance_mm", f.ClearanceMM, 0, 1, "mm"},
+		{"former.groove_depth_ratio", f.GrooveDepthRatio, 0.3, 0.9, "wire diameters"},
+		{"former.lead_in_deg", f.LeadInDeg, 0, 180, "degrees"},
+		{"former.run_out_deg", f.RunOutDeg, 0, 360, "degrees"},
+		{"former.lock_hole_depth_mm", f.LockHoleDepthMM, 1, 30, "mm"},
+		{"former.stop_notch_mm", f.StopNotchMM, 0.5, 5, "mm"},
+		{"former.flange_margin_mm", f.FlangeMarginMM, 3, 50, "mm"},
+		{"former.flange_thickness_mm", f.FlangeThicknessMM, 2, 20, "mm"},
+		{"former.flat_depth_mm", f.FlatDepthMM, 0, 10, "mm"},
+		{"former.chamfer_mm", f.ChamferMM, 0, 3, "mm"},
+		{"former.fillet_mm", f.FilletMM, 0, 3, "mm"},
+		{"former.hex_across_flats_mm", f.HexAcrossFlatsMM, 3, 20, "mm"},
+		{"former.hex_depth_mm", f.HexDepthMM, 3, 50, "mm"},
+		{"former.bore_diameter_mm", f.BoreDiameterMM, 1, 100, "mm"},
+		{"former.engrave_depth_mm", f.EngraveDepthMM, 0.2, 2, "mm"},
+		{"former.text_height_mm", f.TextHeightMM, 2, 10, "mm"},
+		{"former.end_margin_mm", f.EndMarginMM, 0.5, 50, "mm"},
+		{"former.tolerance_mm", f.ToleranceMM, 0.01, 0.5, "mm"},
+	} {
+		if math.IsNaN(r.v) {
+			c.fail(r.key, "NaN", "must be a number", "give a number")
+			continue
+		}
+		c.within(r.key, r.v, r.lo, r.hi, r.unit)
+	}
+	if f.FlatDepthMM >= f.FlangeMarginMM {
+		c.fail("former.flat_depth_mm", num(f.FlatDepthMM), fmt.Sprintf("must be less than flange_margin_mm = %s so the flats stay on the flange", num(f.FlangeMarginMM)), "make the flats shallower or the flange wider")
+	}
+	if 2*f.ChamferMM >= f.FlangeThicknessMM {
+		c.fail("former.chamfer_mm", num(f.ChamferMM), fmt.Sprintf("must be less than half of flange_thickness_mm = %s", num(f.FlangeThicknessMM)), "use a smaller chamfer")
+	}
+	if f.EngraveDepthMM >= f.FlangeThicknessMM/2 {
+		c.fail("former.engrave_depth_mm", num(f.EngraveDepthMM), fmt.Sprintf("must be less than half of flange_thickness_mm = %s", num(f.FlangeThicknessMM)), "engrave shallower")
+	}
+}
+
+// GrooveRadius returns the radius of the groove's round part in mm: half of
+// the wire diameter plus the clearance.
+func (f *FormerSpec) GrooveRadius(wireMM float64) float64 { return (wireMM + f.ClearanceMM) / 2 }
+
+// DriveRadius returns the radius of the drive cut in mm: the hex socket's
+// corner radius or the bore's radius.
+func (f *FormerSpec) DriveRadius() float64 {
+	if f.Drive == "bore" {
+		return f.BoreDiameterMM / 2
+	}
+	return f.HexAcrossFlatsMM / math.Sqrt(3)
+}
+
+// validateFit checks that the former can be built around the coil: the
+// groove fits between turns with a land and does not reach the axis, and the
+// drive cut leaves a wall under the groove. It runs after the coil fit.
+func (f *FormerSpec) validateFit(c *checker, s *Spec) {
+	coil, err := coilFromSpec(s)
+	if err != nil {
+		return
+	}
+	d := s.Wire.DiameterMM
+	a := f.GrooveRadius(d)
+	// The teardrop's mouth spans a(1 + √2) along the axis; the swept
+	// groove needs 3.5 groove radii of spacing and of radius to tell
+	// neighbouring turns apart.
+	needS := math.Max(a*(1+math.Sqrt2)+MinGrooveLandMM, 3.5*a)
+	if sp := coil.MinSpacing(); sp < needS {
+		key, val := "coil.spacing_mm", deref(s.Coil.SpacingMM)
+		if s.Coil.SpacingMM == nil {
+			key, val = "coil.pitch_angle_deg", deref(s.Coil.PitchAngleDeg)
+		}
+		c.fail(key, num(val), fmt.Sprintf("gives a smallest spacing of %.2f mm; the former's %.2f mm groove needs at least %.2f mm", sp, 2*a, needS),
+			"raise the spacing or use thinner wire or less clearance")
+	}
+	rmin := math.Min(coil.StartRadius, coil.EndRadius)
+	bottom := rmin - d/2 // groove bottom radius at the narrow end
+	if wall := bottom - f.DriveRadius(); f.Drive == "bore" && wall < MinFormerWallMM {
+		c.fail("former.bore_diameter_mm", num(f.BoreDiameterMM), fmt.Sprintf("leaves a %.2f mm wall under the groove; at least %s mm is needed", wall, num(MinFormerWallMM)),
+			fmt.Sprintf("use a bore of at most %.1f mm", 2*(bottom-MinFormerWallMM)))
+	}
+	if f.Drive == "hex" {
+		if wall := bottom - f.DriveRadius(); wall < MinFormerWallMM {
+			c.fail("former.hex_across_flats_mm", num(f.HexAcrossFlatsMM), fmt.Sprintf("leaves a %.2f mm wall under the groove; at least %s mm is needed", wall, num(MinFormerWallMM)),
+				`use drive = "bore" with a thin bore, or a smaller socket`)
+		}
+	}
+	// The wire-lock hole at the start stops a wall short of the drive cut;
+	// it must still take at least one wire diameter of wire.
+	if avail := coil.StartRadius - d/2 - f.DriveRadius() - MinFormerWallMM; avail < d {
+		c.fail("former.lock_hole_depth_mm", num(f.LockHoleDepthMM), fmt.Sprintf("only %.2f mm of wire-lock hole fits above the drive cut; at least one wire diameter (%s mm) is needed", avail, num(d)),
+			"use a smaller drive socket or bore, or a wider coil")
+	}
+	if 3.5*a > rmin {
+		c.fail("wire.diameter_mm", num(d), fmt.Sprintf("makes a %.2f mm groove too large for the %.2f mm smallest coil radius", 2*a, rmin), "use thinner wire or a wider coil")
+	}
+}
