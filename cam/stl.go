@@ -47,9 +47,12 @@ func WriteSTL(w io.Writer, m *geom.Mesh, opt STLOptions) error {
 		return err
 	}
 	var rec [stlFacetSize]byte
-	for i, f := range m.Faces {
-		n := m.Normal(i)
-		vs := [4]geom.Vec3{n, m.Vertices[f[0]], m.Vertices[f[1]], m.Vertices[f[2]]}
+	for _, f := range m.Faces {
+		a, b, c := round32(m.Vertices[f[0]]), round32(m.Vertices[f[1]]), round32(m.Vertices[f[2]])
+		// The normal of the facet as stored, from the rounded corners, so
+		// that readers recomputing it find the same direction.
+		n := b.Sub(a).Cross(c.Sub(a)).Normalize()
+		vs := [4]geom.Vec3{n, a, b, c}
 		for j, v := range vs {
 			binary.LittleEndian.PutUint32(rec[12*j:], math.Float32bits(float32(v.X)))
 			binary.LittleEndian.PutUint32(rec[12*j+4:], math.Float32bits(float32(v.Y)))
@@ -60,6 +63,11 @@ func WriteSTL(w io.Writer, m *geom.Mesh, opt STLOptions) error {
 		}
 	}
 	return bw.Flush()
+}
+
+// round32 returns v with each coordinate rounded to float32.
+func round32(v geom.Vec3) geom.Vec3 {
+	return geom.Vec3{X: float64(float32(v.X)), Y: float64(float32(v.Y)), Z: float64(float32(v.Z))}
 }
 
 // ErrBadSTL is wrapped by ReadSTL's errors for input that is not binary STL.

@@ -78,11 +78,11 @@ type FormerParams struct {
 // the axis on z, the core narrowing upward. It is not modified after
 // NewFormer.
 type Former struct {
-	Solid   sdf.SDF3 // the former's distance bound, mm
-	Genus   int      // through-holes: 1 with a through-bore, else 0
-	Height  float64  // overall height, mm
-	Flipped bool     // the coil's +z runs downward in print coordinates
-	shift   float64  // print z = ±coil z + shift
+	Solid     sdf.SDF3 // the former's distance bound, mm
+	Genus     int      // through-holes: 1 with a through-bore, else 0
+	Height    float64  // overall height, mm
+	Flipped   bool     // the coil's +z runs downward in print coordinates
+	shift     float64  // print z = ±coil z + shift
 	path      WirePath
 	hand      int
 	minRadius float64
@@ -432,18 +432,25 @@ func stopNotch(path WirePath, p FormerParams, a, up, coreR float64) (sdf.SDF3, e
 // driveCut returns, in print coordinates, the hex socket (with a 45° conical
 // roof and a chamfered mouth) or the through-bore (chamfered at both ends).
 func driveCut(p FormerParams, height, driveR float64) (sdf.SDF3, error) {
+	// The 45° mouth chamfer runs from the drive's outer radius plus the
+	// chamfer at the face until it lies wholly inside the drive cut.
 	ch := p.Chamfer
-	mouth, err := sdf.NewCone(ch+1, driveR+ch+1, driveR)
+	inner := driveR - 0.3
+	if p.Drive == HexSocket {
+		inner = p.HexAcrossFlats/2 - 0.3
+	}
+	top := driveR + ch - inner
+	mouth, err := sdf.NewCone(top+1, driveR+ch+1, inner)
 	if err != nil {
 		return nil, err
 	}
-	bottomCh := sdf.Move(mouth, sdf.Translation(geom.Vec3{Z: (ch - 1) / 2}))
+	bottomCh := sdf.Move(mouth, sdf.Translation(geom.Vec3{Z: (top - 1) / 2}))
 	if p.Drive == ThroughBore {
 		bore, err := sdf.NewCylinder(driveR, height+2)
 		if err != nil {
 			return nil, err
 		}
-		topCh := sdf.Move(mouth, sdf.RotationX(math.Pi).Then(sdf.Translation(geom.Vec3{Z: height - (ch-1)/2})))
+		topCh := sdf.Move(mouth, sdf.RotationX(math.Pi).Then(sdf.Translation(geom.Vec3{Z: height - (top-1)/2})))
 		return sdf.Union(0, sdf.Move(bore, sdf.Translation(geom.Vec3{Z: height / 2})), bottomCh, topCh)
 	}
 	if p.HexDepth+driveR > height-p.MinWall {
@@ -452,22 +459,28 @@ func driveCut(p FormerParams, height, driveR float64) (sdf.SDF3, error) {
 	// The socket's corners are rounded: a printed corner is round anyway,
 	// and the round keeps clear of a bit's corner while it lies within the
 	// clearance (a round of radius ρ sits ρ(2/√3 − 1) inside a sharp corner).
-	round := min(0.4, p.HexAcrossFlats/10)
-	hex, err := sdf.NewHexPrism(p.HexAcrossFlats-2*round, p.HexDepth+1-2*round)
+	// Its roof is the 45° cone through the top of the corners, clipped by the
+	// hexagon, so no part of it faces the bed flatter than 45°.
+	round := min(p.Fillet, p.HexAcrossFlats/10)
+	tall := p.HexDepth + driveR + 1
+	hex, err := sdf.NewHexPrism(p.HexAcrossFlats-2*round, tall-2*round)
 	if err != nil {
 		return nil, err
 	}
-	roof, err := sdf.NewCone(driveR, driveR, 0)
+	roof, err := sdf.NewCone(tall, driveR+tall, 0)
 	if err != nil {
 		return nil, err
 	}
-	return sdf.Union(0,
-		sdf.Move(sdf.Offset(hex, round), sdf.Translation(geom.Vec3{Z: (p.HexDepth - 1) / 2})),
-		sdf.Move(roof, sdf.Translation(geom.Vec3{Z: p.HexDepth + driveR/2})),
-		bottomCh)
+	socket, err := sdf.Intersection(0,
+		sdf.Move(sdf.Offset(hex, round), sdf.Translation(geom.Vec3{Z: tall/2 - 1})),
+		sdf.Move(roof, sdf.Translation(geom.Vec3{Z: p.HexDepth + driveR - tall/2})))
+	if err != nil {
+		return nil, err
+	}
+	return sdf.Union(0, socket, bottomCh)
 }
 
-// lettering returns the two labels engraved into the flange face at height
+// lettering returns the two labels V-engraved into the flange face at height
 // top, set along arcs midway between radii rIn and rOut: the first across
 // the +y side reading clockwise, the second across the −y side reading
 // anticlockwise, both upright for a reader at −y.
@@ -478,7 +491,7 @@ func lettering(p FormerParams, rIn, rOut, top float64) ([]sdf.SDF3, error) {
 	}
 	rt := (rIn + rOut) / 2
 	scale := th / glyphHeight
-	pen := math.Max(0.2, 0.1*th)
+	pen := max(0.3, 0.13*th) // half the width of a stroke at the face
 	var out []sdf.SDF3
 	for li, label := range p.Labels {
 		runes := []rune(label)
@@ -514,11 +527,7 @@ func lettering(p FormerParams, rIn, rOut, top float64) ([]sdf.SDF3, error) {
 			for k := range seg {
 				seg[k] = [2]geom.Vec2{place(seg[k][0]), place(seg[k][1])}
 			}
-			st, err := sdf.NewStrokes(seg, pen)
-			if err != nil {
-				return nil, err
-			}
-			e, err := sdf.NewExtrude(st, top-p.EngraveDepth, top+1)
+			e, err := sdf.NewVGroove(seg, top, p.EngraveDepth, pen)
 			if err != nil {
 				return nil, err
 			}

@@ -488,7 +488,7 @@ func (w *blockWorker) cell(i0, j0, k0, x, y, z int) {
 			cyc[i], cyc[j] = cyc[j], cyc[i]
 			cycEdge[i], cycEdge[j] = cycEdge[j], cycEdge[i]
 		}
-		w.cycle(cyc[:n], cycEdge[:n], i0+x, j0+y, k0+z, cycles, &v)
+		w.cycle(cyc[:n], cycEdge[:n], i0+x, j0+y, k0+z, cycles)
 		cycles++
 	}
 }
@@ -503,12 +503,8 @@ const featureCos = 0.9
 // a diagonal lying on a cube face (which a neighbouring cell might also
 // use), is fanned about a new vertex inside the cell; otherwise it is cut
 // across its shortest allowed diagonals.
-func (w *blockWorker) cycle(c []int32, edges []int8, ci, cj, ck, no int, v *[8]float64) {
-	// A linear field has equal sums over the four pairs of opposite
-	// corners; a large spread marks a crease or corner in the cell.
-	sums := [4]float64{v[0] + v[7], v[1] + v[6], v[2] + v[5], v[3] + v[4]}
-	spread := max(sums[0], sums[1], sums[2], sums[3]) - min(sums[0], sums[1], sums[2], sums[3])
-	if spread > 0.01*w.g.h && w.sharp(c) {
+func (w *blockWorker) cycle(c []int32, edges []int8, ci, cj, ck, no int) {
+	if w.sharp(c) {
 		w.fanAbout(c, ci, cj, ck, no)
 		return
 	}
@@ -655,13 +651,21 @@ func (w *blockWorker) gradient(p geom.Vec3) geom.Vec3 {
 	}.Scale(1 / (2 * e))
 }
 
-// normal returns the unit surface normal at local vertex i from central
-// differences of the distance, computed once per vertex.
+// normal returns the unit surface normal at local vertex i from forward
+// differences of the distance (the vertex lies on the surface, so one
+// difference a component is enough), computed once per vertex.
 func (w *blockWorker) normal(i int32) geom.Vec3 {
 	if n := w.p.norm[i]; n != (geom.Vec3{}) {
 		return n
 	}
-	n := w.gradient(w.p.pos[i]).Normalize()
+	p := w.p.pos[i]
+	e := w.g.h * 1e-3
+	f0 := w.s.Eval(p)
+	n := geom.Vec3{
+		X: w.s.Eval(p.Add(geom.Vec3{X: e})) - f0,
+		Y: w.s.Eval(p.Add(geom.Vec3{Y: e})) - f0,
+		Z: w.s.Eval(p.Add(geom.Vec3{Z: e})) - f0,
+	}.Normalize()
 	if n == (geom.Vec3{}) {
 		n = geom.Vec3{Z: 1}
 	}

@@ -1,0 +1,57 @@
+package main
+
+import (
+	"fmt"
+	"io"
+
+	"coilwright/cam"
+	"coilwright/jig"
+)
+
+// writeFormer meshes the winding former and writes former.stl, former.3mf
+// and former.png. The mesh is checked to be closed and consistently
+// oriented before anything is written.
+func writeFormer(ctx *buildContext) error {
+	s := ctx.spec.Spec
+	f, err := jig.FormerFromDesign(ctx.spec.Design)
+	if err != nil {
+		return err
+	}
+	m, err := f.Mesh(s.Former.ToleranceMM)
+	if err != nil {
+		return err
+	}
+	if _, err := jig.CheckMesh(m, jig.CheckOptions{Genus: f.Genus}); err != nil {
+		return fmt.Errorf("former mesh: %w", err)
+	}
+	header := stlHeader("coilwright former: " + s.Kit)
+	if err := ctx.out.Add("former.stl", func(w io.Writer) error {
+		return cam.WriteSTL(w, m, cam.STLOptions{Header: header})
+	}); err != nil {
+		return err
+	}
+	if err := ctx.out.Add("former.3mf", func(w io.Writer) error {
+		return cam.Write3MF(w, m, cam.ThreeMFOptions{Name: s.Kit})
+	}); err != nil {
+		return err
+	}
+	return ctx.out.Add("former.png", func(w io.Writer) error {
+		return cam.WritePreview(w, m, cam.PreviewOptions{})
+	})
+}
+
+// stlHeader cuts text to the 80 bytes an STL header holds without
+// splitting a character.
+func stlHeader(text string) string {
+	if len(text) <= 80 {
+		return text
+	}
+	n := 0
+	for i := range text {
+		if i > 80 {
+			break
+		}
+		n = i
+	}
+	return text[:n]
+}
