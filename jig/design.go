@@ -43,11 +43,13 @@ func FormerFromDesign(d *parts.Design) (*Former, error) {
 	return NewFormer(d.Coil, p)
 }
 
-// FrequencyLabel returns the frequency as engraved: "5.8 GHz" from 1000 MHz
-// up (to 1 MHz), "433.9 MHz" below (to 0.1 MHz).
+// FrequencyLabel returns the frequency as engraved, to three significant
+// figures: "5.8 GHz" from 1000 MHz up, "434 MHz" below.
 func FrequencyLabel(mhz float64) string {
+	unit := " MHz"
 	if mhz >= 1000 {
-		return strconv.FormatFloat(math.Round(mhz)/1000, 'f', -1, 64) + " GHz"
+		mhz, unit = mhz/1000, " GHz"
 	}
-	return strconv.FormatFloat(math.Round(mhz*10)/10, 'f', -1, 64) + " MHz"
+	v, _ := strconv.ParseFloat(strconv.FormatFloat(mhz, 'g', 3, 64), 64)
+	return strconv.FormatFloat(v, 'f', -1, 64) + unit
 }

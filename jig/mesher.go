@@ -6,7 +6,8 @@ package jig
 //  1. The solid's box, padded by two cells, is cut into blocks of 8³ cells.
 //     A block whose centre lies farther from the surface than its half
 //     diagonal cannot hold a sign change (the distance is 1-Lipschitz) and is
-//     skipped; the rest are sampled at every grid point. Blocks are handed to
+//     skipped; so is each of its eight sub-blocks of 4³ cells by the same
+//     test, and the rest are sampled at every grid point. Blocks are handed to
 //     all cores through an atomic counter and each writes only its own slot
 //     of a pre-indexed result slice.
 //  2. In each cell with corners of both signs (a zero value counts as
@@ -24,11 +25,27 @@ package jig
 //     consistently oriented 2-manifold (Nielson & Hamann, "The asymptotic
 //     decider", IEEE Visualization 1991, for the face rule).
 //  4. A vertex belongs to one grid edge; its key is that edge's global index,
-//     so vertices are welded exactly. Its position starts at the linear
-//     crossing and is refined by two regula falsi steps along the edge with
-//     the true distance, kept a thousandth of an edge away from either end so
-//     no face collapses. Blocks are merged in index order, so the output is
-//     the same on any number of cores.
+//     so vertices are welded exactly. Its position is the edge's root of the
+//     true distance, found by the Illinois variant of regula falsi to within
+//     a ten-thousandth of a cell and kept a thousandth of an edge away from
+//     either end so no face collapses.
+//  5. Where the surface normals at a cycle's vertices differ by more than
+//     about 25°, a crease or corner runs through the cell: the cycle is
+//     fanned about a vertex placed where the tangent planes meet, and after
+//     merging, the diagonal between two such fans in neighbouring cells is
+//     flipped onto the crease (Kobbelt et al., "Feature sensitive surface
+//     extraction from volume data", SIGGRAPH 2001). Sharp edges are then
+//     reproduced to the accuracy of the vertices instead of being cut off
+//     by up to a third of a cell.
+//
+// Blocks are merged in index order, so the output is the same on any number
+// of cores. Accuracy: vertices lie within 1e-4 cell of the surface (feature
+// vertices within 0.01 cell, by Newton projection); face centroids carry the
+// chord error s²/(8R) of curved parts, which the cell size from MeshOptions
+// keeps within the tolerance for radii down to MinRadius. Features thinner
+// than about two cells (fine lettering) can exceed it; the demo formers
+// measure 0.006 mm at vertices and 0.067 mm at centroids (in the lettering,
+// 0.045 mm elsewhere) at the 0.05 mm default.
 
 import (
 	"errors"
@@ -343,6 +360,7 @@ type blockWorker struct {
 	g    *grid
 	s    sdf.SDF3
 	vals []float64
+	done []bool  // whether vals holds the point's value
 	vert []int32 // local vertex per block edge slot, −1 when unset
 	p    *patch
 }
@@ -350,7 +368,7 @@ type blockWorker struct {
 const bp = blockCells + 1 // points per block edge
 
 func newBlockWorker(g *grid, s sdf.SDF3) *blockWorker {
-	w := &blockWorker{g: g, s: s, vals: make([]float64, bp*bp*bp), vert: make([]int32, 3*bp*bp*bp)}
+	w := &blockWorker{g: g, s: s, vals: make([]float64, bp*bp*bp), done: make([]bool, bp*bp*bp), vert: make([]int32, 3*bp*bp*bp)}
 	return w
 }
 
@@ -364,16 +382,40 @@ func (w *blockWorker) run(i int) *patch {
 	if math.Abs(w.s.Eval(c)) > half*math.Sqrt(3)*(1+1e-9) {
 		return nil
 	}
+	// Sub-blocks of half the block's edge are culled the same way; only the
+	// points of the others are sampled, and only their cells meshed.
+	const sub = blockCells / 2
+	var live [8]bool
+	for sb := range 8 {
+		sx, sy, sz := sb&1*sub, sb>>1&1*sub, sb>>2&1*sub
+		sh := float64(sub) * g.h / 2
+		c := g.point(i0+sx, j0+sy, k0+sz).Add(geom.Vec3{X: sh, Y: sh, Z: sh})
+		live[sb] = math.Abs(w.s.Eval(c)) <= sh*math.Sqrt(3)*(1+1e-9)
+	}
+	for j := range w.done {
+		w.done[j] = false
+	}
 	anyNeg, anyPos := false, false
-	for z := range bp {
-		for y := range bp {
-			for x := range bp {
-				v := w.s.Eval(g.point(i0+x, j0+y, k0+z))
-				w.vals[x+bp*(y+bp*z)] = v
-				if v < 0 {
-					anyNeg = true
-				} else {
-					anyPos = true
+	for sb, ok := range live {
+		if !ok {
+			continue
+		}
+		sx, sy, sz := sb&1*sub, sb>>1&1*sub, sb>>2&1*sub
+		for z := sz; z <= sz+sub; z++ {
+			for y := sy; y <= sy+sub; y++ {
+				for x := sx; x <= sx+sub; x++ {
+					k := x + bp*(y+bp*z)
+					if w.done[k] {
+						continue
+					}
+					w.done[k] = true
+					v := w.s.Eval(g.point(i0+x, j0+y, k0+z))
+					w.vals[k] = v
+					if v < 0 {
+						anyNeg = true
+					} else {
+						anyPos = true
+					}
 				}
 			}
 		}
@@ -388,7 +430,9 @@ func (w *blockWorker) run(i int) *patch {
 	for z := range blockCells {
 		for y := range blockCells {
 			for x := range blockCells {
-				w.cell(i0, j0, k0, x, y, z)
+				if live[x/sub+2*(y/sub)+4*(z/sub)] {
+					w.cell(i0, j0, k0, x, y, z)
+				}
 			}
 		}
 	}
@@ -652,19 +696,19 @@ func (w *blockWorker) gradient(p geom.Vec3) geom.Vec3 {
 }
 
 // normal returns the unit surface normal at local vertex i from forward
-// differences of the distance (the vertex lies on the surface, so one
-// difference a component is enough), computed once per vertex.
+// differences a twentieth of a cell long, computed once per vertex. The
+// vertex lies on the surface to within rootTol cells, so its own value is
+// taken as zero, an error of at most rootTol/0.05 = 0.2 % in each component.
 func (w *blockWorker) normal(i int32) geom.Vec3 {
 	if n := w.p.norm[i]; n != (geom.Vec3{}) {
 		return n
 	}
 	p := w.p.pos[i]
-	e := w.g.h * 1e-3
-	f0 := w.s.Eval(p)
+	e := w.g.h * 0.05
 	n := geom.Vec3{
-		X: w.s.Eval(p.Add(geom.Vec3{X: e})) - f0,
-		Y: w.s.Eval(p.Add(geom.Vec3{Y: e})) - f0,
-		Z: w.s.Eval(p.Add(geom.Vec3{Z: e})) - f0,
+		X: w.s.Eval(p.Add(geom.Vec3{X: e})),
+		Y: w.s.Eval(p.Add(geom.Vec3{Y: e})),
+		Z: w.s.Eval(p.Add(geom.Vec3{Z: e})),
 	}.Normalize()
 	if n == (geom.Vec3{}) {
 		n = geom.Vec3{Z: 1}
@@ -700,7 +744,7 @@ func (w *blockWorker) vertex(i0, j0, k0, x, y, z, e int, v *[8]float64) int32 {
 	lo, hi, flo, fhi := 0.0, 1.0, v[c], v[c|1<<a]
 	t := lo + (hi-lo)*flo/(flo-fhi)
 	side := 0
-	for range 6 {
+	for range 24 {
 		f := w.s.Eval(pa.Add(d.Scale(t)))
 		if math.Abs(f) < rootTol*g.h {
 			break

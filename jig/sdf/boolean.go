@@ -114,10 +114,20 @@ func Difference(a SDF3, cuts ...Cut) (SDF3, error) {
 func (d *difference) Eval(p geom.Vec3) float64 {
 	v := d.a.Eval(p)
 	for i, c := range d.s {
-		if -boxDist(d.b[i], p) <= v-d.ks[i] {
+		// The cut changes v only where its value is below −v + k.
+		bound := d.ks[i] - v
+		if boxDist(d.b[i], p) >= bound {
 			continue
 		}
-		v = -smin(-v, c.Eval(p), d.ks[i])
+		var g float64
+		if b, ok := c.(Bounded); ok {
+			if g = b.EvalBound(p, bound); g >= bound {
+				continue
+			}
+		} else {
+			g = c.Eval(p)
+		}
+		v = -smin(-v, g, d.ks[i])
 	}
 	return v
 }

@@ -61,6 +61,7 @@ type HelixSweep struct {
 	zs, rs     []float64 // tabulated z and r, one entry per dphi from Start
 	dphi       float64
 	rmin, rmax float64
+	zslope     float64 // largest |dz/dφ| in the table, mm/rad
 	b          geom.Box3
 }
 
@@ -103,6 +104,14 @@ func NewHelixSweep(h Helix, prof SDF2) (*HelixSweep, error) {
 	for _, c := range []geom.Vec2{pb.Min, pb.Max, {X: pb.Min.X, Y: pb.Max.Y}, {X: pb.Max.X, Y: pb.Min.Y}} {
 		s.extent = max(s.extent, c.Len())
 	}
+	for i := 1; i < n; i++ {
+		s.zslope = max(s.zslope, (s.zs[i]-s.zs[i-1])/s.dphi)
+	}
+	// The second difference bounds how far the slope between samples can
+	// exceed the largest chord slope.
+	for i := 1; i+1 < n; i++ {
+		s.zslope = max(s.zslope, (s.zs[i+1]-s.zs[i-1])/(2*s.dphi)+math.Abs(s.zs[i+1]-2*s.zs[i]+s.zs[i-1])/s.dphi)
+	}
 	if s.extent >= s.reach {
 		return nil, &ArgError{"helix sweep", "profile extent", s.extent,
 			"profile must fit within half the rise per turn and half the radius"}
@@ -121,6 +130,40 @@ func (s *HelixSweep) Reach() float64 { return s.reach }
 
 // Bounds returns the sweep's bounding box.
 func (s *HelixSweep) Bounds() geom.Box3 { return s.b }
+
+// EvalBound returns Eval(p) when that is below bound, else a value between
+// bound and Eval(p). Far from the curve it answers from heights alone: a
+// point of the curve within D of p has an azimuth within δ = 2·asin(D/2ρ')
+// of p's (ρ' the smaller of p's radius and the curve's least), so its height
+// lies within zslope·δ of a crossing of p's meridian, and p's height must be
+// within D + zslope·δ of that crossing.
+func (s *HelixSweep) EvalBound(p geom.Vec3, bound float64) float64 {
+	if bound <= -s.extent {
+		return -s.extent // no point lies deeper than extent inside the profile
+	}
+	d := bound + s.extent // curve distance that matters
+	q := geom.Vec3{X: p.X, Y: float64(s.h.Hand) * p.Y, Z: p.Z}
+	rho := math.Hypot(q.X, q.Y)
+	rr := min(rho, s.rmin)
+	if bound > 0 && 2*rr > 2*d {
+		delta := 2 * math.Asin(d/(2*rr))
+		theta := math.Atan2(q.Y, q.X)
+		k := math.Floor((s.phiOfZ(q.Z) - theta) / (2 * math.Pi))
+		gap := math.Inf(1)
+		for _, kk := range [2]float64{k, k + 1} {
+			c := theta + 2*math.Pi*kk
+			if c < s.h.Start-delta || c > s.h.End+delta {
+				continue
+			}
+			_, _, _, z, _, _ := s.curve(max(s.h.Start, min(s.h.End, c)))
+			gap = min(gap, math.Abs(q.Z-z))
+		}
+		if gap-s.zslope*delta > d {
+			return bound
+		}
+	}
+	return s.Eval(p)
+}
 
 // Eval returns the signed distance bound from p to the sweep.
 func (s *HelixSweep) Eval(p geom.Vec3) float64 {
@@ -158,30 +201,32 @@ func (s *HelixSweep) Eval(p geom.Vec3) float64 {
 func (s *HelixSweep) curve(phi float64) (r, r1, r2, z, z1, z2 float64) {
 	x := (phi - s.h.Start) / s.dphi
 	n := len(s.zs)
-	i := int(math.Floor(x))
-	i = max(0, min(n-2, i))
+	i := max(0, min(n-2, int(math.Floor(x))))
 	t := x - float64(i)
-	at := func(tab []float64, k int) float64 {
-		switch {
-		case k < 0:
-			return 2*tab[0] - tab[1]
-		case k >= n:
-			return 2*tab[n-1] - tab[n-2]
-		}
-		return tab[k]
+	r, r1, r2 = catmullRom(s.rs, i, t, s.dphi)
+	z, z1, z2 = catmullRom(s.zs, i, t, s.dphi)
+	return
+}
+
+// catmullRom evaluates the Catmull–Rom cubic of tab between entries i and
+// i+1 at fraction t of the step h, with its first and second derivatives.
+// A missing neighbour at either end is extrapolated linearly.
+func catmullRom(tab []float64, i int, t, h float64) (v, d1, d2 float64) {
+	p1, p2 := tab[i], tab[i+1]
+	p0 := 2*p1 - p2
+	if i > 0 {
+		p0 = tab[i-1]
 	}
-	cr := func(tab []float64) (v, d1, d2 float64) {
-		p0, p1, p2, p3 := at(tab, i-1), tab[i], tab[i+1], at(tab, i+2)
-		a := -0.5*p0 + 1.5*p1 - 1.5*p2 + 0.5*p3
-		b := p0 - 2.5*p1 + 2*p2 - 0.5*p3
-		c := -0.5*p0 + 0.5*p2
-		v = ((a*t+b)*t+c)*t + p1
-		d1 = ((3*a*t+2*b)*t + c) / s.dphi
-		d2 = (6*a*t + 2*b) / (s.dphi * s.dphi)
-		return
+	p3 := 2*p2 - p1
+	if i+2 < len(tab) {
+		p3 = tab[i+2]
 	}
-	r, r1, r2 = cr(s.rs)
-	z, z1, z2 = cr(s.zs)
+	a := -0.5*p0 + 1.5*p1 - 1.5*p2 + 0.5*p3
+	b := p0 - 2.5*p1 + 2*p2 - 0.5*p3
+	c := -0.5*p0 + 0.5*p2
+	v = ((a*t+b)*t+c)*t + p1
+	d1 = ((3*a*t+2*b)*t + c) / h
+	d2 = (6*a*t + 2*b) / (h * h)
 	return
 }
 

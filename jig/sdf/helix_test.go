@@ -113,3 +113,33 @@ func TestHelixRejects(t *testing.T) {
 		t.Error("a flat helix was accepted")
 	}
 }
+
+// TestHelixEvalBound checks the bounded evaluation against the full one:
+// equal below the bound, between the bound and the full value above it.
+func TestHelixEvalBound(t *testing.T) {
+	const tol = 1e-12
+	circ, _ := NewCircle(geom.Vec2{}, 0.7)
+	s, err := NewHelixSweep(testHelix(-1), circ)
+	if err != nil {
+		t.Fatal(err)
+	}
+	rng := rand.New(rand.NewPCG(9, 10))
+	skipped := 0
+	for range 20000 {
+		p := geom.Vec3{X: rng.Float64()*24 - 12, Y: rng.Float64()*24 - 12, Z: rng.Float64()*40 - 2}
+		bound := rng.Float64()*3 - 1
+		full, got := s.Eval(p), s.EvalBound(p, bound)
+		switch {
+		case full < bound && math.Abs(got-full) > tol:
+			t.Fatalf("at %v bound %g: got %g, full %g", p, bound, got, full)
+		case full >= bound && (got < bound-tol || got > full+tol):
+			t.Fatalf("at %v bound %g: got %g outside [bound, full %g]", p, bound, got, full)
+		}
+		if got != full {
+			skipped++
+		}
+	}
+	if skipped == 0 {
+		t.Error("the bound never saved an evaluation")
+	}
+}

@@ -15,6 +15,15 @@ type SDF3 interface {
 	Bounds() geom.Box3
 }
 
+// Bounded is an SDF3 that can answer more cheaply when only values below a
+// bound matter: EvalBound returns Eval(p) when that is below bound, and
+// otherwise some value v with bound ≤ v ≤ Eval(p). Difference uses it for
+// its cuts.
+type Bounded interface {
+	SDF3
+	EvalBound(p geom.Vec3, bound float64) float64
+}
+
 // SDF2 is a region of the plane with the same contract as SDF3.
 type SDF2 interface {
 	Eval(p geom.Vec2) float64

@@ -1,0 +1,408 @@
+package jig
+
+import (
+	"bytes"
+	"fmt"
+	"math"
+	"math/rand/v2"
+	"os"
+	"os/exec"
+	"path/filepath"
+	"regexp"
+	"sort"
+	"strconv"
+	"testing"
+
+	"coilwright/cam"
+	"coilwright/cam/geom"
+	"coilwright/parts"
+	"coilwright/templates"
+)
+
+// demoFormer builds the former of an embedded demo spec.
+func demoFormer(t testing.TB, name string) (*parts.Design, *Former) {
+	t.Helper()
+	b, ok := templates.Demo(name)
+	if !ok {
+		t.Fatalf("no demo %s", name)
+	}
+	s, err := parts.ParseSpec(b)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return designFormer(t, s)
+}
+
+func designFormer(t testing.TB, s *parts.Spec) (*parts.Design, *Former) {
+	t.Helper()
+	d, err := parts.NewDesign(s)
+	if err != nil {
+		t.Fatal(err)
+	}
+	f, err := FormerFromDesign(d)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return d, f
+}
+
+// randomSpec draws a former spec: either hand, cylindrical or conical
+// (either way up), 1–20 turns, 0.5–3 mm wire, 5–12 GHz so that the formers
+// stay a hand's length. Draws the spec rules reject are redrawn.
+func randomSpec(rng *rand.Rand) *parts.Spec {
+	for {
+		f := 5000 + rng.Float64()*7000
+		s := &parts.Spec{Kit: "Random Test Kit", FrequencyMHz: f}
+		s.Coil.Turns = 1 + math.Round(rng.Float64()*19*4)/4
+		s.Coil.Hand = [2]string{"RHCP", "LHCP"}[rng.IntN(2)]
+		base := 0.8 + rng.Float64()*0.5
+		s.Coil.BaseCircumferenceLambda = &base
+		if rng.IntN(2) == 0 {
+			s.Coil.Shape = "conical"
+			top := 0.7 + rng.Float64()*0.6
+			s.Coil.TopCircumferenceLambda = &top
+		}
+		pitch := 11 + rng.Float64()*5
+		s.Coil.PitchAngleDeg = &pitch
+		s.Wire = parts.WireSpec{Material: "copper-annealed", DiameterMM: 0.5 + rng.Float64()*2.5}
+		if rng.IntN(4) == 0 {
+			s.Former.Drive = "bore"
+			bore := 2 + rng.Float64()*2
+			s.Former.BoreDiameterMM = bore
+		}
+		if rng.IntN(4) == 0 {
+			s.Former.GrooveProfile = "round"
+		}
+		if s.Validate() == nil {
+			return s
+		}
+	}
+}
+
+// randomSpecTolerance is the mesh tolerance for the random specs, coarser
+// than the default to keep the suite quick; the checks are the same.
+const randomSpecTolerance = 0.15
+
+// TestRandomFormers meshes 50 seeded random formers and requires each to
+// pass every check: closed, two faces to an edge in opposite directions, no
+// pinched vertex, no degenerate face, the Euler characteristic of its genus,
+// positive volume, and every vertex within the tolerance of the surface.
+func TestRandomFormers(t *testing.T) {
+	rng := rand.New(rand.NewPCG(2026, 12))
+	for i := range 50 {
+		s := randomSpec(rng)
+		name := fmt.Sprintf("%02d %s %s %.2f turns %.2f mm wire %s", i, s.Coil.Hand, s.Coil.Shape, s.Coil.Turns, s.Wire.DiameterMM, s.Former.Drive)
+		t.Run(name, func(t *testing.T) {
+			_, f := designFormer(t, s)
+			m, err := f.Mesh(randomSpecTolerance)
+			if err != nil {
+				t.Fatal(err)
+			}
+			rep, err := CheckMesh(m, CheckOptions{Genus: f.Genus, SDF: f.Solid})
+			if err != nil {
+				t.Fatalf("%v\n%+v", err, rep)
+			}
+			if rep.MaxVertexDist > randomSpecTolerance {
+				t.Errorf("a vertex lies %.4f mm off the surface", rep.MaxVertexDist)
+			}
+			// Centroids near the engraved lettering can exceed the
+			// tolerance (see TestDemoFormerAccuracy); twice it bounds them.
+			if rep.MaxCentroidDist > 2*randomSpecTolerance {
+				t.Errorf("a face centroid lies %.4f mm off the surface", rep.MaxCentroidDist)
+			}
+		})
+	}
+}
+
+// TestDemoFormerAccuracy meshes the default demo at the default tolerance and
+// records how far the mesh lies from the model.
+func TestDemoFormerAccuracy(t *testing.T) {
+	d, f := demoFormer(t, templates.DefaultDemo)
+	tol := d.Spec.Former.ToleranceMM
+	m, err := f.Mesh(tol)
+	if err != nil {
+		t.Fatal(err)
+	}
+	rep, err := CheckMesh(m, CheckOptions{Genus: f.Genus, SDF: f.Solid})
+	if err != nil {
+		t.Fatalf("%v\n%+v", err, rep)
+	}
+	// Vertices are solved onto the surface; centroids carry the chord
+	// error, which exceeds the tolerance only in the engraved lettering,
+	// whose V-strokes are two to three cells wide.
+	const letteringFactor = 1.5
+	if rep.MaxVertexDist > tol || rep.MaxCentroidDist > letteringFactor*tol {
+		t.Errorf("vertex %.4f mm, centroid %.4f mm off the surface; want %g and %g", rep.MaxVertexDist, rep.MaxCentroidDist, tol, letteringFactor*tol)
+	}
+	t.Logf("%d faces; largest distance from the model: vertex %.4f mm, centroid %.4f mm", rep.Faces, rep.MaxVertexDist, rep.MaxCentroidDist)
+}
+
+// TestDemoFormerAdmesh writes the demo former as STL and reads admesh's
+// report: no repairs of any kind and one part.
+func TestDemoFormerAdmesh(t *testing.T) {
+	bin, err := exec.LookPath("admesh")
+	if err != nil {
+		if os.Getenv("COILWRIGHT_REQUIRE_TOOLS") == "1" {
+			t.Fatal("admesh is required (Debian package admesh)")
+		}
+		t.Skip("admesh not installed (Debian package admesh)")
+	}
+	d, f := demoFormer(t, templates.DefaultDemo)
+	m, err := f.Mesh(d.Spec.Former.ToleranceMM)
+	if err != nil {
+		t.Fatal(err)
+	}
+	path := filepath.Join(t.TempDir(), "former.stl")
+	var buf bytes.Buffer
+	if err := cam.WriteSTL(&buf, m, cam.STLOptions{}); err != nil {
+		t.Fatal(err)
+	}
+	if err := os.WriteFile(path, buf.Bytes(), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	out, err := exec.Command(bin, path).CombinedOutput()
+	if err != nil {
+		t.Fatalf("admesh: %v\n%s", err, out)
+	}
+	// Source: admesh's report format; a clean mesh shows 0 in each repair
+	// counter and in the first column of disconnected facets.
+	want := map[string]string{
+		"Total disconnected facets": "0",
+		"Degenerate facets":         "0",
+		"Edges fixed":               "0",
+		"Facets removed":            "0",
+		"Facets added":              "0",
+		"Facets reversed":           "0",
+		"Backwards edges":           "0",
+		"Normals fixed":             "0",
+		"Number of parts":           "1",
+		"Number of facets":          strconv.Itoa(len(m.Faces)),
+	}
+	for key, v := range want {
+		re := regexp.MustCompile(regexp.QuoteMeta(key) + `\s*:\s*(\S+)`)
+		got := re.FindSubmatch(out)
+		if got == nil || string(got[1]) != v {
+			t.Errorf("admesh %q = %q, want %s", key, got, v)
+		}
+	}
+	vol := regexp.MustCompile(`Volume\s*:\s*(\S+)`).FindSubmatch(out)
+	if vol == nil {
+		t.Fatalf("no volume in admesh report:\n%s", out)
+	}
+	v, _ := strconv.ParseFloat(string(vol[1]), 64)
+	// admesh sums in float32 from float32 corners; 1e-4 relative covers it.
+	if math.Abs(v-m.Volume()) > 1e-4*m.Volume() {
+		t.Errorf("admesh volume %g, mesh volume %g", v, m.Volume())
+	}
+}
+
+// meridian returns the points where the mesh crosses the half-plane through
+// the z axis at azimuth theta, as (distance from the axis, z).
+func meridian(m *geom.Mesh, theta float64) []geom.Vec2 {
+	s, c := math.Sincos(theta)
+	side := func(p geom.Vec3) float64 { return -s*p.X + c*p.Y }
+	var out []geom.Vec2
+	for _, f := range m.Faces {
+		for k := range 3 {
+			a, b := m.Vertices[f[k]], m.Vertices[f[(k+1)%3]]
+			sa, sb := side(a), side(b)
+			if (sa < 0) == (sb < 0) || f[k] > f[(k+1)%3] {
+				continue // no crossing, or the edge's other face reports it
+			}
+			p := a.Add(b.Sub(a).Scale(sa / (sa - sb)))
+			if rho := c*p.X + s*p.Y; rho > 0 {
+				out = append(out, geom.Vec2{X: rho, Y: p.Z})
+			}
+		}
+	}
+	return out
+}
+
+// grooveCentre fits a circle (algebraic least squares, Kåsa) to the slice
+// points on the inner ±45° of the groove section around (rho0, z0): the round
+// part of either profile, symmetric about the centre and clear of the lip
+// blends. It returns the centre's height and the number of points used.
+func grooveCentre(pts []geom.Vec2, rho0, z0, a float64) (float64, int) {
+	var m [3][3]float64
+	var r [3]float64
+	n := 0
+	for _, p := range pts {
+		if p.X > rho0-0.72*a || p.X < rho0-a-0.3 || math.Abs(p.Y-z0) > a {
+			continue
+		}
+		n++
+		row := [3]float64{p.X, p.Y, 1}
+		rhs := -(p.X*p.X + p.Y*p.Y)
+		for i := range 3 {
+			for j := range 3 {
+				m[i][j] += row[i] * row[j]
+			}
+			r[i] += row[i] * rhs
+		}
+	}
+	x, ok := solve3(m, r)
+	if !ok || n < 3 {
+		return math.NaN(), n
+	}
+	return -x[1] / 2, n
+}
+
+// printAzimuthParam returns the coil angle φ (within the first turn) whose
+// centreline point lies at print azimuth theta.
+func printAzimuthParam(f *Former, theta float64) float64 {
+	s := float64(f.hand)
+	if f.Flipped {
+		s = -s
+	}
+	return math.Mod(s*theta+4*math.Pi, 2*math.Pi)
+}
+
+// TestGroovePitch measures the groove's advance per turn on meshes: the
+// centre of the groove's round part in one meridian slice, turn by turn,
+// against the spacing the spec sets.
+func TestGroovePitch(t *testing.T) {
+	const pitchTol = 0.02 // mm
+	spacing := 26.5
+	cyl := &parts.Spec{Kit: "Pitch Test", FrequencyMHz: 2440,
+		Coil: parts.CoilSpec{Shape: "cylindrical", Turns: 4, Hand: "LHCP", SpacingMM: &spacing},
+		Wire: parts.WireSpec{Material: "copper-annealed", DiameterMM: 2}}
+	base := 1.0
+	cyl.Coil.BaseCircumferenceLambda = &base
+	if err := cyl.Validate(); err != nil {
+		t.Fatal(err)
+	}
+	demo, _ := templates.Demo(templates.DefaultDemo)
+	cone, err := parts.ParseSpec(demo)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, c := range []struct {
+		name string
+		s    *parts.Spec
+	}{{"cylinder with spacing 26.5 mm", cyl}, {"demo cone", cone}} {
+		t.Run(c.name, func(t *testing.T) {
+			d, f := designFormer(t, c.s)
+			m, err := f.Mesh(0)
+			if err != nil {
+				t.Fatal(err)
+			}
+			// Source: the spec; spacing_mm, or tan α = S/C on the mean
+			// circumference for a pitch angle (Kraus, Antennas, §7-2).
+			want := d.Coil.Spacing
+			if c.s.Coil.SpacingMM != nil {
+				want = *c.s.Coil.SpacingMM
+			}
+			a := (c.s.Wire.DiameterMM + c.s.Former.ClearanceMM) / 2
+			for _, theta := range []float64{0.7, 2.9} {
+				pts := meridian(m, theta)
+				phi0 := printAzimuthParam(f, theta)
+				var zs []float64
+				for phi := phi0; phi <= d.Coil.Span(); phi += 2 * math.Pi {
+					p := f.Centreline(phi)
+					rho := math.Hypot(p.X, p.Y) + c.s.Former.ClearanceMM/2
+					z, n := grooveCentre(pts, rho, p.Z, a)
+					if n < 4 {
+						t.Fatalf("θ %.1f, φ %.2f: only %d slice points on the groove", theta, phi, n)
+					}
+					zs = append(zs, z)
+				}
+				sort.Float64s(zs)
+				if len(zs) < 2 {
+					t.Fatalf("θ %.1f: %d turns found", theta, len(zs))
+				}
+				for i := 1; i < len(zs); i++ {
+					if got := zs[i] - zs[i-1]; math.Abs(got-want) > pitchTol {
+						t.Errorf("θ %.1f, turn %d: measured pitch %.4f mm, spec %.4f mm", theta, i, got, want)
+					}
+				}
+			}
+		})
+	}
+}
+
+// TestGrooveHand checks on the mesh that the groove climbs counter-clockwise
+// seen from above for RHCP and clockwise for LHCP (IEEE Std 145: a helix
+// wound as a right-hand screw radiates RHCP), with the flange at either end
+// of the coil.
+func TestGrooveHand(t *testing.T) {
+	for _, c := range []struct {
+		name       string
+		hand       string
+		base, top  float64
+		wantRising bool
+	}{
+		{"RHCP cone narrowing from the feed", "RHCP", 1.2, 0.9, true},
+		{"LHCP cone narrowing from the feed", "LHCP", 1.2, 0.9, false},
+		{"RHCP cone widening from the feed", "RHCP", 0.9, 1.2, true},
+		{"LHCP cone widening from the feed", "LHCP", 0.9, 1.2, false},
+	} {
+		t.Run(c.name, func(t *testing.T) {
+			pitch := 13.0
+			s := &parts.Spec{Kit: "Hand Test", FrequencyMHz: 5800,
+				Coil: parts.CoilSpec{Shape: "conical", Turns: 3, Hand: c.hand, PitchAngleDeg: &pitch,
+					BaseCircumferenceLambda: &c.base, TopCircumferenceLambda: &c.top},
+				Wire: parts.WireSpec{Material: "copper-annealed", DiameterMM: 1}}
+			if err := s.Validate(); err != nil {
+				t.Fatal(err)
+			}
+			d, f := designFormer(t, s)
+			m, err := f.Mesh(0.1)
+			if err != nil {
+				t.Fatal(err)
+			}
+			a := (s.Wire.DiameterMM + s.Former.ClearanceMM) / 2
+			// Groove centre height in two slices 0.6 rad apart (counter-
+			// clockwise), near the middle turn, both found from the mesh
+			// alone: the second is searched on both sides of the first.
+			const dTheta = 0.6
+			th0 := 1.0
+			phi := printAzimuthParam(f, th0) + 2*math.Pi
+			p := f.Centreline(phi)
+			rho := math.Hypot(p.X, p.Y) + s.Former.ClearanceMM/2
+			z0, n := grooveCentre(meridian(m, th0), rho, p.Z, a)
+			if n < 4 {
+				t.Fatalf("groove not found in the first slice")
+			}
+			rise := d.Coil.SpacingAt(phi) * dTheta / (2 * math.Pi)
+			pts := meridian(m, th0+dTheta)
+			up, nu := grooveCentre(pts, rho, z0+rise, a)
+			down, nd := grooveCentre(pts, rho, z0-rise, a)
+			// Source: helix hand, IEEE Std 145 (DOMAIN §2).
+			gotRising := nu >= 4 && math.Abs(up-(z0+rise)) < 0.2
+			gotFalling := nd >= 4 && math.Abs(down-(z0-rise)) < 0.2
+			if gotRising == gotFalling || gotRising != c.wantRising {
+				t.Errorf("groove rising %v (%.3f), falling %v (%.3f) from %.3f; want rising %v", gotRising, up, gotFalling, down, z0, c.wantRising)
+			}
+		})
+	}
+}
+
+func TestFrequencyLabel(t *testing.T) {
+	// Source: unit conversion, 1 GHz = 1000 MHz, rounded to three
+	// significant figures.
+	for _, c := range []struct {
+		mhz  float64
+		want string
+	}{{5800, "5.8 GHz"}, {2440, "2.44 GHz"}, {7341, "7.34 GHz"}, {10055, "10.1 GHz"}, {433.92, "434 MHz"}, {915, "915 MHz"}} {
+		if got := FrequencyLabel(c.mhz); got != c.want {
+			t.Errorf("FrequencyLabel(%g) = %q, want %q", c.mhz, got, c.want)
+		}
+	}
+}
+
+// BenchmarkDemoFormer meshes the default demo former at its spec tolerance.
+func BenchmarkDemoFormer(b *testing.B) {
+	d, f := demoFormer(b, templates.DefaultDemo)
+	tol := d.Spec.Former.ToleranceMM
+	b.ReportAllocs()
+	var faces int
+	for b.Loop() {
+		m, err := f.Mesh(tol)
+		if err != nil {
+			b.Fatal(err)
+		}
+		faces = len(m.Faces)
+	}
+	b.ReportMetric(float64(faces), "triangles")
+	b.ReportMetric(float64(84+50*faces)/1e6, "STL-MB")
+}
