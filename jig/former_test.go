@@ -81,7 +81,7 @@ func randomSpec(rng *rand.Rand) *parts.Spec {
 
 // randomSpecTolerance is the mesh tolerance for the random specs, coarser
 // than the default to keep the suite quick; the checks are the same.
-const randomSpecTolerance = 0.15
+const randomSpecTolerance = 0.25
 
 // TestRandomFormers meshes 50 seeded random formers and requires each to
 // pass every check: closed, two faces to an edge in opposite directions, no
