@@ -29,6 +29,7 @@ type Spec struct {
 	Dowel     DowelSpec     `toml:"dowel"`
 	Coax      CoaxSpec      `toml:"coax"`
 	RF        RFSpec        `toml:"rf"`
+	Stock     StockSpec     `toml:"stock"`
 
 	pos positions // where each key was written; empty for a Spec built in code
 }
@@ -93,6 +94,7 @@ func (s *Spec) Validate() error {
 	s.Dowel.validate(c, s)
 	s.Coax.validate(c, s)
 	s.RF.validate(c, s)
+	s.Stock.validate(c, s)
 	if len(c.errs) == 0 {
 		s.Coil.validateFit(c, s)
 	}

@@ -2,13 +2,24 @@ package parts
 
 // DowelSpec is the [dowel] table: the rod that supports the coil.
 type DowelSpec struct {
-	Material   string   `toml:"material"`    // "ptfe", "nylon", "glass-fibre" or "wood"
-	DiameterMM *float64 `toml:"diameter_mm"` // omit for automatic
+	Material    string   `toml:"material"`     // "ptfe", "nylon", "glass-fibre" or "wood"
+	DiameterMM  *float64 `toml:"diameter_mm"`  // omit for automatic
+	ClearanceMM float64  `toml:"clearance_mm"` // radial gap inside the smallest turn, default 1 mm
 }
+
+// DefaultDowelClearanceMM is the default radial gap between the rod and the
+// inside of the smallest relaxed turn: enough to slide the released coil on
+// and small enough for an epoxy bead to bridge. Common practice (no
+// published source).
+const DefaultDowelClearanceMM = 1.0
 
 func (d *DowelSpec) validate(c *checker, _ *Spec) {
 	c.oneOf("dowel.material", &d.Material, "ptfe", "ptfe", "nylon", "glass-fibre", "wood")
 	if d.DiameterMM != nil {
 		c.within("dowel.diameter_mm", *d.DiameterMM, 1, 100, "mm")
 	}
+	if !c.has("dowel.clearance_mm") && d.ClearanceMM == 0 {
+		d.ClearanceMM = DefaultDowelClearanceMM
+	}
+	c.within("dowel.clearance_mm", d.ClearanceMM, 0, 20, "mm")
 }
