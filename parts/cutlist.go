@@ -206,23 +206,16 @@ func dowelCut(d *Design, centreFeed bool) (DowelCut, error) {
 	dc := DowelCut{Material: s.Dowel.Material, ClearanceMM: s.Dowel.ClearanceMM, InnerTurnMM: inner}
 	room := inner - 2*dc.ClearanceMM
 	if s.Dowel.DiameterMM != nil {
-		dc.DiameterMM = *s.Dowel.DiameterMM
-		if dc.DiameterMM > room+1e-9 {
-			return DowelCut{}, &SpecError{Key: "dowel.diameter_mm", Line: s.Line("dowel.diameter_mm"), Value: num(dc.DiameterMM),
-				Problem: fmt.Sprintf("does not pass inside the smallest turn (%.2f mm inside) with %s mm clearance all round", inner, num(dc.ClearanceMM)),
-				Fix:     fmt.Sprintf("use a rod of at most %.1f mm, or omit diameter_mm to choose one", room)}
-		}
+		dc.DiameterMM = *s.Dowel.DiameterMM // Spec.Validate checked that it fits
 	} else {
-		i, found := slices.BinarySearch(DowelDiametersMM, room+1e-9)
-		if i == 0 && !found {
+		// i counts the stock sizes below room, so size i−1 is the largest that fits.
+		i, _ := slices.BinarySearch(DowelDiametersMM, room+1e-9)
+		if i == 0 {
 			return DowelCut{}, &SpecError{Key: "dowel.clearance_mm", Line: s.Line("dowel.clearance_mm"), Value: num(dc.ClearanceMM),
 				Problem: fmt.Sprintf("leaves %.2f mm inside the smallest turn (%.2f mm inside): no stock rod of %s mm or more fits", room, inner, num(DowelDiametersMM[0])),
 				Fix:     "reduce the clearance, or support the coil from outside"}
 		}
-		if !found {
-			i--
-		}
-		dc.DiameterMM = DowelDiametersMM[i]
+		dc.DiameterMM = DowelDiametersMM[i-1]
 		dc.Automatic = true
 	}
 	dc.LengthMM = d.Coil.Z0 + d.AxialLength + wd/2 + DowelOverhangMM

@@ -97,6 +97,7 @@ func (s *Spec) Validate() error {
 	s.Stock.validate(c, s)
 	if len(c.errs) == 0 {
 		s.Coil.validateFit(c, s)
+		s.Dowel.validateFit(c, s)
 	}
 	return c.result()
 }
