@@ -48,7 +48,7 @@ func TestWireBlankIsArcPlusAllowances(t *testing.T) {
 			// coil's own Point function, independent of the closed form.
 			h := 1e-6
 			speed := func(phi float64) float64 {
-				return d.Coil.Point(phi + h).Sub(d.Coil.Point(phi - h)).Len() / (2 * h)
+				return d.Coil.Point(phi+h).Sub(d.Coil.Point(phi-h)).Len() / (2 * h)
 			}
 			arc := quad.Fixed(speed, h, d.Coil.Span()-h, 2000, nil, 0) + 2*h*speed(0)
 			if math.Abs(w.ArcMM-arc) > 1e-4*arc {
