@@ -44,9 +44,6 @@ const (
 	// SleeveLengthMM is the heat-shrink sleeve over the cable where it
 	// leaves the reflector's back face.
 	SleeveLengthMM = 25.0
-	// SlotClearanceMM is added to the wire diameter for the slot across
-	// the foot of the rod that a centre feed's lead runs through.
-	SlotClearanceMM = 1.0
 	// HeavyRodMM is the rod diameter above which a tube is suggested.
 	HeavyRodMM = 20.0
 )
@@ -72,7 +69,6 @@ type CutList struct {
 	Hardware   []HardwareItem
 	Warnings   []Warning
 	Quantity   int // kits in the batch
-	CentreFeed bool
 }
 
 // WireBlank is the straight wire cut for one coil: LengthMM = ArcMM +
@@ -82,9 +78,7 @@ type WireBlank struct {
 	DiameterMM float64
 	ArcMM      float64 // centreline arc length of the winding (design.json wire_length_mm)
 	LockTailMM float64 // locked in the former's lock hole at the open end
-	FeedArmMM  float64 // radial arm from the first turn to the axis (centre feed), else 0
-	FeedDropMM float64 // drop from the wire centre to the top of the dielectric stub
-	FeedLeadMM float64 // FeedArmMM + FeedDropMM
+	FeedLeadMM float64 // drop from the wire centre at the start to the top of the dielectric stub
 	TrimMM     float64 // squared off both ends after release
 	LengthMM   float64 // the blank as cut
 }
@@ -146,7 +140,7 @@ func NewCutList(d *Design) (*CutList, error) {
 	}
 	wd := s.Wire.DiameterMM
 	cable := s.Coax.Cable()
-	cl := &CutList{Quantity: s.Quantity, CentreFeed: s.Coil.Feed == "centre"}
+	cl := &CutList{Quantity: s.Quantity}
 
 	// Coax strip lengths at the reflector end.
 	thick := s.Reflector.ThicknessMM
@@ -163,15 +157,11 @@ func NewCutList(d *Design) (*CutList, error) {
 	// Wire blank.
 	w := WireBlank{Material: s.Wire.Material, DiameterMM: wd, ArcMM: d.WireLength,
 		LockTailMM: math.Max(MinLockTailMM, LockTailWires*wd),
-		FeedDropMM: drop, TrimMM: 2 * TrimPerEndMM}
-	if cl.CentreFeed {
-		w.FeedArmMM = d.Coil.StartRadius
-	}
-	w.FeedLeadMM = w.FeedArmMM + w.FeedDropMM
+		FeedLeadMM: drop, TrimMM: 2 * TrimPerEndMM}
 	w.LengthMM = w.ArcMM + w.LockTailMM + w.FeedLeadMM + w.TrimMM
 	cl.Wire = w
 
-	dw, err := dowelCut(d, cl.CentreFeed)
+	dw, err := dowelCut(d)
 	if err != nil {
 		return nil, err
 	}
@@ -187,7 +177,7 @@ func NewCutList(d *Design) (*CutList, error) {
 	cl.Hardware = hardware(d, cl)
 	if drop < 2*wd {
 		cl.Warnings = append(cl.Warnings, Warning{Code: "short-feed-lead",
-			Message: fmt.Sprintf("the wire centre is only %.1f mm above the dielectric stub: too little to bend a drop; solder the centre conductor to the side of the lead's end", drop)})
+			Message: fmt.Sprintf("the wire centre is only %.1f mm above the dielectric stub: too little to bend a lead down; solder the centre conductor to the side of the wire's start", drop)})
 	}
 	if dw.AbsorbsWater {
 		cl.Warnings = append(cl.Warnings, Warning{Code: "wood-dowel", Message: dw.MaterialAdvice})
@@ -199,7 +189,7 @@ func NewCutList(d *Design) (*CutList, error) {
 // the radius is monotonic in azimuth, so it is at one of the two ends.
 func smallestTurnRadius(c Coil) float64 { return math.Min(c.StartRadius, c.EndRadius) }
 
-func dowelCut(d *Design, centreFeed bool) (DowelCut, error) {
+func dowelCut(d *Design) (DowelCut, error) {
 	s := d.Spec
 	wd := s.Wire.DiameterMM
 	inner := 2*smallestTurnRadius(d.Coil) - wd
@@ -219,10 +209,6 @@ func dowelCut(d *Design, centreFeed bool) (DowelCut, error) {
 		dc.Automatic = true
 	}
 	dc.LengthMM = d.Coil.Z0 + d.AxialLength + wd/2 + DowelOverhangMM
-	if centreFeed {
-		dc.SlotWidthMM = wd + SlotClearanceMM
-		dc.SlotDepthMM = d.Coil.Z0 + wd/2 + SlotClearanceMM
-	}
 	switch s.Dowel.Material {
 	case "wood":
 		dc.AbsorbsWater = true
@@ -297,10 +283,7 @@ func hardware(d *Design, cl *CutList) []HardwareItem {
 	cable := cl.Coax.Cable
 	hw = append(hw, HardwareItem{Item: "SMA connector to suit " + cable.Name, Count: 1,
 		Note: "or a cable with the connector fitted; strip the connector end to the connector maker's dimensions"})
-	if cl.CentreFeed {
-		hw = append(hw, HardwareItem{Item: "no screw: the rod's slotted foot is epoxied to the reflector", Count: 0,
-			Note: "the feed comes up on the axis, under the rod"})
-	} else if cl.Dowel.DiameterMM >= 6 {
+	if cl.Dowel.DiameterMM >= 6 {
 		want := s.Reflector.ThicknessMM + 2*3.0 // two thread diameters into the rod
 		i, _ := slices.BinarySearch(ScrewLengthsMM, want)
 		length := ScrewLengthsMM[min(i, len(ScrewLengthsMM)-1)]
@@ -309,4 +292,47 @@ func hardware(d *Design, cl *CutList) []HardwareItem {
 	}
 	hw = append(hw, HardwareItem{Item: "cable tie, 2.5 mm wide", Count: 1, Note: "strain relief for the cable behind the reflector"})
 	return hw
+}
+
+// CutRow is one line of the cut list's table. Zero numbers are not
+// applicable to the line.
+type CutRow struct {
+	Item     string
+	Material string
+	Size     string
+	Count    int
+	LengthMM float64 // length of each piece
+	Amount   float64 // of a consumable, in Unit
+	Unit     string
+	Note     string
+}
+
+// Rows returns the cut list as table lines: the pieces cut to length, then
+// the consumables, then the hardware.
+func (cl *CutList) Rows() []CutRow {
+	w, dw, cx, sl := cl.Wire, cl.Dowel, cl.Coax, cl.Sleeve
+	rows := []CutRow{
+		{Item: "wire blank", Material: w.Material, Size: fmt.Sprintf("Ø%s mm", num(w.DiameterMM)), Count: 1, LengthMM: w.LengthMM,
+			Note: fmt.Sprintf("winding %.1f + lock tail %.1f + feed lead %.1f + trim %.1f mm", w.ArcMM, w.LockTailMM, w.FeedLeadMM, w.TrimMM)},
+		{Item: "support rod", Material: dw.Material, Size: fmt.Sprintf("Ø%s mm", num(dw.DiameterMM)), Count: 1, LengthMM: dw.LengthMM,
+			Note: fmt.Sprintf("passes inside the smallest turn (%.2f mm inside) with %s mm clearance; %s", dw.InnerTurnMM, num(dw.ClearanceMM), dw.MaterialAdvice)},
+		{Item: "feed cable", Material: cx.Cable.Name, Size: fmt.Sprintf("Ø%s mm", num(cx.Cable.Outer)), Count: 1, LengthMM: cx.CutMM,
+			Note: coaxNote(cx)},
+		{Item: "heat-shrink sleeve", Material: "2:1 polyolefin", Size: fmt.Sprintf("Ø%s → Ø%s mm", num(sl.SuppliedMM), num(sl.RecoveredMM)), Count: 1, LengthMM: sl.LengthMM,
+			Note: "over the outer-conductor joint behind the reflector; slide it on before soldering"},
+		{Item: "solder", Material: "solder wire", Size: "", Amount: cl.Solder.Amount, Unit: cl.Solder.Unit, Note: cl.Solder.Basis},
+		{Item: "epoxy", Material: "two-part epoxy, slow-setting", Amount: cl.Epoxy.Amount, Unit: cl.Epoxy.Unit, Note: cl.Epoxy.Basis},
+	}
+	for _, h := range cl.Hardware {
+		rows = append(rows, CutRow{Item: "hardware", Material: h.Item, Count: h.Count, Note: h.Note})
+	}
+	return rows
+}
+
+func coaxNote(cx CoaxCut) string {
+	flare := "no braid flare (solid outer)"
+	if cx.FlareMM > 0 {
+		flare = fmt.Sprintf("braid flare %.1f mm", cx.FlareMM)
+	}
+	return fmt.Sprintf("%.1f mm to the reflector's back face; strip centre %.1f mm, dielectric stub %.1f mm, %s", cx.FinishedMM, cx.CentreMM, cx.DielectricMM, flare)
 }

@@ -1,0 +1,302 @@
+// The build sheet's content, independent of its format: the cover facts,
+// the design table, tools and materials, the cautions, the numbered steps
+// (each repeating the cautions it needs), the inspection table and the
+// closing note. Numbers are written into the text here, once, so the
+// Markdown and PDF sheets say the same thing.
+
+package parts
+
+import (
+	"fmt"
+	"strings"
+)
+
+// CautionID names one caution of the build sheet.
+type CautionID string
+
+// The cautions every build sheet carries. Sources (DOMAIN §8): UK HSE,
+// "Solderers — asthma" and INDG248 (rosin flux fume, lead); EU-OSHA
+// OSHwiki, "Occupational exposure to epoxy resins", and HSE (epoxy skin
+// sensitisation); Barontini et al., Ind. Eng. Chem. Res. 44, 2005
+// (brominated fumes from heated FR-4); the e.i.r.p. definition of the ITU
+// Radio Regulations (EIRP = P − loss + G). Eye protection when cutting
+// hard wire and the burn precautions are common practice (no published
+// source).
+const (
+	CautionSolder   CautionID = "solder"
+	CautionBurns    CautionID = "burns"
+	CautionEpoxy    CautionID = "epoxy"
+	CautionEyes     CautionID = "eyes"
+	CautionLaminate CautionID = "laminate"
+	CautionRF       CautionID = "rf"
+)
+
+// Caution is one safety caution: a heading the sheet prints in full and
+// again at each step that needs it, and its text.
+type Caution struct {
+	ID      CautionID
+	Heading string
+	Text    string
+}
+
+// Step is one numbered assembly step.
+type Step struct {
+	Number   int
+	Title    string
+	Text     []string  // paragraphs, in order
+	Cautions []Caution // repeated from the cautions section
+}
+
+// SheetRow is one label and value of a build-sheet table.
+type SheetRow struct {
+	Label string
+	Value string
+}
+
+// BuildSheet is everything a kit's build sheet says. It is a plain value
+// built by NewBuildSheet.
+type BuildSheet struct {
+	Kit        string
+	SpecSHA256 string
+	Hand       string // "RHCP" or "LHCP"
+	HandWords  string // how to see the hand on the coil
+	Summary    string // one line under the title
+	Paper      string // "A4" or "Letter"
+	Quantity   int
+
+	Design     []SheetRow
+	Tools      []string
+	Materials  []SheetRow
+	Cautions   []Caution
+	Steps      []Step
+	Inspection []InspectionRow
+	// InspectionNote says how to measure and where the tolerance comes from.
+	InspectionNote string
+	Warnings       []Warning
+	Closing        []string
+
+	View SideView
+	Cut  *CutList
+}
+
+// ReturnLossTargetDB is the return loss across the band a finished
+// antenna should reach: 10 dB, a VSWR of about 1.9. Common practice (no
+// published source).
+const ReturnLossTargetDB = 10.0
+
+// NewBuildSheet assembles the build sheet of a design from its cut list.
+// specSHA256 is the hex hash of the spec's bytes, printed on the cover.
+func NewBuildSheet(d *Design, cl *CutList, specSHA256 string) *BuildSheet {
+	s := d.Spec
+	b := &BuildSheet{Kit: s.Kit, SpecSHA256: specSHA256, Hand: d.Coil.Hand.String(), Paper: s.Stock.Paper,
+		Quantity: s.Quantity, Cut: cl, Inspection: d.InspectionTable()}
+	b.HandWords = handWords(d.Coil.Hand)
+	b.View = d.SideView(cl)
+	b.Summary = fmt.Sprintf("%s MHz %s helix, %s turns, %s", num(s.FrequencyMHz), s.Coil.Shape, num(d.Coil.Turns), b.Hand)
+	b.Design = designRows(d, cl)
+	b.Tools = tools(s)
+	b.Materials = materials(s, cl)
+	b.Cautions = cautions(d)
+	b.Steps = steps(d, cl, b.Cautions)
+	b.InspectionNote = fmt.Sprintf("Measure each turn across its middle with calipers over the outside of the wire, at two places 90° apart, and write the mean in the blank column. "+
+		"The tolerance is ±1 %% of the turn's diameter, at least %s mm (a provisional rule: a turn 1 %% too large tunes about 1 %% low).", num(MinInspectionToleranceMM))
+	b.Warnings = append(append([]Warning{}, d.Warnings...), cl.Warnings...)
+	b.Closing = []string{
+		"This sheet is a guide for careful hobby construction, not professional advice. Follow the local regulations, electrical and workshop codes, and the conditions of any licence that apply where you build and transmit; where they differ from this sheet, they win.",
+		"Transmitting needs the right to use the band: check the power and EIRP limits for your country and licence class, or have a licensed operator check the station.",
+		"Handle solder, flux, epoxy and laminate as their makers' safety data sheets say, and dispose of offcuts and waste as your local rules require.",
+	}
+	return b
+}
+
+func handWords(h Hand) string {
+	if h == LeftHand {
+		return "left-hand winding, against an ordinary screw thread: seen from the open end, looking down at the reflector, the wire turns clockwise as it rises"
+	}
+	return "right-hand winding, like an ordinary screw thread: seen from the open end, looking down at the reflector, the wire turns counter-clockwise as it rises"
+}
+
+func mm(v float64) string  { return fmt.Sprintf("%.1f mm", v) }
+func mm2(v float64) string { return fmt.Sprintf("%.2f mm", v) }
+
+func designRows(d *Design, cl *CutList) []SheetRow {
+	s := d.Spec
+	band := "not given"
+	if s.BandLowMHz != nil && s.BandHighMHz != nil {
+		band = fmt.Sprintf("%s–%s MHz", num(*s.BandLowMHz), num(*s.BandHighMHz))
+	}
+	rows := []SheetRow{
+		{"Centre frequency", fmt.Sprintf("%s MHz (wavelength %.2f mm)", num(s.FrequencyMHz), d.Wavelength)},
+		{"Band", band},
+		{"Hand", fmt.Sprintf("%s (%s winding)", d.Coil.Hand, map[Hand]string{RightHand: "right-hand", LeftHand: "left-hand"}[d.Coil.Hand])},
+		{"Coil", fmt.Sprintf("%s, %s turns, %s feed", s.Coil.Shape, num(d.Coil.Turns), s.Coil.Feed)},
+		{"Diameter (wire centre)", fmt.Sprintf("%s at the base, %s at the top", mm2(2*d.Coil.StartRadius), mm2(2*d.Coil.EndRadius))},
+		{"Pitch", fmt.Sprintf("%.1f° at the first turn, %.2f mm per turn at the first turn", d.Turns[0].PitchAngleDeg, d.Turns[0].SpacingMM)},
+		{"First turn height", fmt.Sprintf("%s, wire centre above the reflector", mm2(d.Coil.Z0))},
+		{"Coil height", fmt.Sprintf("%s from the first turn to the top (%s to the top of the wire)", mm(d.AxialLength), mm(d.Coil.Z0+d.AxialLength+s.Wire.DiameterMM/2))},
+		{"Wire", fmt.Sprintf("%s, Ø%s mm; winding %s, blank %s", s.Wire.Material, num(s.Wire.DiameterMM), mm(cl.Wire.ArcMM), mm(cl.Wire.LengthMM))},
+		{"Reflector", fmt.Sprintf("%s, %s across, %s mm thick", s.Reflector.Shape, mm(s.Reflector.SizeMM(d.Wavelength)), num(s.Reflector.ThicknessMM))},
+		{"Support rod", fmt.Sprintf("%s, Ø%s mm × %s", cl.Dowel.Material, num(cl.Dowel.DiameterMM), mm(cl.Dowel.LengthMM))},
+		{"Feed cable", fmt.Sprintf("%s, %s to the reflector", cl.Coax.Cable.Name, mm(cl.Coax.FinishedMM))},
+		{"Gain (estimate)", fmt.Sprintf("%.1f dBi, %s", d.Estimates.Gain.Value, d.Estimates.Gain.Formula)},
+		{"Half-power beamwidth (estimate)", fmt.Sprintf("%.0f°", d.Estimates.HPBW.Value)},
+	}
+	if d.EIRP != nil {
+		rows = append(rows, SheetRow{"EIRP", fmt.Sprintf("%.1f dBm (%.0f mW) with %s dBm in and %s dB feeder loss", d.EIRP.EIRPDBm, d.EIRP.EIRPmW, num(d.EIRP.TxPowerDBm), num(d.EIRP.FeederLossDB))})
+	}
+	return rows
+}
+
+func tools(s *Spec) []string {
+	return []string{
+		"The printed winding former for this kit (check its hand mark reads " + s.Coil.Hand + ")",
+		"Safety glasses; nitrile gloves; fume extractor or a fan drawing fumes away",
+		"Temperature-controlled soldering iron with a stand; flux; solder wire Ø" + num(s.Stock.SolderWireMM) + " mm",
+		"Side cutters or wire cutters rated for the wire; flat-nose pliers; a fine file",
+		"Steel rule; calipers reading to 0.05 mm; fine marker",
+		"Coax stripping tool or a sharp knife; small pipe cutter for semi-rigid cable",
+		"Drill with 2.5 mm and feed-hole drills; deburring tool",
+		"Hot-air tool or heat gun for heat-shrink",
+		"Mixing cup and stick for epoxy",
+		"Multimeter; vector network analyser (VNA) covering the band, with a calibration kit",
+	}
+}
+
+func materials(s *Spec, cl *CutList) []SheetRow {
+	rows := []SheetRow{
+		{"Wire blank", fmt.Sprintf("%s, Ø%s mm, %s", cl.Wire.Material, num(cl.Wire.DiameterMM), mm(cl.Wire.LengthMM))},
+		{"Support rod", fmt.Sprintf("%s, Ø%s mm, %s", cl.Dowel.Material, num(cl.Dowel.DiameterMM), mm(cl.Dowel.LengthMM))},
+		{"Feed cable", fmt.Sprintf("%s, cut %s", cl.Coax.Cable.Name, mm(cl.Coax.CutMM))},
+		{"Heat-shrink", fmt.Sprintf("2:1 sleeve Ø%s mm (shrinks to Ø%s mm), %s", num(cl.Sleeve.SuppliedMM), num(cl.Sleeve.RecoveredMM), mm(cl.Sleeve.LengthMM))},
+		{"Reflector", fmt.Sprintf("%s sheet, %s mm thick, cut from the template", s.Reflector.Shape, num(s.Reflector.ThicknessMM))},
+		{"Matching strip", "thin copper or brass sheet, cut from the template"},
+		{"Solder", fmt.Sprintf("about %s mm of Ø%s mm wire", num(cl.Solder.Amount), num(s.Stock.SolderWireMM))},
+		{"Epoxy", fmt.Sprintf("about %s mL mixed, slow-setting", num(cl.Epoxy.Amount))},
+	}
+	for _, h := range cl.Hardware {
+		rows = append(rows, SheetRow{"Hardware", fmt.Sprintf("%d × %s", h.Count, h.Item)})
+	}
+	return rows
+}
+
+func cautions(d *Design) []Caution {
+	gain := d.Estimates.Gain.Value
+	rf := fmt.Sprintf("This antenna concentrates power: its estimated gain is %.1f dBi, so EIRP (dBm) = transmitter power (dBm) − feeder loss (dB) + %.1f dB.", gain, gain)
+	if e := d.EIRP; e != nil {
+		rf += fmt.Sprintf(" With %s dBm in and %s dB loss that is %.1f dBm (%.0f mW).", num(e.TxPowerDBm), num(e.FeederLossDB), e.EIRPDBm, e.EIRPmW)
+	}
+	rf += " EIRP limits depend on the band, the country and the licence; some rules allow only tens of milliwatts. Stay within the limit that applies to you, and keep people out of the main beam, in front of the open end, while transmitting."
+	return []Caution{
+		{CautionSolder, "Soldering fumes and lead",
+			"Rosin flux fume causes occupational asthma: work with fume extraction or a fan drawing the plume away, and keep your head out of it. Lead in solder harms you when swallowed: no food or drink at the bench, and wash your hands after soldering. Lead-free solder is preferred."},
+		{CautionBurns, "Burns",
+			"The iron tip is hotter than 300 °C, and the reflector, coax and wire stay hot for a minute after a joint. Keep the iron in its stand, switch it off after use, hold parts in pliers or a clamp, and wear eye protection against flux and solder spatter."},
+		{CautionEpoxy, "Epoxy skin sensitisation",
+			"Uncured epoxy resin and hardener are skin sensitisers: once sensitised, always sensitised. Wear nitrile gloves, mix in a ventilated place, and wash skin with soap and water, never with solvent."},
+		{CautionEyes, "Eye protection when cutting wire",
+			"Cut ends of hard or springy wire fly off at speed. Wear safety glasses, cover the cut with a hand or a cloth, and hold the offcut when cutting."},
+		{CautionLaminate, "Laminate dust and no laser on FR-4",
+			"If the reflector is cut from glass-epoxy laminate (FR-4), never cut it on a hobby CO2 laser: it gives off toxic brominated fumes and chars. Saw, shear or mill it with dust extraction and a dust mask, or order it from a circuit-board maker. Sheet copper or brass is a safer reflector."},
+		{CautionRF, "RF exposure and EIRP limits", rf},
+	}
+}
+
+// pick returns the cautions with the given IDs, in that order.
+func pick(all []Caution, ids ...CautionID) []Caution {
+	var out []Caution
+	for _, id := range ids {
+		for _, c := range all {
+			if c.ID == id {
+				out = append(out, c)
+			}
+		}
+	}
+	return out
+}
+
+func steps(d *Design, cl *CutList, all []Caution) []Step {
+	s := d.Spec
+	w := cl.Wire
+	cx := cl.Coax
+	marks := fmt.Sprintf("Mark the blank from the lock end: %s trim, then %s of lock tail, then %s of winding, then %s of feed lead, then %s trim.",
+		mm(TrimPerEndMM), mm(w.LockTailMM), mm(w.ArcMM), mm(w.FeedLeadMM), mm(TrimPerEndMM))
+	band := fmt.Sprintf("%s MHz ± 3 %%", num(s.FrequencyMHz))
+	if s.BandLowMHz != nil && s.BandHighMHz != nil {
+		band = fmt.Sprintf("%s–%s MHz", num(*s.BandLowMHz), num(*s.BandHighMHz))
+	}
+	flare := "The solid outer conductor needs no flare: it is soldered round the hole as it is."
+	if cx.FlareMM > 0 {
+		flare = fmt.Sprintf("Cut the jacket back a further %s and fan the braid out flat (the braid flare).", mm(cx.FlareMM))
+	}
+	screw := "Epoxy the rod's foot to the reflector's centre."
+	for _, h := range cl.Hardware {
+		if strings.HasPrefix(h.Item, "M3") {
+			screw = fmt.Sprintf("Drill a 2.5 mm pilot hole 8 mm deep in the centre of the rod's foot and a 3.2 mm hole in the reflector's centre; fix the rod with the %s from behind.", h.Item)
+		}
+	}
+	list := []Step{
+		{Title: "Straighten and clean the wire", Text: []string{
+			fmt.Sprintf("Cut a %s blank of %s, Ø%s mm wire. Roll it straight under a flat board, or stretch it slightly, until it lies flat on the bench without rocking.", mm(w.LengthMM), w.Material, num(w.DiameterMM)),
+			"Clean it bright with a fine abrasive pad and wipe it with alcohol. Enamelled wire must be stripped where it will be soldered.",
+			marks,
+		}, Cautions: pick(all, CautionEyes)},
+		{Title: "Lock its end in the former", Text: []string{
+			fmt.Sprintf("Push the %s lock tail into the lock hole at the former's open (top) end until the first mark meets the former. The feed-end lead stays free beyond the last groove.", mm(w.LockTailMM)),
+			"Check the hand mark on the former: this coil is " + d.Coil.Hand.String() + ", " + handWords(d.Coil.Hand) + ".",
+		}},
+		{Title: "Wind under tension", Text: []string{
+			"Lay the wire into the groove turn by turn, pulling it tight with steady tension so it seats at the bottom of the groove all the way round. Do not let it ride up on the groove wall.",
+			fmt.Sprintf("Wind all %s turns until the feed-lead mark sits at the groove's end.", num(d.Coil.Turns)),
+		}},
+		{Title: "Hold and overbend", Text: []string{
+			"Hold the last turn down for about ten seconds, then press every turn once more into its groove with a thumb, a little tighter than it lies, to set the bend.",
+		}},
+		{Title: "Release", Text: []string{
+			"Let go of the feed end slowly and let the coil open up on the former: it springs out to its relaxed size. Free the lock tail and twist the coil off along the groove.",
+		}},
+		{Title: "Measure each turn against the inspection table", Text: []string{
+			"Measure every turn across its middle, over the outside of the wire, and write the reading in the inspection table.",
+			"A turn outside the tolerance can be eased open or closed by hand. If every turn is large by about the same amount, this batch of wire springs back more than expected: recalibrate the former from a measured test coil before winding the rest of the batch.",
+		}},
+		{Title: "Trim and form the feed lead", Text: []string{
+			fmt.Sprintf("Cut off the lock tail and the trim at both marks. At the coil's start, bend the feed lead straight down (parallel to the axis); it is %s long, ending just above the coax's dielectric.", mm(w.FeedLeadMM)),
+			"File the cut ends smooth.",
+		}, Cautions: pick(all, CautionEyes)},
+		{Title: "Prepare the reflector", Text: []string{
+			fmt.Sprintf("Cut the %s reflector from the 1:1 template, %s mm thick. Drill the feed hole at the template's feed mark to pass the dielectric (Ø%s mm), and the rod's centre hole.", s.Reflector.Shape, num(s.Reflector.ThicknessMM), num(cx.Cable.Dielectric)),
+			"Deburr both faces and clean the copper bright where it will be soldered.",
+		}, Cautions: pick(all, CautionLaminate, CautionEyes)},
+		{Title: "Prepare and solder the coax", Text: []string{
+			fmt.Sprintf("Cut the cable to %s. Slide the heat-shrink sleeve on from the reflector end before anything else. At the reflector end, strip %s of outer conductor to leave a %s dielectric stub, then %s of dielectric to bare the centre conductor.", mm(cx.CutMM), mm(cx.DielectricMM+cx.CentreMM), mm(cx.DielectricMM), mm(cx.CentreMM)),
+			flare,
+			fmt.Sprintf("Push the cable up through the feed hole from behind until the dielectric stands %s proud of the top face, and solder the outer conductor all round to the back face.", mm(FeedStandoffMM)),
+		}, Cautions: pick(all, CautionSolder, CautionBurns)},
+		{Title: "Solder the wedge to the first quarter turn", Text: []string{
+			"Cut the matching strip (the wedge) from its 1:1 template. Tin the strip and the underside of the first quarter turn.",
+			fmt.Sprintf("Solder the strip along the underside of the first quarter turn, its wide end at the feed, its flat face parallel to the reflector. The first turn's wire centre sits %s above the reflector.", mm2(d.Coil.Z0)),
+		}, Cautions: pick(all, CautionSolder, CautionBurns)},
+		{Title: "Solder the coil", Text: []string{
+			"Stand the coil over the reflector with the feed lead beside the bare centre conductor and the coil's axis over the reflector's centre.",
+			fmt.Sprintf("Solder the feed lead to the centre conductor. Check with a spacer that the first turn's wire centre is %s above the reflector and that no part of the wire or strip touches the reflector.", mm2(d.Coil.Z0)),
+		}, Cautions: pick(all, CautionSolder, CautionBurns)},
+		{Title: "Epoxy and support", Text: []string{
+			screw,
+			fmt.Sprintf("The coil's turns clear the rod by about %s all round. Put two small epoxy beads per turn between the rod and the wire, on opposite sides, without moving the turns. Let it cure as the maker says.", mm(cl.Dowel.ClearanceMM)),
+			"Support rod: " + cl.Dowel.MaterialAdvice + ".",
+		}, Cautions: pick(all, CautionEpoxy)},
+		{Title: "Heat-shrink", Text: []string{
+			"Slide the sleeve up against the reflector's back face over the outer-conductor joint and shrink it evenly with the hot-air tool. Fix the cable to the reflector with the cable tie.",
+		}, Cautions: pick(all, CautionBurns)},
+		{Title: "Final checks", Text: []string{
+			"Compare the coil with the side view: hand, turn count, first turn height and overall height.",
+			"With the multimeter, check there is no continuity between the connector's centre pin and its body: the coil and strip must not touch the reflector.",
+			fmt.Sprintf("Calibrate the VNA at the end of the test cable, connect the antenna, point it at open sky away from metal, and sweep the return loss (S11) across %s.", band),
+			fmt.Sprintf("Expect the return loss to be at least %s dB (VSWR below 1.9) across the band, its best near %s MHz. A best point low in frequency means the turns are large; high means small.", num(ReturnLossTargetDB), num(s.FrequencyMHz)),
+			"Before transmitting, work out the EIRP and check the limit that applies to you.",
+		}, Cautions: pick(all, CautionRF)},
+	}
+	for i := range list {
+		list[i].Number = i + 1
+	}
+	return list
+}
