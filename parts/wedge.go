@@ -175,7 +175,7 @@ func (w *Wedge) flatPattern(in WedgeInput) geom.Contour {
 		var t geom.Vec3
 		switch {
 		case st.Phi-dphi < 0:
-			t = in.Path(st.Phi+dphi).Scale(4).Sub(in.Path(st.Phi).Scale(3)).Sub(in.Path(st.Phi + 2*dphi))
+			t = in.Path(st.Phi + dphi).Scale(4).Sub(in.Path(st.Phi).Scale(3)).Sub(in.Path(st.Phi + 2*dphi))
 		case st.Phi+dphi > in.Span:
 			t = in.Path(st.Phi).Scale(3).Sub(in.Path(st.Phi - dphi).Scale(4)).Add(in.Path(st.Phi - 2*dphi))
 		default:
