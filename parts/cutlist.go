@@ -60,15 +60,15 @@ var SleeveDiametersMM = []float64{1.6, 2.4, 3.2, 4.8, 6.4, 9.5, 12.7, 19.1, 25.4
 // CutList is one kit's pieces, consumables and hardware. Lengths are mm.
 // It is a plain value built by NewCutList.
 type CutList struct {
-	Wire       WireBlank
-	Dowel      DowelCut
-	Coax       CoaxCut
-	Sleeve     SleeveCut
-	Solder     Consumable
-	Epoxy      Consumable
-	Hardware   []HardwareItem
-	Warnings   []Warning
-	Quantity   int // kits in the batch
+	Wire     WireBlank
+	Dowel    DowelCut
+	Coax     CoaxCut
+	Sleeve   SleeveCut
+	Solder   Consumable
+	Epoxy    Consumable
+	Hardware []HardwareItem
+	Warnings []Warning
+	Quantity int // kits in the batch
 }
 
 // WireBlank is the straight wire cut for one coil: LengthMM = ArcMM +
