@@ -84,9 +84,10 @@ type BuildSheet struct {
 // published source).
 const ReturnLossTargetDB = 10.0
 
-// NewBuildSheet assembles the build sheet of a design from its cut list.
-// specSHA256 is the hex hash of the spec's bytes, printed on the cover.
-func NewBuildSheet(d *Design, cl *CutList, specSHA256 string) *BuildSheet {
+// NewBuildSheet assembles the build sheet of a design from its cut list
+// and its matching strip (nil when there is none). specSHA256 is the hex
+// hash of the spec's bytes, printed on the cover.
+func NewBuildSheet(d *Design, cl *CutList, strip *Wedge, specSHA256 string) *BuildSheet {
 	s := d.Spec
 	b := &BuildSheet{Kit: s.Kit, SpecSHA256: specSHA256, Hand: d.Coil.Hand.String(), Paper: s.Stock.Paper,
 		Quantity: s.Quantity, Cut: cl, Inspection: d.InspectionTable()}
@@ -97,7 +98,7 @@ func NewBuildSheet(d *Design, cl *CutList, specSHA256 string) *BuildSheet {
 	b.Tools = tools(s)
 	b.Materials = materials(s, cl)
 	b.Cautions = cautions(d)
-	b.Steps = steps(d, cl, b.Cautions)
+	b.Steps = steps(d, cl, strip, b.Cautions)
 	b.InspectionNote = fmt.Sprintf("Measure each turn across its middle with calipers over the outside of the wire, at two places 90° apart, and write the mean in the blank column. "+
 		"The tolerance is ±1 %% of the turn's diameter, at least %s mm (a provisional rule: a turn 1 %% too large tunes about 1 %% low).", num(MinInspectionToleranceMM))
 	b.Warnings = append(append([]Warning{}, d.Warnings...), cl.Warnings...)
@@ -190,11 +191,11 @@ func cautions(d *Design) []Caution {
 		{CautionSolder, "Soldering fumes and lead",
 			"Rosin flux fume causes occupational asthma: work with fume extraction or a fan drawing the plume away, and keep your head out of it. Lead in solder harms you when swallowed: no food or drink at the bench, and wash your hands after soldering. Lead-free solder is preferred."},
 		{CautionBurns, "Burns",
-			"The iron tip is hotter than 300 °C, and the reflector, coax and wire stay hot for a minute after a joint. Keep the iron in its stand, switch it off after use, hold parts in pliers or a clamp, and wear eye protection against flux and solder spatter."},
+			"The iron tip and a hot-air tool's nozzle are hotter than 300 °C, and the reflector, coax and wire stay hot for a minute after a joint. Keep the iron in its stand and switch tools off after use, hold parts in pliers or a clamp, and wear eye protection against flux and solder spatter."},
 		{CautionEpoxy, "Epoxy skin sensitisation",
 			"Uncured epoxy resin and hardener are skin sensitisers: once sensitised, always sensitised. Wear nitrile gloves, mix in a ventilated place, and wash skin with soap and water, never with solvent."},
 		{CautionEyes, "Eye protection when cutting wire",
-			"Cut ends of hard or springy wire fly off at speed. Wear safety glasses, cover the cut with a hand or a cloth, and hold the offcut when cutting."},
+			"Cut ends of hard or springy wire fly off at speed, and so do drilling chips. Wear safety glasses, cover the cut with a hand or a cloth, and hold the offcut when cutting."},
 		{CautionLaminate, "Laminate dust and no laser on FR-4",
 			"If the reflector is cut from glass-epoxy laminate (FR-4), never cut it on a hobby CO2 laser: it gives off toxic brominated fumes and chars. Saw, shear or mill it with dust extraction and a dust mask, or order it from a circuit-board maker. Sheet copper or brass is a safer reflector."},
 		{CautionRF, "RF exposure and EIRP limits", rf},
@@ -214,24 +215,42 @@ func pick(all []Caution, ids ...CautionID) []Caution {
 	return out
 }
 
-func steps(d *Design, cl *CutList, all []Caution) []Step {
+func steps(d *Design, cl *CutList, strip *Wedge, all []Caution) []Step {
 	s := d.Spec
 	w := cl.Wire
 	cx := cl.Coax
-	marks := fmt.Sprintf("Mark the blank from the lock end: %s trim, then %s of lock tail, then %s of winding, then %s of feed lead, then %s trim.",
-		mm(TrimPerEndMM), mm(w.LockTailMM), mm(w.ArcMM), mm(w.FeedLeadMM), mm(TrimPerEndMM))
+	lockEnd := TrimPerEndMM + w.LockTailMM
+	marks := fmt.Sprintf("Mark the blank at %s from one end (mark A: the lock end, which goes into the former) and again %s further on (mark B: where the winding ends at the feed). Beyond mark B are the %s feed lead and the %s trim.",
+		mm(lockEnd), mm(w.ArcMM), mm(w.FeedLeadMM), mm(TrimPerEndMM))
 	band := fmt.Sprintf("%s MHz ± 3 %%", num(s.FrequencyMHz))
 	if s.BandLowMHz != nil && s.BandHighMHz != nil {
 		band = fmt.Sprintf("%s–%s MHz", num(*s.BandLowMHz), num(*s.BandHighMHz))
 	}
-	flare := "The solid outer conductor needs no flare: it is soldered round the hole as it is."
-	if cx.FlareMM > 0 {
-		flare = fmt.Sprintf("Cut the jacket back a further %s and fan the braid out flat (the braid flare).", mm(cx.FlareMM))
+	strip1 := "Cut the matching strip from its 1:1 template and file its edges smooth."
+	strip2 := "Tin the strip and the underside of the first quarter turn. Solder the strip along the underside of the first quarter turn, its wide end at the feed and its flat face parallel to the reflector."
+	expect := fmt.Sprintf("Expect the return loss to be at least %s dB (VSWR below 1.9) across the band, with its best point near %s MHz.", num(ReturnLossTargetDB), num(s.FrequencyMHz))
+	clearance := ""
+	if strip != nil && len(strip.Stations) > 0 {
+		strip1 = fmt.Sprintf("Cut the matching strip from its 1:1 template: %s long, %s wide at the feed end narrowing to %s. File its edges smooth.", mm(strip.Length), mm2(strip.FeedWidth), mm2(strip.EndWidth))
+		clearance = fmt.Sprintf(" The strip's underside is only %s above the reflector at the feed: keep the solder there flat.", mm2(strip.Stations[0].Height))
+		expect += fmt.Sprintf(" The strip's estimated mismatch at %s MHz is |Γ| = %.2f (return loss %.0f dB); a built antenna is usually somewhat worse.", num(s.FrequencyMHz), strip.Reflection, ReturnLossDB(strip.Reflection))
 	}
+	expect += " If the best point is low in frequency, the turns are too large; if high, too small."
+	flare := fmt.Sprintf("Cut the cable to %s. At the reflector end, remove %s of outer conductor to leave a %s dielectric stub, then %s of dielectric to bare the centre conductor.",
+		mm(cx.CutMM), mm(cx.DielectricMM+cx.CentreMM), mm(cx.DielectricMM), mm(cx.CentreMM))
+	if cx.FlareMM > 0 {
+		flare += fmt.Sprintf(" Then strip the jacket back a further %s (the plate's thickness) plus %s, and comb the braid straight so it can be fanned out round the hole behind the plate.", mm(cx.ThroughMM), mm(cx.FlareMM))
+	}
+	lead := fmt.Sprintf("At the coil's start, bend the feed lead straight down, parallel to the axis: it is %s long and ends just above the coax's dielectric.", mm(w.FeedLeadMM))
+	if w.FeedLeadMM < 2*w.DiameterMM {
+		lead = fmt.Sprintf("The wire's start sits only %s above the coax's dielectric, too little to bend a lead: leave the start straight; the centre conductor is soldered to its side in step 11.", mm(w.FeedLeadMM))
+	}
+	rodHole := ""
 	screw := "Epoxy the rod's foot to the reflector's centre."
 	for _, h := range cl.Hardware {
 		if strings.HasPrefix(h.Item, "M3") {
-			screw = fmt.Sprintf("Drill a 2.5 mm pilot hole 8 mm deep in the centre of the rod's foot and a 3.2 mm hole in the reflector's centre; fix the rod with the %s from behind.", h.Item)
+			rodHole = " Drill a 3.2 mm hole at the centre for the rod's screw."
+			screw = fmt.Sprintf("Drill a 2.5 mm pilot hole 8 mm deep in the centre of the rod's foot and fix the rod to the reflector from behind with the %s.", h.Item)
 		}
 	}
 	list := []Step{
@@ -241,57 +260,55 @@ func steps(d *Design, cl *CutList, all []Caution) []Step {
 			marks,
 		}, Cautions: pick(all, CautionEyes)},
 		{Title: "Lock its end in the former", Text: []string{
-			fmt.Sprintf("Push the %s lock tail into the lock hole at the former's open (top) end until the first mark meets the former. The feed-end lead stays free beyond the last groove.", mm(w.LockTailMM)),
+			"Push the lock end into the lock hole at the former's open (top) end, up to mark A or as far as the hole allows.",
 			"Check the hand mark on the former: this coil is " + d.Coil.Hand.String() + ", " + handWords(d.Coil.Hand) + ".",
 		}},
 		{Title: "Wind under tension", Text: []string{
 			"Lay the wire into the groove turn by turn, pulling it tight with steady tension so it seats at the bottom of the groove all the way round. Do not let it ride up on the groove wall.",
-			fmt.Sprintf("Wind all %s turns until the feed-lead mark sits at the groove's end.", num(d.Coil.Turns)),
+			fmt.Sprintf("Wind all %s turns, towards the base, until mark B sits at the end of the groove.", num(d.Coil.Turns)),
 		}},
 		{Title: "Hold and overbend", Text: []string{
-			"Hold the last turn down for about ten seconds, then press every turn once more into its groove with a thumb, a little tighter than it lies, to set the bend.",
+			"Hold the wire at mark B for about ten seconds, then press every turn once more into its groove with a thumb, a little tighter than it lies, to set the bend.",
 		}},
 		{Title: "Release", Text: []string{
-			"Let go of the feed end slowly and let the coil open up on the former: it springs out to its relaxed size. Free the lock tail and twist the coil off along the groove.",
+			"Let go of the feed end slowly and let the coil open up on the former: it springs out to its relaxed size. Free the lock end and twist the coil off along the groove.",
 		}},
 		{Title: "Measure each turn against the inspection table", Text: []string{
-			"Measure every turn across its middle, over the outside of the wire, and write the reading in the inspection table.",
+			"Measure every turn across its middle, over the outside of the wire, and write the reading in the inspection table at the end of this sheet.",
 			"A turn outside the tolerance can be eased open or closed by hand. If every turn is large by about the same amount, this batch of wire springs back more than expected: recalibrate the former from a measured test coil before winding the rest of the batch.",
 		}},
 		{Title: "Trim and form the feed lead", Text: []string{
-			fmt.Sprintf("Cut off the lock tail and the trim at both marks. At the coil's start, bend the feed lead straight down (parallel to the axis); it is %s long, ending just above the coax's dielectric.", mm(w.FeedLeadMM)),
-			"File the cut ends smooth.",
+			fmt.Sprintf("Cut the lock end off at mark A, and cut the feed end %s beyond mark B. File the cut ends smooth.", mm(w.FeedLeadMM)),
+			lead,
 		}, Cautions: pick(all, CautionEyes)},
 		{Title: "Prepare the reflector", Text: []string{
-			fmt.Sprintf("Cut the %s reflector from the 1:1 template, %s mm thick. Drill the feed hole at the template's feed mark to pass the dielectric (Ø%s mm), and the rod's centre hole.", s.Reflector.Shape, num(s.Reflector.ThicknessMM), num(cx.Cable.Dielectric)),
-			"Deburr both faces and clean the copper bright where it will be soldered.",
+			fmt.Sprintf("Cut the %s reflector from its 1:1 template, in %s mm sheet. Drill the feed hole at the template's feed mark so the cable's outer conductor (Ø%s mm) just passes.%s", s.Reflector.Shape, num(s.Reflector.ThicknessMM), num(cx.Cable.Outer), rodHole),
+			"Deburr both faces and clean the metal bright where it will be soldered.",
 		}, Cautions: pick(all, CautionLaminate, CautionEyes)},
 		{Title: "Prepare and solder the coax", Text: []string{
-			fmt.Sprintf("Cut the cable to %s. Slide the heat-shrink sleeve on from the reflector end before anything else. At the reflector end, strip %s of outer conductor to leave a %s dielectric stub, then %s of dielectric to bare the centre conductor.", mm(cx.CutMM), mm(cx.DielectricMM+cx.CentreMM), mm(cx.DielectricMM), mm(cx.CentreMM)),
+			"Slide the heat-shrink sleeve onto the cable first; it is shrunk in step 13.",
 			flare,
-			fmt.Sprintf("Push the cable up through the feed hole from behind until the dielectric stands %s proud of the top face, and solder the outer conductor all round to the back face.", mm(FeedStandoffMM)),
+			"Push the cable up through the feed hole from behind until its outer conductor is flush with the top face. Solder the outer conductor all round the hole on the back face" + map[bool]string{true: ", over the fanned braid", false: ""}[cx.FlareMM > 0] + "." + clearance,
 		}, Cautions: pick(all, CautionSolder, CautionBurns)},
-		{Title: "Solder the wedge to the first quarter turn", Text: []string{
-			"Cut the matching strip (the wedge) from its 1:1 template. Tin the strip and the underside of the first quarter turn.",
-			fmt.Sprintf("Solder the strip along the underside of the first quarter turn, its wide end at the feed, its flat face parallel to the reflector. The first turn's wire centre sits %s above the reflector.", mm2(d.Coil.Z0)),
-		}, Cautions: pick(all, CautionSolder, CautionBurns)},
+		{Title: "Solder the wedge to the first quarter turn", Text: []string{strip1, strip2},
+			Cautions: pick(all, CautionSolder, CautionBurns)},
 		{Title: "Solder the coil", Text: []string{
-			"Stand the coil over the reflector with the feed lead beside the bare centre conductor and the coil's axis over the reflector's centre.",
-			fmt.Sprintf("Solder the feed lead to the centre conductor. Check with a spacer that the first turn's wire centre is %s above the reflector and that no part of the wire or strip touches the reflector.", mm2(d.Coil.Z0)),
+			"Stand the coil over the reflector with its start beside the bare centre conductor and its axis over the reflector's centre.",
+			fmt.Sprintf("Solder the centre conductor to the feed lead and the strip's feed end. Check with a spacer that the first turn's wire centre is %s above the reflector and that no part of the wire or strip touches the reflector.", mm2(d.Coil.Z0)),
 		}, Cautions: pick(all, CautionSolder, CautionBurns)},
 		{Title: "Epoxy and support", Text: []string{
 			screw,
-			fmt.Sprintf("The coil's turns clear the rod by about %s all round. Put two small epoxy beads per turn between the rod and the wire, on opposite sides, without moving the turns. Let it cure as the maker says.", mm(cl.Dowel.ClearanceMM)),
+			fmt.Sprintf("The turns clear the rod by about %s all round. Put two small epoxy beads per turn between the rod and the wire, on opposite sides, without moving the turns. Let it cure as the maker says.", mm(cl.Dowel.ClearanceMM)),
 			"Support rod: " + cl.Dowel.MaterialAdvice + ".",
 		}, Cautions: pick(all, CautionEpoxy)},
 		{Title: "Heat-shrink", Text: []string{
-			"Slide the sleeve up against the reflector's back face over the outer-conductor joint and shrink it evenly with the hot-air tool. Fix the cable to the reflector with the cable tie.",
+			"Slide the sleeve up against the reflector's back face, over the cable's joint, and shrink it evenly with the hot-air tool. Fix the cable to the reflector with the cable tie.",
 		}, Cautions: pick(all, CautionBurns)},
 		{Title: "Final checks", Text: []string{
-			"Compare the coil with the side view: hand, turn count, first turn height and overall height.",
+			"Compare the antenna with the side view: hand, turn count, first turn height and overall height.",
 			"With the multimeter, check there is no continuity between the connector's centre pin and its body: the coil and strip must not touch the reflector.",
-			fmt.Sprintf("Calibrate the VNA at the end of the test cable, connect the antenna, point it at open sky away from metal, and sweep the return loss (S11) across %s.", band),
-			fmt.Sprintf("Expect the return loss to be at least %s dB (VSWR below 1.9) across the band, its best near %s MHz. A best point low in frequency means the turns are large; high means small.", num(ReturnLossTargetDB), num(s.FrequencyMHz)),
+			fmt.Sprintf("Calibrate the vector network analyser (VNA) at the end of its test cable, connect the antenna, point it at open sky away from metal, and sweep the return loss (S11) across %s.", band),
+			expect,
 			"Before transmitting, work out the EIRP and check the limit that applies to you.",
 		}, Cautions: pick(all, CautionRF)},
 	}

@@ -8,10 +8,11 @@
 // dielectric stub), and a trim allowance squared off both ends. The support
 // rod is the largest stock diameter that passes inside the smallest relaxed
 // turn with the given radial clearance, as long as the coil is high. The
-// coax comes up through the reflector from behind: its outer conductor
-// ends at the reflector's back face, the dielectric stub passes through the
-// sheet and stands a little proud, and the centre conductor runs on up to
-// the wire's centre height, where it is soldered beside the feed lead.
+// coax comes up through the reflector from behind, through a hole that
+// passes its outer conductor: the outer conductor ends flush with the top
+// face and is soldered round the hole, the dielectric stub stands a little
+// proud, and the centre conductor runs on up to the wire's centre height,
+// where it is soldered beside the feed lead.
 
 package parts
 
@@ -36,8 +37,8 @@ const (
 	// MinCentreExposedMM is the least centre conductor left bare for the
 	// solder joint with the feed lead.
 	MinCentreExposedMM = 1.5
-	// BraidFlareMM is the braid fanned out flat on the reflector's back
-	// face (braided cable only).
+	// BraidFlareMM is the braid fanned out flat round the hole on the
+	// reflector's back face (braided cable only).
 	BraidFlareMM = 4.0
 	// DowelOverhangMM is how far the rod stands above the top turn.
 	DowelOverhangMM = 5.0
@@ -98,15 +99,16 @@ type DowelCut struct {
 }
 
 // CoaxCut is the feed cable for one kit: the length to cut and the strip
-// lengths at the reflector end, measured from the cut end.
+// lengths at the reflector end.
 type CoaxCut struct {
 	Spec         string // spec type name
 	Cable        CoaxType
 	FinishedMM   float64 // connector to the reflector's back face (coax.length_mm)
+	ThroughMM    float64 // through the reflector, back face to top face
+	DielectricMM float64 // dielectric stub beyond the outer conductor, above the top face
 	CentreMM     float64 // bare centre conductor beyond the dielectric
-	DielectricMM float64 // dielectric stub beyond the outer conductor
-	FlareMM      float64 // braid fanned out beyond the jacket end; 0 for solid outer
-	CutMM        float64 // FinishedMM + DielectricMM + CentreMM
+	FlareMM      float64 // braid fanned out round the hole on the back face; 0 for a solid outer
+	CutMM        float64 // FinishedMM + ThroughMM + DielectricMM + CentreMM
 }
 
 // SleeveCut is the heat-shrink sleeve for one kit: 2:1 sleeving whose
@@ -146,12 +148,12 @@ func NewCutList(d *Design) (*CutList, error) {
 	thick := s.Reflector.ThicknessMM
 	drop := math.Max(d.Coil.Z0-FeedStandoffMM, 0)
 	cx := CoaxCut{Spec: s.Coax.Type, Cable: cable, FinishedMM: s.Coax.LengthMM,
-		DielectricMM: thick + FeedStandoffMM,
-		CentreMM:     math.Max(drop, MinCentreExposedMM)}
+		ThroughMM: thick, DielectricMM: FeedStandoffMM,
+		CentreMM: math.Max(drop, MinCentreExposedMM)}
 	if cable.Braided {
 		cx.FlareMM = BraidFlareMM
 	}
-	cx.CutMM = cx.FinishedMM + cx.DielectricMM + cx.CentreMM
+	cx.CutMM = cx.FinishedMM + cx.ThroughMM + cx.DielectricMM + cx.CentreMM
 	cl.Coax = cx
 
 	// Wire blank.
@@ -243,7 +245,7 @@ func sleeveFor(outer float64) (SleeveCut, error) {
 // seam. Common practice (no published source): a fillet leg of a quarter
 // wire diameter along both sides of the first quarter turn on the
 // matching strip, a half-section lap at the centre-conductor joint, and a
-// 1 mm leg round the outer conductor on the reflector's back face.
+// 1 mm leg round the outer conductor at the reflector.
 func solderEstimate(d *Design, cx CoaxCut, solderWire float64) Consumable {
 	wd := d.Spec.Wire.DiameterMM
 	strip := d.Coil.LengthBetween(0, math.Pi/2)
@@ -319,7 +321,7 @@ func (cl *CutList) Rows() []CutRow {
 		{Item: "feed cable", Material: cx.Cable.Name, Size: fmt.Sprintf("Ø%s mm", num(cx.Cable.Outer)), Count: 1, LengthMM: cx.CutMM,
 			Note: coaxNote(cx)},
 		{Item: "heat-shrink sleeve", Material: "2:1 polyolefin", Size: fmt.Sprintf("Ø%s → Ø%s mm", num(sl.SuppliedMM), num(sl.RecoveredMM)), Count: 1, LengthMM: sl.LengthMM,
-			Note: "over the outer-conductor joint behind the reflector; slide it on before soldering"},
+			Note: "over the cable where it leaves the reflector's back face; slide it on before soldering"},
 		{Item: "solder", Material: "solder wire", Size: "", Amount: cl.Solder.Amount, Unit: cl.Solder.Unit, Note: cl.Solder.Basis},
 		{Item: "epoxy", Material: "two-part epoxy, slow-setting", Amount: cl.Epoxy.Amount, Unit: cl.Epoxy.Unit, Note: cl.Epoxy.Basis},
 	}
@@ -334,5 +336,5 @@ func coaxNote(cx CoaxCut) string {
 	if cx.FlareMM > 0 {
 		flare = fmt.Sprintf("braid flare %.1f mm", cx.FlareMM)
 	}
-	return fmt.Sprintf("%.1f mm to the reflector's back face; strip centre %.1f mm, dielectric stub %.1f mm, %s", cx.FinishedMM, cx.CentreMM, cx.DielectricMM, flare)
+	return fmt.Sprintf("%.1f mm to the reflector's back face + %.1f mm through it; strip centre %.1f mm, dielectric stub %.1f mm, %s", cx.FinishedMM, cx.ThroughMM, cx.CentreMM, cx.DielectricMM, flare)
 }

@@ -168,11 +168,15 @@ func TestCoaxStripAndSleeve(t *testing.T) {
 				t.Fatal(err)
 			}
 			cx := cl.Coax
-			if math.Abs(cx.CutMM-(cx.FinishedMM+cx.DielectricMM+cx.CentreMM)) > cutTol {
-				t.Errorf("cut %.2f mm is not finished + strips", cx.CutMM)
+			if math.Abs(cx.CutMM-(cx.FinishedMM+cx.ThroughMM+cx.DielectricMM+cx.CentreMM)) > cutTol {
+				t.Errorf("cut %.2f mm is not finished + through + strips", cx.CutMM)
 			}
-			if cx.DielectricMM <= d.Spec.Reflector.ThicknessMM {
-				t.Errorf("dielectric stub %.2f mm does not pass the %.2f mm sheet", cx.DielectricMM, d.Spec.Reflector.ThicknessMM)
+			if cx.ThroughMM != d.Spec.Reflector.ThicknessMM {
+				t.Errorf("cable passes %.2f mm through a %.2f mm sheet", cx.ThroughMM, d.Spec.Reflector.ThicknessMM)
+			}
+			// The bare centre conductor reaches the wire's centre height.
+			if top := cx.DielectricMM + cx.CentreMM; top < d.Coil.Z0-cutTol {
+				t.Errorf("centre conductor ends %.2f mm above the reflector, below the wire centre at %.2f mm", top, d.Coil.Z0)
 			}
 			if cx.Cable.Braided != (cx.FlareMM > 0) {
 				t.Errorf("braid flare %.1f mm on a braided=%v cable", cx.FlareMM, cx.Cable.Braided)

@@ -2,6 +2,7 @@ package parts
 
 import (
 	"fmt"
+	"math"
 
 	"coilwright/cam/geom"
 )
@@ -19,6 +20,7 @@ type SideView struct {
 	RodLength      float64 // from the reflector's top face
 	CoaxX          float64 // the feed point's x
 	CoaxOuter      float64
+	CableShown     float64 // feed cable drawn below the reflector
 	Dimensions     []geom.Dimension
 }
 
@@ -40,16 +42,22 @@ func (d *Design) SideView(cl *CutList) SideView {
 	v := SideView{Wire: wire, WireDiameter: wd, ReflectorWidth: size, ReflectorThick: d.Spec.Reflector.ThicknessMM,
 		RodDiameter: cl.Dowel.DiameterMM, RodLength: cl.Dowel.LengthMM, CoaxX: c.StartRadius, CoaxOuter: cl.Coax.Cable.Outer}
 	rb, rt := c.StartRadius, c.EndRadius
+	// Offsets scale with the drawing so the dimensions keep their spacing
+	// once the figure is fitted to the page.
+	u := math.Max(top, size) / 20
+	cable := 2 * u
+	v.CableShown = cable
+	t := d.Spec.Reflector.ThicknessMM
 	v.Dimensions = []geom.Dimension{
-		{A: geom.Vec2{X: -rb, Y: 0}, B: geom.Vec2{X: rb, Y: 0}, Offset: -(d.Spec.Reflector.ThicknessMM + 6),
-			Text: fmt.Sprintf("Ø%.2f base (wire centre)", 2*rb)},
-		{A: geom.Vec2{X: -rt, Y: top}, B: geom.Vec2{X: rt, Y: top}, Offset: 6 + wd,
-			Text: fmt.Sprintf("Ø%.2f top (wire centre)", 2*rt)},
-		{A: geom.Vec2{X: size / 2, Y: 0}, B: geom.Vec2{X: size / 2, Y: top}, Offset: -8,
+		{A: geom.Vec2{X: -rb, Y: c.Z0}, B: geom.Vec2{X: rb, Y: c.Z0}, Offset: -(c.Z0 + t + cable + u),
+			Text: fmt.Sprintf("Ø%.2f base", 2*rb)},
+		{A: geom.Vec2{X: -rt, Y: top}, B: geom.Vec2{X: rt, Y: top}, Offset: u + wd,
+			Text: fmt.Sprintf("Ø%.2f top", 2*rt)},
+		{A: geom.Vec2{X: size / 2, Y: 0}, B: geom.Vec2{X: size / 2, Y: top}, Offset: -1.5 * u,
 			Text: fmt.Sprintf("%.1f to the top turn", top)},
-		{A: geom.Vec2{X: -size / 2, Y: 0}, B: geom.Vec2{X: -size / 2, Y: c.Z0}, Offset: 8,
+		{A: geom.Vec2{X: -size / 2, Y: 0}, B: geom.Vec2{X: -size / 2, Y: c.Z0}, Offset: 1.5 * u,
 			Text: fmt.Sprintf("%.2f first turn", c.Z0)},
-		{A: geom.Vec2{X: -size / 2, Y: -d.Spec.Reflector.ThicknessMM}, B: geom.Vec2{X: size / 2, Y: -d.Spec.Reflector.ThicknessMM}, Offset: -(16 + d.Spec.Reflector.ThicknessMM),
+		{A: geom.Vec2{X: -size / 2, Y: -t}, B: geom.Vec2{X: size / 2, Y: -t}, Offset: -(cable + 3*u),
 			Text: fmt.Sprintf("%.1f reflector", size)},
 	}
 	return v

@@ -4,6 +4,7 @@ import (
 	"encoding/csv"
 	"fmt"
 	"io"
+	"os"
 	"strconv"
 	"text/template"
 
@@ -54,8 +55,34 @@ func writeSheet(ctx *buildContext) error {
 			return err
 		}
 	}
-	sheet := parts.NewBuildSheet(d, cl, ctx.spec.SHA256())
-	return ctx.out.Add("build-sheet.md", func(w io.Writer) error { return sheetTmpl.Execute(w, sheet) })
+	strip, tmpl, err := sheetTemplates(d, cl)
+	if err != nil {
+		return err
+	}
+	sheet := parts.NewBuildSheet(d, cl, strip, ctx.spec.SHA256())
+	if err := ctx.out.Add("build-sheet.md", func(w io.Writer) error { return sheetTmpl.Execute(w, sheet) }); err != nil {
+		return err
+	}
+	page, err := cam.PageSizeByName(sheet.Paper)
+	if err != nil {
+		return err
+	}
+	created, err := cam.SourceDateEpoch(os.Getenv("SOURCE_DATE_EPOCH"))
+	if err != nil {
+		return usageError{err}
+	}
+	tpages, err := cam.TemplatePages(tmpl, cam.TemplateOptions{Page: page, Heading: sheet.Kit + " — 1:1 templates (print at 100 %)"})
+	if err != nil {
+		return err
+	}
+	doc := sheetDocument(sheet, page)
+	doc.TrailingPages = len(tpages)
+	pages, err := doc.Pages()
+	if err != nil {
+		return err
+	}
+	opt := cam.PDFOptions{Title: sheet.Kit + " — build sheet", Subject: sheet.Summary, Creator: "coilwright " + Version, Created: created}
+	return ctx.out.Add("build-sheet.pdf", func(w io.Writer) error { return cam.WritePDF(w, append(pages, tpages...), opt) })
 }
 
 // fmtMM formats a length or amount for CSV: one decimal, empty when zero.
