@@ -236,10 +236,13 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Caution) []Step {
 		expect += fmt.Sprintf(" The strip's estimated mismatch at %s MHz is |Γ| = %.2f (return loss %.0f dB); a built antenna is usually somewhat worse.", num(s.FrequencyMHz), strip.Reflection, ReturnLossDB(strip.Reflection))
 	}
 	expect += " If the best point is low in frequency, the turns are too large; if high, too small."
-	flare := fmt.Sprintf("Cut the cable to %s. At the reflector end, remove %s of outer conductor to leave a %s dielectric stub, then %s of dielectric to bare the centre conductor.",
+	prep := fmt.Sprintf("Cut the cable to %s. At the reflector end, remove %s of outer conductor to leave %s of dielectric, then %s of dielectric to bare the centre conductor.",
 		mm(cx.CutMM), mm(cx.DielectricMM+cx.CentreMM), mm(cx.DielectricMM), mm(cx.CentreMM))
+	push := "Push the cable up through the feed hole from behind until its outer conductor is flush with the top face and the dielectric stands " + mm(cx.ProudMM) + " proud. Solder the outer conductor all round the hole on the back face."
 	if cx.FlareMM > 0 {
-		flare += fmt.Sprintf(" Then strip the jacket back a further %s (the plate's thickness) plus %s, and comb the braid straight so it can be fanned out round the hole behind the plate.", mm(cx.ThroughMM), mm(cx.FlareMM))
+		prep = fmt.Sprintf("Cut the cable to %s. At the reflector end, strip the jacket back %s. Cut the braid off %s from the end and comb the %s left next to the jacket out straight. Remove %s of dielectric to bare the centre conductor.",
+			mm(cx.CutMM), mm(cx.DielectricMM+cx.CentreMM+cx.FlareMM), mm(cx.DielectricMM+cx.CentreMM), mm(cx.FlareMM), mm(cx.CentreMM))
+		push = "Push the cable up through the feed hole from behind until the braid meets the back face and the dielectric stands " + mm(cx.ProudMM) + " proud of the top face. Fan the braid out flat round the hole and solder it to the back face."
 	}
 	lead := fmt.Sprintf("At the coil's start, bend the feed lead straight down, parallel to the axis: it is %s long and ends just above the coax's dielectric.", mm(w.FeedLeadMM))
 	if w.FeedLeadMM < 2*w.DiameterMM {
@@ -282,13 +285,13 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Caution) []Step {
 			lead,
 		}, Cautions: pick(all, CautionEyes)},
 		{Title: "Prepare the reflector", Text: []string{
-			fmt.Sprintf("Cut the %s reflector from its 1:1 template, in %s mm sheet. Drill the feed hole at the template's feed mark so the cable's outer conductor (Ø%s mm) just passes.%s", s.Reflector.Shape, num(s.Reflector.ThicknessMM), num(cx.Cable.Outer), rodHole),
+			fmt.Sprintf("Cut the %s reflector from its 1:1 template, in %s mm sheet. Drill the Ø%.2f mm feed hole at the template's feed mark.%s", s.Reflector.Shape, num(s.Reflector.ThicknessMM), cx.FeedHoleMM, rodHole),
 			"Deburr both faces and clean the metal bright where it will be soldered.",
 		}, Cautions: pick(all, CautionLaminate, CautionEyes)},
 		{Title: "Prepare and solder the coax", Text: []string{
 			"Slide the heat-shrink sleeve onto the cable first; it is shrunk in step 13.",
-			flare,
-			"Push the cable up through the feed hole from behind until its outer conductor is flush with the top face. Solder the outer conductor all round the hole on the back face" + map[bool]string{true: ", over the fanned braid", false: ""}[cx.FlareMM > 0] + "." + clearance,
+			prep,
+			push + clearance,
 		}, Cautions: pick(all, CautionSolder, CautionBurns)},
 		{Title: "Solder the wedge to the first quarter turn", Text: []string{strip1, strip2},
 			Cautions: pick(all, CautionSolder, CautionBurns)},

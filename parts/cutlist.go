@@ -8,11 +8,13 @@
 // dielectric stub), and a trim allowance squared off both ends. The support
 // rod is the largest stock diameter that passes inside the smallest relaxed
 // turn with the given radial clearance, as long as the coil is high. The
-// coax comes up through the reflector from behind, through a hole that
-// passes its outer conductor: the outer conductor ends flush with the top
-// face and is soldered round the hole, the dielectric stub stands a little
-// proud, and the centre conductor runs on up to the wire's centre height,
-// where it is soldered beside the feed lead.
+// coax comes up through the reflector from behind. A solid outer
+// conductor passes through the hole and ends flush with the top face; a
+// braid ends at the back face, fanned out flat round the hole, and only
+// the dielectric passes through. Either way it is soldered round the hole
+// on the back face, the dielectric stands a little proud of the top face,
+// and the centre conductor runs on up to the wire's centre height, where
+// it is soldered beside the feed lead.
 
 package parts
 
@@ -105,11 +107,18 @@ type CoaxCut struct {
 	Cable        CoaxType
 	FinishedMM   float64 // connector to the reflector's back face (coax.length_mm)
 	ThroughMM    float64 // through the reflector, back face to top face
-	DielectricMM float64 // dielectric stub beyond the outer conductor, above the top face
+	ProudMM      float64 // dielectric above the top face
 	CentreMM     float64 // bare centre conductor beyond the dielectric
+	DielectricMM float64 // bare dielectric beyond the outer conductor: ProudMM, plus ThroughMM for a braid
 	FlareMM      float64 // braid fanned out round the hole on the back face; 0 for a solid outer
-	CutMM        float64 // FinishedMM + ThroughMM + DielectricMM + CentreMM
+	FeedHoleMM   float64 // feed hole: passes the solid outer, or the dielectric of a braided cable
+	CutMM        float64 // FinishedMM + ThroughMM + ProudMM + CentreMM
 }
+
+// FeedHoleClearanceMM is added to what passes through the feed hole. From
+// the reflector drawing's default (0.1 mm); common practice (no published
+// source).
+const FeedHoleClearanceMM = 0.1
 
 // SleeveCut is the heat-shrink sleeve for one kit: 2:1 sleeving whose
 // supplied bore slides over the cable and whose recovered bore grips it.
@@ -148,12 +157,15 @@ func NewCutList(d *Design) (*CutList, error) {
 	thick := s.Reflector.ThicknessMM
 	drop := math.Max(d.Coil.Z0-FeedStandoffMM, 0)
 	cx := CoaxCut{Spec: s.Coax.Type, Cable: cable, FinishedMM: s.Coax.LengthMM,
-		ThroughMM: thick, DielectricMM: FeedStandoffMM,
-		CentreMM: math.Max(drop, MinCentreExposedMM)}
+		ThroughMM: thick, ProudMM: FeedStandoffMM, DielectricMM: FeedStandoffMM,
+		CentreMM:   math.Max(drop, MinCentreExposedMM),
+		FeedHoleMM: cable.Outer + FeedHoleClearanceMM}
 	if cable.Braided {
 		cx.FlareMM = BraidFlareMM
+		cx.DielectricMM += thick
+		cx.FeedHoleMM = cable.Dielectric + FeedHoleClearanceMM
 	}
-	cx.CutMM = cx.FinishedMM + cx.ThroughMM + cx.DielectricMM + cx.CentreMM
+	cx.CutMM = cx.FinishedMM + cx.ThroughMM + cx.ProudMM + cx.CentreMM
 	cl.Coax = cx
 
 	// Wire blank.
@@ -336,5 +348,5 @@ func coaxNote(cx CoaxCut) string {
 	if cx.FlareMM > 0 {
 		flare = fmt.Sprintf("braid flare %.1f mm", cx.FlareMM)
 	}
-	return fmt.Sprintf("%.1f mm to the reflector's back face + %.1f mm through it; strip centre %.1f mm, dielectric stub %.1f mm, %s", cx.FinishedMM, cx.ThroughMM, cx.CentreMM, cx.DielectricMM, flare)
+	return fmt.Sprintf("%.1f mm to the reflector's back face + %.1f mm through it; bare centre %.1f mm, bare dielectric %.1f mm, %s; feed hole Ø%.2f mm", cx.FinishedMM, cx.ThroughMM, cx.CentreMM, cx.DielectricMM, flare, cx.FeedHoleMM)
 }

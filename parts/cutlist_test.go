@@ -168,14 +168,26 @@ func TestCoaxStripAndSleeve(t *testing.T) {
 				t.Fatal(err)
 			}
 			cx := cl.Coax
-			if math.Abs(cx.CutMM-(cx.FinishedMM+cx.ThroughMM+cx.DielectricMM+cx.CentreMM)) > cutTol {
-				t.Errorf("cut %.2f mm is not finished + through + strips", cx.CutMM)
+			if math.Abs(cx.CutMM-(cx.FinishedMM+cx.ThroughMM+cx.ProudMM+cx.CentreMM)) > cutTol {
+				t.Errorf("cut %.2f mm is not finished + through + proud + centre", cx.CutMM)
+			}
+			// What passes the hole: the solid outer, or a braided cable's
+			// dielectric, which must then be bare through the plate.
+			passes := cx.Cable.Outer
+			if cx.Cable.Braided {
+				passes = cx.Cable.Dielectric
+				if cx.DielectricMM < cx.ThroughMM+cx.ProudMM-cutTol {
+					t.Errorf("braided cable: %.2f mm bare dielectric does not pass the plate", cx.DielectricMM)
+				}
+			}
+			if cx.FeedHoleMM <= passes {
+				t.Errorf("feed hole Ø%.2f mm does not pass Ø%.2f mm", cx.FeedHoleMM, passes)
 			}
 			if cx.ThroughMM != d.Spec.Reflector.ThicknessMM {
 				t.Errorf("cable passes %.2f mm through a %.2f mm sheet", cx.ThroughMM, d.Spec.Reflector.ThicknessMM)
 			}
 			// The bare centre conductor reaches the wire's centre height.
-			if top := cx.DielectricMM + cx.CentreMM; top < d.Coil.Z0-cutTol {
+			if top := cx.ProudMM + cx.CentreMM; top < d.Coil.Z0-cutTol {
 				t.Errorf("centre conductor ends %.2f mm above the reflector, below the wire centre at %.2f mm", top, d.Coil.Z0)
 			}
 			if cx.Cable.Braided != (cx.FlareMM > 0) {

@@ -38,14 +38,14 @@ func sheetTemplates(d *parts.Design, cl *parts.CutList) (*parts.Wedge, []cam.Tem
 	refl, err := parts.NewReflector(parts.ReflectorInput{
 		Shape: shape, Size: s.Reflector.SizeMM(d.Wavelength),
 		FeedRadius: d.Coil.StartRadius,
-		Feed:       parts.FeedHole{Kind: parts.FeedCoax, Diameter: cl.Coax.Cable.Outer + 0.1},
+		Feed:       parts.FeedHole{Kind: parts.FeedCoax, Diameter: cl.Coax.FeedHoleMM},
 		Hand:       d.Coil.Hand.String(),
 	})
 	if err != nil {
 		return nil, nil, err
 	}
 	rd := refl.Drawing
-	notes := []string{fmt.Sprintf("%s, %s mm sheet. Feed hole Ø%.2f mm at the coil's start.", s.Reflector.Shape, num(s.Reflector.ThicknessMM), cl.Coax.Cable.Outer+0.1)}
+	notes := []string{fmt.Sprintf("%s, %s mm sheet. Feed hole Ø%.2f mm at the coil's start.", s.Reflector.Shape, num(s.Reflector.ThicknessMM), cl.Coax.FeedHoleMM)}
 	for _, h := range cl.Hardware {
 		if strings.HasPrefix(h.Item, "M3") {
 			rd.Add(parts.LayerCut, geom.Circle{Radius: 1.6})
