@@ -1,0 +1,138 @@
+package main
+
+import (
+	"encoding/json"
+	"fmt"
+	"io"
+	"path/filepath"
+	"strings"
+	"unicode"
+
+	"github.com/spf13/cobra"
+
+	"coilwright/cam"
+	"coilwright/templates"
+)
+
+// buildOptions are the flags of `coilwright build`.
+type buildOptions struct {
+	outDir string
+	force  bool
+	demo   string
+	json   bool
+}
+
+// buildContext is what every output step sees: the loaded spec and design
+// and the staged output folder to add files to.
+type buildContext struct {
+	spec *loadedSpec
+	out  *cam.Output
+}
+
+// outputStep writes one group of outputs. Each step lives in its own
+// out_*.go file.
+type outputStep struct {
+	name  string
+	write func(*buildContext) error
+}
+
+// buildSteps lists the output steps in the order they run.
+func buildSteps() []outputStep {
+	return []outputStep{
+		{"design report", writeDesign},
+	}
+}
+
+func newBuildCmd() *cobra.Command {
+	var o buildOptions
+	cmd := &cobra.Command{
+		Use:   "build [SPEC]",
+		Short: "Build every output for a design spec",
+		Long: `build validates a design spec and writes every output into one folder:
+the design report (design.md, design.json) and manifest.json, which lists
+each file with its size and SHA-256. With no SPEC it builds the embedded
+demo. The default folder is out/<kit name>/. Outputs are deterministic and
+written atomically; a failed build leaves the folder as it was. build
+replaces its own earlier outputs but refuses a folder holding files it did
+not make, unless --force is given.`,
+		Example: `  coilwright build
+  coilwright build kestrel.toml -o build/kestrel
+  coilwright build --demo demo-2g4-cylinder.toml`,
+		Args: maxArgs(1, "one spec file"),
+		RunE: func(cmd *cobra.Command, args []string) error {
+			path := ""
+			if len(args) == 1 {
+				path = args[0]
+			}
+			if path == "" && o.demo == "" {
+				o.demo = templates.DefaultDemo
+			}
+			return runBuild(cmd.OutOrStdout(), path, o)
+		},
+	}
+	cmd.Flags().StringVarP(&o.outDir, "out", "o", "", "output folder (default out/<kit name>/)")
+	cmd.Flags().BoolVar(&o.force, "force", false, "write into a folder that holds files coilwright did not make")
+	cmd.Flags().StringVar(&o.demo, "demo", "", "build an embedded demo spec: "+strings.Join(templates.Demos(), ", "))
+	cmd.Flags().BoolVar(&o.json, "json", false, "print the manifest as JSON instead of a summary")
+	return cmd
+}
+
+func runBuild(w io.Writer, path string, o buildOptions) error {
+	l, err := loadSpec(path, o.demo)
+	if err != nil {
+		return err
+	}
+	dir := o.outDir
+	if dir == "" {
+		dir = filepath.Join("out", slug(l.Spec.Kit))
+	}
+	out, err := cam.NewOutput(dir, o.force)
+	if err != nil {
+		return err
+	}
+	ctx := &buildContext{spec: l, out: out}
+	for _, s := range buildSteps() {
+		if err := s.write(ctx); err != nil {
+			out.Abort()
+			return fmt.Errorf("%s: %w", s.name, err)
+		}
+	}
+	m := cam.Manifest{Tool: "coilwright", Version: Version, Spec: l.Name, SpecSHA256: l.SHA256()}
+	files := out.Files()
+	if err := out.Commit(m); err != nil {
+		return err
+	}
+	if o.json {
+		m.Files = files
+		enc := json.NewEncoder(w)
+		enc.SetIndent("", "  ")
+		return enc.Encode(m)
+	}
+	fmt.Fprintf(w, "%s: wrote %d files to %s\n", l.Name, len(files)+1, dir)
+	for _, f := range files {
+		fmt.Fprintf(w, "  %-24s %9d bytes\n", f.Name, f.Size)
+	}
+	return nil
+}
+
+// slug turns a kit name into a folder name: lower case letters, digits and
+// single hyphens.
+func slug(name string) string {
+	var b strings.Builder
+	dash := false
+	for _, r := range strings.ToLower(name) {
+		if unicode.IsLetter(r) && r < unicode.MaxASCII || unicode.IsDigit(r) {
+			if dash && b.Len() > 0 {
+				b.WriteByte('-')
+			}
+			b.WriteRune(r)
+			dash = false
+		} else {
+			dash = true
+		}
+	}
+	if b.Len() == 0 {
+		return "kit"
+	}
+	return b.String()
+}

@@ -1,0 +1,83 @@
+package main
+
+import (
+	"fmt"
+	"io"
+	"math"
+	"text/template"
+
+	"github.com/spf13/cobra"
+
+	"coilwright/parts"
+	"coilwright/templates"
+)
+
+var starterTmpl = template.Must(template.ParseFS(templates.FS, "starter.toml.tmpl"))
+
+// newOptions are the flags of `coilwright new`.
+type newOptions struct {
+	frequencyMHz float64
+	shape        string
+	kit          string
+	turns        float64
+}
+
+// starter is the data the starter-spec template is executed with.
+type starter struct {
+	Kit          string
+	FrequencyMHz float64
+	Shape        string
+	Turns        float64
+	WireMM       float64
+}
+
+func newNewCmd() *cobra.Command {
+	var o newOptions
+	cmd := &cobra.Command{
+		Use:   "new",
+		Short: "Print a starter design spec",
+		Long: `new prints a design spec on stdout. With no flags it prints the reference
+spec, every key explained. With --frequency-mhz it prints a starter spec
+sized for that band and --shape, ready to edit and build.`,
+		Example: `  coilwright new > reference.toml
+  coilwright new --frequency-mhz 5800 --shape conical --kit "Hilltop 5G8" > hilltop.toml`,
+		Args: exactArgs(0, "no arguments (use flags)"),
+		RunE: func(cmd *cobra.Command, _ []string) error {
+			return runNew(cmd.OutOrStdout(), o, cmd.Flags().Changed("frequency-mhz"))
+		},
+	}
+	cmd.Flags().Float64Var(&o.frequencyMHz, "frequency-mhz", 0, "centre frequency in MHz (100–30000)")
+	cmd.Flags().StringVar(&o.shape, "shape", "cylindrical", `coil shape: "cylindrical" or "conical"`)
+	cmd.Flags().StringVar(&o.kit, "kit", "", "kit name (default from the frequency)")
+	cmd.Flags().Float64Var(&o.turns, "turns", 0, "number of turns (default 5 conical, 7 cylindrical)")
+	return cmd
+}
+
+func runNew(w io.Writer, o newOptions, sized bool) error {
+	if !sized {
+		_, err := w.Write(templates.Reference)
+		return err
+	}
+	if o.frequencyMHz < parts.MinFrequencyMHz || o.frequencyMHz > parts.MaxFrequencyMHz {
+		return usageError{fmt.Errorf("--frequency-mhz %g is outside %g–%g MHz", o.frequencyMHz, parts.MinFrequencyMHz, parts.MaxFrequencyMHz)}
+	}
+	if o.shape != "cylindrical" && o.shape != "conical" {
+		return usageError{fmt.Errorf(`--shape %q: use "cylindrical" or "conical"`, o.shape)}
+	}
+	st := starter{Kit: o.kit, FrequencyMHz: o.frequencyMHz, Shape: o.shape, Turns: o.turns}
+	if st.Kit == "" {
+		st.Kit = fmt.Sprintf("Starter %g MHz %s", o.frequencyMHz, o.shape)
+	}
+	if st.Turns == 0 {
+		st.Turns = 7
+		if o.shape == "conical" {
+			st.Turns = 5
+		}
+	}
+	// Wire about 0.02 λ, inside the 0.006–0.05 λ the Kraus formulas assume
+	// (DOMAIN §2, from memory), rounded to a stock 0.1 mm and clamped to
+	// the spec's range.
+	lambda := parts.Wavelength(o.frequencyMHz)
+	st.WireMM = math.Min(math.Max(math.Round(0.02*lambda*10)/10, parts.MinWireMM), parts.MaxWireMM)
+	return starterTmpl.Execute(w, st)
+}

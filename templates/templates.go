@@ -1,0 +1,36 @@
+package templates
+
+import (
+	"embed"
+	"io/fs"
+	"sort"
+	"strings"
+)
+
+//go:embed *.toml *.tmpl
+var files embed.FS
+
+// FS is the read-only file system of every embedded file.
+var FS fs.FS = files
+
+// DefaultDemo is the demo spec that `build` uses when given no spec.
+const DefaultDemo = "demo-5g8-cone.toml"
+
+// Reference is the fully commented reference spec; callers must not modify
+// it.
+//
+//go:embed reference.toml
+var Reference []byte
+
+// Demo returns the named embedded demo spec, or false when there is none.
+func Demo(name string) ([]byte, bool) {
+	b, err := fs.ReadFile(files, name)
+	return b, err == nil && strings.HasPrefix(name, "demo-")
+}
+
+// Demos returns the names of the embedded demo specs, sorted.
+func Demos() []string {
+	names, _ := fs.Glob(files, "demo-*.toml")
+	sort.Strings(names)
+	return names
+}
