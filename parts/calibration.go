@@ -35,41 +35,41 @@ const calibrationFarFactor = 1.5
 // CalibrationPoint is one measured test coil.
 type CalibrationPoint struct {
 	// FormerDiameter is the diameter of the wire centreline on the former, mm.
-	FormerDiameter float64 `toml:"former_diameter_mm"`
+	FormerDiameter float64 `toml:"former_diameter_mm" json:"former_diameter_mm"`
 	// RelaxedDiameter is the measured centreline diameter after release, mm
 	// (outside diameter minus one wire diameter).
-	RelaxedDiameter float64 `toml:"relaxed_diameter_mm"`
+	RelaxedDiameter float64 `toml:"relaxed_diameter_mm" json:"relaxed_diameter_mm"`
 	// PredictedDiameter is the calibrated model's relaxed diameter, mm; it is
 	// filled in by Calibrate.
-	PredictedDiameter float64 `toml:"predicted_diameter_mm"`
+	PredictedDiameter float64 `toml:"predicted_diameter_mm" json:"predicted_diameter_mm"`
 }
 
 // Calibration is a fitted effective yield for one material and wire, as kept
 // in a calibration file.
 type Calibration struct {
 	// Material is the library id of the wire material.
-	Material string `toml:"material"`
+	Material string `toml:"material" json:"material"`
 	// WireDiameter is the test wire's diameter, mm.
-	WireDiameter float64 `toml:"wire_diameter_mm"`
+	WireDiameter float64 `toml:"wire_diameter_mm" json:"wire_diameter_mm"`
 	// Spacing is the axial spacing per turn of the test coils, mm (zero for
 	// a flat ring).
-	Spacing float64 `toml:"spacing_mm"`
+	Spacing float64 `toml:"spacing_mm" json:"spacing_mm"`
 	// Hardening records whether the fit used the material's hardening law.
-	Hardening bool `toml:"hardening"`
+	Hardening bool `toml:"hardening" json:"hardening"`
 	// EffectiveYield is the fitted yield in MPa; the flow stress of the
 	// library's law is scaled by EffectiveYield/Material.Yield.
-	EffectiveYield float64 `toml:"effective_yield_mpa"`
+	EffectiveYield float64 `toml:"effective_yield_mpa" json:"effective_yield_mpa"`
 	// LibraryYield is the library yield in MPa the fit started from.
-	LibraryYield float64 `toml:"library_yield_mpa"`
+	LibraryYield float64 `toml:"library_yield_mpa" json:"library_yield_mpa"`
 	// ResidualRMS is the root-mean-square difference between measured and
 	// predicted relaxed diameters, mm.
-	ResidualRMS float64 `toml:"residual_rms_mm"`
+	ResidualRMS float64 `toml:"residual_rms_mm" json:"residual_rms_mm"`
 	// Points is the number of measured coils.
-	Points int `toml:"points"`
+	Points int `toml:"points" json:"points"`
 	// Measurements lists the coils with the fitted prediction for each.
-	Measurements []CalibrationPoint `toml:"measurement"`
+	Measurements []CalibrationPoint `toml:"measurement" json:"measurements"`
 	// Warnings holds remarks on the fit; not stored in the file.
-	Warnings []string `toml:"-"`
+	Warnings []string `toml:"-" json:"warnings,omitempty"`
 }
 
 // Factor returns the flow-stress factor EffectiveYield/LibraryYield.

@@ -10,7 +10,10 @@
 // the interpolated former hits the target between its ends. The wire-path
 // curvature is taken as that of a cylindrical helix with the local radius and
 // spacing; a cone's slowly changing radius adds a term of order (dr/dφ)²/r²,
-// below 10⁻³ for any coil the spec admits.
+// below 10⁻³ for any coil the spec admits. A constant-angle former holds the
+// coil's total height exactly but, its radii being smaller, its local spacing
+// differs from the coil's by about a per cent towards the ends; the forward
+// check uses the former's own spacing, which the released wire keeps.
 
 package parts
 
@@ -33,6 +36,14 @@ const (
 // used to judge whether an uncalibrated design needs a test coil. From
 // memory: ±10 % is typical of one temper from different suppliers.
 const yieldScatter = 0.10
+
+// formerIterations bounds the end-radius iteration of a constant-angle
+// former; formerSettle is its relative convergence threshold. The
+// spacing's pull on the radius is weak, so it settles in a few rounds.
+const (
+	formerIterations = 50
+	formerSettle     = 1e-13
+)
 
 // formerFitFraction is the share of the inspection tolerance the former's
 // interpolation between its ends may use before the design warns.
@@ -81,23 +92,30 @@ func newWireDesign(s *Spec) (WireDesign, error) {
 
 // compensateCoil returns the former coil that relaxes to target under
 // model: same kind, turns, hand and start height, end radii compensated,
-// heights held.
+// heights held. A constant-angle former's spacing depends on its own radii,
+// so its ends are compensated again at the spacing the former has there
+// until the radii settle.
 func compensateCoil(target Coil, model *Springback) (Coil, error) {
 	f := target
-	ws, err := model.Compensate(target.StartRadius, target.SpacingAt(0))
-	if err != nil {
-		return Coil{}, err
-	}
-	f.StartRadius = ws.FormerRadius
-	f.EndRadius = f.StartRadius
-	if target.EndRadius != target.StartRadius {
-		we, err := model.Compensate(target.EndRadius, target.SpacingAt(target.Span()))
+	s0, s1 := target.SpacingAt(0), target.SpacingAt(target.Span())
+	for range formerIterations {
+		prev := f
+		ws, err := model.Compensate(target.StartRadius, s0)
 		if err != nil {
 			return Coil{}, err
 		}
-		f.EndRadius = we.FormerRadius
-	}
-	if f.Mode == ConstantAngle && f.EndRadius != f.StartRadius {
+		f.StartRadius = ws.FormerRadius
+		f.EndRadius = f.StartRadius
+		if target.EndRadius != target.StartRadius {
+			we, err := model.Compensate(target.EndRadius, s1)
+			if err != nil {
+				return Coil{}, err
+			}
+			f.EndRadius = we.FormerRadius
+		}
+		if f.Mode != ConstantAngle || f.EndRadius == f.StartRadius {
+			return f, nil
+		}
 		// On the cone, Z − Z0 = (r − r0)·cos θ0/sin θ0 with sin θ0 = k/tan α
 		// (Dyson, IEEE Trans. AP-13, 1965; DOMAIN §3). Holding the height H
 		// fixes u = tan θ0 = (r1 − r0)/H, hence sin θ0 = u/√(1 + u²) and
@@ -106,6 +124,11 @@ func compensateCoil(target Coil, model *Springback) (Coil, error) {
 		sinTheta := u / math.Sqrt(1+u*u)
 		k := math.Log(f.EndRadius/f.StartRadius) / f.Span()
 		f.PitchAngle = math.Atan(k / sinTheta)
+		if math.Abs(f.StartRadius-prev.StartRadius) < formerSettle*f.StartRadius &&
+			math.Abs(f.EndRadius-prev.EndRadius) < formerSettle*f.EndRadius {
+			return f, nil
+		}
+		s0, s1 = f.SpacingAt(0), f.SpacingAt(f.Span())
 	}
 	return f, nil
 }
