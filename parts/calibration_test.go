@@ -153,3 +153,39 @@ func TestCalibrationFile(t *testing.T) {
 		})
 	}
 }
+
+func FuzzParseCalibration(f *testing.F) {
+	m, _ := LookupMaterial("copper-annealed")
+	c, _ := Calibrate(m, 1.6, 1.6, false, []CalibrationPoint{{FormerDiameter: 16.6, RelaxedDiameter: 16.9}})
+	seed, _ := MarshalCalibration(c)
+	f.Add(seed)
+	f.Add([]byte("material = 1\n"))
+	f.Fuzz(func(t *testing.T, data []byte) {
+		c, err := ParseCalibration(data)
+		if err != nil {
+			return
+		}
+		// Anything accepted must be usable on its own material.
+		m, err := LookupMaterial(c.Material)
+		if err != nil {
+			t.Fatalf("accepted unknown material %q", c.Material)
+		}
+		if _, err := c.Apply(m); err != nil {
+			t.Fatalf("accepted calibration does not apply: %v", err)
+		}
+		if !(c.EffectiveYield > 0 && c.WireDiameter > 0) {
+			t.Fatalf("accepted %+v", c)
+		}
+	})
+}
+
+func BenchmarkCalibrate(b *testing.B) {
+	m, _ := LookupMaterial("brass-c26000-half-hard")
+	pts := []CalibrationPoint{{FormerDiameter: 16.6, RelaxedDiameter: 18.0}, {FormerDiameter: 16.6, RelaxedDiameter: 18.1}}
+	b.ReportAllocs()
+	for b.Loop() {
+		if _, err := Calibrate(m, 1.6, 1.6, false, pts); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
