@@ -332,3 +332,22 @@ func TestInspectionTolerance(t *testing.T) {
 		}
 	}
 }
+
+func TestNoFormerCanWind(t *testing.T) {
+	// Source: a helix of spacing S bends at most to 1/(2p), p = S/2π. Thin
+	// spring-temper stainless on a 1.28 GHz helix (R ≈ 37 mm, S ≈ 52 mm)
+	// loses about 32σy/(3πE·d) ≈ 0.088 1/mm on release (DOMAIN §5), so the
+	// former would need more than the 0.06 1/mm such a helix can have.
+	_, err := NewDesign(func() *Spec {
+		s, err := ParseSpec([]byte(specText(1280, cylinder5800, `material = "stainless-304-spring"
+diameter_mm = 0.3`)))
+		if err != nil {
+			t.Fatal(err)
+		}
+		return s
+	}())
+	var se *SpecError
+	if !errors.As(err, &se) || se.Key != "wire.material" || !strings.Contains(se.Problem, "no former") {
+		t.Errorf("err = %v, want a wire.material problem", err)
+	}
+}
