@@ -100,7 +100,7 @@ func NewDesign(s *Spec) (*Design, error) {
 	}
 	if d.Former, err = compensateCoil(coil, d.Wire.Model); err != nil {
 		return nil, &SpecError{Key: "wire.material", Line: s.Line("wire.material"), Value: fmt.Sprintf("%q", s.Wire.Material),
-			Problem: "no former can wind this coil: " + err.Error(), Fix: "choose a softer temper or a thicker wire"}
+			Problem: "no former can wind this coil: " + err.Error(), Fix: "choose a softer temper or a thicker wire, or a smaller pitch angle"}
 	}
 	sw, err := d.springbackTurns()
 	if err != nil {

@@ -68,6 +68,31 @@ func (w *WireSpec) validate(c *checker, s *Spec) {
 	}
 }
 
+// validateWinding checks, once the rest of the spec is valid, that a former
+// can be compensated for the coil: a stiff wire on a steep helix would need
+// a former bent tighter than any helix with the coil's spacing can be.
+func (w *WireSpec) validateWinding(c *checker, s *Spec) {
+	if err := checkWinding(s); err != nil {
+		c.fail("wire.material", strconv.Quote(w.Material), "no former can wind this coil: "+err.Error(),
+			"choose a softer temper or a thicker wire, or a smaller pitch angle")
+	}
+}
+
+// checkWinding builds the coil and the wire's springback model and
+// compensates the coil's ends.
+func checkWinding(s *Spec) error {
+	coil, err := coilFromSpec(s)
+	if err != nil {
+		return nil // reported by the coil's own checks
+	}
+	w, err := newWireDesign(s)
+	if err != nil {
+		return err
+	}
+	_, err = compensateCoil(coil, w.Model)
+	return err
+}
+
 // Hardening reports whether the spec asks for the hardening springback model.
 func (w *WireSpec) Hardening() bool { return w.SpringbackModel == ModelHardening }
 
@@ -92,7 +117,13 @@ func (s *Spec) AttachCalibration(cal Calibration) error {
 		return fail(fmt.Sprintf("calibration was fitted with springback_model = %q, the spec asks for %q", model, w.SpringbackModel),
 			fmt.Sprintf("set springback_model = %q, or calibrate again with the spec's model", model))
 	}
+	prev := w.calibration
 	w.calibration = &cal
+	if err := checkWinding(s); err != nil {
+		w.calibration = prev
+		return fail("with the calibrated yield no former can wind this coil: "+err.Error(),
+			"check the calibration, or choose a softer temper or a thicker wire")
+	}
 	return nil
 }
 

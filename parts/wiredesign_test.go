@@ -67,7 +67,7 @@ func mustDesign(t *testing.T, text string) *Design {
 	return d
 }
 
-func warningCodes(d *Design) []string {
+func warningList(d *Design) []string {
 	var c []string
 	for _, w := range d.Warnings {
 		c = append(c, w.Code)
@@ -128,7 +128,7 @@ diameter_mm = 1.6`))
 					t.Errorf("turn %d: predicted %.4f mm, target %.4f", tr.Index, tr.PredictedDiameterMM, tr.DiameterMM)
 				}
 			}
-			if slices.Contains(warningCodes(d), "former-fit") {
+			if slices.Contains(warningList(d), "former-fit") {
 				t.Errorf("unexpected former-fit warning: %v", d.Warnings)
 			}
 		})
@@ -163,15 +163,15 @@ springback_model = "hardening"`, "springback-model"},
 			var f float64
 			fmt.Sscan(tc.freq, &f)
 			d := mustDesign(t, specText(f, tc.coil, tc.wire))
-			if !slices.Contains(warningCodes(d), tc.want) {
-				t.Errorf("warnings %v lack %q", warningCodes(d), tc.want)
+			if !slices.Contains(warningList(d), tc.want) {
+				t.Errorf("warnings %v lack %q", warningList(d), tc.want)
 			}
 		})
 	}
 	t.Run("annealed copper is quiet", func(t *testing.T) {
 		d := mustDesign(t, specText(5800, cylinder5800, `material = "copper-annealed"
 diameter_mm = 1.6`))
-		for _, c := range warningCodes(d) {
+		for _, c := range warningList(d) {
 			if strings.HasPrefix(c, "wire-") || strings.HasPrefix(c, "springback") || c == "former-fit" {
 				t.Errorf("unexpected warning %q", c)
 			}
@@ -284,8 +284,8 @@ calibration = "batch.toml"`)
 		if err != nil {
 			t.Fatal(err)
 		}
-		if !slices.Contains(warningCodes(d), "calibration-diameter") {
-			t.Errorf("warnings %v lack calibration-diameter", warningCodes(d))
+		if !slices.Contains(warningList(d), "calibration-diameter") {
+			t.Errorf("warnings %v lack calibration-diameter", warningList(d))
 		}
 	})
 }
@@ -337,17 +337,21 @@ func TestNoFormerCanWind(t *testing.T) {
 	// Source: a helix of spacing S bends at most to 1/(2p), p = S/2π. Thin
 	// spring-temper stainless on a 1.28 GHz helix (R ≈ 37 mm, S ≈ 52 mm)
 	// loses about 32σy/(3πE·d) ≈ 0.088 1/mm on release (DOMAIN §5), so the
-	// former would need more than the 0.06 1/mm such a helix can have.
-	_, err := NewDesign(func() *Spec {
-		s, err := ParseSpec([]byte(specText(1280, cylinder5800, `material = "stainless-304-spring"
-diameter_mm = 0.3`)))
-		if err != nil {
-			t.Fatal(err)
-		}
-		return s
-	}())
-	var se *SpecError
-	if !errors.As(err, &se) || se.Key != "wire.material" || !strings.Contains(se.Problem, "no former") {
-		t.Errorf("err = %v, want a wire.material problem", err)
+	// former would need more than the 0.06 1/mm such a helix can have. At a
+	// 45° pitch angle the coil already has that largest curvature, so no
+	// wire can be compensated.
+	for _, tc := range []struct{ name, freq, coil, wire string }{
+		{"thin spring stainless", "1280", cylinder5800, "material = \"stainless-304-spring\"\ndiameter_mm = 0.3"},
+		{"45 degree pitch", "5800", strings.Replace(cylinder5800, "12.5", "45.0", 1), "material = \"copper-annealed\"\ndiameter_mm = 1.6"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			var f float64
+			fmt.Sscan(tc.freq, &f)
+			_, err := ParseSpec([]byte(specText(f, tc.coil, tc.wire)))
+			var ses SpecErrors
+			if !errors.As(err, &ses) || ses[0].Key != "wire.material" || ses[0].Line == 0 || !strings.Contains(ses[0].Problem, "no former") {
+				t.Errorf("err = %v, want a wire.material problem", err)
+			}
+		})
 	}
 }
