@@ -251,10 +251,14 @@ func HelixCurvature(r, s float64) float64 {
 
 // HelixRadius returns the radius in mm (the branch r ≥ p) of the helix with
 // axial spacing s mm per turn and curvature kappa in 1/mm:
-// r = (1 + √(1 − 4κ²p²))/(2κ). It returns a *SteepHelixError when kappa
-// exceeds the largest curvature 1/(2p) of such a helix.
+// r = (1 + √(1 − 4κ²p²))/(2κ), for kappa > 0. It returns a
+// *SteepHelixError when kappa exceeds the largest curvature 1/(2p) of such a
+// helix.
 // Source: standard differential geometry of the circular helix.
 func HelixRadius(kappa, s float64) (float64, error) {
+	if !(kappa > 0) || math.IsInf(kappa, 0) {
+		return 0, fmt.Errorf("helix radius: curvature %g 1/mm must be positive", kappa)
+	}
 	p := s / (2 * math.Pi)
 	q := 1 - 4*kappa*kappa*p*p
 	if q < 0 {
@@ -296,16 +300,19 @@ func (s *Springback) Relax(formerRadius, spacing float64) (Winding, error) {
 		return Winding{}, err
 	}
 	kf := HelixCurvature(formerRadius, spacing)
-	if ke := s.ElasticLimit(); kf <= ke {
+	var kr float64
+	if ke := s.ElasticLimit(); kf > ke {
+		kr = s.Relaxed(kf)
+	}
+	if !(kr > 0) {
+		// Elastic, or so close to the elastic limit that the set is lost
+		// in rounding.
+		ke := s.ElasticLimit()
 		e := &NoSetError{FormerRadius: formerRadius, Spacing: spacing, Curvature: kf, ElasticLimit: ke}
 		if r, err := HelixRadius(ke, spacing); err == nil {
 			e.MaxRadius = r
 		}
 		return Winding{}, e
-	}
-	kr := s.Relaxed(kf)
-	if !(kr > 0) {
-		return Winding{}, &NoSetError{FormerRadius: formerRadius, Spacing: spacing, Curvature: kf, ElasticLimit: s.ElasticLimit()}
 	}
 	rr, err := HelixRadius(kr, spacing)
 	if err != nil {

@@ -246,6 +246,30 @@ func TestInverseOfForward(t *testing.T) {
 	}
 }
 
+func TestInverseNearElasticLimit(t *testing.T) {
+	// Source: identity. Close to the elastic limit the relaxed radius grows
+	// without bound and the inverse is ill-conditioned; the bracketed solve
+	// still returns the former within 1e-9.
+	m, _ := LookupMaterial("brass-c26000-half-hard")
+	s, _ := NewWireSpringback(m, 1.6, false)
+	limit := 110000 * 0.8 / 448.0 // E·a/σy, the flat-ring elastic limit
+	for _, f := range []float64{0.5, 0.9, 0.99, 0.999} {
+		t.Run(fmt.Sprintf("%g of the limit", f), func(t *testing.T) {
+			w, err := s.Relax(f*limit, 0)
+			if err != nil {
+				t.Fatal(err)
+			}
+			c, err := s.Compensate(w.RelaxedRadius, 0)
+			if err != nil {
+				t.Fatal(err)
+			}
+			if relErr(c.FormerRadius, f*limit) > 1e-9 {
+				t.Errorf("former %.15g, want %.15g", c.FormerRadius, f*limit)
+			}
+		})
+	}
+}
+
 func TestHardening(t *testing.T) {
 	const sy, E, d = 300.0, 200000.0, 1.6
 	round := RoundSection{Diameter: d}
@@ -414,6 +438,9 @@ func TestHelixRadiusOfCurvature(t *testing.T) {
 	c := math.Cos(12.5 * math.Pi / 180)
 	if relErr(k, c*c/r) > relTol {
 		t.Errorf("κ = %.15g, want cos²α/R = %.15g", k, c*c/r)
+	}
+	if _, err := HelixRadius(0, helix5800Spacing); err == nil {
+		t.Error("zero curvature accepted")
 	}
 	got, err := HelixRadius(k, helix5800Spacing)
 	if err != nil {
