@@ -91,6 +91,22 @@ func TestRoundWireMoments(t *testing.T) {
 	}
 }
 
+func TestRoundWireSmallCoreSeries(t *testing.T) {
+	// Source: DOMAIN §5, small-s series of the round-wire springback,
+	// κf/κi ≈ 1 − (16/3π)s + (8/3π)s³ with s = σy·R/(E·a); the next term is
+	// O(s⁵), so the tolerance is s⁵.
+	const sy, E, d = 448.0, 110000.0, 1.6
+	a := d / 2
+	s := mustSpringback(t, RoundSection{Diameter: d}, FlowLaw{YoungsModulus: E, Yield: sy})
+	for _, sr := range []float64{0.001, 0.01, 0.03, 0.1} {
+		ki := sy / (E * a * sr)
+		want := 1 - 16/(3*math.Pi)*sr + 8/(3*math.Pi)*sr*sr*sr
+		if got := s.Relaxed(ki) / ki; math.Abs(got-want) > math.Pow(sr, 5) {
+			t.Errorf("s = %g: κf/κi = %.12f, series %.12f", sr, got, want)
+		}
+	}
+}
+
 func TestGardinerSheetLimit(t *testing.T) {
 	// Source: Gardiner, "The springback of metals", Trans. ASME 79, 1957,
 	// as given in Kalpakjian & Schmid, Manufacturing Engineering and
