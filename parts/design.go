@@ -10,16 +10,20 @@ import (
 // warnings. It is built once by NewDesign and not mutated afterwards.
 type Design struct {
 	Spec        *Spec
-	Wavelength  float64    // free-space wavelength at the centre frequency, mm
-	Coil        Coil       // the relaxed wire centreline the maker is aiming for
-	Former      Coil       // the wire centreline in the former's groove: Coil compensated for springback
-	Wire        WireDesign // the wire, its (calibrated) material and springback model
-	Turns       []Turn     // one row per started turn, from the feed end
-	WireLength  float64    // centreline arc length of the winding, mm
-	AxialLength float64    // axial length of the winding, mm
+	Wavelength  float64 // free-space wavelength at the centre frequency, mm
+	Coil        Coil    // the relaxed wire centreline the maker is aiming for
+	Turns       []Turn  // one row per started turn, from the feed end
+	WireLength  float64 // centreline arc length of the winding, mm
+	AxialLength float64 // axial length of the winding, mm
 	Estimates   HelixEstimates
 	Warnings    []Warning
 	EIRP        *EIRPFigure // nil unless rf.tx_power_dbm is set
+
+	// Former is the wire centreline in the former's groove: Coil
+	// compensated for springback, same kind, heights held.
+	Former Coil
+	// Wire is the wire, its (calibrated) material and springback model.
+	Wire WireDesign
 }
 
 // Turn is one row of the per-turn table, evaluated at the turn's middle
