@@ -32,6 +32,15 @@ const calibrationRelTol = 1e-12
 // scatter by tens of per cent between batches, not by factors of two.
 const calibrationFarFactor = 1.5
 
+// calibrationReadingMM is the reading uncertainty of a measured coil
+// diameter. Common practice (no published source): calipers on a springy
+// coil read to about ±0.05 mm.
+const calibrationReadingMM = 0.05
+
+// calibrationLooseFraction is the relative yield uncertainty beyond which
+// the fit warns that the test coil springs back too little to calibrate.
+const calibrationLooseFraction = 0.10
+
 // CalibrationPoint is one measured test coil.
 type CalibrationPoint struct {
 	// FormerDiameter is the diameter of the wire centreline on the former, mm.
@@ -64,6 +73,9 @@ type Calibration struct {
 	// ResidualRMS is the root-mean-square difference between measured and
 	// predicted relaxed diameters, mm.
 	ResidualRMS float64 `toml:"residual_rms_mm" json:"residual_rms_mm"`
+	// YieldUncertainty is the ± change in the fitted yield, MPa, that a
+	// ±calibrationReadingMM error in the mean measured diameter causes.
+	YieldUncertainty float64 `toml:"yield_uncertainty_mpa" json:"yield_uncertainty_mpa"`
 	// Points is the number of measured coils.
 	Points int `toml:"points" json:"points"`
 	// Measurements lists the coils with the fitted prediction for each.
@@ -178,6 +190,18 @@ func Calibrate(m Material, d, spacing float64, hardening bool, pts []Calibration
 		ss += (ds[i] - p.RelaxedDiameter) * (ds[i] - p.RelaxedDiameter)
 	}
 	cal.ResidualRMS = math.Sqrt(ss / float64(len(pts)))
+	// Sensitivity of the mean predicted diameter to the yield, by a central
+	// difference; the reading error of a mean of n coils falls as 1/√n.
+	const h = 1e-4
+	if gp, gm := g(f*(1+h)), g(f*(1-h)); gp > gm {
+		slope := (gp - gm) / (2 * h * f * m.Yield) // mm per MPa
+		cal.YieldUncertainty = calibrationReadingMM / math.Sqrt(float64(len(pts))) / slope
+	}
+	if cal.YieldUncertainty > calibrationLooseFraction*cal.EffectiveYield {
+		cal.Warnings = append(cal.Warnings, fmt.Sprintf(
+			"the test coil springs back so little that a %.2f mm misreading moves the fitted yield by ±%.0f MPa (%.0f %%): wind on a larger former or measure more coils",
+			calibrationReadingMM, cal.YieldUncertainty, 100*cal.YieldUncertainty/cal.EffectiveYield))
+	}
 	if f > calibrationFarFactor || f < 1/calibrationFarFactor {
 		cal.Warnings = append(cal.Warnings, fmt.Sprintf(
 			"fitted yield %.0f MPa is %.2f× the library's %.0f MPa: check the material, the wire diameter and that the diameters are centreline values",
@@ -239,6 +263,7 @@ func MarshalCalibration(c Calibration) ([]byte, error) {
 	}
 	c.EffectiveYield = round(c.EffectiveYield, 3)
 	c.ResidualRMS = round(c.ResidualRMS, 4)
+	c.YieldUncertainty = round(c.YieldUncertainty, 1)
 	c.Measurements = slices.Clone(c.Measurements)
 	for i := range c.Measurements {
 		c.Measurements[i].PredictedDiameter = round(c.Measurements[i].PredictedDiameter, 4)

@@ -134,7 +134,7 @@ func runCalibrate(w io.Writer, o calibrateOptions) error {
 	}
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
 	fmt.Fprintf(tw, "material\t%s, %g mm wire, %s model\n", m.ID, o.wireMM, o.model)
-	fmt.Fprintf(tw, "effective yield\t%.1f MPa (library %.0f MPa, factor %.3f)\n", cal.EffectiveYield, m.Yield, cal.Factor())
+	fmt.Fprintf(tw, "effective yield\t%.1f ± %.1f MPa (library %.0f MPa, factor %.3f)\n", cal.EffectiveYield, cal.YieldUncertainty, m.Yield, cal.Factor())
 	fmt.Fprintf(tw, "residual\t%.3f mm RMS over %d coil(s)\n", cal.ResidualRMS, cal.Points)
 	for _, p := range cal.Measurements {
 		fmt.Fprintf(tw, "coil\tformer %.2f mm → measured %.2f mm, model %.2f mm\n", p.FormerDiameter, p.RelaxedDiameter, p.PredictedDiameter)
