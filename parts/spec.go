@@ -99,6 +99,9 @@ func (s *Spec) Validate() error {
 		s.Coil.validateFit(c, s)
 		s.Dowel.validateFit(c, s)
 	}
+	if len(c.errs) == 0 {
+		s.Wire.validateWinding(c, s)
+	}
 	return c.result()
 }
 
