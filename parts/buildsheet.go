@@ -11,8 +11,8 @@ import (
 	"strings"
 )
 
-// CautionID names one caution of the build sheet.
-type CautionID string
+// HazardID names one caution of the build sheet.
+type HazardID string
 
 // The cautions every build sheet carries. Sources (DOMAIN §8): UK HSE,
 // "Solderers — asthma" and INDG248 (rosin flux fume, lead); EU-OSHA
@@ -23,18 +23,18 @@ type CautionID string
 // hard wire and the burn precautions are common practice (no published
 // source).
 const (
-	CautionSolder   CautionID = "solder"
-	CautionBurns    CautionID = "burns"
-	CautionEpoxy    CautionID = "epoxy"
-	CautionEyes     CautionID = "eyes"
-	CautionLaminate CautionID = "laminate"
-	CautionRF       CautionID = "rf"
+	HazardSolder   HazardID = "solder"
+	HazardBurns    HazardID = "burns"
+	HazardEpoxy    HazardID = "epoxy"
+	HazardEyes     HazardID = "eyes"
+	HazardLaminate HazardID = "laminate"
+	HazardRF       HazardID = "rf"
 )
 
-// Caution is one safety caution: a heading the sheet prints in full and
+// Hazard is one safety caution: a heading the sheet prints in full and
 // again at each step that needs it, and its text.
-type Caution struct {
-	ID      CautionID
+type Hazard struct {
+	ID      HazardID
 	Heading string
 	Text    string
 }
@@ -44,7 +44,7 @@ type Step struct {
 	Number   int
 	Title    string
 	Text     []string  // paragraphs, in order
-	Cautions []Caution // repeated from the cautions section
+	Cautions []Hazard // repeated from the cautions section
 }
 
 // SheetRow is one label and value of a build-sheet table.
@@ -67,7 +67,7 @@ type BuildSheet struct {
 	Design     []SheetRow
 	Tools      []string
 	Materials  []SheetRow
-	Cautions   []Caution
+	Cautions   []Hazard
 	Steps      []Step
 	Inspection []InspectionRow
 	// InspectionNote says how to measure and where the tolerance comes from.
@@ -99,8 +99,12 @@ func NewBuildSheet(d *Design, cl *CutList, strip *Wedge, specSHA256 string) *Bui
 	b.Materials = materials(s, cl)
 	b.Cautions = cautions(d)
 	b.Steps = steps(d, cl, strip, b.Cautions)
-	b.InspectionNote = fmt.Sprintf("Measure each turn across its middle with calipers over the outside of the wire, at two places 90° apart, and write the mean in the blank column. "+
-		"The tolerance is ±1 %% of the turn's diameter, at least %s mm (a provisional rule: a turn 1 %% too large tunes about 1 %% low).", num(MinInspectionToleranceMM))
+	b.InspectionNote = "Measure each turn across its middle with calipers over the outside of the wire, at two places 90° apart, and write the mean in the blank column. "
+	if s.Wire.InspectionToleranceMM != nil {
+		b.InspectionNote += fmt.Sprintf("The tolerance, ±%s mm, is set in the spec.", num(*s.Wire.InspectionToleranceMM))
+	} else {
+		b.InspectionNote += fmt.Sprintf("The tolerance is ±%s %% of the turn's diameter, at least %s mm: a turn 1 %% too large tunes about 1 %% low.", num(100*InspectionFraction), num(InspectionFloorMM))
+	}
 	b.Warnings = append(append([]Warning{}, d.Warnings...), cl.Warnings...)
 	b.Closing = []string{
 		"This sheet is a guide for careful hobby construction, not professional advice. Follow the local regulations, electrical and workshop codes, and the conditions of any licence that apply where you build and transmit; where they differ from this sheet, they win.",
@@ -180,31 +184,31 @@ func materials(s *Spec, cl *CutList) []SheetRow {
 	return rows
 }
 
-func cautions(d *Design) []Caution {
+func cautions(d *Design) []Hazard {
 	gain := d.Estimates.Gain.Value
 	rf := fmt.Sprintf("This antenna concentrates power: its estimated gain is %.1f dBi, so EIRP (dBm) = transmitter power (dBm) − feeder loss (dB) + %.1f dB.", gain, gain)
 	if e := d.EIRP; e != nil {
 		rf += fmt.Sprintf(" With %s dBm in and %s dB loss that is %.1f dBm (%.0f mW).", num(e.TxPowerDBm), num(e.FeederLossDB), e.EIRPDBm, e.EIRPmW)
 	}
 	rf += " EIRP limits depend on the band, the country and the licence; some rules allow only tens of milliwatts. Stay within the limit that applies to you, and keep people out of the main beam, in front of the open end, while transmitting."
-	return []Caution{
-		{CautionSolder, "Soldering fumes and lead",
+	return []Hazard{
+		{HazardSolder, "Soldering fumes and lead",
 			"Rosin flux fume causes occupational asthma: work with fume extraction or a fan drawing the plume away, and keep your head out of it. Lead in solder harms you when swallowed: no food or drink at the bench, and wash your hands after soldering. Lead-free solder is preferred."},
-		{CautionBurns, "Burns",
+		{HazardBurns, "Burns",
 			"The iron tip and a hot-air tool's nozzle are hotter than 300 °C, and the reflector, coax and wire stay hot for a minute after a joint. Keep the iron in its stand and switch tools off after use, hold parts in pliers or a clamp, and wear eye protection against flux and solder spatter."},
-		{CautionEpoxy, "Epoxy skin sensitisation",
+		{HazardEpoxy, "Epoxy skin sensitisation",
 			"Uncured epoxy resin and hardener are skin sensitisers: once sensitised, always sensitised. Wear nitrile gloves, mix in a ventilated place, and wash skin with soap and water, never with solvent."},
-		{CautionEyes, "Eye protection when cutting wire",
+		{HazardEyes, "Eye protection when cutting wire",
 			"Cut ends of hard or springy wire fly off at speed, and so do drilling chips. Wear safety glasses, cover the cut with a hand or a cloth, and hold the offcut when cutting."},
-		{CautionLaminate, "Laminate dust and no laser on FR-4",
+		{HazardLaminate, "Laminate dust and no laser on FR-4",
 			"If the reflector is cut from glass-epoxy laminate (FR-4), never cut it on a hobby CO2 laser: it gives off toxic brominated fumes and chars. Saw, shear or mill it with dust extraction and a dust mask, or order it from a circuit-board maker. Sheet copper or brass is a safer reflector."},
-		{CautionRF, "RF exposure and EIRP limits", rf},
+		{HazardRF, "RF exposure and EIRP limits", rf},
 	}
 }
 
 // pick returns the cautions with the given IDs, in that order.
-func pick(all []Caution, ids ...CautionID) []Caution {
-	var out []Caution
+func pick(all []Hazard, ids ...HazardID) []Hazard {
+	var out []Hazard
 	for _, id := range ids {
 		for _, c := range all {
 			if c.ID == id {
@@ -215,7 +219,7 @@ func pick(all []Caution, ids ...CautionID) []Caution {
 	return out
 }
 
-func steps(d *Design, cl *CutList, strip *Wedge, all []Caution) []Step {
+func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 	s := d.Spec
 	w := cl.Wire
 	cx := cl.Coax
@@ -261,7 +265,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Caution) []Step {
 			fmt.Sprintf("Cut a %s blank of %s, Ø%s mm wire. Roll it straight under a flat board, or stretch it slightly, until it lies flat on the bench without rocking.", mm(w.LengthMM), w.Material, num(w.DiameterMM)),
 			"Clean it bright with a fine abrasive pad and wipe it with alcohol. Enamelled wire must be stripped where it will be soldered.",
 			marks,
-		}, Cautions: pick(all, CautionEyes)},
+		}, Cautions: pick(all, HazardEyes)},
 		{Title: "Lock its end in the former", Text: []string{
 			"Push the lock end into the lock hole at the former's open (top) end, up to mark A or as far as the hole allows.",
 			"Check the hand mark on the former: this coil is " + d.Coil.Hand.String() + ", " + handWords(d.Coil.Hand) + ".",
@@ -283,37 +287,37 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Caution) []Step {
 		{Title: "Trim and form the feed lead", Text: []string{
 			fmt.Sprintf("Cut the lock end off at mark A, and cut the feed end %s beyond mark B. File the cut ends smooth.", mm(w.FeedLeadMM)),
 			lead,
-		}, Cautions: pick(all, CautionEyes)},
+		}, Cautions: pick(all, HazardEyes)},
 		{Title: "Prepare the reflector", Text: []string{
 			fmt.Sprintf("Cut the %s reflector from its 1:1 template, in %s mm sheet. Drill the Ø%.2f mm feed hole at the template's feed mark.%s", s.Reflector.Shape, num(s.Reflector.ThicknessMM), cx.FeedHoleMM, rodHole),
 			"Deburr both faces and clean the metal bright where it will be soldered.",
-		}, Cautions: pick(all, CautionLaminate, CautionEyes)},
+		}, Cautions: pick(all, HazardLaminate, HazardEyes)},
 		{Title: "Prepare and solder the coax", Text: []string{
 			"Slide the heat-shrink sleeve onto the cable first; it is shrunk in step 13.",
 			prep,
 			push + clearance,
-		}, Cautions: pick(all, CautionSolder, CautionBurns)},
+		}, Cautions: pick(all, HazardSolder, HazardBurns)},
 		{Title: "Solder the wedge to the first quarter turn", Text: []string{strip1, strip2},
-			Cautions: pick(all, CautionSolder, CautionBurns)},
+			Cautions: pick(all, HazardSolder, HazardBurns)},
 		{Title: "Solder the coil", Text: []string{
 			"Stand the coil over the reflector with its start beside the bare centre conductor and its axis over the reflector's centre.",
 			fmt.Sprintf("Solder the centre conductor to the feed lead and the strip's feed end. Check with a spacer that the first turn's wire centre is %s above the reflector and that no part of the wire or strip touches the reflector.", mm2(d.Coil.Z0)),
-		}, Cautions: pick(all, CautionSolder, CautionBurns)},
+		}, Cautions: pick(all, HazardSolder, HazardBurns)},
 		{Title: "Epoxy and support", Text: []string{
 			screw,
 			fmt.Sprintf("The turns clear the rod by about %s all round. Put two small epoxy beads per turn between the rod and the wire, on opposite sides, without moving the turns. Let it cure as the maker says.", mm(cl.Dowel.ClearanceMM)),
 			"Support rod: " + cl.Dowel.MaterialAdvice + ".",
-		}, Cautions: pick(all, CautionEpoxy)},
+		}, Cautions: pick(all, HazardEpoxy)},
 		{Title: "Heat-shrink", Text: []string{
 			"Slide the sleeve up against the reflector's back face, over the cable's joint, and shrink it evenly with the hot-air tool. Fix the cable to the reflector with the cable tie.",
-		}, Cautions: pick(all, CautionBurns)},
+		}, Cautions: pick(all, HazardBurns)},
 		{Title: "Final checks", Text: []string{
 			"Compare the antenna with the side view: hand, turn count, first turn height and overall height.",
 			"With the multimeter, check there is no continuity between the connector's centre pin and its body: the coil and strip must not touch the reflector.",
 			fmt.Sprintf("Calibrate the vector network analyser (VNA) at the end of its test cable, connect the antenna, point it at open sky away from metal, and sweep the return loss (S11) across %s.", band),
 			expect,
 			"Before transmitting, work out the EIRP and check the limit that applies to you.",
-		}, Cautions: pick(all, CautionRF)},
+		}, Cautions: pick(all, HazardRF)},
 	}
 	for i := range list {
 		list[i].Number = i + 1
