@@ -18,6 +18,7 @@ type Design struct {
 	Estimates   HelixEstimates
 	Warnings    []Warning
 	EIRP        *EIRPFigure // nil unless rf.tx_power_dbm is set
+	Patterns    *Patterns   // reflector and matching wedge
 }
 
 // Turn is one row of the per-turn table, evaluated at the turn's middle
@@ -88,6 +89,12 @@ func NewDesign(s *Spec) (*Design, error) {
 		d.EIRP = &EIRPFigure{TxPowerDBm: *s.RF.TxPowerDBm, FeederLossDB: s.RF.FeederLossDB, GainDBi: g, EIRPDBm: e, EIRPmW: DBmToMilliwatt(e)}
 	}
 	d.Warnings = d.warnings(cl)
+	p, warns, err := newPatterns(d)
+	if err != nil {
+		return nil, err
+	}
+	d.Patterns = p
+	d.Warnings = append(d.Warnings, warns...)
 	return d, nil
 }
 

@@ -16,10 +16,6 @@ import (
 	"math"
 )
 
-// FreeSpaceImpedance is the impedance of free space η0 in ohms.
-// Source: CODATA 2018 recommended values (η0 = μ0·c).
-const FreeSpaceImpedance = 376.730313668
-
 // hjZ01 is the Hammerstad–Jensen air-line impedance for width-to-height
 // ratio u with zero strip thickness.
 // Source: Hammerstad & Jensen, "Accurate models for microstrip

@@ -29,6 +29,8 @@ type Spec struct {
 	Dowel     DowelSpec     `toml:"dowel"`
 	Coax      CoaxSpec      `toml:"coax"`
 	RF        RFSpec        `toml:"rf"`
+	Wedge     WedgeSpec     `toml:"wedge"`
+	Cutting   CuttingSpec   `toml:"cutting"`
 
 	pos positions // where each key was written; empty for a Spec built in code
 }
@@ -93,6 +95,8 @@ func (s *Spec) Validate() error {
 	s.Dowel.validate(c, s)
 	s.Coax.validate(c, s)
 	s.RF.validate(c, s)
+	s.Wedge.validate(c, s)
+	s.Cutting.validate(c, s)
 	if len(c.errs) == 0 {
 		s.Coil.validateFit(c, s)
 	}

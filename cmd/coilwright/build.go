@@ -40,6 +40,7 @@ type outputStep struct {
 func buildSteps() []outputStep {
 	return []outputStep{
 		{"design report", writeDesign},
+		{"cut patterns", writePatterns},
 	}
 }
 
