@@ -23,6 +23,8 @@ type Report struct {
 	WireLengthMM            float64          `json:"wire_length_mm"`
 	MeanCircumferenceLambda float64          `json:"mean_circumference_lambda"`
 	MeanSpacingLambda       float64          `json:"mean_spacing_lambda"`
+	Wire                    WireReport       `json:"wire"`
+	Former                  FormerReport     `json:"former"`
 	Turns                   []TurnReport     `json:"turns"`
 	Estimates               Estimates        `json:"estimates"`
 	EIRP                    *EIRPReport      `json:"eirp,omitempty"`
@@ -41,6 +43,11 @@ type TurnReport struct {
 	HeightMM            float64 `json:"height_mm"`
 	WireMM              float64 `json:"wire_mm"`
 	InputResistanceOhm  float64 `json:"input_resistance_ohm"`
+	TargetDiameterMM    float64 `json:"target_diameter_mm"`    // relaxed centreline diameter aimed for (= diameter_mm)
+	FormerDiameterMM    float64 `json:"former_diameter_mm"`    // centreline diameter in the former's groove
+	PredictedDiameterMM float64 `json:"predicted_diameter_mm"` // relaxed diameter the springback model predicts from the former
+	SpringbackMM        float64 `json:"springback_mm"`         // predicted growth in diameter on release
+	ToleranceMM         float64 `json:"tolerance_mm"`          // ± inspection tolerance on the relaxed diameter
 }
 
 // Estimates is the report's electrical summary: the headline figures a
@@ -99,6 +106,8 @@ func (d *Design) Report() Report {
 			AxialRatioDB:       20 * math.Log10(e.AxialRatio.Value),
 			Formulas:           e.All(),
 		},
+		Wire:     d.wireReport(),
+		Former:   d.formerReport(),
 		Warnings: d.Warnings,
 	}
 	if r.Warnings == nil {
@@ -109,6 +118,8 @@ func (d *Design) Report() Report {
 			Index: t.Index, DiameterMM: t.DiameterMM, CircumferenceLambda: t.CircumferenceLambda,
 			PitchAngleDeg: t.PitchAngleDeg, SpacingMM: t.SpacingMM, HeightMM: t.HeightMM,
 			WireMM: t.WireMM, InputResistanceOhm: t.InputResistanceOhm,
+			TargetDiameterMM: t.DiameterMM, FormerDiameterMM: t.FormerDiameterMM, PredictedDiameterMM: t.PredictedDiameterMM,
+			SpringbackMM: t.SpringbackMM, ToleranceMM: t.ToleranceMM,
 		})
 	}
 	d.patternReports(&r)

@@ -100,6 +100,9 @@ func (s *Spec) Validate() error {
 	if len(c.errs) == 0 {
 		s.Coil.validateFit(c, s)
 	}
+	if len(c.errs) == 0 {
+		s.Wire.validateWinding(c, s)
+	}
 	return c.result()
 }
 

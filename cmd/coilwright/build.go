@@ -122,7 +122,7 @@ func slug(name string) string {
 	var b strings.Builder
 	dash := false
 	for _, r := range strings.ToLower(name) {
-		if unicode.IsLetter(r) && r < unicode.MaxASCII || unicode.IsDigit(r) {
+		if r < unicode.MaxASCII && (unicode.IsLetter(r) || unicode.IsDigit(r)) {
 			if dash && b.Len() > 0 {
 				b.WriteByte('-')
 			}

@@ -19,6 +19,7 @@ var reportFuncs = template.FuncMap{
 	"f3":    func(v float64) string { return fmt.Sprintf("%.3f", v) },
 	"g":     func(v float64) string { return fmt.Sprintf("%g", v) },
 	"deref": func(p *float64) float64 { return *p },
+	"pct":   func(v float64) float64 { return 100 * v },
 }
 
 // writeDesign writes design.md and design.json.
