@@ -2,10 +2,15 @@ package cam
 
 import (
 	"bytes"
+	"compress/zlib"
+	"encoding/binary"
+	"errors"
 	"fmt"
+	"io"
 	"math"
 	"os"
 	"os/exec"
+	"regexp"
 	"strconv"
 	"strings"
 	"testing"
@@ -183,5 +188,49 @@ func TestTemplateScaleBar(t *testing.T) {
 	_, l := runs(h / 2)
 	if len(l) != 1 || math.Abs(l[0]-ScaleBarMM*dpmm-2) > 1 {
 		t.Errorf("bar runs %v px, want one of about 502", l)
+	}
+}
+
+func TestPDFFontTimestampPinned(t *testing.T) {
+	// The embedded font's head.modified must equal head.created, and its
+	// checksums must hold: the whole font sums to 0xB1B0AFBA (OpenType
+	// specification, head table, checkSumAdjustment).
+	b := templateDoc(t, PageA4, PDFOptions{})
+	m := regexp.MustCompile(`/FontFile2 (\d+) 0 R`).FindSubmatch(b)
+	if m == nil {
+		t.Fatal("no embedded TrueType font")
+	}
+	obj := bytes.Index(b, []byte("\n"+string(m[1])+" 0 obj\n"))
+	data := b[bytes.Index(b[obj:], []byte(">>stream\n"))+obj+len(">>stream\n"):]
+	zr, err := zlib.NewReader(bytes.NewReader(data))
+	if err != nil {
+		t.Fatal(err)
+	}
+	font, err := io.ReadAll(zr)
+	if err != nil && !errors.Is(err, io.ErrUnexpectedEOF) {
+		t.Fatal(err)
+	}
+	if sum := sfntChecksum(font); sum != 0xB1B0AFBA {
+		t.Errorf("font checksum %#x, want 0xB1B0AFBA", sum)
+	}
+	num := int(binary.BigEndian.Uint16(font[4:]))
+	sawHead := false
+	for i := range num {
+		rec := font[12+16*i:]
+		off, ln := int(binary.BigEndian.Uint32(rec[8:])), int(binary.BigEndian.Uint32(rec[12:]))
+		table := append([]byte{}, font[off:min(len(font), off+(ln+3)&^3)]...)
+		if string(rec[:4]) == "head" {
+			sawHead = true
+			if !bytes.Equal(table[20:28], table[28:36]) {
+				t.Errorf("head.modified %x differs from head.created %x", table[28:36], table[20:28])
+			}
+			binary.BigEndian.PutUint32(table[8:], 0) // summed without the adjustment
+		}
+		if got, want := sfntChecksum(table), binary.BigEndian.Uint32(rec[4:]); got != want {
+			t.Errorf("table %q checksum %#x, directory says %#x", rec[:4], got, want)
+		}
+	}
+	if !sawHead {
+		t.Error("no head table")
 	}
 }
