@@ -2,18 +2,25 @@
 //
 // Pages are drawn with the canvas library (millimetres, y up) and
 // rendered by its PDF writer, one PDF page per canvas. That writer stamps
-// the wall-clock time as the creation date; WritePDF renders into memory,
-// replaces the date with the one asked for (or removes it), and shifts the
-// cross-reference offsets that follow, so the same pages always give the
-// same bytes. Fonts are embedded and subset by the canvas writer in the
-// order first used, which is deterministic.
+// the wall-clock time in two places: the document's creation date, and the
+// "modified" field of each embedded font's head table. WritePDF renders
+// into memory, then edits both: the date becomes the one asked for (or is
+// removed), and each font's modified time is set to its created time, with
+// the font's checksums recomputed and its stream recompressed. The
+// cross-reference offsets after each edit are shifted, so the same pages
+// always give the same bytes. Fonts are embedded and subset by the canvas
+// writer in the order first used, which is deterministic.
 
 package cam
 
 import (
 	"bytes"
+	"compress/zlib"
+	"encoding/binary"
 	"fmt"
 	"io"
+	"regexp"
+	"sort"
 	"strconv"
 	"strings"
 	"time"
@@ -100,7 +107,16 @@ func WritePDF(w io.Writer, pages []*canvas.Canvas, opt PDFOptions) error {
 	if !opt.Created.IsZero() {
 		date = opt.Created.UTC().Format("D:20060102150405Z")
 	}
-	out, err := setCreationDate(buf.Bytes(), date)
+	b := buf.Bytes()
+	edits, err := fontEdits(b)
+	if err != nil {
+		return err
+	}
+	de, err := dateEdit(b, date)
+	if err != nil {
+		return err
+	}
+	out, err := applyEdits(b, append(edits, de))
 	if err != nil {
 		return err
 	}
@@ -108,29 +124,154 @@ func WritePDF(w io.Writer, pages []*canvas.Canvas, opt PDFOptions) error {
 	return err
 }
 
-// setCreationDate replaces the document information dictionary's
-// /CreationDate entry with date (removing it when date is empty) and moves
-// every later cross-reference offset and startxref by the change in length.
-func setCreationDate(b []byte, date string) ([]byte, error) {
+// pdfEdit replaces bytes [start, end) of a rendered PDF with repl.
+type pdfEdit struct {
+	start, end int
+	repl       []byte
+}
+
+// dateEdit returns the edit that sets the document information
+// dictionary's /CreationDate to date, or removes it when date is empty.
+func dateEdit(b []byte, date string) (pdfEdit, error) {
 	key := []byte("/CreationDate(")
 	start := bytes.LastIndex(b, key)
 	if start < 0 {
-		return nil, fmt.Errorf("cam: PDF has no creation date to set")
+		return pdfEdit{}, fmt.Errorf("cam: PDF has no creation date to set")
 	}
 	n := bytes.IndexByte(b[start+len(key):], ')')
 	if n < 0 {
-		return nil, fmt.Errorf("cam: PDF creation date is not terminated")
+		return pdfEdit{}, fmt.Errorf("cam: PDF creation date is not terminated")
 	}
-	end := start + len(key) + n + 1
-	repl := ""
+	e := pdfEdit{start: start, end: start + len(key) + n + 1}
 	if date != "" {
-		repl = "/CreationDate(" + date + ")"
+		e.repl = []byte("/CreationDate(" + date + ")")
 	}
-	delta := len(repl) - (end - start)
-	out := make([]byte, 0, len(b)+delta)
-	out = append(out, b[:start]...)
-	out = append(out, repl...)
-	out = append(out, b[end:]...)
+	return e, nil
+}
+
+var (
+	fontFileRef  = regexp.MustCompile(`/FontFile[23]? (\d+) 0 R`)
+	streamLength = regexp.MustCompile(`/Length (\d+)`)
+)
+
+// fontEdits returns one edit per embedded font program, replacing its
+// stream with the same font whose head.modified equals head.created.
+func fontEdits(b []byte) ([]pdfEdit, error) {
+	var edits []pdfEdit
+	seen := map[string]bool{}
+	for _, m := range fontFileRef.FindAllSubmatch(b, -1) {
+		ref := string(m[1])
+		if seen[ref] {
+			continue
+		}
+		seen[ref] = true
+		head := []byte("\n" + ref + " 0 obj\n")
+		at := bytes.Index(b, head)
+		if at < 0 {
+			return nil, fmt.Errorf("cam: PDF font object %s not found", ref)
+		}
+		dictStart := at + len(head)
+		sm := bytes.Index(b[dictStart:], []byte(">>stream\n"))
+		if sm < 0 {
+			return nil, fmt.Errorf("cam: PDF font object %s has no stream", ref)
+		}
+		dict := b[dictStart : dictStart+sm+2]
+		lm := streamLength.FindSubmatch(dict)
+		if lm == nil || !bytes.Contains(dict, []byte("/Filter/FlateDecode")) {
+			return nil, fmt.Errorf("cam: PDF font object %s is not a compressed stream of known length", ref)
+		}
+		n, _ := strconv.Atoi(string(lm[1]))
+		dataStart := dictStart + sm + len(">>stream\n")
+		if dataStart+n > len(b) {
+			return nil, fmt.Errorf("cam: PDF font object %s runs past the end", ref)
+		}
+		zr, err := zlib.NewReader(bytes.NewReader(b[dataStart : dataStart+n]))
+		if err != nil {
+			return nil, err
+		}
+		font, err := io.ReadAll(zr)
+		if err != nil {
+			return nil, err
+		}
+		if err := pinFontModified(font); err != nil {
+			return nil, err
+		}
+		var z bytes.Buffer
+		zw := zlib.NewWriter(&z)
+		zw.Write(font)
+		if err := zw.Close(); err != nil {
+			return nil, err
+		}
+		newDict := streamLength.ReplaceAll(dict, []byte(fmt.Sprintf("/Length %d", z.Len())))
+		repl := append(append(newDict, "stream\n"...), z.Bytes()...)
+		edits = append(edits, pdfEdit{start: dictStart, end: dataStart + n, repl: repl})
+	}
+	return edits, nil
+}
+
+// pinFontModified sets an SFNT font's head.modified to head.created and
+// recomputes the head table's checksum and the font's checkSumAdjustment.
+// Source: OpenType specification, "head — Font header table" and "Table
+// directory" (checksums are the sum of big-endian uint32 words; the
+// adjustment is 0xB1B0AFBA less the whole font's sum).
+func pinFontModified(f []byte) error {
+	if len(f) < 12 {
+		return fmt.Errorf("cam: embedded font too short")
+	}
+	num := int(binary.BigEndian.Uint16(f[4:]))
+	for i := range num {
+		rec := f[12+16*i:]
+		if len(rec) < 16 || string(rec[:4]) != "head" {
+			continue
+		}
+		off, ln := int(binary.BigEndian.Uint32(rec[8:])), int(binary.BigEndian.Uint32(rec[12:]))
+		if ln < 36 || off+ln > len(f) {
+			return fmt.Errorf("cam: embedded font's head table is damaged")
+		}
+		h := f[off : off+ln]
+		copy(h[28:36], h[20:28])
+		binary.BigEndian.PutUint32(h[8:], 0)
+		binary.BigEndian.PutUint32(rec[4:], sfntChecksum(f[off:min(len(f), off+(ln+3)&^3)]))
+		binary.BigEndian.PutUint32(h[8:], 0xB1B0AFBA-sfntChecksum(f))
+		return nil
+	}
+	return fmt.Errorf("cam: embedded font has no head table")
+}
+
+// sfntChecksum sums b as big-endian uint32 words, zero-padding the tail.
+func sfntChecksum(b []byte) uint32 {
+	var s uint32
+	for i := 0; i < len(b); i += 4 {
+		var w [4]byte
+		copy(w[:], b[i:])
+		s += binary.BigEndian.Uint32(w[:])
+	}
+	return s
+}
+
+// applyEdits applies non-overlapping edits and moves every later
+// cross-reference offset, and startxref, by the change in length before
+// it.
+func applyEdits(b []byte, edits []pdfEdit) ([]byte, error) {
+	sort.Slice(edits, func(i, j int) bool { return edits[i].start < edits[j].start })
+	var out []byte
+	prev := 0
+	for _, e := range edits {
+		if e.start < prev {
+			return nil, fmt.Errorf("cam: overlapping PDF edits")
+		}
+		out = append(append(out, b[prev:e.start]...), e.repl...)
+		prev = e.end
+	}
+	out = append(out, b[prev:]...)
+	shift := func(off int) int {
+		for _, e := range edits {
+			if e.start < off {
+				off += len(e.repl) - (e.end - e.start)
+			}
+		}
+		return off
+	}
 
 	x := bytes.LastIndex(out, []byte("\nxref\n"))
 	if x < 0 {
@@ -144,6 +285,9 @@ func setCreationDate(b []byte, date string) ([]byte, error) {
 	}
 	entries := line[nl+1:]
 	const entryLen = 20 // "nnnnnnnnnn ggggg n \n"
+	if len(entries) < count*entryLen {
+		return nil, fmt.Errorf("cam: cross-reference table is cut short")
+	}
 	for i := range count {
 		e := entries[i*entryLen : (i+1)*entryLen]
 		if e[17] != 'n' {
@@ -153,9 +297,7 @@ func setCreationDate(b []byte, date string) ([]byte, error) {
 		if err != nil {
 			return nil, fmt.Errorf("cam: bad cross-reference entry %q", e)
 		}
-		if off > start {
-			copy(e[:10], fmt.Sprintf("%010d", off+delta))
-		}
+		copy(e[:10], fmt.Sprintf("%010d", shift(off)))
 	}
 	sx := bytes.LastIndex(out, []byte("startxref\n"))
 	if sx < 0 {
@@ -168,6 +310,6 @@ func setCreationDate(b []byte, date string) ([]byte, error) {
 		return nil, fmt.Errorf("cam: bad startxref %q", tail[:nl])
 	}
 	res := append([]byte{}, out[:sx+len("startxref\n")]...)
-	res = strconv.AppendInt(res, int64(pos+delta), 10)
+	res = strconv.AppendInt(res, int64(shift(pos)), 10)
 	return append(res, tail[nl:]...), nil
 }

@@ -43,7 +43,7 @@ type Hazard struct {
 type Step struct {
 	Number   int
 	Title    string
-	Text     []string  // paragraphs, in order
+	Text     []string // paragraphs, in order
 	Cautions []Hazard // repeated from the cautions section
 }
 
@@ -84,12 +84,15 @@ type BuildSheet struct {
 // published source).
 const ReturnLossTargetDB = 10.0
 
-// NewBuildSheet assembles the build sheet of a design from its cut list
-// and its matching strip (nil when there is none). specSHA256 is the hex
-// hash of the spec's bytes, printed on the cover.
-func NewBuildSheet(d *Design, cl *CutList, strip *Wedge, specSHA256 string) *BuildSheet {
+// NewBuildSheet assembles the build sheet of a design from its cut list.
+// specSHA256 is the hex hash of the spec's bytes, printed on the cover.
+func NewBuildSheet(d *Design, cl *CutList, specSHA256 string) *BuildSheet {
 	s := d.Spec
-	b := &BuildSheet{Kit: s.Kit, SpecSHA256: specSHA256, Hand: d.Coil.Hand.String(), Paper: s.Stock.Paper,
+	var strip *Wedge
+	if d.Patterns != nil {
+		strip = d.Patterns.Wedge
+	}
+	b := &BuildSheet{Kit: s.Kit, SpecSHA256: specSHA256, Hand: d.Coil.Hand.String(), Paper: s.Cutting.Paper,
 		Quantity: s.Quantity, Cut: cl, Inspection: d.InspectionTable()}
 	b.HandWords = handWords(d.Coil.Hand)
 	b.View = d.SideView(cl)

@@ -16,7 +16,7 @@ func demoSheet(t *testing.T, name string) (*Design, *BuildSheet) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	return d, NewBuildSheet(d, cl, nil, strings.Repeat("ab", 32))
+	return d, NewBuildSheet(d, cl, strings.Repeat("ab", 32))
 }
 
 func TestEveryCautionRepeatedAtAStep(t *testing.T) {

@@ -24,6 +24,8 @@ type Design struct {
 	Former Coil
 	// Wire is the wire, its (calibrated) material and springback model.
 	Wire WireDesign
+	// Patterns is the reflector plate and the matching wedge.
+	Patterns *Patterns
 }
 
 // Turn is one row of the per-turn table, evaluated at the turn's middle
@@ -111,6 +113,12 @@ func NewDesign(s *Spec) (*Design, error) {
 		return nil, err
 	}
 	d.Warnings = append(d.Warnings, sw...)
+	p, warns, err := newPatterns(d)
+	if err != nil {
+		return nil, err
+	}
+	d.Patterns = p
+	d.Warnings = append(d.Warnings, warns...)
 	return d, nil
 }
 

@@ -261,10 +261,21 @@ func (r *Reflector) draw() {
 		Height: textH * 0.75, Angle: in.FeedAngle, Value: fmt.Sprintf("%.1f°", deg),
 	})
 	if label := joinLabel(in.Label, in.Hand); label != "" {
-		d.Add(LayerMark, geom.Text{At: polar(cross+textH*1.5, in.FeedAngle+math.Pi), Height: textH, Angle: in.FeedAngle, Value: label, Align: geom.AlignCenter})
+		// The name runs across the plate a quarter of its size below the
+		// centre (opposite side from the feed's quarter), sized so its
+		// approximate width fits within 60 % of the plate.
+		n := float64(len([]rune(label)))
+		h := math.Min(textH, 0.6*in.Size/(textAdvance*n))
+		at := polar(in.Size/4, in.FeedAngle-math.Pi/2)
+		d.Add(LayerMark, geom.Text{At: at, Height: h, Angle: in.FeedAngle, Value: label, Align: geom.AlignCenter})
 	}
 	r.Drawing = d
 }
+
+// textAdvance is the mean width of a character as a fraction of the cap
+// height, to size text without the font. Common practice (no published
+// source): about 0.6–0.75 for sans-serif capitals and digits.
+const textAdvance = 0.75
 
 // joinLabel joins the kit name and hand tag with a space, skipping empties.
 func joinLabel(a, b string) string {

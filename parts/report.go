@@ -5,30 +5,32 @@ import "math"
 // Report is the design summary written to design.json and design.md. Field
 // names carry their units; it is a plain value derived from a Design.
 type Report struct {
-	Kit                     string       `json:"kit"`
-	FrequencyMHz            float64      `json:"frequency_mhz"`
-	BandLowMHz              *float64     `json:"band_low_mhz,omitempty"`
-	BandHighMHz             *float64     `json:"band_high_mhz,omitempty"`
-	WavelengthMM            float64      `json:"wavelength_mm"`
-	Quantity                int          `json:"quantity"`
-	Shape                   string       `json:"shape"`
-	Hand                    string       `json:"hand"`
-	Feed                    string       `json:"feed"`
-	PitchMode               string       `json:"pitch_mode"`
-	TurnCount               float64      `json:"turn_count"`
-	BaseDiameterMM          float64      `json:"base_diameter_mm"`
-	TopDiameterMM           float64      `json:"top_diameter_mm"`
-	FirstTurnHeightMM       float64      `json:"first_turn_height_mm"`
-	AxialLengthMM           float64      `json:"axial_length_mm"`
-	WireLengthMM            float64      `json:"wire_length_mm"`
-	MeanCircumferenceLambda float64      `json:"mean_circumference_lambda"`
-	MeanSpacingLambda       float64      `json:"mean_spacing_lambda"`
-	Wire                    WireReport   `json:"wire"`
-	Former                  FormerReport `json:"former"`
-	Turns                   []TurnReport `json:"turns"`
-	Estimates               Estimates    `json:"estimates"`
-	EIRP                    *EIRPReport  `json:"eirp,omitempty"`
-	Warnings                []Warning    `json:"warnings"`
+	Kit                     string           `json:"kit"`
+	FrequencyMHz            float64          `json:"frequency_mhz"`
+	BandLowMHz              *float64         `json:"band_low_mhz,omitempty"`
+	BandHighMHz             *float64         `json:"band_high_mhz,omitempty"`
+	WavelengthMM            float64          `json:"wavelength_mm"`
+	Quantity                int              `json:"quantity"`
+	Shape                   string           `json:"shape"`
+	Hand                    string           `json:"hand"`
+	Feed                    string           `json:"feed"`
+	PitchMode               string           `json:"pitch_mode"`
+	TurnCount               float64          `json:"turn_count"`
+	BaseDiameterMM          float64          `json:"base_diameter_mm"`
+	TopDiameterMM           float64          `json:"top_diameter_mm"`
+	FirstTurnHeightMM       float64          `json:"first_turn_height_mm"`
+	AxialLengthMM           float64          `json:"axial_length_mm"`
+	WireLengthMM            float64          `json:"wire_length_mm"`
+	MeanCircumferenceLambda float64          `json:"mean_circumference_lambda"`
+	MeanSpacingLambda       float64          `json:"mean_spacing_lambda"`
+	Wire                    WireReport       `json:"wire"`
+	Former                  FormerReport     `json:"former"`
+	Turns                   []TurnReport     `json:"turns"`
+	Estimates               Estimates        `json:"estimates"`
+	EIRP                    *EIRPReport      `json:"eirp,omitempty"`
+	Reflector               *ReflectorReport `json:"reflector,omitempty"`
+	Wedge                   *WedgeReport     `json:"wedge,omitempty"`
+	Warnings                []Warning        `json:"warnings"`
 }
 
 // TurnReport is one row of the per-turn table in the report.
@@ -120,6 +122,7 @@ func (d *Design) Report() Report {
 			SpringbackMM: t.SpringbackMM, ToleranceMM: t.ToleranceMM,
 		})
 	}
+	d.patternReports(&r)
 	if d.EIRP != nil {
 		f := d.EIRP
 		r.EIRP = &EIRPReport{TxPowerDBm: f.TxPowerDBm, FeederLossDB: f.FeederLossDB, GainDBi: f.GainDBi, EIRPDBm: f.EIRPDBm, EIRPmW: f.EIRPmW, Caution: EIRPCaution}

@@ -30,6 +30,8 @@ type Spec struct {
 	Coax      CoaxSpec      `toml:"coax"`
 	RF        RFSpec        `toml:"rf"`
 	Stock     StockSpec     `toml:"stock"`
+	Wedge     WedgeSpec     `toml:"wedge"`
+	Cutting   CuttingSpec   `toml:"cutting"`
 
 	pos positions // where each key was written; empty for a Spec built in code
 }
@@ -95,6 +97,8 @@ func (s *Spec) Validate() error {
 	s.Coax.validate(c, s)
 	s.RF.validate(c, s)
 	s.Stock.validate(c, s)
+	s.Wedge.validate(c, s)
+	s.Cutting.validate(c, s)
 	if len(c.errs) == 0 {
 		s.Coil.validateFit(c, s)
 		s.Dowel.validateFit(c, s)

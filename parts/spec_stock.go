@@ -1,14 +1,14 @@
 package parts
 
-// StockSpec is the [stock] table: the stock a batch is cut from, the cuts'
-// losses and the paper the build sheet is printed on.
+// StockSpec is the [stock] table: the rod stock a batch is cut from and
+// the cuts' losses. The build sheet prints on [cutting] paper, like the
+// templates it carries.
 type StockSpec struct {
 	WireRodMM    float64 `toml:"wire_rod_mm"`    // straight wire rod length as bought, default 1000 mm
 	DowelRodMM   float64 `toml:"dowel_rod_mm"`   // support rod length as bought, default 1000 mm
 	WireKerfMM   float64 `toml:"wire_kerf_mm"`   // wire lost per cut, default 0.5 mm
 	DowelKerfMM  float64 `toml:"dowel_kerf_mm"`  // saw kerf per dowel cut, default 1.5 mm
 	EndTrimMM    float64 `toml:"end_trim_mm"`    // damaged end squared off each rod, default 5 mm
-	Paper        string  `toml:"paper"`          // build-sheet paper: "A4" or "Letter", default "A4"
 	SolderWireMM float64 `toml:"solder_wire_mm"` // solder wire diameter, default 0.8 mm
 }
 
@@ -42,5 +42,4 @@ func (st *StockSpec) validate(c *checker, _ *Spec) {
 	c.within("stock.dowel_kerf_mm", st.DowelKerfMM, 0, 10, "mm")
 	c.within("stock.end_trim_mm", st.EndTrimMM, 0, 100, "mm")
 	c.within("stock.solder_wire_mm", st.SolderWireMM, 0.2, 3, "mm")
-	c.oneOf("stock.paper", &st.Paper, "A4", "A4", "Letter")
 }

@@ -41,6 +41,7 @@ func buildSteps() []outputStep {
 	return []outputStep{
 		{"design report", writeDesign},
 		{"cut list and build sheet", writeSheet},
+		{"cut patterns", writePatterns},
 	}
 }
 

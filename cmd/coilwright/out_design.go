@@ -25,6 +25,9 @@ var reportFuncs = template.FuncMap{
 // writeDesign writes design.md and design.json.
 func writeDesign(ctx *buildContext) error {
 	r := ctx.spec.Design.Report()
+	if err := addPanels(ctx.spec.Design, &r); err != nil {
+		return err
+	}
 	if err := ctx.out.Add("design.json", func(w io.Writer) error {
 		enc := json.NewEncoder(w)
 		enc.SetIndent("", "  ")

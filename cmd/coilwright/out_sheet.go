@@ -6,6 +6,7 @@ import (
 	"io"
 	"os"
 	"strconv"
+	"strings"
 	"text/template"
 
 	"coilwright/cam"
@@ -43,8 +44,12 @@ func writeSheet(ctx *buildContext) error {
 	if err := ctx.out.Add("cutlist.md", func(w io.Writer) error { return cutlistTmpl.Execute(w, view) }); err != nil {
 		return err
 	}
+	cps, err := cutParts(d)
+	if err != nil {
+		return err
+	}
 	if d.Spec.Quantity > 1 {
-		bp, err := newBatchPlan(d, cl)
+		bp, err := newBatchPlan(d, cl, cps)
 		if err != nil {
 			return err
 		}
@@ -55,11 +60,7 @@ func writeSheet(ctx *buildContext) error {
 			return err
 		}
 	}
-	strip, tmpl, err := sheetTemplates(d, cl)
-	if err != nil {
-		return err
-	}
-	sheet := parts.NewBuildSheet(d, cl, strip, ctx.spec.SHA256())
+	sheet := parts.NewBuildSheet(d, cl, ctx.spec.SHA256())
 	if err := ctx.out.Add("build-sheet.md", func(w io.Writer) error { return sheetTmpl.Execute(w, sheet) }); err != nil {
 		return err
 	}
@@ -71,7 +72,11 @@ func writeSheet(ctx *buildContext) error {
 	if err != nil {
 		return usageError{err}
 	}
-	tpages, err := cam.TemplatePages(tmpl, cam.TemplateOptions{Page: page, Heading: sheet.Kit + " — 1:1 templates (print at 100 %)"})
+	var warns []string
+	if d.Patterns.LaserHalogen {
+		warns = append(warns, parts.LaserHalogenWarning)
+	}
+	tpages, err := cam.TemplatePages(sheetTemplates(cps), cam.TemplateOptions{Page: page, Heading: sheet.Kit + ": 1:1 templates (" + sheet.Hand + "), print at 100 %", Warnings: warns})
 	if err != nil {
 		return err
 	}
@@ -113,7 +118,15 @@ type batchPlan struct {
 	Kit      string
 	Quantity int
 	Stocks   []batchStock
+	Sheets   []batchSheet
 	Buy      []parts.SheetRow
+}
+
+// batchSheet is the nesting of one flat part on stock sheets.
+type batchSheet struct {
+	Part              string
+	PerSheet, Sheets  int
+	WidthMM, HeightMM float64
 }
 
 // batchStock is the cutting plan of one stock.
@@ -132,7 +145,7 @@ type rodPattern struct {
 	OffcutMM float64
 }
 
-func newBatchPlan(d *parts.Design, cl *parts.CutList) (*batchPlan, error) {
+func newBatchPlan(d *parts.Design, cl *parts.CutList, cps []cutPart) (*batchPlan, error) {
 	s := d.Spec
 	n := s.Quantity
 	bp := &batchPlan{Kit: s.Kit, Quantity: n}
@@ -163,6 +176,15 @@ func newBatchPlan(d *parts.Design, cl *parts.CutList) (*batchPlan, error) {
 		{Label: "Heat-shrink", Value: fmt.Sprintf("%.0f mm of Ø%.1f mm 2:1 sleeve", nf*cl.Sleeve.LengthMM, cl.Sleeve.SuppliedMM)},
 		{Label: "Solder", Value: fmt.Sprintf("%.0f mm of Ø%.1f mm wire", nf*cl.Solder.Amount, s.Stock.SolderWireMM)},
 		{Label: "Epoxy", Value: fmt.Sprintf("%.1f mL mixed", nf*cl.Epoxy.Amount)},
+	}
+	for _, c := range cps {
+		bp.Sheets = append(bp.Sheets, batchSheet{Part: c.title, PerSheet: c.nest.PerSheet, Sheets: c.nest.Sheets,
+			WidthMM: c.sheet.Width, HeightMM: c.sheet.Height})
+		mat := d.Patterns.Material.Name
+		if c.name == "wedge" {
+			mat = d.Patterns.WedgeMaterial.Name
+		}
+		bp.Buy = append(bp.Buy, parts.SheetRow{Label: c.title + " sheets", Value: fmt.Sprintf("%d × %g × %g mm %s (%d parts per sheet)", c.nest.Sheets, c.sheet.Width, c.sheet.Height, mat, c.nest.PerSheet)})
 	}
 	for _, h := range cl.Hardware {
 		bp.Buy = append(bp.Buy, parts.SheetRow{Label: "Hardware", Value: fmt.Sprintf("%d × %s", n*h.Count, h.Item)})
@@ -200,6 +222,9 @@ func writeBatchCSV(w io.Writer, bp *batchPlan) error {
 			cw.Write([]string{"cut", st.Item, strconv.Itoa(i + 1), f(p.Rod.Length), strconv.Itoa(len(r.Pieces)), f(st.PieceMM), f(p.Rod.Kerf), f(r.Offcut), "", "", "", "", ""})
 		}
 		cw.Write([]string{"total", st.Item, "", f(p.Rod.Length), strconv.Itoa(p.Pieces), f(st.PieceMM), f(p.Rod.Kerf), "", strconv.Itoa(len(p.Rods)), f(p.Bought), f(p.Demand), f(p.Waste), f(p.WastePercent())})
+	}
+	for _, sh := range bp.Sheets {
+		cw.Write([]string{"sheets", strings.ToLower(sh.Part), "", "", strconv.Itoa(bp.Quantity), "", "", "", strconv.Itoa(sh.Sheets), "", "", "", ""})
 	}
 	cw.Flush()
 	return cw.Error()

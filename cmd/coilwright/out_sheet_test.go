@@ -167,7 +167,7 @@ func TestBuildSheetPaperSize(t *testing.T) {
 		{"Letter", "612 x 792 pts (letter)"},
 	} {
 		t.Run(c.paper, func(t *testing.T) {
-			spec := demoText(t, templates.DefaultDemo) + "\n[stock]\npaper = \"" + c.paper + "\"\n"
+			spec := demoText(t, templates.DefaultDemo) + "\n[cutting]\npaper = \"" + c.paper + "\"\n"
 			dir := buildSpec(t, spec)
 			info := runTool(t, "pdfinfo", filepath.Join(dir, "build-sheet.pdf"))
 			m := regexp.MustCompile(`(?m)^Page size:\s+(.*)$`).FindStringSubmatch(info)

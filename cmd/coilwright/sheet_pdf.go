@@ -2,7 +2,6 @@ package main
 
 import (
 	"fmt"
-	"math"
 	"strings"
 
 	"coilwright/cam"
@@ -10,56 +9,15 @@ import (
 	"coilwright/parts"
 )
 
-// Matching-strip inputs for the build sheet's template. Common practice (no
-// published source): 0.3 mm brass or copper shim, tapered exponentially
-// from 50 Ω at the feed to the coil's input resistance over the first
-// quarter turn.
-const (
-	stripThicknessMM = 0.3
-	feedOhm          = 50.0
-)
-
-// sheetTemplates works out the matching strip and draws the 1:1 templates
-// the build sheet ends with: the reflector and the strip.
-func sheetTemplates(d *parts.Design, cl *parts.CutList) (*parts.Wedge, []cam.TemplatePart, error) {
-	s := d.Spec
-	strip, err := parts.NewWedge(parts.WedgeInput{
-		Path: d.Coil.Point, Span: math.Pi / 2, WireDiameter: s.Wire.DiameterMM, Thickness: stripThicknessMM,
-		Wavelength: d.Wavelength,
-		Taper:      parts.Taper{Kind: parts.TaperExponential, Z0: feedOhm, ZL: d.Estimates.InputResistance.Value},
-	})
-	if err != nil {
-		return nil, nil, err
+// sheetTemplates returns the 1:1 template parts the build sheet ends
+// with: the same reflector and wedge, notes and labels as templates.pdf,
+// drawn as designed (no kerf).
+func sheetTemplates(cps []cutPart) []cam.TemplatePart {
+	out := make([]cam.TemplatePart, len(cps))
+	for i, c := range cps {
+		out[i] = cam.TemplatePart{Title: c.title, Notes: append(append([]string{}, c.notes...), c.label), Drawing: c.nominal}
 	}
-	shape := parts.ReflectorDisc
-	if s.Reflector.Shape == "square" {
-		shape = parts.ReflectorSquare
-	}
-	refl, err := parts.NewReflector(parts.ReflectorInput{
-		Shape: shape, Size: s.Reflector.SizeMM(d.Wavelength),
-		FeedRadius: d.Coil.StartRadius,
-		Feed:       parts.FeedHole{Kind: parts.FeedCoax, Diameter: cl.Coax.FeedHoleMM},
-		Hand:       d.Coil.Hand.String(),
-	})
-	if err != nil {
-		return nil, nil, err
-	}
-	rd := refl.Drawing
-	notes := []string{fmt.Sprintf("%s, %s mm sheet. Feed hole Ø%.2f mm at the coil's start.", s.Reflector.Shape, num(s.Reflector.ThicknessMM), cl.Coax.FeedHoleMM)}
-	for _, h := range cl.Hardware {
-		if strings.HasPrefix(h.Item, "M3") {
-			rd.Add(parts.LayerCut, geom.Circle{Radius: 1.6})
-			notes = append(notes, "Centre hole Ø3.2 mm for the support rod's screw.")
-		}
-	}
-	tmpl := []cam.TemplatePart{
-		{Title: "Reflector", Notes: notes, Drawing: rd},
-		{Title: "Matching strip (wedge)", Notes: []string{
-			fmt.Sprintf("%s mm brass or copper shim, %.1f mm long, %.2f mm wide at the feed (tick) to %.2f mm.", num(stripThicknessMM), strip.Length, strip.FeedWidth, strip.EndWidth),
-			"Solder under the first quarter turn, wide end at the feed.",
-		}, Drawing: strip.Drawing()},
-	}
-	return strip, tmpl, nil
+	return out
 }
 
 // num formats a number compactly.

@@ -1,0 +1,107 @@
+package cam
+
+import (
+	"bytes"
+	"encoding/xml"
+	"math"
+	"os/exec"
+	"regexp"
+	"strconv"
+	"testing"
+
+	"coilwright/cam/geom"
+)
+
+// svgDoc is the part of an SVG file the tests read back.
+type svgDoc struct {
+	Width  string `xml:"width,attr"`
+	Height string `xml:"height,attr"`
+	Groups []struct {
+		ID      string `xml:"id,attr"`
+		Circles []struct {
+			R string `xml:"r,attr"`
+		} `xml:"circle"`
+		Paths []struct {
+			D string `xml:"d,attr"`
+		} `xml:"path"`
+	} `xml:"g"`
+}
+
+func TestWriteSVG(t *testing.T) {
+	var buf bytes.Buffer
+	if err := WriteSVG(&buf, plateDrawing(), SVGOptions{Title: "Test plate", Comments: []string{"for milling -- or shearing"}}); err != nil {
+		t.Fatal(err)
+	}
+	golden(t, "plate.svg", buf.Bytes())
+	var doc svgDoc
+	if err := xml.Unmarshal(buf.Bytes(), &doc); err != nil {
+		t.Fatal(err)
+	}
+	// 50 mm disc plus DefaultSVGMargin each side.
+	if doc.Width != "54mm" || doc.Height != "54mm" {
+		t.Errorf("page %s × %s, want 54mm × 54mm", doc.Width, doc.Height)
+	}
+	if len(doc.Groups) != 2 || doc.Groups[0].ID != "CUT" || doc.Groups[1].ID != "MARK" {
+		t.Fatalf("groups %+v", doc.Groups)
+	}
+	if c := doc.Groups[0].Circles; len(c) != 2 || c[0].R != "25" {
+		t.Errorf("cut circles %+v", c)
+	}
+	if n := len(doc.Groups[1].Paths); n < 3+5 {
+		t.Errorf("%d mark paths, want 3 plus the letters' outlines", n)
+	}
+	t.Run("sheet frame", func(t *testing.T) {
+		var b bytes.Buffer
+		frame := geom.Box2{Max: geom.Vec2{X: 300, Y: 200}}
+		if err := WriteSVG(&b, plateDrawing(), SVGOptions{Frame: &frame}); err != nil {
+			t.Fatal(err)
+		}
+		if !bytes.Contains(b.Bytes(), []byte(`width="300mm" height="200mm" viewBox="0 0 300 200"`)) {
+			t.Errorf("frame not used:\n%.300s", b.String())
+		}
+	})
+}
+
+// pdfPageSize matches pdfinfo's page size line.
+var pdfPageSize = regexp.MustCompile(`Page size:\s+([0-9.]+) x ([0-9.]+) pts`)
+
+func TestSVGExternal(t *testing.T) {
+	rsvg := needTool(t, "rsvg-convert")
+	pdfinfo := needTool(t, "pdfinfo")
+	for _, tc := range []struct {
+		name string
+		d    geom.Drawing
+		opt  SVGOptions
+		w, h float64 // expected page in mm
+	}{
+		{"part framed by its bounds", plateDrawing(), SVGOptions{}, 54, 54},
+		{"sheet frame", plateDrawing(), SVGOptions{Frame: &geom.Box2{Max: geom.Vec2{X: 300, Y: 200}}}, 300, 200},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			var buf bytes.Buffer
+			if err := WriteSVG(&buf, tc.d, tc.opt); err != nil {
+				t.Fatal(err)
+			}
+			svg := writeTempFile(t, "p.svg", buf.Bytes())
+			pdf := svg + ".pdf"
+			if out, err := exec.Command(rsvg, "-f", "pdf", "-o", pdf, svg).CombinedOutput(); err != nil {
+				t.Fatalf("rsvg-convert: %v\n%s", err, out)
+			}
+			out, err := exec.Command(pdfinfo, pdf).Output()
+			if err != nil {
+				t.Fatal(err)
+			}
+			m := pdfPageSize.FindSubmatch(out)
+			if m == nil {
+				t.Fatalf("no page size in\n%s", out)
+			}
+			w, _ := strconv.ParseFloat(string(m[1]), 64)
+			h, _ := strconv.ParseFloat(string(m[2]), 64)
+			// 1 mm = 72/25.4 pt (PDF user units); pdfinfo prints 3 decimals.
+			const ptTol = 0.002
+			if math.Abs(w-tc.w*72/25.4) > ptTol || math.Abs(h-tc.h*72/25.4) > ptTol {
+				t.Errorf("rendered page %.3f × %.3f pt, want %.3f × %.3f", w, h, tc.w*72/25.4, tc.h*72/25.4)
+			}
+		})
+	}
+}
