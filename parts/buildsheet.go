@@ -251,6 +251,14 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 			mm(cx.CutMM), mm(cx.DielectricMM+cx.CentreMM+cx.FlareMM), mm(cx.DielectricMM+cx.CentreMM), mm(cx.FlareMM), mm(cx.CentreMM))
 		push = "Push the cable up through the feed hole from behind until the braid meets the back face and the dielectric stands " + mm(cx.ProudMM) + " proud of the top face. Fan the braid out flat round the hole and solder it to the back face."
 	}
+	coaxSteps := []string{"Slide the heat-shrink sleeve onto the cable first; it is shrunk in step 13.", prep, push + clearance}
+	if cx.Jack != "" {
+		coaxSteps = []string{
+			fmt.Sprintf("Mount the SMA jack (%s) in the feed cut-out from behind and tighten it. Its centre contact must reach %s above the top face, the wire's centre height: extend it with a short piece of the coil wire soldered to it if it is shorter, keeping it clear of the hole's edge.", cx.Jack, mm(cx.CentreMM)),
+			fmt.Sprintf("The feed cable is a %s jumper with a plug at each end; slide the heat-shrink sleeve onto it before fitting the second plug.", mm(cx.FinishedMM)),
+			"Solder the jack's body to the reflector round the cut-out where the connector's maker allows it." + clearance,
+		}
+	}
 	lead := fmt.Sprintf("At the coil's start, bend the feed lead straight down, parallel to the axis: it is %s long and ends just above the coax's dielectric.", mm(w.FeedLeadMM))
 	if w.FeedLeadMM < 2*w.DiameterMM {
 		lead = fmt.Sprintf("The wire's start sits only %s above the coax's dielectric, too little to bend a lead: leave the start straight; the centre conductor is soldered to its side in step 11.", mm(w.FeedLeadMM))
@@ -295,11 +303,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 			fmt.Sprintf("Cut the %s reflector from its 1:1 template, in %s mm sheet. Drill the Ø%.2f mm feed hole at the template's feed mark.%s", s.Reflector.Shape, num(s.Reflector.ThicknessMM), cx.FeedHoleMM, rodHole),
 			"Deburr both faces and clean the metal bright where it will be soldered.",
 		}, Cautions: pick(all, HazardLaminate, HazardEyes)},
-		{Title: "Prepare and solder the coax", Text: []string{
-			"Slide the heat-shrink sleeve onto the cable first; it is shrunk in step 13.",
-			prep,
-			push + clearance,
-		}, Cautions: pick(all, HazardSolder, HazardBurns)},
+		{Title: "Prepare and solder the coax", Text: coaxSteps, Cautions: pick(all, HazardSolder, HazardBurns)},
 		{Title: "Solder the wedge to the first quarter turn", Text: []string{strip1, strip2},
 			Cautions: pick(all, HazardSolder, HazardBurns)},
 		{Title: "Solder the coil", Text: []string{

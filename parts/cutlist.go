@@ -111,13 +111,17 @@ type CoaxCut struct {
 	CentreMM     float64 // bare centre conductor beyond the dielectric
 	DielectricMM float64 // bare dielectric beyond the outer conductor: ProudMM, plus ThroughMM for a braid
 	FlareMM      float64 // braid fanned out round the hole on the back face; 0 for a solid outer
-	FeedHoleMM   float64 // feed hole: passes the solid outer, or the dielectric of a braided cable
+	FeedHoleMM   float64 // feed hole in the reflector
 	CutMM        float64 // FinishedMM + ThroughMM + ProudMM + CentreMM
+	// Jack is "sma-flange" or "sma-bulkhead" when a panel jack is mounted
+	// in the reflector; the cable is then a jumper of FinishedMM with a
+	// plug at each end, and the strip lengths are zero.
+	Jack string
 }
 
-// FeedHoleClearanceMM is added to what passes through the feed hole. From
-// the reflector drawing's default (0.1 mm); common practice (no published
-// source).
+// FeedHoleClearanceMM is added to what passes through the feed hole when
+// the design has no reflector drawing to take it from. Common practice (no
+// published source).
 const FeedHoleClearanceMM = 0.1
 
 // SleeveCut is the heat-shrink sleeve for one kit: 2:1 sleeving whose
@@ -166,6 +170,12 @@ func NewCutList(d *Design) (*CutList, error) {
 		cx.FeedHoleMM = cable.Dielectric + FeedHoleClearanceMM
 	}
 	cx.CutMM = cx.FinishedMM + cx.ThroughMM + cx.ProudMM + cx.CentreMM
+	if d.Patterns != nil {
+		cx.FeedHoleMM = d.Patterns.Reflector.Input.Feed.Diameter
+	}
+	if j := s.Reflector.Connector; j == "sma-flange" || j == "sma-bulkhead" {
+		cx = CoaxCut{Spec: s.Coax.Type, Cable: cable, FinishedMM: s.Coax.LengthMM, CutMM: s.Coax.LengthMM, ThroughMM: thick, CentreMM: drop + FeedStandoffMM, FeedHoleMM: cx.FeedHoleMM, Jack: j}
+	}
 	cl.Coax = cx
 
 	// Wire blank.
@@ -344,6 +354,9 @@ func (cl *CutList) Rows() []CutRow {
 }
 
 func coaxNote(cx CoaxCut) string {
+	if cx.Jack != "" {
+		return fmt.Sprintf("jumper from the %s jack on the reflector, %.1f mm with a plug fitted at each end", cx.Jack, cx.FinishedMM)
+	}
 	flare := "no braid flare (solid outer)"
 	if cx.FlareMM > 0 {
 		flare = fmt.Sprintf("braid flare %.1f mm", cx.FlareMM)

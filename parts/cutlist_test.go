@@ -217,3 +217,27 @@ func TestWoodDowelWarns(t *testing.T) {
 		t.Errorf("no wood warning in %v", cl.Warnings)
 	}
 }
+
+func TestPanelJackMakesAJumper(t *testing.T) {
+	d := demoDesign(t, "demo-5g8-cone.toml", func(s string) string {
+		return strings.Replace(s, "[reflector]", "[reflector]\nconnector = \"sma-bulkhead\"", 1)
+	})
+	cl, err := NewCutList(d)
+	if err != nil {
+		t.Fatal(err)
+	}
+	cx := cl.Coax
+	if cx.Jack != "sma-bulkhead" || cx.CutMM != cx.FinishedMM || cx.DielectricMM != 0 || cx.FlareMM != 0 {
+		t.Errorf("jack feed cut as %+v, want a plain jumper", cx)
+	}
+	// Source: connector vendor data, D-hole Ø 6.5 mm (DOMAIN §7).
+	if cx.FeedHoleMM != 6.5 {
+		t.Errorf("feed cut-out Ø%.2f mm, want the bulkhead D-hole's 6.5 mm", cx.FeedHoleMM)
+	}
+	b := NewBuildSheet(d, cl, strings.Repeat("0", 64))
+	for _, st := range b.Steps {
+		if st.Title == "Prepare and solder the coax" && !strings.Contains(strings.Join(st.Text, " "), "Mount the SMA jack") {
+			t.Errorf("coax step does not mount the jack: %q", st.Text)
+		}
+	}
+}
