@@ -37,7 +37,7 @@ type Document struct {
 }
 
 // Block is one element of a Document: Heading, Paragraph, List, Table,
-// Figure or PageBreak.
+// Figure, PageBreak or Group.
 type Block interface{ block() }
 
 // Heading is a title (Level 1), a section (2) or a subsection (3).
@@ -98,12 +98,18 @@ type FigurePath struct {
 // PageBreak starts a new page.
 type PageBreak struct{}
 
+// Group keeps its blocks on one page: when they do not fit the room left
+// but fit a page, they start a new page. A group taller than a page flows
+// like its blocks would.
+type Group struct{ Blocks []Block }
+
 func (Heading) block()   {}
 func (Paragraph) block() {}
 func (List) block()      {}
 func (Table) block()     {}
 func (Figure) block()    {}
 func (PageBreak) block() {}
+func (Group) block()     {}
 
 // Layout constants, mm unless named in points.
 const (
@@ -279,6 +285,19 @@ func (l *layout) place(b Block) error {
 			l.y -= h + 1.2
 		}
 		l.y -= blockGap - 1.2
+	case Group:
+		h, err := l.measure(b.Blocks)
+		if err != nil {
+			return err
+		}
+		if h > l.room() && h <= l.doc.Page.Height-docMargin-docBottom && !l.fresh() {
+			l.newPage()
+		}
+		for _, x := range b.Blocks {
+			if err := l.place(x); err != nil {
+				return err
+			}
+		}
 	case Table:
 		return l.table(b)
 	case Figure:
@@ -287,6 +306,22 @@ func (l *layout) place(b Block) error {
 		return fmt.Errorf("unknown block %T", b)
 	}
 	return nil
+}
+
+// measure returns the height the blocks take when set from the top of a
+// page, by setting them on a scratch page tall enough for any group.
+func (l *layout) measure(bs []Block) (float64, error) {
+	tall := *l.doc
+	tall.Page.Height = 100 * l.doc.Page.Height
+	m := &layout{doc: &tall, fam: l.fam, width: l.width}
+	m.newPage()
+	top := m.y
+	for _, b := range bs {
+		if err := m.place(b); err != nil {
+			return 0, err
+		}
+	}
+	return top - m.y, nil
 }
 
 // rule draws a horizontal line across the text width at y.

@@ -240,9 +240,9 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 	if strip != nil && len(strip.Stations) > 0 {
 		strip1 = fmt.Sprintf("Cut the matching strip from its 1:1 template: %s long, %s wide at the feed end narrowing to %s. File its edges smooth.", mm(strip.Length), mm2(strip.FeedWidth), mm2(strip.EndWidth))
 		clearance = fmt.Sprintf(" The strip's underside is only %s above the reflector at the feed: keep the solder there flat.", mm2(strip.Stations[0].Height))
-		expect += fmt.Sprintf(" The strip's estimated mismatch at %s MHz is |Γ| = %.2f (return loss %.0f dB); a built antenna is usually somewhat worse.", num(s.FrequencyMHz), strip.Reflection, ReturnLossDB(strip.Reflection))
+		expect += fmt.Sprintf(" The design estimates a return loss of about %.0f dB at %s MHz (|Γ| = %.2f from the matching strip alone).", ReturnLossDB(strip.Reflection), num(s.FrequencyMHz), strip.Reflection)
 	}
-	expect += " If the best point is low in frequency, the turns are too large; if high, too small."
+	expect += " If the best point is low in frequency, the turns are too large; if high, too small. If the return loss falls short across the band, raise or lower the strip's far end a fraction of a millimetre at a time and sweep again."
 	prep := fmt.Sprintf("Cut the cable to %s. At the reflector end, remove %s of outer conductor to leave %s of dielectric, then %s of dielectric to bare the centre conductor.",
 		mm(cx.CutMM), mm(cx.DielectricMM+cx.CentreMM), mm(cx.DielectricMM), mm(cx.CentreMM))
 	push := "Push the cable up through the feed hole from behind until its outer conductor is flush with the top face and the dielectric stands " + mm(cx.ProudMM) + " proud. Solder the outer conductor all round the hole on the back face."
@@ -264,11 +264,11 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 		lead = fmt.Sprintf("The wire's start sits only %s above the coax's dielectric, too little to bend a lead: leave the start straight; the centre conductor is soldered to its side in step 11.", mm(w.FeedLeadMM))
 	}
 	rodHole := ""
-	screw := "Epoxy the rod's foot to the reflector's centre."
+	screw := "Lower the rod through the open top of the coil and epoxy its foot to the reflector's centre."
 	for _, h := range cl.Hardware {
 		if strings.HasPrefix(h.Item, "M3") {
-			rodHole = " Drill a 3.2 mm hole at the centre for the rod's screw."
-			screw = fmt.Sprintf("Drill a 2.5 mm pilot hole 8 mm deep in the centre of the rod's foot and fix the rod to the reflector from behind with the %s.", h.Item)
+			rodHole = " Drill a 3.2 mm hole at the centre cross for the rod's screw."
+			screw = fmt.Sprintf("Drill a 2.5 mm pilot hole 8 mm deep in the centre of the rod's foot. Lower the rod through the open top of the coil onto the reflector's centre hole and fix it from behind with the %s.", h.Item)
 		}
 	}
 	list := []Step{

@@ -59,16 +59,23 @@ func sheetDocument(b *parts.BuildSheet, page cam.PageSize) cam.Document {
 
 	add(cam.PageBreak{}, cam.Heading{Text: "Cautions — read before step 1", Level: 2})
 	for _, c := range b.Cautions {
-		add(cam.Heading{Text: c.Heading, Level: 3}, cam.Paragraph{Text: c.Text})
+		add(cam.Group{Blocks: []cam.Block{cam.Heading{Text: c.Heading, Level: 3}, cam.Paragraph{Text: c.Text}}})
 	}
 
 	add(cam.PageBreak{}, cam.Heading{Text: "Steps", Level: 2})
 	for _, st := range b.Steps {
-		add(cam.Heading{Text: fmt.Sprintf("Step %d. %s", st.Number, st.Title), Level: 3})
+		// The step's title, its cautions and its first paragraph stay on
+		// one page.
+		g := cam.Group{Blocks: []cam.Block{cam.Heading{Text: fmt.Sprintf("Step %d. %s", st.Number, st.Title), Level: 3}}}
 		for _, c := range st.Cautions {
-			add(cam.Paragraph{Lead: "Caution — " + c.Heading + ".", Text: c.Text, Boxed: true, Size: 9})
+			g.Blocks = append(g.Blocks, cam.Paragraph{Lead: "Caution — " + c.Heading + ".", Text: c.Text, Boxed: true, Size: 9})
 		}
-		for _, t := range st.Text {
+		for i, t := range st.Text {
+			if i == 0 {
+				g.Blocks = append(g.Blocks, cam.Paragraph{Text: t})
+				add(g)
+				continue
+			}
 			add(cam.Paragraph{Text: t})
 		}
 	}
