@@ -155,3 +155,23 @@ func TestDocumentIsDeterministic(t *testing.T) {
 		t.Error("two renders differ")
 	}
 }
+
+func TestDocumentGroupStaysTogether(t *testing.T) {
+	filler := strings.Repeat("Filler text to take up room on the page. ", 160)
+	group := Group{Blocks: []Block{
+		Heading{Text: "Grouped step", Level: 3},
+		Paragraph{Lead: "Caution.", Text: strings.Repeat("Boxed caution text. ", 30), Boxed: true},
+		Paragraph{Text: "Grouped first paragraph."},
+	}}
+	for _, share := range []int{2, 3, 4, 5} {
+		t.Run(fmt.Sprintf("after 1/%d more filler", share), func(t *testing.T) {
+			doc := Document{Blocks: []Block{Paragraph{Text: filler}, Paragraph{Text: filler[:len(filler)/share]}, group}}
+			text := popplerText(t, 0, doc)
+			for _, p := range strings.Split(text, "\f") {
+				if strings.Contains(p, "Grouped step") != strings.Contains(p, "Grouped first paragraph") {
+					t.Errorf("group split across pages")
+				}
+			}
+		})
+	}
+}
