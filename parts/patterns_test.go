@@ -3,6 +3,7 @@ package parts
 import (
 	"encoding/json"
 	"errors"
+	"fmt"
 	"math"
 	"strings"
 	"testing"
@@ -120,4 +121,39 @@ func TestMaterialGuard(t *testing.T) {
 			}
 		})
 	}
+}
+
+func TestPlateTooSmallForFeed(t *testing.T) {
+	// A 20 mm disc cannot hold a Ø 3.68 mm feed hole 8.75 mm from its
+	// centre with 1 mm of web: the design stands, with a warning and no
+	// plate.
+	d := designOf(t, strings.Replace(base, "[wire]", "[reflector]\ndiameter_mm = 20.0\n[wire]", 1))
+	if d.Patterns.Reflector != nil || !strings.Contains(","+warningCodes(d)+",", ",reflector-fit,") {
+		t.Errorf("plate %v, warnings %q", d.Patterns.Reflector, warningCodes(d))
+	}
+	if r := d.Report(); r.Reflector != nil || r.Wedge == nil {
+		t.Errorf("report reflector %v, wedge %v", r.Reflector, r.Wedge)
+	}
+}
+
+func TestKlopfensteinWedge(t *testing.T) {
+	d := designOf(t, base+"\n[wedge]\ntaper = \"klopfenstein\"\nripple = 0.05\n")
+	r := d.Report()
+	// Source: Pozar §5.9, A = acosh(Γ0/Γm) with Γ0 = ½·ln(ZL/50).
+	want := math.Acosh(math.Log(d.Patterns.WedgeLoadOhm/50) / 2 / 0.05)
+	if r.Wedge == nil || math.Abs(r.Wedge.KlopfensteinA-want) > 1e-12 || r.Wedge.Taper != "klopfenstein" {
+		t.Fatalf("wedge report %+v, want A = %g", r.Wedge, want)
+	}
+	// The profile steps by Γm in ln Z at the feed end, so the first
+	// station asks for 50·e^0.05 Ω.
+	if got := d.Patterns.Wedge.Stations[0].TargetOhm; math.Abs(got-50*math.Exp(0.05)) > 1e-3 {
+		t.Errorf("feed station target %.4f Ω, want %.4f", got, 50*math.Exp(0.05))
+	}
+}
+
+func ExampleStripWidthRatio() {
+	// Width-to-height ratio of a 50 Ω zero-thickness strip in air.
+	u, _ := StripWidthRatio(50, 0)
+	fmt.Printf("%.3f\n", u)
+	// Output: 4.912
 }
