@@ -198,3 +198,38 @@ func TestLaserGuardLabelsFiles(t *testing.T) {
 		t.Error("design.json has no laser-halogenated warning")
 	}
 }
+
+func TestR2000Option(t *testing.T) {
+	if err := exec.Command("/usr/bin/python3", "-c", "import ezdxf").Run(); err != nil {
+		if os.Getenv("COILWRIGHT_REQUIRE_TOOLS") == "1" {
+			t.Fatal("python3-ezdxf is required (COILWRIGHT_REQUIRE_TOOLS=1)")
+		}
+		t.Skip("python3-ezdxf not installed")
+	}
+	b, _ := templates.Demo("demo-5g8-cone.toml")
+	spec := filepath.Join(t.TempDir(), "r2000.toml")
+	if err := os.WriteFile(spec, append(b, []byte("\n[cutting]\ndxf = \"R2000\"\n")...), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	dir := t.TempDir()
+	var stdout, stderr bytes.Buffer
+	if code := run([]string{"build", spec, "-o", dir}, &stdout, &stderr); code != 0 {
+		t.Fatalf("build: exit %d: %s", code, stderr.String())
+	}
+	const script = `
+import sys, ezdxf
+for f in sys.argv[1:]:
+    d = ezdxf.readfile(f)
+    a = d.audit()
+    print(d.dxfversion, d.header.get('$INSUNITS', 0), len(a.errors), len(a.fixes))
+`
+	out, err := exec.Command("/usr/bin/python3", "-c", script, filepath.Join(dir, "reflector.dxf"), filepath.Join(dir, "panel-wedge.dxf")).CombinedOutput()
+	if err != nil {
+		t.Fatalf("ezdxf: %v\n%s", err, out)
+	}
+	for _, line := range strings.Split(strings.TrimSpace(string(out)), "\n") {
+		if line != "AC1015 4 0 0" {
+			t.Errorf("ezdxf: %q, want release 2000, $INSUNITS 4, no errors or fixes", line)
+		}
+	}
+}
