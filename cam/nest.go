@@ -206,9 +206,9 @@ func turned(outline geom.Polyline, a float64) member {
 	return m.shift(b.Min.Scale(-1))
 }
 
-// clear reports whether two polygons keep at least gap apart (and neither
+// apart reports whether two polygons keep at least gap apart (and neither
 // holds the other).
-func clear(a, b member, gap float64) bool {
+func apart(a, b member, gap float64) bool {
 	if a.box.Min.X-gap >= b.box.Max.X || b.box.Min.X-gap >= a.box.Max.X ||
 		a.box.Min.Y-gap >= b.box.Max.Y || b.box.Min.Y-gap >= a.box.Max.Y {
 		return true
@@ -265,7 +265,7 @@ func pointSegment2(x, a, b geom.Vec2) float64 {
 func unitClear(u []member, v geom.Vec2, gap float64) bool {
 	for _, a := range u {
 		for _, b := range u {
-			if !clear(a, b.shift(v), gap) {
+			if !apart(a, b.shift(v), gap) {
 				return false
 			}
 		}
@@ -319,7 +319,7 @@ func latticeLayout(outline geom.Polyline, a float64, interlock bool, gap float64
 		for k := 0; k <= heights; k++ {
 			dy := -other.box.Max.Y + (first.box.Max.Y+other.box.Max.Y)*float64(k)/heights
 			start := first.box.Max.X + gap
-			dx := slide(start, func(t float64) bool { return clear(first, other.shift(geom.Vec2{X: t, Y: dy}), gap) })
+			dx := slide(start, func(t float64) bool { return apart(first, other.shift(geom.Vec2{X: t, Y: dy}), gap) })
 			cand := []member{first, other.shift(geom.Vec2{X: dx, Y: dy})}
 			b := unitBox(cand)
 			if area := b.Size().X * b.Size().Y; area < bestArea-1e-9 {
@@ -398,7 +398,7 @@ func checkLayout(ps []placedPoly, gap float64, s Sheet) error {
 		for j := i + 1; j < len(ps); j++ {
 			a := member{poly: ps[i].poly, box: ps[i].box}
 			b := member{poly: ps[j].poly, box: ps[j].box}
-			if !clear(a, b, gap-1e-9) {
+			if !apart(a, b, gap-1e-9) {
 				return fmt.Errorf("cam: nesting placed parts %d and %d closer than %.3f mm", i+1, j+1, gap)
 			}
 		}

@@ -146,7 +146,7 @@ func TestTemplateScaleBar(t *testing.T) {
 	path := writeTempFile(t, "t.pdf", templateDoc(t, PageA4, PDFOptions{}))
 	// Render page 1 at 254 dpi (10 px per mm) in a band round the bar.
 	const dpmm = 10
-	o := ScaleBarOrigin(PageA4)
+	o := ScaleBarOrigin()
 	top := int((PageA4.Height - o.Y - scaleBarHeight - 1) * dpmm)
 	band := int((scaleBarHeight + 2) * dpmm)
 	base := strings.TrimSuffix(path, ".pdf")

@@ -50,9 +50,10 @@ type TemplateOptions struct {
 	Warnings []string
 }
 
-// ScaleBarOrigin returns the lower-left corner in mm (page coordinates, y
-// up) of the filled scale bar on every template page of size p.
-func ScaleBarOrigin(p PageSize) geom.Vec2 {
+// ScaleBarOrigin returns the lower-left corner in mm (page coordinates from
+// the page's lower-left corner, y up) of the filled scale bar on every
+// template page.
+func ScaleBarOrigin() geom.Vec2 {
 	return geom.Vec2{X: templateMargin, Y: templateMargin + 6}
 }
 
@@ -134,7 +135,7 @@ func TemplatePages(parts []TemplatePart, opt TemplateOptions) ([]*canvas.Canvas,
 				for _, w := range opt.Warnings {
 					text(w, 8.5, canvas.Red)
 				}
-				drawScaleBar(ctx, fam, opt.Page)
+				drawScaleBar(ctx, fam)
 				pages = append(pages, page)
 			}
 		}
@@ -222,8 +223,8 @@ func entityPath(e geom.Entity) *canvas.Path {
 
 // drawScaleBar draws the filled ScaleBarMM bar with end ticks and its
 // label at ScaleBarOrigin.
-func drawScaleBar(ctx *canvas.Context, fam *canvas.FontFamily, page PageSize) {
-	o := ScaleBarOrigin(page)
+func drawScaleBar(ctx *canvas.Context, fam *canvas.FontFamily) {
+	o := ScaleBarOrigin()
 	ctx.SetStroke(nil)
 	ctx.SetFillColor(canvas.Black)
 	ctx.DrawPath(o.X, o.Y, canvas.Rectangle(ScaleBarMM, scaleBarHeight))

@@ -12,6 +12,8 @@ import (
 // Patterns is the design's flat parts and how they are to be cut. It is
 // built by NewDesign and not mutated afterwards.
 type Patterns struct {
+	// Reflector is nil when the plate cannot hold its feed cut-out (see
+	// the "reflector-fit" warning).
 	Reflector *Reflector
 	Wedge     *Wedge
 	// WedgeLoadOhm is the resistance the wedge tapers to: the Kraus input
@@ -95,7 +97,9 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 	}
 	refl, err := NewReflector(in)
 	if err != nil {
-		return nil, nil, err
+		// A plate too small for its feed cut-out is reported, not fatal:
+		// the rest of the design stands, and no plate files are written.
+		warns = append(warns, Warning{Code: "reflector-fit", Message: err.Error() + "; no reflector files are written"})
 	}
 	p.Reflector = refl
 
@@ -114,11 +118,6 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 	p.Wedge = w
 	for _, m := range w.Warnings {
 		warns = append(warns, Warning{Code: "wedge-width", Message: m})
-	}
-	if w.Reflection > 0.2 {
-		warns = append(warns, Warning{Code: "wedge-mismatch", Message: fmt.Sprintf(
-			"the %.1f mm matching strip is %.2f λ long, short for a taper from %.0f Ω to %.0f Ω: expect |Γ| ≈ %.2f (VSWR %.2f) at the centre frequency; trim by measurement",
-			w.Length, w.Length/d.Wavelength, WedgeFeedOhm, p.WedgeLoadOhm, w.Reflection, VSWR(w.Reflection))})
 	}
 	return p, warns, nil
 }
@@ -232,22 +231,9 @@ func (d *Design) patternReports(r *Report) {
 	s := d.Spec
 	rs := &s.Reflector
 	size := rs.SizeMM(d.Wavelength)
-	in := p.Reflector.Input
-	rr := &ReflectorReport{
-		Shape: rs.Shape, ThicknessMM: rs.ThicknessMM, Material: rs.Material, Connector: rs.Connector,
-		SizeLambda: size / d.Wavelength, FeedHoleMM: in.Feed.Diameter, FeedRadiusMM: in.FeedRadius,
-		FeedAngleDeg: in.FeedAngle * 180 / math.Pi, MountingHoles: in.Mounting.Count,
-		Cutting: CutReport{Method: p.Method, KerfMM: p.Kerf, Label: p.ReflectorLabel},
+	if p.Reflector != nil {
+		r.Reflector = reflectorReport(p, rs, size, d.Wavelength)
 	}
-	if in.Mounting.Count > 0 {
-		rr.MountingHoleMM, rr.MountingCircleMM = in.Mounting.Diameter, in.Mounting.PitchDiameter
-	}
-	if rs.Shape == "square" {
-		rr.SideMM, rr.CornerRadiusMM = &size, rs.CornerRadiusMM
-	} else {
-		rr.DiameterMM = &size
-	}
-	r.Reflector = rr
 	w := p.Wedge
 	wr := &WedgeReport{
 		Material: s.Wedge.Material, ThicknessMM: s.Wedge.ThicknessMM, Taper: s.Wedge.Taper, SpanDeg: s.Wedge.SpanDeg,
@@ -264,4 +250,24 @@ func (d *Design) patternReports(r *Report) {
 		wr.KlopfensteinA = KlopfensteinA(WedgeFeedOhm, p.WedgeLoadOhm, s.Wedge.Ripple)
 	}
 	r.Wedge = wr
+}
+
+// reflectorReport describes the plate of p for design.json.
+func reflectorReport(p *Patterns, rs *ReflectorSpec, size, lambda float64) *ReflectorReport {
+	in := p.Reflector.Input
+	rr := &ReflectorReport{
+		Shape: rs.Shape, ThicknessMM: rs.ThicknessMM, Material: rs.Material, Connector: rs.Connector,
+		SizeLambda: size / lambda, FeedHoleMM: in.Feed.Diameter, FeedRadiusMM: in.FeedRadius,
+		FeedAngleDeg: in.FeedAngle * 180 / math.Pi, MountingHoles: in.Mounting.Count,
+		Cutting: CutReport{Method: p.Method, KerfMM: p.Kerf, Label: p.ReflectorLabel},
+	}
+	if in.Mounting.Count > 0 {
+		rr.MountingHoleMM, rr.MountingCircleMM = in.Mounting.Diameter, in.Mounting.PitchDiameter
+	}
+	if rs.Shape == "square" {
+		rr.SideMM, rr.CornerRadiusMM = &size, rs.CornerRadiusMM
+	} else {
+		rr.DiameterMM = &size
+	}
+	return rr
 }

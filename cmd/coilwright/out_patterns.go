@@ -33,42 +33,41 @@ func cutParts(d *parts.Design) ([]cutPart, error) {
 	p := d.Patterns
 	s := d.Spec
 	sheet := cam.Sheet{Width: s.Cutting.SheetWidthMM, Height: s.Cutting.SheetHeightMM, Margin: s.Cutting.MarginMM, Spacing: s.Cutting.SpacingMM}
-	rin := p.Reflector.Input
 	w := p.Wedge
-	out := []cutPart{
-		{name: "reflector", title: "Reflector", label: p.ReflectorLabel, nominal: p.Reflector.Drawing,
+	var out []cutPart
+	if p.Reflector != nil {
+		rin := p.Reflector.Input
+		out = append(out, cutPart{name: "reflector", title: "Reflector", label: p.ReflectorLabel, nominal: p.Reflector.Drawing,
 			notes: []string{
 				fmt.Sprintf("%s %s, %.2f mm thick; size %.2f mm. Feed hole (%s) %.2f mm from the centre at the 0° tick.",
 					p.Material.Name, s.Reflector.Shape, s.Reflector.ThicknessMM, rin.Size, s.Reflector.Connector, rin.FeedRadius),
 				"Cut on the black lines; blue lines are marks (centre cross, coil start tick and angle, kit name).",
-			}},
-		{name: "wedge", title: "Matching wedge", label: p.WedgeLabel, nominal: w.Drawing(),
-			notes: []string{
-				fmt.Sprintf("%s, %.2f mm thick; %.2f mm along the centreline, %.2f mm wide at the feed end (tick), %.2f mm at the far end.",
-					p.WedgeMaterial.Name, s.Wedge.ThicknessMM, w.Length, w.FeedWidth, w.EndWidth),
-				fmt.Sprintf("Solder it flat under the first %.0f° of wire, the ticked end to the feed pin. Expected |Γ| %.2f (VSWR %.2f) at %.0f MHz.",
-					s.Wedge.SpanDeg, w.Reflection, parts.VSWR(w.Reflection), s.FrequencyMHz),
-			}},
+			}})
 	}
+	out = append(out, cutPart{name: "wedge", title: "Matching wedge", label: p.WedgeLabel, nominal: w.Drawing(),
+		notes: []string{
+			fmt.Sprintf("%s, %.2f mm thick; %.2f mm along the centreline, %.2f mm wide at the feed end (tick), %.2f mm at the far end.",
+				p.WedgeMaterial.Name, s.Wedge.ThicknessMM, w.Length, w.FeedWidth, w.EndWidth),
+			fmt.Sprintf("Solder it flat under the first %.0f° of wire, the ticked end to the feed pin. Expected |Γ| %.2f (VSWR %.2f) at %.0f MHz.",
+				s.Wedge.SpanDeg, w.Reflection, parts.VSWR(w.Reflection), s.FrequencyMHz),
+		}})
 	for i := range out {
 		c, err := cam.ApplyKerf(out[i].nominal, p.Kerf)
 		if err != nil {
 			return nil, fmt.Errorf("%s: %w", out[i].name, err)
 		}
 		out[i].cut, out[i].sheet = c, sheet
-	}
-	var err error
-	if rin.Shape == parts.ReflectorDisc {
-		out[0].nest, err = cam.NestDiscs(rin.Size/2+p.Kerf/2, s.Quantity, sheet)
-	} else {
-		out[0].nest, err = cam.NestPolygon(outerOutline(out[0].cut), s.Quantity, sheet, cam.NestOptions{Tolerance: nestTolerance, Angles: []float64{0}})
-	}
-	if err != nil {
-		return nil, fmt.Errorf("reflector panel: %w", err)
-	}
-	out[1].nest, err = cam.NestPolygon(outerOutline(out[1].cut), s.Quantity, sheet, cam.NestOptions{Interlock: true, Tolerance: nestTolerance})
-	if err != nil {
-		return nil, fmt.Errorf("wedge panel: %w", err)
+		switch {
+		case out[i].name == "wedge":
+			out[i].nest, err = cam.NestPolygon(outerOutline(c), s.Quantity, sheet, cam.NestOptions{Interlock: true, Tolerance: nestTolerance})
+		case p.Reflector.Input.Shape == parts.ReflectorDisc:
+			out[i].nest, err = cam.NestDiscs(p.Reflector.Input.Size/2+p.Kerf/2, s.Quantity, sheet)
+		default:
+			out[i].nest, err = cam.NestPolygon(outerOutline(c), s.Quantity, sheet, cam.NestOptions{Tolerance: nestTolerance, Angles: []float64{0}})
+		}
+		if err != nil {
+			return nil, fmt.Errorf("%s panel: %w", out[i].name, err)
+		}
 	}
 	return out, nil
 }
@@ -100,11 +99,13 @@ func addPanels(d *parts.Design, r *parts.Report) error {
 	if err != nil {
 		return err
 	}
-	if r.Reflector != nil {
-		r.Reflector.Panel = cps[0].panelReport(d.Spec.Quantity)
-	}
-	if r.Wedge != nil {
-		r.Wedge.Panel = cps[1].panelReport(d.Spec.Quantity)
+	for _, c := range cps {
+		switch {
+		case c.name == "reflector" && r.Reflector != nil:
+			r.Reflector.Panel = c.panelReport(d.Spec.Quantity)
+		case c.name == "wedge" && r.Wedge != nil:
+			r.Wedge.Panel = c.panelReport(d.Spec.Quantity)
+		}
 	}
 	return nil
 }
