@@ -175,3 +175,32 @@ func TestDocumentGroupStaysTogether(t *testing.T) {
 		})
 	}
 }
+
+func BenchmarkDocumentPages(b *testing.B) {
+	rows := make([][]string, 40)
+	for i := range rows {
+		rows[i] = []string{fmt.Sprint(i + 1), "17.60", "± 0.20", ""}
+	}
+	var blocks []Block
+	for i := range 14 {
+		blocks = append(blocks, Group{Blocks: []Block{
+			Heading{Text: fmt.Sprintf("Step %d. A step", i+1), Level: 3},
+			Paragraph{Lead: "Caution.", Text: strings.Repeat("Wear gloves. ", 20), Boxed: true},
+			Paragraph{Text: strings.Repeat("Do the work with care. ", 30)},
+		}})
+	}
+	blocks = append(blocks, Table{Widths: []float64{1, 1, 1, 2}, Header: []string{"Turn", "Target", "Tolerance", "Measured"}, Rows: rows})
+	doc := Document{Footer: "bench", Blocks: blocks}
+	b.ReportAllocs()
+	for b.Loop() {
+		ps, err := doc.Pages()
+		if err != nil {
+			b.Fatal(err)
+		}
+		var buf bytes.Buffer
+		if err := WritePDF(&buf, ps, PDFOptions{}); err != nil {
+			b.Fatal(err)
+		}
+		b.SetBytes(int64(buf.Len()))
+	}
+}
