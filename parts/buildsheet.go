@@ -271,10 +271,14 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 			screw = fmt.Sprintf("Drill a 2.5 mm pilot hole 8 mm deep in the centre of the rod's foot. Lower the rod through the open top of the coil onto the reflector's centre hole and fix it from behind with the %s.", h.Item)
 		}
 	}
+	wireNotes := ""
+	for _, c := range d.Wire.Material.Cautions {
+		wireNotes += " This wire: " + c.Text() + "."
+	}
 	list := []Step{
 		{Title: "Straighten and clean the wire", Text: []string{
 			fmt.Sprintf("Cut a %s blank of %s, Ø%s mm wire. Roll it straight under a flat board, or stretch it slightly, until it lies flat on the bench without rocking.", mm(w.LengthMM), w.Material, num(w.DiameterMM)),
-			"Clean it bright with a fine abrasive pad and wipe it with alcohol. Enamelled wire must be stripped where it will be soldered.",
+			"Clean it bright with a fine abrasive pad and wipe it with alcohol. Enamelled wire must be stripped where it will be soldered." + wireNotes,
 			marks,
 		}, Cautions: pick(all, HazardEyes)},
 		{Title: "Lock its end in the former", Text: []string{

@@ -132,3 +132,16 @@ func TestHandWordsFollowTheCoil(t *testing.T) {
 		})
 	}
 }
+
+func TestMaterialCautionsReachStepOne(t *testing.T) {
+	d := demoDesign(t, templates.DefaultDemo, nil)
+	cl, err := NewCutList(d)
+	if err != nil {
+		t.Fatal(err)
+	}
+	d.Wire.Material.Cautions = []Caution{CautionStripEnamel}
+	b := NewBuildSheet(d, cl, strings.Repeat("0", 64))
+	if !strings.Contains(strings.Join(b.Steps[0].Text, " "), CautionStripEnamel.Text()) {
+		t.Errorf("step 1 lacks the wire's caution: %q", b.Steps[0].Text)
+	}
+}
