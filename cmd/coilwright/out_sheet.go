@@ -136,6 +136,9 @@ type batchStock struct {
 	PieceMM  float64
 	Plan     cam.StockPlan
 	Patterns []rodPattern
+	// ReusableMM is the offcut, counted in the waste, from rods whose
+	// offcut would still give another piece.
+	ReusableMM float64
 }
 
 // rodPattern is a run of consecutive rods cut alike.
@@ -165,7 +168,13 @@ func newBatchPlan(d *parts.Design, cl *parts.CutList, cps []cutPart) (*batchPlan
 		if err != nil {
 			return nil, fmt.Errorf("%s: %w; raise stock.%s", st.item, err, map[string]string{"Wire": "wire_rod_mm", "Support rod": "dowel_rod_mm"}[st.name])
 		}
-		bp.Stocks = append(bp.Stocks, batchStock{Name: st.name, Item: st.item, PieceMM: st.piece, Plan: plan, Patterns: patterns(plan)})
+		bs := batchStock{Name: st.name, Item: st.item, PieceMM: st.piece, Plan: plan, Patterns: patterns(plan)}
+		for _, r := range plan.Rods {
+			if r.Offcut >= st.piece+st.rod.Kerf {
+				bs.ReusableMM += r.Offcut
+			}
+		}
+		bp.Stocks = append(bp.Stocks, bs)
 	}
 	w, dw := bp.Stocks[0], bp.Stocks[1]
 	nf := float64(n)
