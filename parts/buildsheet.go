@@ -76,7 +76,6 @@ type BuildSheet struct {
 	Closing        []string
 
 	View SideView
-	Cut  *CutList
 }
 
 // ReturnLossTargetDB is the return loss across the band a finished
@@ -93,7 +92,7 @@ func NewBuildSheet(d *Design, cl *CutList, specSHA256 string) *BuildSheet {
 		strip = d.Patterns.Wedge
 	}
 	b := &BuildSheet{Kit: s.Kit, SpecSHA256: specSHA256, Hand: d.Coil.Hand.String(), Paper: s.Cutting.Paper,
-		Quantity: s.Quantity, Cut: cl, Inspection: d.InspectionTable()}
+		Quantity: s.Quantity, Inspection: d.InspectionTable()}
 	b.HandWords = handWords(d.Coil.Hand)
 	b.View = d.SideView(cl)
 	b.Summary = fmt.Sprintf("%s MHz %s helix, %s turns, %s", num(s.FrequencyMHz), s.Coil.Shape, num(d.Coil.Turns), b.Hand)
