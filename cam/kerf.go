@@ -32,7 +32,8 @@ type offSeg struct {
 	c     geom.Vec2
 	r     float64
 	ccw   bool
-	spare bool // a bridging arc added at a corner
+	spare bool      // a bridging arc added at a corner
+	dir   geom.Vec2 // a line's direction before trimming
 }
 
 // tangentAt returns the unit direction of travel at point x of s.
@@ -93,7 +94,7 @@ func OffsetContour(c geom.Contour, d float64) (geom.Contour, error) {
 		if b == 0 {
 			t := q.Sub(p).Scale(1 / q.Sub(p).Len())
 			nrm := geom.Vec2{X: t.Y, Y: -t.X}.Scale(d)
-			segs = append(segs, offSeg{p: p.Add(nrm), q: q.Add(nrm)})
+			segs = append(segs, offSeg{p: p.Add(nrm), q: q.Add(nrm), dir: t})
 			continue
 		}
 		a := geom.BulgeArc(p, q, b)
@@ -150,6 +151,13 @@ func OffsetContour(c geom.Contour, d float64) (geom.Contour, error) {
 	// copied; take it from segs.
 	if !out[0].spare {
 		out[0].p = segs[0].p
+	}
+	// A straight segment trimmed past its own length would fold the path
+	// back on itself: the feature is narrower than the offset allows.
+	for _, s := range out {
+		if !s.arc && !s.spare && s.q.Sub(s.p).Dot(s.dir) <= 0 {
+			return geom.Contour{}, fmt.Errorf("cam: a %.3f mm offset folds the contour near (%.3f, %.3f); the feature is smaller than the kerf", d, s.p.X, s.p.Y)
+		}
 	}
 	res := geom.Contour{Closed: true, Vertices: make([]geom.Vertex, len(out))}
 	for i, s := range out {

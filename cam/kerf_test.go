@@ -161,3 +161,16 @@ func TestApplyKerf(t *testing.T) {
 		}
 	})
 }
+
+func TestOffsetRefusesFolding(t *testing.T) {
+	// A 1 mm wide slot cannot be shrunk by 0.6 mm each side.
+	slot := geom.Contour{Closed: true, Vertices: []geom.Vertex{
+		{P: geom.Vec2{X: 0, Y: 0}}, {P: geom.Vec2{X: 10, Y: 0}}, {P: geom.Vec2{X: 10, Y: 1}}, {P: geom.Vec2{X: 0, Y: 1}},
+	}}
+	if _, err := OffsetContour(slot, -0.6); err == nil {
+		t.Error("a fold was accepted")
+	}
+	if _, err := OffsetContour(slot, -0.4); err != nil {
+		t.Errorf("a 0.4 mm shrink of a 1 mm slot: %v", err)
+	}
+}
