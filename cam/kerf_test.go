@@ -123,6 +123,20 @@ func TestOffsetContour(t *testing.T) {
 			checkOffset(t, l, off, d)
 		}
 	})
+	t.Run("curved strip like a wedge", func(t *testing.T) {
+		poly := strip(8.2, math.Pi/2, 4.6, 2.7)
+		c := geom.Contour{Closed: true}
+		for _, p := range poly {
+			c.Vertices = append(c.Vertices, geom.Vertex{P: p})
+		}
+		for _, d := range []float64{-0.5, -0.075, 0.075, 0.5} {
+			off, err := OffsetContour(c, d)
+			if err != nil {
+				t.Fatal(err)
+			}
+			checkOffset(t, c, off, d)
+		}
+	})
 	t.Run("arc too small", func(t *testing.T) {
 		c := geom.Contour{Closed: true, Vertices: []geom.Vertex{{P: geom.Vec2{X: -1}, Bulge: 1}, {P: geom.Vec2{X: 1}, Bulge: 1}}}
 		if _, err := OffsetContour(c, -2); err == nil {
