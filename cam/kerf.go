@@ -7,7 +7,9 @@
 // segments no longer meet, the corner is bridged by an arc of radius |d|
 // about the original corner (exactly the path a round tool's centre takes
 // round a sharp corner); where they cross, both are trimmed to the crossing
-// nearest the corner. Holes and outer contours are told apart by nesting
+// nearest the corner. A straight segment shorter than the offset may be
+// swallowed by its neighbours' trims (it would turn back on itself); it is
+// dropped and its neighbours joined directly. Holes and outer contours are told apart by nesting
 // depth on the CUT layer: a closed entity inside an odd number of others
 // is a hole.
 
@@ -27,12 +29,14 @@ const offsetTol = 1e-9
 // offSeg is one segment of a contour being offset: a line from p to q, or
 // an arc about c of radius r from p to q, counter-clockwise when ccw.
 type offSeg struct {
-	p, q  geom.Vec2
-	arc   bool
-	c     geom.Vec2
-	r     float64
-	ccw   bool
-	spare bool // a bridging arc added at a corner
+	p, q   geom.Vec2
+	arc    bool
+	c      geom.Vec2
+	r      float64
+	ccw    bool
+	spare  bool      // a bridging arc added at a corner
+	dir    geom.Vec2 // a line's direction before trimming
+	op, oq geom.Vec2 // the original segment's end points
 }
 
 // tangentAt returns the unit direction of travel at point x of s.
@@ -83,9 +87,8 @@ func OffsetContour(c geom.Contour, d float64) (geom.Contour, error) {
 	if geom.Polyline(c.Flatten(0.01)).Area() < 0 {
 		c = reverseContour(c)
 	}
-	n := c.Segments()
-	segs := make([]offSeg, 0, n)
-	for i := range n {
+	var segs []offSeg
+	for i := range c.Segments() {
 		p, q, b := c.Segment(i)
 		if p.Sub(q).Len() < offsetTol {
 			continue
@@ -93,7 +96,7 @@ func OffsetContour(c geom.Contour, d float64) (geom.Contour, error) {
 		if b == 0 {
 			t := q.Sub(p).Scale(1 / q.Sub(p).Len())
 			nrm := geom.Vec2{X: t.Y, Y: -t.X}.Scale(d)
-			segs = append(segs, offSeg{p: p.Add(nrm), q: q.Add(nrm)})
+			segs = append(segs, offSeg{p: p.Add(nrm), q: q.Add(nrm), dir: t, op: p, oq: q})
 			continue
 		}
 		a := geom.BulgeArc(p, q, b)
@@ -107,55 +110,68 @@ func OffsetContour(c geom.Contour, d float64) (geom.Contour, error) {
 			return geom.Contour{}, fmt.Errorf("cam: an arc of radius %.3f mm cannot be offset by %.3f mm", a.Radius, d)
 		}
 		move := func(x geom.Vec2) geom.Vec2 { return a.Center.Add(x.Sub(a.Center).Scale(r / a.Radius)) }
-		segs = append(segs, offSeg{p: move(p), q: move(q), arc: true, c: a.Center, r: r, ccw: ccw})
+		segs = append(segs, offSeg{p: move(p), q: move(q), arc: true, c: a.Center, r: r, ccw: ccw, op: p, oq: q})
 	}
-	if len(segs) < 2 {
-		return geom.Contour{}, fmt.Errorf("cam: contour too small to offset")
-	}
-	// Corner k sits between segs[k] and segs[k+1]; its original point is
-	// the shared vertex, recovered from the unmoved contour.
-	corners := make([]geom.Vec2, 0, len(segs))
-	for i := range n {
-		p, q, _ := c.Segment(i)
-		if p.Sub(q).Len() >= offsetTol {
-			corners = append(corners, q)
+	// A straight segment shorter than the offset can be swallowed by its
+	// neighbours' trims; drop it and join its neighbours directly.
+	for len(segs) >= 2 {
+		out, fold, err := joinOffsets(segs, d)
+		if err != nil {
+			return geom.Contour{}, err
 		}
+		if fold < 0 {
+			res := geom.Contour{Closed: true, Vertices: make([]geom.Vertex, len(out))}
+			for i, s := range out {
+				res.Vertices[i] = geom.Vertex{P: s.p, Bulge: s.bulge()}
+			}
+			return res, nil
+		}
+		segs = append(segs[:fold:fold], segs[fold+1:]...)
 	}
-	var out []offSeg
+	return geom.Contour{}, fmt.Errorf("cam: contour too small to offset by %.3f mm", d)
+}
+
+// joinOffsets joins consecutive offset segments: a round arc about the
+// original corner where they part, a trim to their crossing where they
+// overlap. It returns the joined path, or the index of a straight segment
+// that the trims turned back on itself (fold ≥ 0), which the caller drops.
+func joinOffsets(segs []offSeg, d float64) (out []offSeg, fold int, err error) {
 	m := len(segs)
+	work := append([]offSeg(nil), segs...)
+	bridge := make([]*offSeg, m)
 	for k := range m {
-		a, b := segs[k], segs[(k+1)%m]
-		v := corners[k]
+		a, b := work[k], work[(k+1)%m]
+		adjacent := segs[k].oq.Sub(segs[(k+1)%m].op).Len() < offsetTol
+		v := segs[k].oq.Add(segs[(k+1)%m].op).Scale(0.5)
 		if a.q.Sub(b.p).Len() < offsetTol {
-			out = append(out, a)
 			continue
 		}
 		turn := a.tangentAt(a.q).Cross(b.tangentAt(b.p))
 		// A gap opens when the offset moves away from the turn: outward
 		// round a left (convex) turn, or inward round a right one.
-		if turn*d > 0 {
-			out = append(out, a, offSeg{p: a.q, q: b.p, arc: true, c: v, r: math.Abs(d), ccw: d > 0, spare: true})
+		if turn*d > 0 && adjacent {
+			bridge[k] = &offSeg{p: a.q, q: b.p, arc: true, c: v, r: math.Abs(d), ccw: d > 0, spare: true}
 			continue
 		}
 		x, ok := crossNear(a, b, v)
 		if !ok {
-			return geom.Contour{}, fmt.Errorf("cam: offset segments at (%.3f, %.3f) do not meet; the feature is smaller than the kerf", v.X, v.Y)
+			return nil, -1, fmt.Errorf("cam: offset segments at (%.3f, %.3f) do not meet; the feature is smaller than the kerf", v.X, v.Y)
 		}
-		segs[k].q = x
-		a.q = x
-		segs[(k+1)%m].p = x
-		out = append(out, a)
+		work[k].q = x
+		work[(k+1)%m].p = x
 	}
-	// Trimming may have moved the first segment's start after it was
-	// copied; take it from segs.
-	if !out[0].spare {
-		out[0].p = segs[0].p
+	for k, s := range work {
+		if !s.arc && s.q.Sub(s.p).Dot(s.dir) <= 0 {
+			return nil, k, nil
+		}
 	}
-	res := geom.Contour{Closed: true, Vertices: make([]geom.Vertex, len(out))}
-	for i, s := range out {
-		res.Vertices[i] = geom.Vertex{P: s.p, Bulge: s.bulge()}
+	for k, s := range work {
+		out = append(out, s)
+		if bridge[k] != nil {
+			out = append(out, *bridge[k])
+		}
 	}
-	return res, nil
+	return out, -1, nil
 }
 
 // reverseContour returns the closed contour c traversed the other way:

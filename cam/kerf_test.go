@@ -123,6 +123,20 @@ func TestOffsetContour(t *testing.T) {
 			checkOffset(t, l, off, d)
 		}
 	})
+	t.Run("curved strip like a wedge", func(t *testing.T) {
+		poly := strip(8.2, math.Pi/2, 4.6, 2.7)
+		c := geom.Contour{Closed: true}
+		for _, p := range poly {
+			c.Vertices = append(c.Vertices, geom.Vertex{P: p})
+		}
+		for _, d := range []float64{-0.5, -0.075, 0.075, 0.5} {
+			off, err := OffsetContour(c, d)
+			if err != nil {
+				t.Fatal(err)
+			}
+			checkOffset(t, c, off, d)
+		}
+	})
 	t.Run("arc too small", func(t *testing.T) {
 		c := geom.Contour{Closed: true, Vertices: []geom.Vertex{{P: geom.Vec2{X: -1}, Bulge: 1}, {P: geom.Vec2{X: 1}, Bulge: 1}}}
 		if _, err := OffsetContour(c, -2); err == nil {
@@ -160,4 +174,17 @@ func TestApplyKerf(t *testing.T) {
 			t.Error("accepted")
 		}
 	})
+}
+
+func TestOffsetRefusesFolding(t *testing.T) {
+	// A 1 mm wide slot cannot be shrunk by 0.6 mm each side.
+	slot := geom.Contour{Closed: true, Vertices: []geom.Vertex{
+		{P: geom.Vec2{X: 0, Y: 0}}, {P: geom.Vec2{X: 10, Y: 0}}, {P: geom.Vec2{X: 10, Y: 1}}, {P: geom.Vec2{X: 0, Y: 1}},
+	}}
+	if _, err := OffsetContour(slot, -0.6); err == nil {
+		t.Error("a fold was accepted")
+	}
+	if _, err := OffsetContour(slot, -0.4); err != nil {
+		t.Errorf("a 0.4 mm shrink of a 1 mm slot: %v", err)
+	}
 }

@@ -4,9 +4,11 @@ import (
 	"bytes"
 	"encoding/xml"
 	"math"
+	"os"
 	"os/exec"
 	"regexp"
 	"strconv"
+	"strings"
 	"testing"
 
 	"coilwright/cam/geom"
@@ -103,5 +105,45 @@ func TestSVGExternal(t *testing.T) {
 				t.Errorf("rendered page %.3f × %.3f pt, want %.3f × %.3f", w, h, tc.w*72/25.4, tc.h*72/25.4)
 			}
 		})
+	}
+}
+
+// svgelementsCount parses an SVG with svgelements and prints the ids of
+// its groups and the number of paths and circles it kept (it silently
+// drops a path whose data it cannot read).
+const svgelementsCount = `
+import sys, svgelements as s
+svg = s.SVG.parse(sys.argv[1])
+els = list(svg.elements())
+print(' '.join(sorted(e.id for e in els if isinstance(e, s.Group) and e.id)))
+print(sum(1 for e in els if isinstance(e, (s.Path, s.Circle))))
+`
+
+func TestSVGElementsKeepsEveryShape(t *testing.T) {
+	if err := exec.Command("/usr/bin/python3", "-c", "import svgelements").Run(); err != nil {
+		if os.Getenv("COILWRIGHT_REQUIRE_TOOLS") == "1" {
+			t.Fatal("python3-svgelements is required (COILWRIGHT_REQUIRE_TOOLS=1)")
+		}
+		t.Skip("python3-svgelements not installed")
+	}
+	d, err := ExpandText(plateDrawing())
+	if err != nil {
+		t.Fatal(err)
+	}
+	want := 0
+	for _, l := range d.Layers {
+		want += len(l.Entities)
+	}
+	var buf bytes.Buffer
+	if err := WriteSVG(&buf, plateDrawing(), SVGOptions{}); err != nil {
+		t.Fatal(err)
+	}
+	out, err := exec.Command("/usr/bin/python3", "-c", svgelementsCount, writeTempFile(t, "p.svg", buf.Bytes())).CombinedOutput()
+	if err != nil {
+		t.Fatalf("svgelements: %v\n%s", err, out)
+	}
+	lines := strings.Split(strings.TrimSpace(string(out)), "\n")
+	if lines[0] != "CUT MARK" || lines[1] != strconv.Itoa(want) {
+		t.Errorf("svgelements sees groups %q and %s shapes, want CUT MARK and %d", lines[0], lines[1], want)
 	}
 }

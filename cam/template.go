@@ -64,7 +64,7 @@ func TemplatePages(parts []TemplatePart, opt TemplateOptions) ([]*canvas.Canvas,
 	if opt.Page.Width == 0 {
 		opt.Page = PageA4
 	}
-	fam, err := markFont()
+	fam, err := DocumentFont()
 	if err != nil {
 		return nil, err
 	}

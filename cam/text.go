@@ -28,6 +28,12 @@ var markFont = sync.OnceValues(func() (*canvas.FontFamily, error) {
 	return f, nil
 })
 
+// DocumentFont returns the embedded Go Regular family that templates and
+// other PDF documents set their text in, so every machine renders and
+// embeds the same font. The family is loaded once and shared; callers must
+// not change it.
+func DocumentFont() (*canvas.FontFamily, error) { return markFont() }
+
 // textPath returns the outline of t as a canvas path in drawing
 // coordinates (mm, y up).
 func textPath(t geom.Text) (*canvas.Path, error) {

@@ -44,6 +44,12 @@ func TestThicknessLowersImpedance(t *testing.T) {
 		}
 		prev = z
 	}
+	// Source: Hammerstad & Jensen 1980 thickness correction; w/h = 5,
+	// t/h = 0.1 gives 48.3315 Ω (value computed from the published formula,
+	// a regression check of this implementation).
+	if z := AirStripImpedance(5, 1, 0.1); math.Abs(z-48.3315) > 1e-4 {
+		t.Errorf("w/h = 5, t/h = 0.1: %.4f Ω, want 48.3315", z)
+	}
 	if d := z0 - AirStripImpedance(5, 1, 1e-9); d > 1e-4 || d < 0 {
 		t.Errorf("vanishing thickness changed the impedance by %g Ω", d)
 	}
