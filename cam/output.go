@@ -70,6 +70,7 @@ type Output struct {
 	previous map[string]bool // files the previous build recorded
 	staged   []staged
 	names    map[string]bool
+	done     bool // committed: the staged files are in place
 }
 
 type staged struct {
@@ -152,7 +153,8 @@ func (o *Output) Add(name string, write func(io.Writer) error) error {
 	return nil
 }
 
-// Files returns the staged outputs sorted by name, for the manifest.
+// Files returns the staged (or committed) outputs sorted by name, for the
+// manifest.
 func (o *Output) Files() []ManifestFile {
 	out := make([]ManifestFile, len(o.staged))
 	for i, s := range o.staged {
@@ -188,7 +190,7 @@ func (o *Output) Commit(m Manifest) error {
 			return err
 		}
 	}
-	o.staged = nil
+	o.done = true
 	if err := os.Rename(mtmp, filepath.Join(o.dir, ManifestName)); err != nil {
 		return err
 	}
@@ -203,8 +205,11 @@ func (o *Output) Commit(m Manifest) error {
 }
 
 // Abort removes every staged temporary file; files already in the folder
-// are left untouched.
+// are left untouched. After Commit it does nothing.
 func (o *Output) Abort() {
+	if o.done {
+		return
+	}
 	for _, s := range o.staged {
 		os.Remove(s.tmp)
 	}

@@ -8,13 +8,14 @@ import (
 )
 
 // FormerFromDesign builds the former for a design from its [former] table,
-// winding it to the design's coil centreline.
+// its groove carrying the design's former path: the coil compensated for
+// springback.
 func FormerFromDesign(d *parts.Design) (*Former, error) {
 	s := d.Spec
 	f := &s.Former
 	deg := math.Pi / 180
 	p := FormerParams{
-		Hand:            int(d.Coil.Hand),
+		Hand:            int(d.Former.Hand),
 		Wire:            s.Wire.DiameterMM,
 		Clearance:       f.ClearanceMM,
 		GrooveDepth:     f.GrooveDepthRatio * s.Wire.DiameterMM,
@@ -35,12 +36,12 @@ func FormerFromDesign(d *parts.Design) (*Former, error) {
 		TextHeight:      f.TextHeightMM,
 		EndMargin:       f.EndMarginMM,
 		MinWall:         parts.MinFormerWallMM,
-		Labels:          [2]string{d.Coil.Hand.String(), FrequencyLabel(s.FrequencyMHz)},
+		Labels:          [2]string{d.Former.Hand.String(), FrequencyLabel(s.FrequencyMHz)},
 	}
 	if f.Drive == "bore" {
 		p.Drive = ThroughBore
 	}
-	return NewFormer(d.Coil, p)
+	return NewFormer(d.Former, p)
 }
 
 // FrequencyLabel returns the frequency as engraved, to three significant

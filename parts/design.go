@@ -18,6 +18,14 @@ type Design struct {
 	Estimates   HelixEstimates
 	Warnings    []Warning
 	EIRP        *EIRPFigure // nil unless rf.tx_power_dbm is set
+
+	// Former is the wire centreline in the former's groove: Coil
+	// compensated for springback, same kind, heights held.
+	Former Coil
+	// Wire is the wire, its (calibrated) material and springback model.
+	Wire WireDesign
+	// Patterns is the reflector plate and the matching wedge.
+	Patterns *Patterns
 }
 
 // Turn is one row of the per-turn table, evaluated at the turn's middle
@@ -32,6 +40,11 @@ type Turn struct {
 	HeightMM            float64 // centreline height above the reflector at mid-turn, mm
 	WireMM              float64 // wire centreline length of this turn, mm
 	InputResistanceOhm  float64 // Kraus estimate on this turn's circumference
+	FormerDiameterMM    float64 // centreline diameter in the former's groove at mid-turn, mm
+	PredictedDiameterMM float64 // relaxed diameter the model predicts from that former, mm
+	SpringbackMM        float64 // predicted growth in diameter on release, mm
+	ToleranceMM         float64 // ± inspection tolerance on the relaxed diameter, mm
+	OuterStrain         float64 // outer-fibre bending strain on the former
 }
 
 // EIRPFigure is the radiated power the report quotes, with its inputs.
@@ -88,6 +101,24 @@ func NewDesign(s *Spec) (*Design, error) {
 		d.EIRP = &EIRPFigure{TxPowerDBm: *s.RF.TxPowerDBm, FeederLossDB: s.RF.FeederLossDB, GainDBi: g, EIRPDBm: e, EIRPmW: DBmToMilliwatt(e)}
 	}
 	d.Warnings = d.warnings(cl)
+	if d.Wire, err = newWireDesign(s); err != nil {
+		return nil, err
+	}
+	if d.Former, err = compensateCoil(coil, d.Wire.Model); err != nil {
+		return nil, &SpecError{Key: "wire.material", Line: s.Line("wire.material"), Value: fmt.Sprintf("%q", s.Wire.Material),
+			Problem: "no former can wind this coil: " + err.Error(), Fix: "choose a softer temper or a thicker wire, or a smaller pitch angle"}
+	}
+	sw, err := d.springbackTurns()
+	if err != nil {
+		return nil, err
+	}
+	d.Warnings = append(d.Warnings, sw...)
+	p, warns, err := newPatterns(d)
+	if err != nil {
+		return nil, err
+	}
+	d.Patterns = p
+	d.Warnings = append(d.Warnings, warns...)
 	return d, nil
 }
 

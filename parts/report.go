@@ -5,28 +5,32 @@ import "math"
 // Report is the design summary written to design.json and design.md. Field
 // names carry their units; it is a plain value derived from a Design.
 type Report struct {
-	Kit                     string       `json:"kit"`
-	FrequencyMHz            float64      `json:"frequency_mhz"`
-	BandLowMHz              *float64     `json:"band_low_mhz,omitempty"`
-	BandHighMHz             *float64     `json:"band_high_mhz,omitempty"`
-	WavelengthMM            float64      `json:"wavelength_mm"`
-	Quantity                int          `json:"quantity"`
-	Shape                   string       `json:"shape"`
-	Hand                    string       `json:"hand"`
-	Feed                    string       `json:"feed"`
-	PitchMode               string       `json:"pitch_mode"`
-	TurnCount               float64      `json:"turn_count"`
-	BaseDiameterMM          float64      `json:"base_diameter_mm"`
-	TopDiameterMM           float64      `json:"top_diameter_mm"`
-	FirstTurnHeightMM       float64      `json:"first_turn_height_mm"`
-	AxialLengthMM           float64      `json:"axial_length_mm"`
-	WireLengthMM            float64      `json:"wire_length_mm"`
-	MeanCircumferenceLambda float64      `json:"mean_circumference_lambda"`
-	MeanSpacingLambda       float64      `json:"mean_spacing_lambda"`
-	Turns                   []TurnReport `json:"turns"`
-	Estimates               Estimates    `json:"estimates"`
-	EIRP                    *EIRPReport  `json:"eirp,omitempty"`
-	Warnings                []Warning    `json:"warnings"`
+	Kit                     string           `json:"kit"`
+	FrequencyMHz            float64          `json:"frequency_mhz"`
+	BandLowMHz              *float64         `json:"band_low_mhz,omitempty"`
+	BandHighMHz             *float64         `json:"band_high_mhz,omitempty"`
+	WavelengthMM            float64          `json:"wavelength_mm"`
+	Quantity                int              `json:"quantity"`
+	Shape                   string           `json:"shape"`
+	Hand                    string           `json:"hand"`
+	Feed                    string           `json:"feed"`
+	PitchMode               string           `json:"pitch_mode"`
+	TurnCount               float64          `json:"turn_count"`
+	BaseDiameterMM          float64          `json:"base_diameter_mm"`
+	TopDiameterMM           float64          `json:"top_diameter_mm"`
+	FirstTurnHeightMM       float64          `json:"first_turn_height_mm"`
+	AxialLengthMM           float64          `json:"axial_length_mm"`
+	WireLengthMM            float64          `json:"wire_length_mm"`
+	MeanCircumferenceLambda float64          `json:"mean_circumference_lambda"`
+	MeanSpacingLambda       float64          `json:"mean_spacing_lambda"`
+	Wire                    WireReport       `json:"wire"`
+	Former                  FormerReport     `json:"former"`
+	Turns                   []TurnReport     `json:"turns"`
+	Estimates               Estimates        `json:"estimates"`
+	EIRP                    *EIRPReport      `json:"eirp,omitempty"`
+	Reflector               *ReflectorReport `json:"reflector,omitempty"`
+	Wedge                   *WedgeReport     `json:"wedge,omitempty"`
+	Warnings                []Warning        `json:"warnings"`
 }
 
 // TurnReport is one row of the per-turn table in the report.
@@ -39,6 +43,11 @@ type TurnReport struct {
 	HeightMM            float64 `json:"height_mm"`
 	WireMM              float64 `json:"wire_mm"`
 	InputResistanceOhm  float64 `json:"input_resistance_ohm"`
+	TargetDiameterMM    float64 `json:"target_diameter_mm"`    // relaxed centreline diameter aimed for (= diameter_mm)
+	FormerDiameterMM    float64 `json:"former_diameter_mm"`    // centreline diameter in the former's groove
+	PredictedDiameterMM float64 `json:"predicted_diameter_mm"` // relaxed diameter the springback model predicts from the former
+	SpringbackMM        float64 `json:"springback_mm"`         // predicted growth in diameter on release
+	ToleranceMM         float64 `json:"tolerance_mm"`          // ± inspection tolerance on the relaxed diameter
 }
 
 // Estimates is the report's electrical summary: the headline figures a
@@ -97,6 +106,8 @@ func (d *Design) Report() Report {
 			AxialRatioDB:       20 * math.Log10(e.AxialRatio.Value),
 			Formulas:           e.All(),
 		},
+		Wire:     d.wireReport(),
+		Former:   d.formerReport(),
 		Warnings: d.Warnings,
 	}
 	if r.Warnings == nil {
@@ -107,8 +118,11 @@ func (d *Design) Report() Report {
 			Index: t.Index, DiameterMM: t.DiameterMM, CircumferenceLambda: t.CircumferenceLambda,
 			PitchAngleDeg: t.PitchAngleDeg, SpacingMM: t.SpacingMM, HeightMM: t.HeightMM,
 			WireMM: t.WireMM, InputResistanceOhm: t.InputResistanceOhm,
+			TargetDiameterMM: t.DiameterMM, FormerDiameterMM: t.FormerDiameterMM, PredictedDiameterMM: t.PredictedDiameterMM,
+			SpringbackMM: t.SpringbackMM, ToleranceMM: t.ToleranceMM,
 		})
 	}
+	d.patternReports(&r)
 	if d.EIRP != nil {
 		f := d.EIRP
 		r.EIRP = &EIRPReport{TxPowerDBm: f.TxPowerDBm, FeederLossDB: f.FeederLossDB, GainDBi: f.GainDBi, EIRPDBm: f.EIRPDBm, EIRPmW: f.EIRPmW, Caution: EIRPCaution}

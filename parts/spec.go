@@ -29,6 +29,9 @@ type Spec struct {
 	Dowel     DowelSpec     `toml:"dowel"`
 	Coax      CoaxSpec      `toml:"coax"`
 	RF        RFSpec        `toml:"rf"`
+	Stock     StockSpec     `toml:"stock"`
+	Wedge     WedgeSpec     `toml:"wedge"`
+	Cutting   CuttingSpec   `toml:"cutting"`
 	Former    FormerSpec    `toml:"former"`
 
 	pos positions // where each key was written; empty for a Spec built in code
@@ -94,9 +97,16 @@ func (s *Spec) Validate() error {
 	s.Dowel.validate(c, s)
 	s.Coax.validate(c, s)
 	s.RF.validate(c, s)
+	s.Stock.validate(c, s)
+	s.Wedge.validate(c, s)
+	s.Cutting.validate(c, s)
 	s.Former.validate(c, s)
 	if len(c.errs) == 0 {
 		s.Coil.validateFit(c, s)
+		s.Dowel.validateFit(c, s)
+	}
+	if len(c.errs) == 0 {
+		s.Wire.validateWinding(c, s)
 	}
 	if len(c.errs) == 0 {
 		s.Former.validateFit(c, s)

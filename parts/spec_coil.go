@@ -80,8 +80,8 @@ func (cs *CoilSpec) validate(c *checker, s *Spec) {
 	if cs.PitchAngleDeg != nil {
 		c.within("coil.pitch_angle_deg", *cs.PitchAngleDeg, MinPitchAngleDeg, MaxPitchAngleDeg, "degrees")
 	}
-	if cs.SpacingMM != nil && !(*cs.SpacingMM > 0) {
-		c.fail("coil.spacing_mm", num(*cs.SpacingMM), "must be above 0 mm", "give the axial advance per turn in mm")
+	if cs.SpacingMM != nil && !(*cs.SpacingMM > 0 && *cs.SpacingMM <= 3*lambda) {
+		c.fail("coil.spacing_mm", num(*cs.SpacingMM), fmt.Sprintf("must be above 0 and at most 3 wavelengths (%.1f mm)", 3*lambda), "give the axial advance per turn in mm")
 	}
 	if cs.PitchMode == "constant_angle" {
 		if cs.SpacingMM != nil {

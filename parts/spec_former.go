@@ -126,11 +126,32 @@ func (f *FormerSpec) DriveRadius() float64 {
 	return f.HexAcrossFlatsMM / math.Sqrt(3)
 }
 
+// formerPath returns the centreline the former's groove carries: the coil
+// compensated for springback, or the target coil when the wire model cannot
+// be built (its own checks report that).
+func formerPath(s *Spec) (Coil, error) {
+	coil, err := coilFromSpec(s)
+	if err != nil {
+		return Coil{}, err
+	}
+	w, err := newWireDesign(s)
+	if err != nil {
+		return coil, nil
+	}
+	if fc, err := compensateCoil(coil, w.Model); err == nil {
+		return fc, nil
+	}
+	return coil, nil
+}
+
 // validateFit checks that the former can be built around the coil: the
 // groove fits between turns with a land and does not reach the axis, and the
-// drive cut leaves a wall under the groove. It runs after the coil fit.
+// drive cut leaves a wall under the groove and room for the wire-lock hole.
+// When drive is not written and the default hex socket does not fit, it
+// falls back to a through-bore as wide as the walls allow (it mutates f).
+// It runs after the coil and wire checks.
 func (f *FormerSpec) validateFit(c *checker, s *Spec) {
-	coil, err := coilFromSpec(s)
+	coil, err := formerPath(s)
 	if err != nil {
 		return
 	}
@@ -149,24 +170,34 @@ func (f *FormerSpec) validateFit(c *checker, s *Spec) {
 			"raise the spacing or use thinner wire or less clearance")
 	}
 	rmin := math.Min(coil.StartRadius, coil.EndRadius)
-	bottom := rmin - d/2 // groove bottom radius at the narrow end
-	if wall := bottom - f.DriveRadius(); f.Drive == "bore" && wall < MinFormerWallMM {
-		c.fail("former.bore_diameter_mm", num(f.BoreDiameterMM), fmt.Sprintf("leaves a %.2f mm wall under the groove; at least %s mm is needed", wall, num(MinFormerWallMM)),
-			fmt.Sprintf("use a bore of at most %.1f mm", 2*(bottom-MinFormerWallMM)))
+	if 3.5*a > rmin {
+		c.fail("wire.diameter_mm", num(d), fmt.Sprintf("makes a %.2f mm groove too large for the former's %.2f mm smallest radius", 2*a, rmin), "use thinner wire or a wider coil")
+		return
 	}
-	if f.Drive == "hex" {
-		if wall := bottom - f.DriveRadius(); wall < MinFormerWallMM {
-			c.fail("former.hex_across_flats_mm", num(f.HexAcrossFlatsMM), fmt.Sprintf("leaves a %.2f mm wall under the groove; at least %s mm is needed", wall, num(MinFormerWallMM)),
-				`use drive = "bore" with a thin bore, or a smaller socket`)
+	bottom := rmin - d/2                  // groove bottom at the narrow end
+	startBottom := coil.StartRadius - d/2 // groove bottom at the wire-lock hole
+	// Room for the drive: a wall under the groove everywhere and a wire-lock
+	// hole of at least one wire diameter at the start.
+	room := math.Min(bottom-MinFormerWallMM, startBottom-MinFormerWallMM-d)
+	if f.Drive == "hex" && !c.has("former.drive") && f.DriveRadius() > room {
+		f.Drive = "bore"
+		if !c.has("former.bore_diameter_mm") {
+			f.BoreDiameterMM = math.Max(1, math.Min(f.BoreDiameterMM, math.Floor(20*room)/10))
 		}
 	}
-	// The wire-lock hole at the start stops a wall short of the drive cut;
-	// it must still take at least one wire diameter of wire.
-	if avail := coil.StartRadius - d/2 - f.DriveRadius() - MinFormerWallMM; avail < d {
-		c.fail("former.lock_hole_depth_mm", num(f.LockHoleDepthMM), fmt.Sprintf("only %.2f mm of wire-lock hole fits above the drive cut; at least one wire diameter (%s mm) is needed", avail, num(d)),
-			"use a smaller drive socket or bore, or a wider coil")
+	key, val := "former.hex_across_flats_mm", f.HexAcrossFlatsMM
+	if f.Drive == "bore" {
+		key, val = "former.bore_diameter_mm", f.BoreDiameterMM
 	}
-	if 3.5*a > rmin {
-		c.fail("wire.diameter_mm", num(d), fmt.Sprintf("makes a %.2f mm groove too large for the %.2f mm smallest coil radius", 2*a, rmin), "use thinner wire or a wider coil")
+	if wall := bottom - f.DriveRadius(); wall < MinFormerWallMM {
+		c.fail(key, num(val), fmt.Sprintf("leaves a %.2f mm wall under the groove; at least %s mm is needed", wall, num(MinFormerWallMM)),
+			"use a smaller drive socket or bore")
+		return
+	}
+	// The wire-lock hole stops a wall short of the drive cut; it must still
+	// take half a wire diameter of wire.
+	if avail := math.Min(f.LockHoleDepthMM, startBottom-f.DriveRadius()-MinFormerWallMM); avail < d/2 {
+		c.fail("former.lock_hole_depth_mm", num(f.LockHoleDepthMM), fmt.Sprintf("gives %.2f mm of wire-lock hole; at least half a wire diameter (%s mm) is needed", avail, num(d/2)),
+			"deepen the hole, or use a smaller drive socket or bore")
 	}
 }

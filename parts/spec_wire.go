@@ -3,23 +3,61 @@ package parts
 import (
 	"fmt"
 	"math"
+	"strconv"
+	"strings"
 )
 
-// WireSpec is the [wire] table: the wire the coil is wound from.
+// WireSpec is the [wire] table: the wire the coil is wound from and how its
+// springback is modelled.
 type WireSpec struct {
-	Material   string  `toml:"material"`    // material id from the library
+	Material   string  `toml:"material"`    // material id from the library (`coilwright materials`)
 	DiameterMM float64 `toml:"diameter_mm"` // bare wire diameter, 0.2–6 mm
+	// SpringbackModel is "perfectly-plastic" (default) or "hardening" (the
+	// material's strain-hardening law where the library has one).
+	SpringbackModel string `toml:"springback_model"`
+	// Calibration is the path of a calibration file written by
+	// `coilwright calibrate`, relative to the spec file; empty for none.
+	Calibration string `toml:"calibration"`
+	// InspectionToleranceMM overrides the per-turn inspection tolerance on
+	// the relaxed centreline diameter, mm (0.02–5).
+	InspectionToleranceMM *float64 `toml:"inspection_tolerance_mm"`
+
+	calibration *Calibration // attached by AttachCalibration
 }
 
 // Limits of the [wire] table, in mm.
 const (
-	MinWireMM = 0.2
-	MaxWireMM = 6.0
+	MinWireMM      = 0.2
+	MaxWireMM      = 6.0
+	MinToleranceMM = 0.02
+	MaxToleranceMM = 5.0
 )
+
+// Springback models a spec can name.
+const (
+	ModelPerfectlyPlastic = "perfectly-plastic"
+	ModelHardening        = "hardening"
+)
+
+// calibrationDiameterSlack is the relative difference between the spec's
+// wire and a calibration's test wire beyond which the design warns.
+// Common practice (no published source): wire of another gauge is another
+// draw, with its own temper.
+const calibrationDiameterSlack = 0.02
 
 func (w *WireSpec) validate(c *checker, s *Spec) {
 	if w.Material == "" {
 		c.fail("wire.material", "", "is required", `add material = "copper-annealed" to [wire]`)
+	} else if _, err := LookupMaterial(w.Material); err != nil {
+		c.fail("wire.material", strconv.Quote(w.Material), "is not in the material library: must be one of "+quoteAll(MaterialIDs()),
+			"pick an id from `coilwright materials`")
+	}
+	c.oneOf("wire.springback_model", &w.SpringbackModel, ModelPerfectlyPlastic, ModelPerfectlyPlastic, ModelHardening)
+	if w.InspectionToleranceMM != nil {
+		c.within("wire.inspection_tolerance_mm", *w.InspectionToleranceMM, MinToleranceMM, MaxToleranceMM, "mm")
+	}
+	if c.has("wire.calibration") && strings.TrimSpace(w.Calibration) == "" {
+		c.fail("wire.calibration", `""`, "must name a calibration file", "delete the key, or give the file `coilwright calibrate` wrote")
 	}
 	if !c.has("wire.diameter_mm") && w.DiameterMM == 0 {
 		c.fail("wire.diameter_mm", "", fmt.Sprintf("is required: %s to %s mm", num(MinWireMM), num(MaxWireMM)), "add diameter_mm = 1.0 to [wire]")
@@ -29,3 +67,65 @@ func (w *WireSpec) validate(c *checker, s *Spec) {
 		return
 	}
 }
+
+// validateWinding checks, once the rest of the spec is valid, that a former
+// can be compensated for the coil: a stiff wire on a steep helix would need
+// a former bent tighter than any helix with the coil's spacing can be.
+func (w *WireSpec) validateWinding(c *checker, s *Spec) {
+	if err := checkWinding(s); err != nil {
+		c.fail("wire.material", strconv.Quote(w.Material), "no former can wind this coil: "+err.Error(),
+			"choose a softer temper or a thicker wire, or a smaller pitch angle")
+	}
+}
+
+// checkWinding builds the coil and the wire's springback model and
+// compensates the coil's ends.
+func checkWinding(s *Spec) error {
+	coil, err := coilFromSpec(s)
+	if err != nil {
+		return nil // reported by the coil's own checks
+	}
+	w, err := newWireDesign(s)
+	if err != nil {
+		return err
+	}
+	_, err = compensateCoil(coil, w.Model)
+	return err
+}
+
+// Hardening reports whether the spec asks for the hardening springback model.
+func (w *WireSpec) Hardening() bool { return w.SpringbackModel == ModelHardening }
+
+// AttachCalibration gives the spec the calibration read from the file its
+// wire.calibration key names; NewDesign then uses the calibrated yield. It
+// returns a *SpecError when the calibration is for another material or was
+// fitted with the other springback model. It mutates s.
+func (s *Spec) AttachCalibration(cal Calibration) error {
+	w := &s.Wire
+	fail := func(problem, fix string) error {
+		return &SpecError{Key: "wire.calibration", Line: s.Line("wire.calibration"), Value: strconv.Quote(w.Calibration), Problem: problem, Fix: fix}
+	}
+	if cal.Material != w.Material {
+		return fail(fmt.Sprintf("calibration is for material %q, but wire.material = %q", cal.Material, w.Material),
+			"calibrate this wire, or point to its own calibration file")
+	}
+	if cal.Hardening != w.Hardening() {
+		model := ModelPerfectlyPlastic
+		if cal.Hardening {
+			model = ModelHardening
+		}
+		return fail(fmt.Sprintf("calibration was fitted with springback_model = %q, the spec asks for %q", model, w.SpringbackModel),
+			fmt.Sprintf("set springback_model = %q, or calibrate again with the spec's model", model))
+	}
+	prev := w.calibration
+	w.calibration = &cal
+	if err := checkWinding(s); err != nil {
+		w.calibration = prev
+		return fail("with the calibrated yield no former can wind this coil: "+err.Error(),
+			"check the calibration, or choose a softer temper or a thicker wire")
+	}
+	return nil
+}
+
+// CalibrationData returns the attached calibration, or nil.
+func (w *WireSpec) CalibrationData() *Calibration { return w.calibration }

@@ -40,6 +40,8 @@ type outputStep struct {
 func buildSteps() []outputStep {
 	return []outputStep{
 		{"design report", writeDesign},
+		{"cut list and build sheet", writeSheet},
+		{"cut patterns", writePatterns},
 		{"winding former", writeFormer},
 	}
 }
@@ -122,7 +124,7 @@ func slug(name string) string {
 	var b strings.Builder
 	dash := false
 	for _, r := range strings.ToLower(name) {
-		if unicode.IsLetter(r) && r < unicode.MaxASCII || unicode.IsDigit(r) {
+		if r < unicode.MaxASCII && (unicode.IsLetter(r) || unicode.IsDigit(r)) {
 			if dash && b.Len() > 0 {
 				b.WriteByte('-')
 			}

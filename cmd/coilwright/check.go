@@ -66,9 +66,16 @@ func runCheck(w io.Writer, path string, o checkOptions) error {
 	fmt.Fprintf(tw, "input resistance\t%.0f Ω\n", r.Estimates.InputResistanceOhm)
 	fmt.Fprintf(tw, "axial ratio\t%.3f (%.2f dB)\n", r.Estimates.AxialRatio, r.Estimates.AxialRatioDB)
 	tw.Flush()
-	fmt.Fprintln(w, "\nturn  diameter mm  C/λ    pitch °  spacing mm")
+	calibrated := ""
+	if r.Wire.Calibrated {
+		calibrated = " (calibrated)"
+	}
+	fmt.Fprintf(w, "\nwire: %s, %g mm, yield %.0f MPa%s; former %.2f–%.2f mm\n", r.Wire.Material, r.Wire.DiameterMM, r.Wire.YieldMPa,
+		calibrated, r.Former.BaseDiameterMM, r.Former.TopDiameterMM)
+	fmt.Fprintln(w, "\nturn  diameter mm  C/λ    pitch °  spacing mm  former mm  springback mm  tolerance mm")
 	for _, t := range r.Turns {
-		fmt.Fprintf(w, "%4d  %11.2f  %5.3f  %7.2f  %10.2f\n", t.Index, t.DiameterMM, t.CircumferenceLambda, t.PitchAngleDeg, t.SpacingMM)
+		fmt.Fprintf(w, "%4d  %11.2f  %5.3f  %7.2f  %10.2f  %9.2f  %13.2f  %12.2f\n", t.Index, t.DiameterMM, t.CircumferenceLambda, t.PitchAngleDeg, t.SpacingMM,
+			t.FormerDiameterMM, t.SpringbackMM, t.ToleranceMM)
 	}
 	if len(r.Warnings) > 0 {
 		fmt.Fprintln(w, "\nwarnings:")

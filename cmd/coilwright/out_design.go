@@ -19,11 +19,15 @@ var reportFuncs = template.FuncMap{
 	"f3":    func(v float64) string { return fmt.Sprintf("%.3f", v) },
 	"g":     func(v float64) string { return fmt.Sprintf("%g", v) },
 	"deref": func(p *float64) float64 { return *p },
+	"pct":   func(v float64) float64 { return 100 * v },
 }
 
 // writeDesign writes design.md and design.json.
 func writeDesign(ctx *buildContext) error {
 	r := ctx.spec.Design.Report()
+	if err := addPanels(ctx.spec.Design, &r); err != nil {
+		return err
+	}
 	if err := ctx.out.Add("design.json", func(w io.Writer) error {
 		enc := json.NewEncoder(w)
 		enc.SetIndent("", "  ")

@@ -48,5 +48,7 @@ func commands() []*cobra.Command {
 		newNewCmd(),
 		newCheckCmd(),
 		newBuildCmd(),
+		newMaterialsCmd(),
+		newCalibrateCmd(),
 	}
 }

@@ -53,6 +53,9 @@ func loadSpec(path, demo string) (*loadedSpec, error) {
 	if err != nil {
 		return nil, inputError{l.Name, err}
 	}
+	if err := attachCalibration(path, s); err != nil {
+		return nil, inputError{l.Name, err}
+	}
 	d, err := parts.NewDesign(s)
 	if err != nil {
 		return nil, inputError{l.Name, err}

@@ -1,0 +1,58 @@
+package cam
+
+import (
+	"bytes"
+	"io"
+	"math"
+	"testing"
+)
+
+func BenchmarkWriteDXF(b *testing.B) {
+	d := plateDrawing()
+	var buf bytes.Buffer
+	if err := WriteDXF(&buf, d, DXFOptions{}); err != nil {
+		b.Fatal(err)
+	}
+	b.SetBytes(int64(buf.Len()))
+	b.ReportAllocs()
+	for b.Loop() {
+		if err := WriteDXF(io.Discard, d, DXFOptions{}); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
+
+func BenchmarkWriteSVG(b *testing.B) {
+	d := plateDrawing()
+	var buf bytes.Buffer
+	if err := WriteSVG(&buf, d, SVGOptions{}); err != nil {
+		b.Fatal(err)
+	}
+	b.SetBytes(int64(buf.Len()))
+	b.ReportAllocs()
+	for b.Loop() {
+		if err := WriteSVG(io.Discard, d, SVGOptions{}); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
+
+func BenchmarkNestPolygon(b *testing.B) {
+	poly := strip(8.2, math.Pi/2, 4.6, 2.7)
+	for _, size := range []struct {
+		name string
+		s    Sheet
+	}{
+		{"sheet 100 mm", Sheet{Width: 100, Height: 100, Margin: 5, Spacing: 2}},
+		{"sheet 300 mm", Sheet{Width: 300, Height: 200, Margin: 5, Spacing: 2}},
+	} {
+		b.Run(size.name, func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				if _, err := NestPolygon(poly, 10, size.s, NestOptions{Interlock: true}); err != nil {
+					b.Fatal(err)
+				}
+			}
+		})
+	}
+}

@@ -1,0 +1,45 @@
+package cam
+
+import (
+	"os"
+	"os/exec"
+	"path/filepath"
+	"testing"
+)
+
+// needTool returns the path of an external checker, skipping the test when
+// it is missing unless COILWRIGHT_REQUIRE_TOOLS=1 demands it.
+func needTool(t *testing.T, name string) string {
+	t.Helper()
+	p, err := exec.LookPath(name)
+	if err != nil {
+		if os.Getenv("COILWRIGHT_REQUIRE_TOOLS") == "1" {
+			t.Fatalf("%s is required (COILWRIGHT_REQUIRE_TOOLS=1) but not installed", name)
+		}
+		t.Skipf("%s not installed", name)
+	}
+	return p
+}
+
+// needEzdxf skips (or fails) unless the system Python has ezdxf.
+func needEzdxf(t *testing.T) string {
+	t.Helper()
+	const py = "/usr/bin/python3"
+	if err := exec.Command(py, "-c", "import ezdxf").Run(); err != nil {
+		if os.Getenv("COILWRIGHT_REQUIRE_TOOLS") == "1" {
+			t.Fatalf("python3-ezdxf is required (COILWRIGHT_REQUIRE_TOOLS=1): %v", err)
+		}
+		t.Skip("python3-ezdxf not installed")
+	}
+	return py
+}
+
+// writeTempFile writes b to a file called name in a fresh test folder.
+func writeTempFile(t *testing.T, name string, b []byte) string {
+	t.Helper()
+	p := filepath.Join(t.TempDir(), name)
+	if err := os.WriteFile(p, b, 0o644); err != nil {
+		t.Fatal(err)
+	}
+	return p
+}

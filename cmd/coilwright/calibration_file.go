@@ -1,0 +1,36 @@
+package main
+
+import (
+	"errors"
+	"io/fs"
+	"os"
+	"path/filepath"
+
+	"coilwright/parts"
+)
+
+// attachCalibration reads the calibration file a spec's wire.calibration key
+// names (relative to the spec's folder, or to the working folder for an
+// embedded demo) and attaches it to the spec.
+func attachCalibration(specPath string, s *parts.Spec) error {
+	name := s.Wire.Calibration
+	if name == "" {
+		return nil
+	}
+	path := name
+	if !filepath.IsAbs(path) && specPath != "" {
+		path = filepath.Join(filepath.Dir(specPath), name)
+	}
+	b, err := os.ReadFile(path)
+	if errors.Is(err, fs.ErrNotExist) {
+		return inputError{path, errors.New("calibration file not found; write one with `coilwright calibrate`, or remove wire.calibration from the spec")}
+	}
+	if err != nil {
+		return inputError{path, err}
+	}
+	cal, err := parts.ParseCalibration(b)
+	if err != nil {
+		return inputError{path, err}
+	}
+	return s.AttachCalibration(cal)
+}

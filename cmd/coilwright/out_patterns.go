@@ -1,0 +1,180 @@
+package main
+
+import (
+	"fmt"
+	"io"
+	"os"
+
+	"coilwright/cam"
+	"coilwright/cam/geom"
+	"coilwright/parts"
+)
+
+// nestTolerance is the chord tolerance in mm used to flatten outlines for
+// nesting; it is added to the spacing so chords inside arcs cannot bring
+// parts closer than asked.
+const nestTolerance = 0.01
+
+// cutPart is one flat part ready for its files: the drawing as designed,
+// the drawing compensated for the kerf, and the panel plan for the batch.
+type cutPart struct {
+	name    string // file stem: "reflector" or "wedge"
+	title   string
+	label   string
+	notes   []string
+	nominal geom.Drawing
+	cut     geom.Drawing
+	nest    cam.Nest
+	sheet   cam.Sheet
+}
+
+// cutParts works out both parts of d with their kerf offsets and nests.
+func cutParts(d *parts.Design) ([]cutPart, error) {
+	p := d.Patterns
+	s := d.Spec
+	sheet := cam.Sheet{Width: s.Cutting.SheetWidthMM, Height: s.Cutting.SheetHeightMM, Margin: s.Cutting.MarginMM, Spacing: s.Cutting.SpacingMM}
+	w := p.Wedge
+	var out []cutPart
+	if p.Reflector != nil {
+		rin := p.Reflector.Input
+		out = append(out, cutPart{name: "reflector", title: "Reflector", label: p.ReflectorLabel, nominal: p.Reflector.Drawing,
+			notes: []string{
+				fmt.Sprintf("%s %s, %.2f mm thick; size %.2f mm. Feed hole (%s) %.2f mm from the centre at the 0° tick.",
+					p.Material.Name, s.Reflector.Shape, s.Reflector.ThicknessMM, rin.Size, s.Reflector.Connector, rin.FeedRadius),
+				"Cut on the black lines; blue lines are marks (centre cross, coil start tick and angle, kit name).",
+			}})
+	}
+	out = append(out, cutPart{name: "wedge", title: "Matching wedge", label: p.WedgeLabel, nominal: w.Drawing(),
+		notes: []string{
+			fmt.Sprintf("%s, %.2f mm thick; %.2f mm along the centreline, %.2f mm wide at the feed end (tick), %.2f mm at the far end.",
+				p.WedgeMaterial.Name, s.Wedge.ThicknessMM, w.Length, w.FeedWidth, w.EndWidth),
+			fmt.Sprintf("Solder it flat under the first %.0f° of wire, the ticked end to the feed pin. Expected |Γ| %.2f (VSWR %.2f) at %.0f MHz.",
+				s.Wedge.SpanDeg, w.Reflection, parts.VSWR(w.Reflection), s.FrequencyMHz),
+		}})
+	for i := range out {
+		c, err := cam.ApplyKerf(out[i].nominal, p.Kerf)
+		if err != nil {
+			return nil, fmt.Errorf("%s: %w", out[i].name, err)
+		}
+		out[i].cut, out[i].sheet = c, sheet
+		switch {
+		case out[i].name == "wedge":
+			out[i].nest, err = cam.NestPolygon(outerOutline(c), s.Quantity, sheet, cam.NestOptions{Interlock: true, Tolerance: nestTolerance})
+		case p.Reflector.Input.Shape == parts.ReflectorDisc:
+			out[i].nest, err = cam.NestDiscs(p.Reflector.Input.Size/2+p.Kerf/2, s.Quantity, sheet)
+		default:
+			out[i].nest, err = cam.NestPolygon(outerOutline(c), s.Quantity, sheet, cam.NestOptions{Tolerance: nestTolerance, Angles: []float64{0}})
+		}
+		if err != nil {
+			return nil, fmt.Errorf("%s panel: %w", out[i].name, err)
+		}
+	}
+	return out, nil
+}
+
+// outerOutline returns the first CUT entity, the part's outline, as a
+// polygon.
+func outerOutline(d geom.Drawing) geom.Polyline {
+	l, _ := d.Layer(parts.LayerCut)
+	switch e := l.Entities[0].(type) {
+	case geom.Circle:
+		return e.Flatten(nestTolerance)
+	case geom.Contour:
+		return e.Flatten(nestTolerance)
+	}
+	return nil
+}
+
+// panelReport summarises a part's nest for design.json.
+func (c cutPart) panelReport(quantity int) *parts.PanelReport {
+	return &parts.PanelReport{
+		SheetWidthMM: c.sheet.Width, SheetHeightMM: c.sheet.Height, MarginMM: c.sheet.Margin, SpacingMM: c.sheet.Spacing,
+		Quantity: quantity, PartsPerSheet: c.nest.PerSheet, Sheets: c.nest.Sheets,
+	}
+}
+
+// addPanels puts each part's nesting figures into the report.
+func addPanels(d *parts.Design, r *parts.Report) error {
+	cps, err := cutParts(d)
+	if err != nil {
+		return err
+	}
+	for _, c := range cps {
+		switch {
+		case c.name == "reflector" && r.Reflector != nil:
+			r.Reflector.Panel = c.panelReport(d.Spec.Quantity)
+		case c.name == "wedge" && r.Wedge != nil:
+			r.Wedge.Panel = c.panelReport(d.Spec.Quantity)
+		}
+	}
+	return nil
+}
+
+// writePatterns writes each part's DXF and SVG (kerf compensated), the
+// 1:1 paper templates, and, for a batch, each part's panel files.
+func writePatterns(ctx *buildContext) error {
+	d := ctx.spec.Design
+	s := d.Spec
+	cps, err := cutParts(d)
+	if err != nil {
+		return err
+	}
+	version := cam.DXFR12
+	if s.Cutting.DXF == "R2000" {
+		version = cam.DXFR2000
+	}
+	var tparts []cam.TemplatePart
+	for _, c := range cps {
+		comments := []string{
+			fmt.Sprintf("coilwright %s: %s, %s", Version, s.Kit, c.title),
+			"Units: millimetres. Layer CUT: cut paths; layer MARK: marks, not cut through.",
+			c.label,
+		}
+		if err := writeDrawing(ctx, c.name, c.cut, nil, version, comments); err != nil {
+			return err
+		}
+		if s.Quantity > 1 {
+			frame := geom.Box2{Max: geom.Vec2{X: c.sheet.Width, Y: c.sheet.Height}}
+			pc := append(comments,
+				fmt.Sprintf("Panel: sheet %g x %g mm, origin at its lower-left corner, margin %g mm, spacing %g mm.", c.sheet.Width, c.sheet.Height, c.sheet.Margin, c.sheet.Spacing),
+				fmt.Sprintf("%d parts per sheet; %d sheets for %d parts; this panel holds %d.", c.nest.PerSheet, c.nest.Sheets, s.Quantity, len(c.nest.Placements)))
+			if err := writeDrawing(ctx, "panel-"+c.name, cam.PanelDrawing(c.cut, c.nest), &frame, version, pc); err != nil {
+				return err
+			}
+		}
+		tparts = append(tparts, cam.TemplatePart{Title: c.title, Notes: append(c.notes, c.label), Drawing: c.nominal})
+	}
+	paper, err := cam.PageSizeByName(s.Cutting.Paper)
+	if err != nil {
+		return err
+	}
+	var warns []string
+	if d.Patterns.LaserHalogen {
+		warns = append(warns, "WARNING: laser cutting was asked for FR-4, a halogenated laminate. Do not laser-cut it.")
+	}
+	pages, err := cam.TemplatePages(tparts, cam.TemplateOptions{
+		Page: paper, Heading: s.Kit + ": 1:1 cutting templates (" + d.Coil.Hand.String() + ")", Warnings: warns,
+	})
+	if err != nil {
+		return err
+	}
+	created, err := cam.SourceDateEpoch(os.Getenv("SOURCE_DATE_EPOCH"))
+	if err != nil {
+		return err
+	}
+	return ctx.out.Add("templates.pdf", func(w io.Writer) error {
+		return cam.WritePDF(w, pages, cam.PDFOptions{Title: s.Kit + " cutting templates", Creator: "coilwright " + Version, Created: created})
+	})
+}
+
+// writeDrawing writes name.dxf and name.svg for one drawing.
+func writeDrawing(ctx *buildContext, name string, d geom.Drawing, frame *geom.Box2, version cam.DXFVersion, comments []string) error {
+	if err := ctx.out.Add(name+".dxf", func(w io.Writer) error {
+		return cam.WriteDXF(w, d, cam.DXFOptions{Version: version, Comments: comments})
+	}); err != nil {
+		return err
+	}
+	return ctx.out.Add(name+".svg", func(w io.Writer) error {
+		return cam.WriteSVG(w, d, cam.SVGOptions{Frame: frame, Title: comments[0], Comments: comments[1:]})
+	})
+}

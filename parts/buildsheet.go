@@ -1,0 +1,336 @@
+// The build sheet's content, independent of its format: the cover facts,
+// the design table, tools and materials, the cautions, the numbered steps
+// (each repeating the cautions it needs), the inspection table and the
+// closing note. Numbers are written into the text here, once, so the
+// Markdown and PDF sheets say the same thing.
+
+package parts
+
+import (
+	"fmt"
+	"strings"
+)
+
+// HazardID names one caution of the build sheet.
+type HazardID string
+
+// The cautions every build sheet carries. Sources (DOMAIN §8): UK HSE,
+// "Solderers — asthma" and INDG248 (rosin flux fume, lead); EU-OSHA
+// OSHwiki, "Occupational exposure to epoxy resins", and HSE (epoxy skin
+// sensitisation); Barontini et al., Ind. Eng. Chem. Res. 44, 2005
+// (brominated fumes from heated FR-4); the e.i.r.p. definition of the ITU
+// Radio Regulations (EIRP = P − loss + G). Eye protection when cutting
+// hard wire and the burn precautions are common practice (no published
+// source).
+const (
+	HazardSolder   HazardID = "solder"
+	HazardBurns    HazardID = "burns"
+	HazardEpoxy    HazardID = "epoxy"
+	HazardEyes     HazardID = "eyes"
+	HazardLaminate HazardID = "laminate"
+	HazardRF       HazardID = "rf"
+)
+
+// Hazard is one safety caution: a heading the sheet prints in full and
+// again at each step that needs it, and its text.
+type Hazard struct {
+	ID      HazardID
+	Heading string
+	Text    string
+}
+
+// Step is one numbered assembly step.
+type Step struct {
+	Number   int
+	Title    string
+	Text     []string // paragraphs, in order
+	Cautions []Hazard // repeated from the cautions section
+}
+
+// SheetRow is one label and value of a build-sheet table.
+type SheetRow struct {
+	Label string
+	Value string
+}
+
+// BuildSheet is everything a kit's build sheet says. It is a plain value
+// built by NewBuildSheet.
+type BuildSheet struct {
+	Kit        string
+	SpecSHA256 string
+	Hand       string // "RHCP" or "LHCP"
+	HandWords  string // how to see the hand on the coil
+	Summary    string // one line under the title
+	Paper      string // "A4" or "Letter"
+	Quantity   int
+
+	Design     []SheetRow
+	Tools      []string
+	Materials  []SheetRow
+	Cautions   []Hazard
+	Steps      []Step
+	Inspection []InspectionRow
+	// InspectionNote says how to measure and where the tolerance comes from.
+	InspectionNote string
+	Warnings       []Warning
+	Closing        []string
+
+	View SideView
+}
+
+// ReturnLossTargetDB is the return loss across the band a finished
+// antenna should reach: 10 dB, a VSWR of about 1.9. Common practice (no
+// published source).
+const ReturnLossTargetDB = 10.0
+
+// NewBuildSheet assembles the build sheet of a design from its cut list.
+// specSHA256 is the hex hash of the spec's bytes, printed on the cover.
+func NewBuildSheet(d *Design, cl *CutList, specSHA256 string) *BuildSheet {
+	s := d.Spec
+	var strip *Wedge
+	if d.Patterns != nil {
+		strip = d.Patterns.Wedge
+	}
+	b := &BuildSheet{Kit: s.Kit, SpecSHA256: specSHA256, Hand: d.Coil.Hand.String(), Paper: s.Cutting.Paper,
+		Quantity: s.Quantity, Inspection: d.InspectionTable()}
+	b.HandWords = handWords(d.Coil.Hand)
+	b.View = d.SideView(cl)
+	b.Summary = fmt.Sprintf("%s MHz %s helix, %s turns, %s", num(s.FrequencyMHz), s.Coil.Shape, num(d.Coil.Turns), b.Hand)
+	b.Design = designRows(d, cl)
+	b.Tools = tools(s)
+	b.Materials = materials(s, cl)
+	b.Cautions = cautions(d)
+	b.Steps = steps(d, cl, strip, b.Cautions)
+	b.InspectionNote = "Measure each turn across its middle with calipers over the outside of the wire, at two places 90° apart, and write the mean in the blank column. "
+	if s.Wire.InspectionToleranceMM != nil {
+		b.InspectionNote += fmt.Sprintf("The tolerance, ±%s mm, is set in the spec.", num(*s.Wire.InspectionToleranceMM))
+	} else {
+		b.InspectionNote += fmt.Sprintf("The tolerance is ±%s %% of the turn's diameter, at least %s mm: a turn 1 %% too large tunes about 1 %% low.", num(100*InspectionFraction), num(InspectionFloorMM))
+	}
+	b.Warnings = append(append([]Warning{}, d.Warnings...), cl.Warnings...)
+	b.Closing = []string{
+		"This sheet is a guide for careful hobby construction, not professional advice. Follow the local regulations, electrical and workshop codes, and the conditions of any licence that apply where you build and transmit; where they differ from this sheet, they win.",
+		"Transmitting needs the right to use the band: check the power and EIRP limits for your country and licence class, or have a licensed operator check the station.",
+		"Handle solder, flux, epoxy and laminate as their makers' safety data sheets say, and dispose of offcuts and waste as your local rules require.",
+	}
+	return b
+}
+
+func handWords(h Hand) string {
+	if h == LeftHand {
+		return "left-hand winding, against an ordinary screw thread: seen from the open end, looking down at the reflector, the wire turns clockwise as it rises"
+	}
+	return "right-hand winding, like an ordinary screw thread: seen from the open end, looking down at the reflector, the wire turns counter-clockwise as it rises"
+}
+
+func mm(v float64) string  { return fmt.Sprintf("%.1f mm", v) }
+func mm2(v float64) string { return fmt.Sprintf("%.2f mm", v) }
+
+func designRows(d *Design, cl *CutList) []SheetRow {
+	s := d.Spec
+	band := "not given"
+	if s.BandLowMHz != nil && s.BandHighMHz != nil {
+		band = fmt.Sprintf("%s–%s MHz", num(*s.BandLowMHz), num(*s.BandHighMHz))
+	}
+	rows := []SheetRow{
+		{"Centre frequency", fmt.Sprintf("%s MHz (wavelength %.2f mm)", num(s.FrequencyMHz), d.Wavelength)},
+		{"Band", band},
+		{"Hand", fmt.Sprintf("%s (%s winding)", d.Coil.Hand, map[Hand]string{RightHand: "right-hand", LeftHand: "left-hand"}[d.Coil.Hand])},
+		{"Coil", fmt.Sprintf("%s, %s turns, %s feed", s.Coil.Shape, num(d.Coil.Turns), s.Coil.Feed)},
+		{"Diameter (wire centre)", fmt.Sprintf("%s at the base, %s at the top", mm2(2*d.Coil.StartRadius), mm2(2*d.Coil.EndRadius))},
+		{"Pitch", fmt.Sprintf("%.1f° at the first turn, %.2f mm per turn at the first turn", d.Turns[0].PitchAngleDeg, d.Turns[0].SpacingMM)},
+		{"First turn height", fmt.Sprintf("%s, wire centre above the reflector", mm2(d.Coil.Z0))},
+		{"Coil height", fmt.Sprintf("%s from the first turn to the top (%s to the top of the wire)", mm(d.AxialLength), mm(d.Coil.Z0+d.AxialLength+s.Wire.DiameterMM/2))},
+		{"Wire", fmt.Sprintf("%s, Ø%s mm; winding %s, blank %s", s.Wire.Material, num(s.Wire.DiameterMM), mm(cl.Wire.ArcMM), mm(cl.Wire.LengthMM))},
+		{"Reflector", fmt.Sprintf("%s, %s across, %s mm thick", s.Reflector.Shape, mm(s.Reflector.SizeMM(d.Wavelength)), num(s.Reflector.ThicknessMM))},
+		{"Support rod", fmt.Sprintf("%s, Ø%s mm × %s", cl.Dowel.Material, num(cl.Dowel.DiameterMM), mm(cl.Dowel.LengthMM))},
+		{"Feed cable", fmt.Sprintf("%s, %s to the reflector", cl.Coax.Cable.Name, mm(cl.Coax.FinishedMM))},
+		{"Gain (estimate)", fmt.Sprintf("%.1f dBi, %s", d.Estimates.Gain.Value, d.Estimates.Gain.Formula)},
+		{"Half-power beamwidth (estimate)", fmt.Sprintf("%.0f°", d.Estimates.HPBW.Value)},
+	}
+	if d.EIRP != nil {
+		rows = append(rows, SheetRow{"EIRP", fmt.Sprintf("%.1f dBm (%.0f mW) with %s dBm in and %s dB feeder loss", d.EIRP.EIRPDBm, d.EIRP.EIRPmW, num(d.EIRP.TxPowerDBm), num(d.EIRP.FeederLossDB))})
+	}
+	return rows
+}
+
+func tools(s *Spec) []string {
+	return []string{
+		"The printed winding former for this kit (check its hand mark reads " + s.Coil.Hand + ")",
+		"Safety glasses; nitrile gloves; fume extractor or a fan drawing fumes away",
+		"Temperature-controlled soldering iron with a stand; flux; solder wire Ø" + num(s.Stock.SolderWireMM) + " mm",
+		"Side cutters or wire cutters rated for the wire; flat-nose pliers; a fine file",
+		"Steel rule; calipers reading to 0.05 mm; fine marker",
+		"Coax stripping tool or a sharp knife; small pipe cutter for semi-rigid cable",
+		"Drill with 2.5 mm and feed-hole drills; deburring tool",
+		"Hot-air tool or heat gun for heat-shrink",
+		"Mixing cup and stick for epoxy",
+		"Multimeter; vector network analyser (VNA) covering the band, with a calibration kit",
+	}
+}
+
+func materials(s *Spec, cl *CutList) []SheetRow {
+	rows := []SheetRow{
+		{"Wire blank", fmt.Sprintf("%s, Ø%s mm, %s", cl.Wire.Material, num(cl.Wire.DiameterMM), mm(cl.Wire.LengthMM))},
+		{"Support rod", fmt.Sprintf("%s, Ø%s mm, %s", cl.Dowel.Material, num(cl.Dowel.DiameterMM), mm(cl.Dowel.LengthMM))},
+		{"Feed cable", fmt.Sprintf("%s, cut %s", cl.Coax.Cable.Name, mm(cl.Coax.CutMM))},
+		{"Heat-shrink", fmt.Sprintf("2:1 sleeve Ø%s mm (shrinks to Ø%s mm), %s", num(cl.Sleeve.SuppliedMM), num(cl.Sleeve.RecoveredMM), mm(cl.Sleeve.LengthMM))},
+		{"Reflector", fmt.Sprintf("%s sheet, %s mm thick, cut from the template", s.Reflector.Shape, num(s.Reflector.ThicknessMM))},
+		{"Matching strip", "thin copper or brass sheet, cut from the template"},
+		{"Solder", fmt.Sprintf("about %s mm of Ø%s mm wire", num(cl.Solder.Amount), num(s.Stock.SolderWireMM))},
+		{"Epoxy", fmt.Sprintf("about %s mL mixed, slow-setting", num(cl.Epoxy.Amount))},
+	}
+	for _, h := range cl.Hardware {
+		rows = append(rows, SheetRow{"Hardware", fmt.Sprintf("%d × %s", h.Count, h.Item)})
+	}
+	return rows
+}
+
+func cautions(d *Design) []Hazard {
+	gain := d.Estimates.Gain.Value
+	rf := fmt.Sprintf("This antenna concentrates power: its estimated gain is %.1f dBi, so EIRP (dBm) = transmitter power (dBm) − feeder loss (dB) + %.1f dB.", gain, gain)
+	if e := d.EIRP; e != nil {
+		rf += fmt.Sprintf(" With %s dBm in and %s dB loss that is %.1f dBm (%.0f mW).", num(e.TxPowerDBm), num(e.FeederLossDB), e.EIRPDBm, e.EIRPmW)
+	}
+	rf += " EIRP limits depend on the band, the country and the licence; some rules allow only tens of milliwatts. Stay within the limit that applies to you, and keep people out of the main beam, in front of the open end, while transmitting."
+	return []Hazard{
+		{HazardSolder, "Soldering fumes and lead",
+			"Rosin flux fume causes occupational asthma: work with fume extraction or a fan drawing the plume away, and keep your head out of it. Lead in solder harms you when swallowed: no food or drink at the bench, and wash your hands after soldering. Lead-free solder is preferred."},
+		{HazardBurns, "Burns",
+			"The iron tip and a hot-air tool's nozzle are hotter than 300 °C, and the reflector, coax and wire stay hot for a minute after a joint. Keep the iron in its stand and switch tools off after use, hold parts in pliers or a clamp, and wear eye protection against flux and solder spatter."},
+		{HazardEpoxy, "Epoxy skin sensitisation",
+			"Uncured epoxy resin and hardener are skin sensitisers: once sensitised, always sensitised. Wear nitrile gloves, mix in a ventilated place, and wash skin with soap and water, never with solvent."},
+		{HazardEyes, "Eye protection when cutting wire",
+			"Cut ends of hard or springy wire fly off at speed, and so do drilling chips. Wear safety glasses, cover the cut with a hand or a cloth, and hold the offcut when cutting."},
+		{HazardLaminate, "Laminate dust and no laser on FR-4",
+			"If the reflector is cut from glass-epoxy laminate (FR-4), never cut it on a hobby CO2 laser: it gives off toxic brominated fumes and chars. Saw, shear or mill it with dust extraction and a dust mask, or order it from a circuit-board maker. Sheet copper or brass is a safer reflector."},
+		{HazardRF, "RF exposure and EIRP limits", rf},
+	}
+}
+
+// pick returns the cautions with the given IDs, in that order.
+func pick(all []Hazard, ids ...HazardID) []Hazard {
+	var out []Hazard
+	for _, id := range ids {
+		for _, c := range all {
+			if c.ID == id {
+				out = append(out, c)
+			}
+		}
+	}
+	return out
+}
+
+func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
+	s := d.Spec
+	w := cl.Wire
+	cx := cl.Coax
+	lockEnd := TrimPerEndMM + w.LockTailMM
+	marks := fmt.Sprintf("Mark the blank at %s from one end (mark A: the lock end, which goes into the former) and again %s further on (mark B: where the winding ends at the feed). Beyond mark B are the %s feed lead and the %s trim.",
+		mm(lockEnd), mm(w.ArcMM), mm(w.FeedLeadMM), mm(TrimPerEndMM))
+	band := fmt.Sprintf("%s MHz ± 3 %%", num(s.FrequencyMHz))
+	if s.BandLowMHz != nil && s.BandHighMHz != nil {
+		band = fmt.Sprintf("%s–%s MHz", num(*s.BandLowMHz), num(*s.BandHighMHz))
+	}
+	strip1 := "Cut the matching strip from its 1:1 template and file its edges smooth."
+	strip2 := "Tin the strip and the underside of the first quarter turn. Solder the strip along the underside of the first quarter turn, its wide end at the feed and its flat face parallel to the reflector."
+	expect := fmt.Sprintf("Expect the return loss to be at least %s dB (VSWR below 1.9) across the band, with its best point near %s MHz.", num(ReturnLossTargetDB), num(s.FrequencyMHz))
+	clearance := ""
+	if strip != nil && len(strip.Stations) > 0 {
+		strip1 = fmt.Sprintf("Cut the matching strip from its 1:1 template: %s long, %s wide at the feed end narrowing to %s. File its edges smooth.", mm(strip.Length), mm2(strip.FeedWidth), mm2(strip.EndWidth))
+		clearance = fmt.Sprintf(" The strip's underside is only %s above the reflector at the feed: keep the solder there flat.", mm2(strip.Stations[0].Height))
+		expect += fmt.Sprintf(" The design estimates a return loss of about %.0f dB at %s MHz (|Γ| = %.2f from the matching strip alone).", ReturnLossDB(strip.Reflection), num(s.FrequencyMHz), strip.Reflection)
+	}
+	expect += " If the best point is low in frequency, the turns are too large; if high, too small. If the return loss falls short across the band, raise or lower the strip's far end a fraction of a millimetre at a time and sweep again."
+	prep := fmt.Sprintf("Cut the cable to %s. At the reflector end, remove %s of outer conductor to leave %s of dielectric, then %s of dielectric to bare the centre conductor.",
+		mm(cx.CutMM), mm(cx.DielectricMM+cx.CentreMM), mm(cx.DielectricMM), mm(cx.CentreMM))
+	push := "Push the cable up through the feed hole from behind until its outer conductor is flush with the top face and the dielectric stands " + mm(cx.ProudMM) + " proud. Solder the outer conductor all round the hole on the back face."
+	if cx.FlareMM > 0 {
+		prep = fmt.Sprintf("Cut the cable to %s. At the reflector end, strip the jacket back %s. Cut the braid off %s from the end and comb the %s left next to the jacket out straight. Remove %s of dielectric to bare the centre conductor.",
+			mm(cx.CutMM), mm(cx.DielectricMM+cx.CentreMM+cx.FlareMM), mm(cx.DielectricMM+cx.CentreMM), mm(cx.FlareMM), mm(cx.CentreMM))
+		push = "Push the cable up through the feed hole from behind until the braid meets the back face and the dielectric stands " + mm(cx.ProudMM) + " proud of the top face. Fan the braid out flat round the hole and solder it to the back face."
+	}
+	coaxSteps := []string{"Slide the heat-shrink sleeve onto the cable first; it is shrunk in step 13.", prep, push + clearance}
+	if cx.Jack != "" {
+		coaxSteps = []string{
+			fmt.Sprintf("Mount the SMA jack (%s) in the feed cut-out from behind and tighten it. Its centre contact must reach %s above the top face, the wire's centre height: extend it with a short piece of the coil wire soldered to it if it is shorter, keeping it clear of the hole's edge.", cx.Jack, mm(cx.CentreMM)),
+			fmt.Sprintf("The feed cable is a %s jumper with a plug at each end; slide the heat-shrink sleeve onto it before fitting the second plug.", mm(cx.FinishedMM)),
+			"Solder the jack's body to the reflector round the cut-out where the connector's maker allows it." + clearance,
+		}
+	}
+	lead := fmt.Sprintf("At the coil's start, bend the feed lead straight down, parallel to the axis: it is %s long and ends just above the coax's dielectric.", mm(w.FeedLeadMM))
+	if w.FeedLeadMM < 2*w.DiameterMM {
+		lead = fmt.Sprintf("The wire's start sits only %s above the coax's dielectric, too little to bend a lead: leave the start straight; the centre conductor is soldered to its side in step 11.", mm(w.FeedLeadMM))
+	}
+	rodHole := ""
+	screw := "Lower the rod through the open top of the coil and epoxy its foot to the reflector's centre."
+	for _, h := range cl.Hardware {
+		if strings.HasPrefix(h.Item, "M3") {
+			rodHole = " Drill a 3.2 mm hole at the centre cross for the rod's screw."
+			screw = fmt.Sprintf("Drill a 2.5 mm pilot hole 8 mm deep in the centre of the rod's foot. Lower the rod through the open top of the coil onto the reflector's centre hole and fix it from behind with the %s.", h.Item)
+		}
+	}
+	wireNotes := ""
+	for _, c := range d.Wire.Material.Cautions {
+		wireNotes += " This wire: " + c.Text() + "."
+	}
+	list := []Step{
+		{Title: "Straighten and clean the wire", Text: []string{
+			fmt.Sprintf("Cut a %s blank of %s, Ø%s mm wire. Roll it straight under a flat board, or stretch it slightly, until it lies flat on the bench without rocking.", mm(w.LengthMM), w.Material, num(w.DiameterMM)),
+			"Clean it bright with a fine abrasive pad and wipe it with alcohol. Enamelled wire must be stripped where it will be soldered." + wireNotes,
+			marks,
+		}, Cautions: pick(all, HazardEyes)},
+		{Title: "Lock its end in the former", Text: []string{
+			"Push the lock end into the lock hole at the former's open (top) end, up to mark A or as far as the hole allows.",
+			"Check the hand mark on the former: this coil is " + d.Coil.Hand.String() + ", " + handWords(d.Coil.Hand) + ".",
+		}},
+		{Title: "Wind under tension", Text: []string{
+			"Lay the wire into the groove turn by turn, pulling it tight with steady tension so it seats at the bottom of the groove all the way round. Do not let it ride up on the groove wall.",
+			fmt.Sprintf("Wind all %s turns, towards the base, until mark B sits at the end of the groove.", num(d.Coil.Turns)),
+		}},
+		{Title: "Hold and overbend", Text: []string{
+			"Hold the wire at mark B for about ten seconds, then press every turn once more into its groove with a thumb, a little tighter than it lies, to set the bend.",
+		}},
+		{Title: "Release", Text: []string{
+			"Let go of the feed end slowly and let the coil open up on the former: it springs out to its relaxed size. Free the lock end and twist the coil off along the groove.",
+		}},
+		{Title: "Measure each turn against the inspection table", Text: []string{
+			"Measure every turn across its middle, over the outside of the wire, and write the reading in the inspection table at the end of this sheet.",
+			"A turn outside the tolerance can be eased open or closed by hand. If every turn is large by about the same amount, this batch of wire springs back more than expected: recalibrate the former from a measured test coil before winding the rest of the batch.",
+		}},
+		{Title: "Trim and form the feed lead", Text: []string{
+			fmt.Sprintf("Cut the lock end off at mark A, and cut the feed end %s beyond mark B. File the cut ends smooth.", mm(w.FeedLeadMM)),
+			lead,
+		}, Cautions: pick(all, HazardEyes)},
+		{Title: "Prepare the reflector", Text: []string{
+			fmt.Sprintf("Cut the %s reflector from its 1:1 template, in %s mm sheet. Drill the Ø%.2f mm feed hole at the template's feed mark.%s", s.Reflector.Shape, num(s.Reflector.ThicknessMM), cx.FeedHoleMM, rodHole),
+			"Deburr both faces and clean the metal bright where it will be soldered.",
+		}, Cautions: pick(all, HazardLaminate, HazardEyes)},
+		{Title: "Prepare and solder the coax", Text: coaxSteps, Cautions: pick(all, HazardSolder, HazardBurns)},
+		{Title: "Solder the wedge to the first quarter turn", Text: []string{strip1, strip2},
+			Cautions: pick(all, HazardSolder, HazardBurns)},
+		{Title: "Solder the coil", Text: []string{
+			"Stand the coil over the reflector with its start beside the bare centre conductor and its axis over the reflector's centre.",
+			fmt.Sprintf("Solder the centre conductor to the feed lead and the strip's feed end. Check with a spacer that the first turn's wire centre is %s above the reflector and that no part of the wire or strip touches the reflector.", mm2(d.Coil.Z0)),
+		}, Cautions: pick(all, HazardSolder, HazardBurns)},
+		{Title: "Epoxy and support", Text: []string{
+			screw,
+			fmt.Sprintf("The turns clear the rod by about %s all round. Put two small epoxy beads per turn between the rod and the wire, on opposite sides, without moving the turns. Let it cure as the maker says.", mm(cl.Dowel.ClearanceMM)),
+			"Support rod: " + cl.Dowel.MaterialAdvice + ".",
+		}, Cautions: pick(all, HazardEpoxy)},
+		{Title: "Heat-shrink", Text: []string{
+			"Slide the sleeve up against the reflector's back face, over the cable's joint, and shrink it evenly with the hot-air tool. Fix the cable to the reflector with the cable tie.",
+		}, Cautions: pick(all, HazardBurns)},
+		{Title: "Final checks", Text: []string{
+			"Compare the antenna with the side view: hand, turn count, first turn height and overall height.",
+			"With the multimeter, check there is no continuity between the connector's centre pin and its body: the coil and strip must not touch the reflector.",
+			fmt.Sprintf("Calibrate the vector network analyser (VNA) at the end of its test cable, connect the antenna, point it at open sky away from metal, and sweep the return loss (S11) across %s.", band),
+			expect,
+			"Before transmitting, work out the EIRP and check the limit that applies to you.",
+		}, Cautions: pick(all, HazardRF)},
+	}
+	for i := range list {
+		list[i].Number = i + 1
+	}
+	return list
+}

@@ -1,0 +1,365 @@
+// The cut list: every piece of one kit cut to length, with the
+// consumables and hardware.
+//
+// The wire blank is the coil's centreline arc length plus three
+// allowances: the tail locked in the former's lock hole at the open end,
+// the feed lead at the feed end (a radial arm to the axis for a centre
+// feed, then the drop from the wire centre to the top of the coax's
+// dielectric stub), and a trim allowance squared off both ends. The support
+// rod is the largest stock diameter that passes inside the smallest relaxed
+// turn with the given radial clearance, as long as the coil is high. The
+// coax comes up through the reflector from behind. A solid outer
+// conductor passes through the hole and ends flush with the top face; a
+// braid ends at the back face, fanned out flat round the hole, and only
+// the dielectric passes through. Either way it is soldered round the hole
+// on the back face, the dielectric stands a little proud of the top face,
+// and the centre conductor runs on up to the wire's centre height, where
+// it is soldered beside the feed lead.
+
+package parts
+
+import (
+	"fmt"
+	"math"
+	"slices"
+)
+
+// Allowances and fits of the cut list, in mm. Common practice (no published
+// source): values a kit assembler can work to with hand tools.
+const (
+	// MinLockTailMM is the least tail locked in the former's lock hole; the
+	// tail is at least LockTailWires wire diameters long.
+	MinLockTailMM = 10.0
+	LockTailWires = 6.0
+	// TrimPerEndMM is squared off each end of the blank after release.
+	TrimPerEndMM = 5.0
+	// FeedStandoffMM is how far the coax dielectric stands proud of the
+	// reflector's top face, keeping the centre conductor off the hole edge.
+	FeedStandoffMM = 0.5
+	// MinCentreExposedMM is the least centre conductor left bare for the
+	// solder joint with the feed lead.
+	MinCentreExposedMM = 1.5
+	// BraidFlareMM is the braid fanned out flat round the hole on the
+	// reflector's back face (braided cable only).
+	BraidFlareMM = 4.0
+	// DowelOverhangMM is how far the rod stands above the top turn.
+	DowelOverhangMM = 5.0
+	// SleeveLengthMM is the heat-shrink sleeve over the cable where it
+	// leaves the reflector's back face.
+	SleeveLengthMM = 25.0
+	// HeavyRodMM is the rod diameter above which a tube is suggested.
+	HeavyRodMM = 20.0
+)
+
+// DowelDiametersMM are the support-rod diameters commonly stocked in
+// PTFE, nylon, glass-fibre and wood, in mm, ascending. Common practice (no
+// published source).
+var DowelDiametersMM = []float64{3, 4, 5, 6, 8, 10, 12, 15, 16, 20, 25, 30, 35, 40, 50, 60, 80, 100}
+
+// SleeveDiametersMM are the supplied diameters of 2:1 heat-shrink sleeving
+// (1/16 to 1 in), in mm, ascending. Common practice (no published source).
+var SleeveDiametersMM = []float64{1.6, 2.4, 3.2, 4.8, 6.4, 9.5, 12.7, 19.1, 25.4}
+
+// CutList is one kit's pieces, consumables and hardware. Lengths are mm.
+// It is a plain value built by NewCutList.
+type CutList struct {
+	Wire     WireBlank
+	Dowel    DowelCut
+	Coax     CoaxCut
+	Sleeve   SleeveCut
+	Solder   Consumable
+	Epoxy    Consumable
+	Hardware []HardwareItem
+	Warnings []Warning
+	Quantity int // kits in the batch
+}
+
+// WireBlank is the straight wire cut for one coil: LengthMM = ArcMM +
+// LockTailMM + FeedLeadMM + TrimMM.
+type WireBlank struct {
+	Material   string
+	DiameterMM float64
+	ArcMM      float64 // centreline arc length of the winding (design.json wire_length_mm)
+	LockTailMM float64 // locked in the former's lock hole at the open end
+	FeedLeadMM float64 // drop from the wire centre at the start to the top of the dielectric stub
+	TrimMM     float64 // squared off both ends after release
+	LengthMM   float64 // the blank as cut
+}
+
+// DowelCut is the support rod for one coil.
+type DowelCut struct {
+	Material       string
+	DiameterMM     float64
+	LengthMM       float64
+	ClearanceMM    float64 // radial gap asked for
+	InnerTurnMM    float64 // inside diameter of the smallest relaxed turn
+	Automatic      bool    // diameter chosen from DowelDiametersMM
+	SlotWidthMM    float64 // slot across the foot for a centre feed's lead, else 0
+	SlotDepthMM    float64
+	AbsorbsWater   bool   // wood: takes up water and detunes the coil
+	MaterialAdvice string // a sentence on the material choice
+}
+
+// CoaxCut is the feed cable for one kit: the length to cut and the strip
+// lengths at the reflector end.
+type CoaxCut struct {
+	Spec         string // spec type name
+	Cable        CoaxType
+	FinishedMM   float64 // connector to the reflector's back face (coax.length_mm)
+	ThroughMM    float64 // through the reflector, back face to top face
+	ProudMM      float64 // dielectric above the top face
+	CentreMM     float64 // bare centre conductor beyond the dielectric
+	DielectricMM float64 // bare dielectric beyond the outer conductor: ProudMM, plus ThroughMM for a braid
+	FlareMM      float64 // braid fanned out round the hole on the back face; 0 for a solid outer
+	FeedHoleMM   float64 // feed hole in the reflector
+	CutMM        float64 // FinishedMM + ThroughMM + ProudMM + CentreMM
+	// Jack is "sma-flange" or "sma-bulkhead" when a panel jack is mounted
+	// in the reflector; the cable is then a jumper of FinishedMM with a
+	// plug at each end, and the strip lengths are zero.
+	Jack string
+}
+
+// FeedHoleClearanceMM is added to what passes through the feed hole when
+// the design has no reflector drawing to take it from. Common practice (no
+// published source).
+const FeedHoleClearanceMM = 0.1
+
+// SleeveCut is the heat-shrink sleeve for one kit: 2:1 sleeving whose
+// supplied bore slides over the cable and whose recovered bore grips it.
+type SleeveCut struct {
+	SuppliedMM  float64
+	RecoveredMM float64
+	LengthMM    float64
+}
+
+// Consumable is an estimated amount of a material used up in assembly,
+// with the working behind it.
+type Consumable struct {
+	Amount float64
+	Unit   string // "mm" of solder wire, "mL" of mixed epoxy
+	Basis  string
+}
+
+// HardwareItem is one bought part per kit.
+type HardwareItem struct {
+	Item  string
+	Count int
+	Note  string
+}
+
+// NewCutList works out the cut list of one kit from a design.
+func NewCutList(d *Design) (*CutList, error) {
+	s := d.Spec
+	if s == nil {
+		return nil, fmt.Errorf("parts: design without a spec")
+	}
+	wd := s.Wire.DiameterMM
+	cable := s.Coax.Cable()
+	cl := &CutList{Quantity: s.Quantity}
+
+	// Coax strip lengths at the reflector end.
+	thick := s.Reflector.ThicknessMM
+	drop := math.Max(d.Coil.Z0-FeedStandoffMM, 0)
+	cx := CoaxCut{Spec: s.Coax.Type, Cable: cable, FinishedMM: s.Coax.LengthMM,
+		ThroughMM: thick, ProudMM: FeedStandoffMM, DielectricMM: FeedStandoffMM,
+		CentreMM:   math.Max(drop, MinCentreExposedMM),
+		FeedHoleMM: cable.Outer + FeedHoleClearanceMM}
+	if cable.Braided {
+		cx.FlareMM = BraidFlareMM
+		cx.DielectricMM += thick
+		cx.FeedHoleMM = cable.Dielectric + FeedHoleClearanceMM
+	}
+	cx.CutMM = cx.FinishedMM + cx.ThroughMM + cx.ProudMM + cx.CentreMM
+	if d.Patterns != nil {
+		cx.FeedHoleMM = d.Patterns.Reflector.Input.Feed.Diameter
+	}
+	if j := s.Reflector.Connector; j == "sma-flange" || j == "sma-bulkhead" {
+		cx = CoaxCut{Spec: s.Coax.Type, Cable: cable, FinishedMM: s.Coax.LengthMM, CutMM: s.Coax.LengthMM, ThroughMM: thick, CentreMM: drop + FeedStandoffMM, FeedHoleMM: cx.FeedHoleMM, Jack: j}
+	}
+	cl.Coax = cx
+
+	// Wire blank.
+	w := WireBlank{Material: s.Wire.Material, DiameterMM: wd, ArcMM: d.WireLength,
+		LockTailMM: math.Max(MinLockTailMM, LockTailWires*wd),
+		FeedLeadMM: drop, TrimMM: 2 * TrimPerEndMM}
+	w.LengthMM = w.ArcMM + w.LockTailMM + w.FeedLeadMM + w.TrimMM
+	cl.Wire = w
+
+	dw, err := dowelCut(d)
+	if err != nil {
+		return nil, err
+	}
+	cl.Dowel = dw
+
+	sl, err := sleeveFor(cable.Outer)
+	if err != nil {
+		return nil, err
+	}
+	cl.Sleeve = sl
+	cl.Solder = solderEstimate(d, cx, s.Stock.SolderWireMM)
+	cl.Epoxy = epoxyEstimate(d, dw)
+	cl.Hardware = hardware(d, cl)
+	if drop < 2*wd {
+		cl.Warnings = append(cl.Warnings, Warning{Code: "short-feed-lead",
+			Message: fmt.Sprintf("the wire centre is only %.1f mm above the dielectric stub: too little to bend a lead down; solder the centre conductor to the side of the wire's start", drop)})
+	}
+	if dw.AbsorbsWater {
+		cl.Warnings = append(cl.Warnings, Warning{Code: "wood-dowel", Message: dw.MaterialAdvice})
+	}
+	return cl, nil
+}
+
+// smallestTurnRadius returns the smallest centreline radius of the coil:
+// the radius is monotonic in azimuth, so it is at one of the two ends.
+func smallestTurnRadius(c Coil) float64 { return math.Min(c.StartRadius, c.EndRadius) }
+
+func dowelCut(d *Design) (DowelCut, error) {
+	s := d.Spec
+	wd := s.Wire.DiameterMM
+	inner := 2*smallestTurnRadius(d.Coil) - wd
+	dc := DowelCut{Material: s.Dowel.Material, ClearanceMM: s.Dowel.ClearanceMM, InnerTurnMM: inner}
+	room := inner - 2*dc.ClearanceMM
+	if s.Dowel.DiameterMM != nil {
+		dc.DiameterMM = *s.Dowel.DiameterMM // Spec.Validate checked that it fits
+	} else {
+		// i counts the stock sizes below room, so size i−1 is the largest that fits.
+		i, _ := slices.BinarySearch(DowelDiametersMM, room+1e-9)
+		if i == 0 {
+			return DowelCut{}, &SpecError{Key: "dowel.clearance_mm", Line: s.Line("dowel.clearance_mm"), Value: num(dc.ClearanceMM),
+				Problem: fmt.Sprintf("leaves %.2f mm inside the smallest turn (%.2f mm inside): no stock rod of %s mm or more fits", room, inner, num(DowelDiametersMM[0])),
+				Fix:     "reduce the clearance, or support the coil from outside"}
+		}
+		dc.DiameterMM = DowelDiametersMM[i-1]
+		dc.Automatic = true
+	}
+	dc.LengthMM = d.Coil.Z0 + d.AxialLength + wd/2 + DowelOverhangMM
+	switch s.Dowel.Material {
+	case "wood":
+		dc.AbsorbsWater = true
+		dc.MaterialAdvice = "wood takes up water, which raises its permittivity and loss and detunes the coil; use PTFE, nylon or glass-fibre rod, or seal the wood well"
+	case "nylon":
+		dc.MaterialAdvice = "nylon takes up a little water; PTFE or glass-fibre rod is steadier outdoors"
+	default:
+		dc.MaterialAdvice = "a low-loss rod that takes up little water"
+	}
+	if dc.DiameterMM > HeavyRodMM {
+		dc.MaterialAdvice += fmt.Sprintf("; a tube of %s mm outside diameter saves weight", num(dc.DiameterMM))
+	}
+	return dc, nil
+}
+
+// sleeveFor picks the smallest 2:1 sleeve whose supplied bore is at least
+// 1.2 times the cable's outside diameter (it must slide over the solder
+// fillet) and whose recovered bore is at most 0.8 times it (it must grip).
+// Common practice (no published source).
+func sleeveFor(outer float64) (SleeveCut, error) {
+	for _, dia := range SleeveDiametersMM {
+		if dia >= 1.2*outer && dia/2 <= 0.8*outer {
+			return SleeveCut{SuppliedMM: dia, RecoveredMM: dia / 2, LengthMM: SleeveLengthMM}, nil
+		}
+	}
+	return SleeveCut{}, fmt.Errorf("parts: no 2:1 heat-shrink size fits a %.2f mm cable", outer)
+}
+
+// solderEstimate adds up the fillets of the kit's three joints and turns
+// the volume into a length of solder wire, doubled for tinning and waste.
+// Fillets are right-angled triangles in section, volume leg²/2 per mm of
+// seam. Common practice (no published source): a fillet leg of a quarter
+// wire diameter along both sides of the first quarter turn on the
+// matching strip, a half-section lap at the centre-conductor joint, and a
+// 1 mm leg round the outer conductor at the reflector.
+func solderEstimate(d *Design, cx CoaxCut, solderWire float64) Consumable {
+	wd := d.Spec.Wire.DiameterMM
+	strip := d.Coil.LengthBetween(0, math.Pi/2)
+	leg := wd / 4
+	vStrip := 2 * leg * leg / 2 * strip
+	vCentre := 0.5 * math.Pi * wd * wd / 4 * cx.CentreMM
+	vOuter := 0.5 * math.Pi * cx.Cable.Outer
+	vol := 2 * (vStrip + vCentre + vOuter)
+	length := vol / (math.Pi * solderWire * solderWire / 4)
+	return Consumable{Amount: math.Ceil(length/10) * 10, Unit: "mm",
+		Basis: fmt.Sprintf("%.0f mm³ of fillet (matching strip, centre joint, outer conductor), doubled for tinning and waste, as Ø%s mm solder wire", vol/2, num(solderWire))}
+}
+
+// epoxyEstimate sizes two beads per started turn bridging the rod to the
+// wire, each a block (clearance + wire) long and two wire diameters
+// square, plus a fillet of 2 mm leg round the rod's foot, and adds half
+// again for mixing waste. Common practice (no published source).
+func epoxyEstimate(d *Design, dw DowelCut) Consumable {
+	wd := d.Spec.Wire.DiameterMM
+	beads := 2 * len(d.Turns)
+	gap := (dw.InnerTurnMM - dw.DiameterMM) / 2
+	vBeads := float64(beads) * (gap + wd) * (2 * wd) * (2 * wd)
+	vFoot := math.Pi * dw.DiameterMM * 2 * 2 / 2
+	vol := 1.5 * (vBeads + vFoot)
+	ml := math.Ceil(vol/1000*10) / 10
+	return Consumable{Amount: ml, Unit: "mL",
+		Basis: fmt.Sprintf("%d beads from rod to wire and a fillet round the rod's foot, plus half again for mixing waste", beads)}
+}
+
+// ScrewLengthsMM are the stocked lengths of M3 screws, mm. Common practice
+// (no published source; ISO 4762 and ISO 7045 list these lengths).
+var ScrewLengthsMM = []float64{6, 8, 10, 12, 16, 20, 25, 30}
+
+func hardware(d *Design, cl *CutList) []HardwareItem {
+	s := d.Spec
+	var hw []HardwareItem
+	cable := cl.Coax.Cable
+	hw = append(hw, HardwareItem{Item: "SMA connector to suit " + cable.Name, Count: 1,
+		Note: "or a cable with the connector fitted; strip the connector end to the connector maker's dimensions"})
+	if cl.Dowel.DiameterMM >= 6 {
+		want := s.Reflector.ThicknessMM + 2*3.0 // two thread diameters into the rod
+		i, _ := slices.BinarySearch(ScrewLengthsMM, want)
+		length := ScrewLengthsMM[min(i, len(ScrewLengthsMM)-1)]
+		hw = append(hw, HardwareItem{Item: fmt.Sprintf("M3 × %s mm screw, nylon or stainless, with washer", num(length)), Count: 1,
+			Note: "from behind the reflector into a 2.5 mm pilot hole in the rod's foot"})
+	}
+	hw = append(hw, HardwareItem{Item: "cable tie, 2.5 mm wide", Count: 1, Note: "strain relief for the cable behind the reflector"})
+	return hw
+}
+
+// CutRow is one line of the cut list's table. Zero numbers are not
+// applicable to the line.
+type CutRow struct {
+	Item     string
+	Material string
+	Size     string
+	Count    int
+	LengthMM float64 // length of each piece
+	Amount   float64 // of a consumable, in Unit
+	Unit     string
+	Note     string
+}
+
+// Rows returns the cut list as table lines: the pieces cut to length, then
+// the consumables, then the hardware.
+func (cl *CutList) Rows() []CutRow {
+	w, dw, cx, sl := cl.Wire, cl.Dowel, cl.Coax, cl.Sleeve
+	rows := []CutRow{
+		{Item: "wire blank", Material: w.Material, Size: fmt.Sprintf("Ø%s mm", num(w.DiameterMM)), Count: 1, LengthMM: w.LengthMM,
+			Note: fmt.Sprintf("winding %.1f + lock tail %.1f + feed lead %.1f + trim %.1f mm", w.ArcMM, w.LockTailMM, w.FeedLeadMM, w.TrimMM)},
+		{Item: "support rod", Material: dw.Material, Size: fmt.Sprintf("Ø%s mm", num(dw.DiameterMM)), Count: 1, LengthMM: dw.LengthMM,
+			Note: fmt.Sprintf("passes inside the smallest turn (%.2f mm inside) with %s mm clearance; %s", dw.InnerTurnMM, num(dw.ClearanceMM), dw.MaterialAdvice)},
+		{Item: "feed cable", Material: cx.Cable.Name, Size: fmt.Sprintf("Ø%s mm", num(cx.Cable.Outer)), Count: 1, LengthMM: cx.CutMM,
+			Note: coaxNote(cx)},
+		{Item: "heat-shrink sleeve", Material: "2:1 polyolefin", Size: fmt.Sprintf("Ø%s → Ø%s mm", num(sl.SuppliedMM), num(sl.RecoveredMM)), Count: 1, LengthMM: sl.LengthMM,
+			Note: "over the cable where it leaves the reflector's back face; slide it on before soldering"},
+		{Item: "solder", Material: "solder wire", Size: "", Amount: cl.Solder.Amount, Unit: cl.Solder.Unit, Note: cl.Solder.Basis},
+		{Item: "epoxy", Material: "two-part epoxy, slow-setting", Amount: cl.Epoxy.Amount, Unit: cl.Epoxy.Unit, Note: cl.Epoxy.Basis},
+	}
+	for _, h := range cl.Hardware {
+		rows = append(rows, CutRow{Item: "hardware", Material: h.Item, Count: h.Count, Note: h.Note})
+	}
+	return rows
+}
+
+func coaxNote(cx CoaxCut) string {
+	if cx.Jack != "" {
+		return fmt.Sprintf("jumper from the %s jack on the reflector, %.1f mm with a plug fitted at each end", cx.Jack, cx.FinishedMM)
+	}
+	flare := "no braid flare (solid outer)"
+	if cx.FlareMM > 0 {
+		flare = fmt.Sprintf("braid flare %.1f mm", cx.FlareMM)
+	}
+	return fmt.Sprintf("%.1f mm to the reflector's back face + %.1f mm through it; bare centre %.1f mm, bare dielectric %.1f mm, %s; feed hole Ø%.2f mm", cx.FinishedMM, cx.ThroughMM, cx.CentreMM, cx.DielectricMM, flare, cx.FeedHoleMM)
+}

@@ -1,0 +1,273 @@
+// Cut patterns of a design: the reflector plate and the matching wedge,
+// worked out from the validated spec and the coil, with the cutting method
+// and the label every cut file carries.
+
+package parts
+
+import (
+	"fmt"
+	"math"
+)
+
+// Patterns is the design's flat parts and how they are to be cut. It is
+// built by NewDesign and not mutated afterwards.
+type Patterns struct {
+	// Reflector is nil when the plate cannot hold its feed cut-out (see
+	// the "reflector-fit" warning).
+	Reflector *Reflector
+	Wedge     *Wedge
+	// WedgeLoadOhm is the resistance the wedge tapers to: the Kraus input
+	// resistance on the first turn's circumference.
+	WedgeLoadOhm float64
+	// Material and WedgeMaterial are the sheet materials of the two parts.
+	Material, WedgeMaterial SheetMaterial
+	// Method is the cutting method ("mill", "shear", "pcb-fab", "laser").
+	Method string
+	// Kerf is the width in mm the tool removes.
+	Kerf float64
+	// ReflectorLabel and WedgeLabel say how each part's files are meant to
+	// be cut; every cut file and template of the part carries its label.
+	ReflectorLabel, WedgeLabel string
+	// LaserHalogen is set when laser cutting was asked for a halogenated
+	// laminate: the files still come, with a warning on each.
+	LaserHalogen bool
+}
+
+// coaxJacketMM returns the outer diameter in mm of a coax type.
+func coaxJacketMM(t string) float64 {
+	switch t {
+	case "semi-rigid-086":
+		return 2.197 // From memory: 0.086 in semi-rigid (DOMAIN §7)
+	case "rg316":
+		return 2.49 // Source: IS 11967 (Part 3/Sec 1), RG-316 jacket
+	}
+	return 3.58 // Source: published cable data, 0.141 in semi-rigid
+}
+
+// coaxClearanceMM is added to the jacket for a pass-through hole.
+// Common practice (no published source).
+const coaxClearanceMM = 0.1
+
+// LaserHalogenWarning is the text put on every output when laser cutting
+// is asked for a halogenated laminate.
+const LaserHalogenWarning = "WARNING: laser cutting was asked for a halogenated laminate (FR-4). Its brominated resin gives off toxic fumes and chars under a laser: mill, saw or shear it with dust extraction and a mask, or order the plate from a PCB fab."
+
+// newPatterns works out the reflector and wedge for d.
+func newPatterns(d *Design) (*Patterns, []Warning, error) {
+	s := d.Spec
+	rs := &s.Reflector
+	mat, ok := sheetMaterial(rs.Material)
+	if !ok {
+		return nil, nil, fmt.Errorf("parts: unknown reflector material %q", rs.Material)
+	}
+	wmat, ok := sheetMaterial(s.Wedge.Material)
+	if !ok {
+		return nil, nil, fmt.Errorf("parts: unknown wedge material %q", s.Wedge.Material)
+	}
+	p := &Patterns{Material: mat, WedgeMaterial: wmat, Method: s.Cutting.Method, Kerf: s.Cutting.Kerf()}
+	var warns []Warning
+	p.ReflectorLabel = p.label(mat)
+	p.WedgeLabel = p.label(wmat)
+	if p.LaserHalogen {
+		warns = append(warns, Warning{Code: "laser-halogenated", Message: LaserHalogenWarning})
+	}
+
+	size := rs.SizeMM(d.Wavelength)
+	in := ReflectorInput{
+		Size:       size,
+		FeedRadius: d.Coil.StartRadius,
+		Label:      s.Kit,
+		Hand:       d.Coil.Hand.String(),
+		Mounting: MountingHoles{Count: rs.MountingHoles, Diameter: rs.MountingHoleMM,
+			PitchDiameter: rs.MountingCircle(size), Angle: rs.MountingAngleDeg * math.Pi / 180},
+	}
+	if rs.Shape == "square" {
+		in.Shape, in.CornerRadius = ReflectorSquare, rs.CornerRadiusMM
+	}
+	switch rs.Connector {
+	case "sma-flange":
+		in.Feed = FeedHole{Kind: FeedSMAFlange}
+	case "sma-bulkhead":
+		in.Feed = FeedHole{Kind: FeedSMABulkhead}
+	default:
+		in.Feed = FeedHole{Kind: FeedCoax, Diameter: coaxJacketMM(s.Coax.Type) + coaxClearanceMM}
+	}
+	if rs.FeedHoleMM != nil {
+		in.Feed.Diameter = *rs.FeedHoleMM
+	}
+	refl, err := NewReflector(in)
+	if err != nil {
+		// A plate too small for its feed cut-out is reported, not fatal:
+		// the rest of the design stands, and no plate files are written.
+		warns = append(warns, Warning{Code: "reflector-fit", Message: err.Error() + "; no reflector files are written"})
+	}
+	p.Reflector = refl
+
+	p.WedgeLoadOhm = d.Turns[0].InputResistanceOhm
+	w, err := NewWedge(WedgeInput{
+		Path:         d.Coil.Point,
+		Span:         s.Wedge.SpanDeg * math.Pi / 180,
+		WireDiameter: s.Wire.DiameterMM,
+		Thickness:    s.Wedge.ThicknessMM,
+		Wavelength:   d.Wavelength,
+		Taper:        s.Wedge.taper(p.WedgeLoadOhm),
+	})
+	if err != nil {
+		return nil, nil, err
+	}
+	p.Wedge = w
+	for _, m := range w.Warnings {
+		warns = append(warns, Warning{Code: "wedge-width", Message: m})
+	}
+	return p, warns, nil
+}
+
+// label returns the cutting label for a part of material m, setting
+// LaserHalogen when a laser was asked for a halogenated laminate.
+func (p *Patterns) label(m SheetMaterial) string {
+	switch {
+	case m.Halogenated && p.Method == "laser":
+		p.LaserHalogen = true
+		return LaserHalogenWarning
+	case m.Halogenated:
+		return fmt.Sprintf("For milling or shearing: %s is a halogenated laminate, not for laser cutting. %s; kerf %.2f mm compensated.", m.Name, capitalise(methodName(p.Method)), p.Kerf)
+	}
+	return fmt.Sprintf("%s: %s; kerf %.2f mm compensated.", capitalise(m.Name), methodName(p.Method), p.Kerf)
+}
+
+// capitalise upper-cases the first ASCII letter of s.
+func capitalise(s string) string {
+	if s == "" || s[0] < 'a' || s[0] > 'z' {
+		return s
+	}
+	return string(s[0]-'a'+'A') + s[1:]
+}
+
+// methodName returns a phrase for a cutting method.
+func methodName(m string) string {
+	switch m {
+	case "shear":
+		return "shearing"
+	case "pcb-fab":
+		return "a PCB fab (routed to the drawn outline)"
+	case "laser":
+		return "laser cutting"
+	}
+	return "milling"
+}
+
+// ReflectorReport is the reflector plate in design.json.
+type ReflectorReport struct {
+	Shape            string       `json:"shape"`
+	DiameterMM       *float64     `json:"diameter_mm,omitempty"`
+	SideMM           *float64     `json:"side_mm,omitempty"`
+	CornerRadiusMM   float64      `json:"corner_radius_mm,omitempty"`
+	SizeLambda       float64      `json:"size_lambda"`
+	ThicknessMM      float64      `json:"thickness_mm"`
+	Material         string       `json:"material"`
+	Connector        string       `json:"connector"`
+	FeedHoleMM       float64      `json:"feed_hole_mm"`
+	FeedRadiusMM     float64      `json:"feed_radius_mm"`
+	FeedAngleDeg     float64      `json:"feed_angle_deg"`
+	MountingHoles    int          `json:"mounting_holes"`
+	MountingHoleMM   float64      `json:"mounting_hole_mm,omitempty"`
+	MountingCircleMM float64      `json:"mounting_circle_mm,omitempty"`
+	Cutting          CutReport    `json:"cutting"`
+	Panel            *PanelReport `json:"panel,omitempty"`
+}
+
+// CutReport is how a part is cut.
+type CutReport struct {
+	Method string  `json:"method"`
+	KerfMM float64 `json:"kerf_mm"`
+	Label  string  `json:"label"`
+}
+
+// PanelReport is a batch nested on sheets; the command fills it from the
+// nesting.
+type PanelReport struct {
+	SheetWidthMM  float64 `json:"sheet_width_mm"`
+	SheetHeightMM float64 `json:"sheet_height_mm"`
+	MarginMM      float64 `json:"margin_mm"`
+	SpacingMM     float64 `json:"spacing_mm"`
+	Quantity      int     `json:"quantity"`
+	PartsPerSheet int     `json:"parts_per_sheet"`
+	Sheets        int     `json:"sheets"`
+}
+
+// WedgeReport is the matching wedge in design.json.
+type WedgeReport struct {
+	Material            string         `json:"material"`
+	ThicknessMM         float64        `json:"thickness_mm"`
+	Taper               string         `json:"taper"`
+	Ripple              float64        `json:"ripple,omitempty"`
+	KlopfensteinA       float64        `json:"klopfenstein_a,omitempty"`
+	SpanDeg             float64        `json:"span_deg"`
+	FeedOhm             float64        `json:"feed_ohm"`
+	LoadOhm             float64        `json:"load_ohm"`
+	LengthMM            float64        `json:"length_mm"`
+	FeedWidthMM         float64        `json:"feed_width_mm"`
+	EndWidthMM          float64        `json:"end_width_mm"`
+	ElectricalLengthRad float64        `json:"electrical_length_rad"`
+	Reflection          float64        `json:"reflection"`
+	VSWR                float64        `json:"vswr"`
+	ReturnLossDB        float64        `json:"return_loss_db"`
+	Method              string         `json:"method"`
+	Note                string         `json:"note"`
+	Widths              []WedgeStation `json:"widths"`
+	Cutting             CutReport      `json:"cutting"`
+	Panel               *PanelReport   `json:"panel,omitempty"`
+}
+
+// WedgeNote states what the wedge figures are.
+const WedgeNote = "Widths from Hammerstad–Jensen (air, with thickness correction) along the strip's height above the reflector; mismatch from the theory of small reflections. Quasi-static line formulas applied to a strip of varying width and height: a first-order design aid."
+
+// patternReports fills the reflector and wedge sections of r.
+func (d *Design) patternReports(r *Report) {
+	p := d.Patterns
+	if p == nil {
+		return
+	}
+	s := d.Spec
+	rs := &s.Reflector
+	size := rs.SizeMM(d.Wavelength)
+	if p.Reflector != nil {
+		r.Reflector = reflectorReport(p, rs, size, d.Wavelength)
+	}
+	w := p.Wedge
+	wr := &WedgeReport{
+		Material: s.Wedge.Material, ThicknessMM: s.Wedge.ThicknessMM, Taper: s.Wedge.Taper, SpanDeg: s.Wedge.SpanDeg,
+		FeedOhm: WedgeFeedOhm, LoadOhm: p.WedgeLoadOhm, LengthMM: w.Length, FeedWidthMM: w.FeedWidth, EndWidthMM: w.EndWidth,
+		ElectricalLengthRad: w.ElectricalLength, Reflection: w.Reflection, VSWR: VSWR(w.Reflection),
+		Method: "Hammerstad–Jensen air microstrip; small-reflection mismatch", Note: WedgeNote, Widths: w.Stations,
+		Cutting: CutReport{Method: p.Method, KerfMM: p.Kerf, Label: p.WedgeLabel},
+	}
+	if w.Reflection > 0 {
+		wr.ReturnLossDB = ReturnLossDB(w.Reflection)
+	}
+	if s.Wedge.Taper == "klopfenstein" {
+		wr.Ripple = s.Wedge.Ripple
+		wr.KlopfensteinA = KlopfensteinA(WedgeFeedOhm, p.WedgeLoadOhm, s.Wedge.Ripple)
+	}
+	r.Wedge = wr
+}
+
+// reflectorReport describes the plate of p for design.json.
+func reflectorReport(p *Patterns, rs *ReflectorSpec, size, lambda float64) *ReflectorReport {
+	in := p.Reflector.Input
+	rr := &ReflectorReport{
+		Shape: rs.Shape, ThicknessMM: rs.ThicknessMM, Material: rs.Material, Connector: rs.Connector,
+		SizeLambda: size / lambda, FeedHoleMM: in.Feed.Diameter, FeedRadiusMM: in.FeedRadius,
+		FeedAngleDeg: in.FeedAngle * 180 / math.Pi, MountingHoles: in.Mounting.Count,
+		Cutting: CutReport{Method: p.Method, KerfMM: p.Kerf, Label: p.ReflectorLabel},
+	}
+	if in.Mounting.Count > 0 {
+		rr.MountingHoleMM, rr.MountingCircleMM = in.Mounting.Diameter, in.Mounting.PitchDiameter
+	}
+	if rs.Shape == "square" {
+		rr.SideMM, rr.CornerRadiusMM = &size, rs.CornerRadiusMM
+	} else {
+		rr.DiameterMM = &size
+	}
+	return rr
+}

@@ -1,0 +1,159 @@
+package parts
+
+import (
+	"encoding/json"
+	"errors"
+	"fmt"
+	"math"
+	"strings"
+	"testing"
+)
+
+func TestCutSpecErrors(t *testing.T) {
+	// Lines count from the first line of base (spec_test.go); the added
+	// table's header is line 17 and its first key line 18.
+	for _, tc := range []struct {
+		name, table string
+		key         string
+		line        int
+		words       string
+	}{
+		{"strip too thick for the first turn's height", "[wedge]\nthickness_mm = 1.0", "wedge.thickness_mm", 18, "of air under the matching strip"},
+		{"ripple without the klopfenstein taper", "[wedge]\nripple = 0.05", "wedge.ripple", 18, "only to taper"},
+		{"unknown taper", "[wedge]\ntaper = \"linear\"", "wedge.taper", 18, `"exponential", "klopfenstein"`},
+		{"span too short", "[wedge]\nspan_deg = 10.0", "wedge.span_deg", 18, "between 30 and 360"},
+		{"unknown cutting method", "[cutting]\nmethod = \"plasma\"", "cutting.method", 18, `"mill"`},
+		{"laser with no kerf", "[cutting]\nmethod = \"laser\"\nkerf_mm = 0.0", "cutting.kerf_mm", 19, "removes some material"},
+		{"tiny sheet", "[cutting]\nsheet_width_mm = 5.0", "cutting.sheet_width_mm", 18, "between 20 and 5000"},
+		{"unknown paper", "[cutting]\npaper = \"A3\"", "cutting.paper", 18, `"A4", "Letter"`},
+		{"corner radius on a disc", "[reflector]\ncorner_radius_mm = 3.0", "reflector.corner_radius_mm", 18, "only to shape"},
+		{"unknown plate material", "[reflector]\nmaterial = \"plywood\"", "reflector.material", 18, `"fr4"`},
+		{"too many mounting holes", "[reflector]\nmounting_holes = 20", "reflector.mounting_holes", 18, "between 0 and 12"},
+		{"unknown connector", "[reflector]\nconnector = \"bnc\"", "reflector.connector", 18, `"coax"`},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			_, err := ParseSpec([]byte(base + "\n" + tc.table + "\n"))
+			var errs SpecErrors
+			if !errors.As(err, &errs) {
+				t.Fatalf("want SpecErrors, got %v", err)
+			}
+			for _, e := range errs {
+				if e.Key == tc.key && e.Line == tc.line && strings.Contains(e.Error(), tc.words) && strings.Contains(e.Error(), "fix:") {
+					return
+				}
+			}
+			t.Fatalf("no error for %s on line %d saying %q, in:\n%v", tc.key, tc.line, tc.words, err)
+		})
+	}
+}
+
+func designOf(t *testing.T, src string) *Design {
+	t.Helper()
+	d, err := NewDesign(mustParse(t, []byte(src)))
+	if err != nil {
+		t.Fatal(err)
+	}
+	return d
+}
+
+func TestPatternsFromDemo(t *testing.T) {
+	d := designOf(t, string(demoSpec(t, "demo-5g8-cone.toml")))
+	p := d.Patterns
+	in := p.Reflector.Input
+	// The demo's [reflector] diameter_mm = 50 and [coil] base_diameter_mm =
+	// 17.5: the feed hole sits on the coil's start radius.
+	if in.Size != 50 || in.FeedRadius != 17.5/2 || in.Shape != ReflectorDisc {
+		t.Errorf("reflector input %+v", in)
+	}
+	// Source: published cable data, 0.141 in semi-rigid jacket 3.58 mm,
+	// plus 0.1 mm clearance.
+	if math.Abs(in.Feed.Diameter-3.68) > 1e-12 {
+		t.Errorf("feed hole Ø %g mm", in.Feed.Diameter)
+	}
+	w := p.Wedge
+	if first := w.Stations[0]; math.Abs(first.Ohm-WedgeFeedOhm) > 1e-6 {
+		t.Errorf("feed station %.6f Ω, want 50", first.Ohm)
+	}
+	if last := w.Stations[len(w.Stations)-1]; !last.Clamped && math.Abs(last.Ohm-p.WedgeLoadOhm) > 1e-6 {
+		t.Errorf("far station %.6f Ω, want %.6f", last.Ohm, p.WedgeLoadOhm)
+	}
+	if p.WedgeLoadOhm != d.Turns[0].InputResistanceOhm {
+		t.Errorf("wedge load %g Ω, first turn %g Ω", p.WedgeLoadOhm, d.Turns[0].InputResistanceOhm)
+	}
+	if !strings.Contains(p.ReflectorLabel, "milling or shearing") || p.LaserHalogen {
+		t.Errorf("FR-4 plate label %q", p.ReflectorLabel)
+	}
+	t.Logf("5.8 GHz demo wedge: %.2f mm long, %.3f mm at the feed, %.3f mm at the end, |Γ| %.3f", w.Length, w.FeedWidth, w.EndWidth, w.Reflection)
+
+	r := d.Report()
+	b, err := json.Marshal(r)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, key := range []string{`"reflector":{"shape":"disc","diameter_mm":50`, `"wedge":{`, `"widths":[{"s_mm":0`} {
+		if !strings.Contains(string(b), key) {
+			t.Errorf("design.json lacks %s", key)
+		}
+	}
+}
+
+func TestMaterialGuard(t *testing.T) {
+	for _, tc := range []struct {
+		name, table string
+		laser       bool
+	}{
+		{"FR-4 by laser", "[cutting]\nmethod = \"laser\"", true},
+		{"FR-4 milled", "[cutting]\nmethod = \"mill\"", false},
+		{"aluminium by laser", "[reflector]\nmaterial = \"aluminium\"\n[cutting]\nmethod = \"laser\"", false},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			d := designOf(t, base+"\n"+tc.table+"\n")
+			p := d.Patterns
+			warned := false
+			for _, w := range d.Warnings {
+				warned = warned || w.Code == "laser-halogenated"
+			}
+			if p.LaserHalogen != tc.laser || warned != tc.laser || (p.ReflectorLabel == LaserHalogenWarning) != tc.laser {
+				t.Errorf("laser flag %v, warning %v, label %q", p.LaserHalogen, warned, p.ReflectorLabel)
+			}
+			if strings.Contains(p.WedgeLabel, "WARNING") {
+				t.Errorf("copper wedge labelled %q", p.WedgeLabel)
+			}
+		})
+	}
+}
+
+func TestPlateTooSmallForFeed(t *testing.T) {
+	// A 20 mm disc cannot hold a Ø 3.68 mm feed hole 8.75 mm from its
+	// centre with 1 mm of web: the design stands, with a warning and no
+	// plate.
+	d := designOf(t, strings.Replace(base, "[wire]", "[reflector]\ndiameter_mm = 20.0\n[wire]", 1))
+	if d.Patterns.Reflector != nil || !strings.Contains(","+warningCodes(d)+",", ",reflector-fit,") {
+		t.Errorf("plate %v, warnings %q", d.Patterns.Reflector, warningCodes(d))
+	}
+	if r := d.Report(); r.Reflector != nil || r.Wedge == nil {
+		t.Errorf("report reflector %v, wedge %v", r.Reflector, r.Wedge)
+	}
+}
+
+func TestKlopfensteinWedge(t *testing.T) {
+	d := designOf(t, base+"\n[wedge]\ntaper = \"klopfenstein\"\nripple = 0.05\n")
+	r := d.Report()
+	// Source: Pozar §5.9, A = acosh(Γ0/Γm) with Γ0 = ½·ln(ZL/50).
+	want := math.Acosh(math.Log(d.Patterns.WedgeLoadOhm/50) / 2 / 0.05)
+	if r.Wedge == nil || math.Abs(r.Wedge.KlopfensteinA-want) > 1e-12 || r.Wedge.Taper != "klopfenstein" {
+		t.Fatalf("wedge report %+v, want A = %g", r.Wedge, want)
+	}
+	// The profile steps by Γm in ln Z at the feed end, so the first
+	// station asks for 50·e^0.05 Ω.
+	if got := d.Patterns.Wedge.Stations[0].TargetOhm; math.Abs(got-50*math.Exp(0.05)) > 1e-3 {
+		t.Errorf("feed station target %.4f Ω, want %.4f", got, 50*math.Exp(0.05))
+	}
+}
+
+func ExampleStripWidthRatio() {
+	// Width-to-height ratio of a 50 Ω zero-thickness strip in air.
+	u, _ := StripWidthRatio(50, 0)
+	fmt.Printf("%.3f\n", u)
+	// Output: 4.912
+}

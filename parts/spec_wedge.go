@@ -1,0 +1,71 @@
+package parts
+
+import "fmt"
+
+// WedgeSpec is the [wedge] table: the matching strip soldered under the
+// coil's first part, from 50 Ω at the feed to the coil's input resistance.
+type WedgeSpec struct {
+	ThicknessMM float64 `toml:"thickness_mm"` // sheet thickness, default 0.3 mm
+	Material    string  `toml:"material"`     // sheet material id, default "copper"
+	Taper       string  `toml:"taper"`        // "exponential" or "klopfenstein"
+	Ripple      float64 `toml:"ripple"`       // Klopfenstein |Γ|max, default 0.05
+	SpanDeg     float64 `toml:"span_deg"`     // winding angle covered, default 90°
+}
+
+// Wedge defaults. Common practice (no published source): the strip is
+// copper or brass shim a few tenths of a millimetre thick, covering the
+// first quarter turn.
+const (
+	DefaultWedgeThicknessMM = 0.3
+	DefaultWedgeSpanDeg     = 90.0
+	DefaultWedgeRipple      = 0.05
+	// WedgeFeedOhm is the feed line's impedance at the wedge's start.
+	WedgeFeedOhm = 50.0
+	// minStripHeightMM is the least air gap under the strip at the feed.
+	minStripHeightMM = 0.1
+)
+
+func (w *WedgeSpec) validate(c *checker, s *Spec) {
+	if !c.has("wedge.thickness_mm") && w.ThicknessMM == 0 {
+		w.ThicknessMM = DefaultWedgeThicknessMM
+	}
+	thickOK := c.within("wedge.thickness_mm", w.ThicknessMM, 0.05, 3, "mm")
+	c.oneOf("wedge.material", &w.Material, "copper", "copper", "brass", "tinplate", "aluminium")
+	c.oneOf("wedge.taper", &w.Taper, "exponential", "exponential", "klopfenstein")
+	if !c.has("wedge.ripple") && w.Ripple == 0 {
+		w.Ripple = DefaultWedgeRipple
+	}
+	c.within("wedge.ripple", w.Ripple, 0.001, 0.3, "(reflection magnitude)")
+	if c.has("wedge.ripple") && w.Taper != "klopfenstein" {
+		c.fail("wedge.ripple", num(w.Ripple), `applies only to taper = "klopfenstein"`, "delete it, or set taper = \"klopfenstein\"")
+	}
+	if !c.has("wedge.span_deg") && w.SpanDeg == 0 {
+		w.SpanDeg = DefaultWedgeSpanDeg
+	}
+	c.within("wedge.span_deg", w.SpanDeg, 30, 360, "degrees")
+	if !thickOK || s.Wire.DiameterMM <= 0 {
+		return
+	}
+	z0 := DefaultFirstTurnHeight(s.Wavelength(), s.Wire.DiameterMM)
+	if s.Coil.FirstTurnHeightMM != nil {
+		z0 = *s.Coil.FirstTurnHeightMM
+	}
+	if h := z0 - s.Wire.DiameterMM/2 - w.ThicknessMM; h < minStripHeightMM {
+		key := "wedge.thickness_mm"
+		if s.Coil.FirstTurnHeightMM != nil {
+			key = "coil.first_turn_height_mm"
+		}
+		c.fail(key, "", fmt.Sprintf("leaves %.2f mm of air under the matching strip at the feed (wire centre %.2f mm up, wire %s mm, strip %s mm); at least %s mm is needed",
+			h, z0, num(s.Wire.DiameterMM), num(w.ThicknessMM), num(minStripHeightMM)),
+			fmt.Sprintf("raise coil.first_turn_height_mm to at least %.2f mm or use thinner strip", s.Wire.DiameterMM/2+w.ThicknessMM+minStripHeightMM))
+	}
+}
+
+// taper returns the wedge's impedance profile to load resistance zl.
+func (w *WedgeSpec) taper(zl float64) Taper {
+	t := Taper{Kind: TaperExponential, Z0: WedgeFeedOhm, ZL: zl}
+	if w.Taper == "klopfenstein" {
+		t.Kind, t.GammaMax = TaperKlopfenstein, w.Ripple
+	}
+	return t
+}
