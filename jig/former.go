@@ -86,6 +86,7 @@ type Former struct {
 	path      WirePath
 	hand      int
 	minRadius float64
+	minWall   float64
 }
 
 // Centreline returns the wire centreline point at azimuth φ in print
@@ -102,9 +103,15 @@ func (f *Former) Centreline(phi float64) geom.Vec3 {
 }
 
 // Mesh meshes the former at the given tolerance in mm (0 for
-// DefaultTolerance), with the grid sized for its smallest radius.
+// DefaultTolerance), with the grid sized for its smallest radius, and at
+// most that radius and half its thinnest wall, so that no groove or wall is
+// lost between samples.
 func (f *Former) Mesh(tol float64) (*geom.Mesh, error) {
-	return Mesh(f.Solid, MeshOptions{Tolerance: tol, MinRadius: f.minRadius})
+	if tol == 0 {
+		tol = DefaultTolerance
+	}
+	cell := min(math.Sqrt(4*tol*f.minRadius), maxCellPerTolerance*tol, f.minWall/2, f.minRadius)
+	return Mesh(f.Solid, MeshOptions{Tolerance: tol, Cell: cell})
 }
 
 // formerError reports a size that cannot make a former.
@@ -124,7 +131,7 @@ func NewFormer(path WirePath, p FormerParams) (*Former, error) {
 		return nil, formerError("wire %g mm, span %g rad and groove depth %g mm must be above 0", d, span, p.GrooveDepth)
 	}
 	rs, re := path.Radius(0), path.Radius(span)
-	f := &Former{path: path, hand: p.Hand, Flipped: re > rs, minRadius: a}
+	f := &Former{path: path, hand: p.Hand, Flipped: re > rs, minRadius: a, minWall: p.MinWall}
 	if p.Fillet > 0 {
 		f.minRadius = min(a, p.Fillet)
 	}
@@ -174,7 +181,7 @@ func NewFormer(path WirePath, p FormerParams) (*Former, error) {
 	if err != nil {
 		return nil, err
 	}
-	notch, err := stopNotch(path, p, a, up, coreR(span))
+	notch, err := stopNotch(path, p, a, up, coreR(span), driveR)
 	if err != nil {
 		return nil, err
 	}
@@ -408,12 +415,14 @@ func lockHole(path WirePath, p FormerParams, a, up, driveR float64) (sdf.SDF3, e
 }
 
 // stopNotch returns the stop at the end of the winding: a radial pocket one
-// wire diameter below the groove bottom, as wide as NotchWidth, reaching from
-// below the groove to its top, with a 45° roof.
-func stopNotch(path WirePath, p FormerParams, a, up, coreR float64) (sdf.SDF3, error) {
+// wire diameter below the groove bottom (less where the drive cut needs its
+// wall), as wide as NotchWidth, reaching from below the groove to its top,
+// with a 45° roof.
+func stopNotch(path WirePath, p FormerParams, a, up, coreR, driveR float64) (sdf.SDF3, error) {
 	span := path.Span()
 	r := path.Radius(span)
-	in, out := r-p.Wire/2-p.Wire, coreR+1
+	// One wire diameter below the groove bottom, a wall short of the drive.
+	in, out := max(r-p.Wire/2-p.Wire, driveR+p.MinWall), coreR+1
 	lo, hi := -(a + p.Wire), a
 	prof, err := sdf.NewPolygon(geom.Polyline{{X: in, Y: lo}, {X: out, Y: lo}, {X: out, Y: hi + out - in}, {X: in, Y: hi}})
 	if err != nil {

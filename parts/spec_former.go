@@ -182,7 +182,8 @@ func (f *FormerSpec) validateFit(c *checker, s *Spec) {
 	if f.Drive == "hex" && !c.has("former.drive") && f.DriveRadius() > room {
 		f.Drive = "bore"
 		if !c.has("former.bore_diameter_mm") {
-			f.BoreDiameterMM = math.Max(1, math.Min(f.BoreDiameterMM, math.Floor(20*room)/10))
+			// Half a millimetre inside the limit, on a 0.1 mm step.
+			f.BoreDiameterMM = math.Max(1, math.Min(f.BoreDiameterMM, math.Floor(20*(room-0.5))/10))
 		}
 	}
 	key, val := "former.hex_across_flats_mm", f.HexAcrossFlatsMM
