@@ -128,13 +128,29 @@ func TestDemoFormerAccuracy(t *testing.T) {
 		t.Fatalf("%v\n%+v", err, rep)
 	}
 	// Vertices are solved onto the surface; centroids carry the chord
-	// error, which exceeds the tolerance only in the engraved lettering,
-	// whose V-strokes are two to three cells wide.
-	const letteringFactor = 1.5
-	if rep.MaxVertexDist > tol || rep.MaxCentroidDist > letteringFactor*tol {
-		t.Errorf("vertex %.4f mm, centroid %.4f mm off the surface; want %g and %g", rep.MaxVertexDist, rep.MaxCentroidDist, tol, letteringFactor*tol)
+	// error, which the grid keeps within the tolerance everywhere except
+	// in the engraved lettering, whose V-strokes are only two to three
+	// cells wide; there it is held to twice the tolerance.
+	top := d.Spec.Former.FlangeThicknessMM
+	inLettering := func(p geom.Vec3) bool {
+		return p.Z > top-d.Spec.Former.EngraveDepthMM-0.1 && p.Z < top+0.1
 	}
-	t.Logf("%d faces; largest distance from the model: vertex %.4f mm, centroid %.4f mm", rep.Faces, rep.MaxVertexDist, rep.MaxCentroidDist)
+	var worst, worstLetters float64
+	for _, fc := range m.Faces {
+		c := m.Vertices[fc[0]].Add(m.Vertices[fc[1]]).Add(m.Vertices[fc[2]]).Scale(1.0 / 3)
+		dist := math.Abs(f.Solid.Eval(c))
+		if inLettering(c) {
+			worstLetters = max(worstLetters, dist)
+		} else {
+			worst = max(worst, dist)
+		}
+	}
+	if rep.MaxVertexDist > tol || worst > tol || worstLetters > 2*tol {
+		t.Errorf("vertex %.4f mm, centroid %.4f mm (lettering %.4f mm) off the surface; want %g, %g and %g",
+			rep.MaxVertexDist, worst, worstLetters, tol, tol, 2*tol)
+	}
+	t.Logf("%d faces; largest distance from the model: vertex %.4f mm, centroid %.4f mm, in the lettering %.4f mm",
+		rep.Faces, rep.MaxVertexDist, worst, worstLetters)
 }
 
 // TestDemoFormerAdmesh writes the demo former as STL and reads admesh's

@@ -43,9 +43,9 @@ package jig
 // vertices within 0.01 cell, by Newton projection); face centroids carry the
 // chord error s²/(8R) of curved parts, which the cell size from MeshOptions
 // keeps within the tolerance for radii down to MinRadius. Features thinner
-// than about two cells (fine lettering) can exceed it; the demo formers
-// measure 0.006 mm at vertices and 0.067 mm at centroids (in the lettering,
-// 0.045 mm elsewhere) at the 0.05 mm default.
+// than about two cells (fine lettering) can exceed it: at the 0.05 mm
+// default the 5.8 GHz demo former measures 0.003 mm at vertices, 0.028 mm at
+// face centroids, and 0.075 mm at centroids in its engraved lettering.
 
 import (
 	"errors"
