@@ -18,7 +18,9 @@ package jig
 //     on the face's four values and so is the same in both cells sharing the
 //     face. Segments are oriented with the inside on their left seen from
 //     outside the cube, chained into closed cycles and each cycle is cut into
-//     triangles, always across its shortest diagonal.
+//     triangles across its shortest diagonals, never one lying on a cube
+//     face (a neighbouring cell might use it too); a cycle that cannot be
+//     cut so is fanned about a vertex inside the cell.
 //  3. Because neighbouring cells produce the same segment on a shared face
 //     with opposite directions, and each crossing lies on exactly one cycle of
 //     each cell around its edge, the union of the patches is a closed,
