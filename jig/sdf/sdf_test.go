@@ -80,11 +80,13 @@ func TestLipschitz(t *testing.T) {
 	uni := must[SDF3](t)(Union(1, cyl, Move(box, Translation(geom.Vec3{X: 5}))))
 	dif := must[SDF3](t)(Difference(cyl, Cut{hex, 0.5}, Cut{sweep, 0.3}))
 	inter := must[SDF3](t)(Intersection(0.5, cone, Move(box, RotationZ(0.3))))
+	vg := must[*VGroove](t)(NewVGroove([][2]geom.Vec2{{{X: -3}, {X: 3, Y: 2}}, {{Y: -4}, {Y: 4}}}, 2, 0.6, 0.45))
 	shapes := map[string]SDF3{
 		"cylinder": cyl, "cone": cone, "hex": hex, "revolve": rev, "sweep": sweep,
 		"smooth union": uni, "smooth difference": dif, "smooth intersection": inter,
+		"offset": Offset(box, 0.7), "v-groove": vg,
 	}
-	for _, name := range []string{"cylinder", "cone", "hex", "revolve", "sweep", "smooth union", "smooth difference", "smooth intersection"} {
+	for _, name := range []string{"cylinder", "cone", "hex", "revolve", "sweep", "smooth union", "smooth difference", "smooth intersection", "offset", "v-groove"} {
 		s := shapes[name]
 		t.Run(name, func(t *testing.T) {
 			for range 20000 {
@@ -111,6 +113,31 @@ func TestRevolveMatchesCone(t *testing.T) {
 		if a, b := cone.Eval(p), rev.Eval(p); math.Abs(a-b) > exactTol {
 			t.Fatalf("at %v cone %g, revolve %g", p, a, b)
 		}
+	}
+}
+
+func TestVGrooveAndOffset(t *testing.T) {
+	vg := must[*VGroove](t)(NewVGroove([][2]geom.Vec2{{{X: -3}, {X: 3}}}, 2, 0.6, 0.45))
+	box := must[*Box](t)(NewBox(geom.Vec3{X: 2, Y: 2, Z: 2}))
+	// Source: the cut's definition: 0.6 mm deep on the line, 0.45 mm half
+	// width at the face; the offset box's corner is a sphere of radius 0.5
+	// about (1, 1, 1).
+	cases := []struct {
+		name string
+		s    SDF3
+		p    geom.Vec3
+		want float64
+	}{
+		{"groove bottom on the line", vg, geom.Vec3{Z: 1.4}, 0},
+		{"groove edge at the face", vg, geom.Vec3{Y: 0.45, Z: 2}, 0},
+		{"rounded corner", Offset(box, 0.5), geom.Vec3{X: 1.5, Y: 1.5, Z: 1.5}, math.Sqrt(0.75) - 0.5},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			if got := c.s.Eval(c.p); math.Abs(got-c.want) > exactTol {
+				t.Errorf("Eval(%v) = %g, want %g", c.p, got, c.want)
+			}
+		})
 	}
 }
 
