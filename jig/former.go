@@ -229,10 +229,6 @@ func NewFormer(path WirePath, p FormerParams) (*Former, error) {
 // with radius k/√2 at its middle (worked from the blend formula).
 const blendPerRadius = math.Sqrt2
 
-// MinRadius returns the smallest radius of curvature of the former's smooth
-// parts in mm, for MeshOptions.MinRadius: the fillets, else the groove.
-func (f *Former) MinRadius() float64 { return f.minRadius }
-
 // slope returns dz/dφ at phi by a central difference.
 func slope(z func(float64) float64, phi float64) float64 {
 	const h = 1e-4

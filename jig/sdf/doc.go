@@ -11,7 +11,11 @@
 //
 // Profiles in the plane are SDF2 values with the same contract; Revolve and
 // Extrude lift them into space, and HelixSweep carries one along a helix of
-// any radius profile r(φ) and height z(φ).
+// any radius profile r(φ) and height z(φ), exactly for a round profile within
+// its reach. Offset rounds a solid, VGroove engraves along lines, and Move
+// applies a rigid motion. A shape that is costly away from itself may also
+// implement Bounded, which Difference uses to skip work where a cut cannot
+// change the result.
 //
 // Constructors check their arguments and return an *ArgError for a size that
 // cannot make a solid. Shapes are immutable values, safe for concurrent use.
