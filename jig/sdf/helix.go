@@ -177,10 +177,28 @@ func (s *HelixSweep) Eval(p geom.Vec3) float64 {
 	}
 	theta := math.Atan2(q.Y, q.X)
 	k := math.Floor((s.phiOfZ(q.Z) - theta) / (2 * math.Pi))
+	// The two crossings of p's meridian that bracket its height, nearer
+	// first.
+	var cs [2]float64
+	var gaps [2]float64
+	for i, kk := range [2]float64{k, k + 1} {
+		cs[i] = theta + 2*math.Pi*kk
+		_, _, _, z, _, _ := s.curve(max(h.Start, min(h.End, cs[i])))
+		gaps[i] = math.Abs(q.Z - z)
+	}
+	if gaps[1] < gaps[0] {
+		cs[0], cs[1], gaps[0], gaps[1] = cs[1], cs[0], gaps[1], gaps[0]
+	}
 	best, bestD := 0.0, math.Inf(1)
-	for _, kk := range [2]float64{k, k + 1} {
-		c := theta + 2*math.Pi*kk
+	rr := min(rho, s.rmin)
+	for i, c := range cs {
 		if c < h.Start-math.Pi || c > h.End+math.Pi {
+			continue
+		}
+		// A point of this turn nearer than bestD lies within δ of the
+		// crossing in angle, so within zslope·δ of its height (see
+		// EvalBound); when the height gap rules that out, skip the search.
+		if i == 1 && bestD < 2*rr && gaps[i]-s.zslope*2*math.Asin(bestD/(2*rr)) > bestD {
 			continue
 		}
 		lo, hi := max(h.Start, c-math.Pi), min(h.End, c+math.Pi)
