@@ -14,9 +14,13 @@ import (
 // Source: the quadratic polynomial smooth minimum in I. Quilez, "smooth
 // minimum" (iquilezles.org).
 //
-// Each operand's bounding box is a cheap lower bound on its distance, so an
-// operand whose box is farther than the running result (plus k) is not
-// evaluated; the result stays a valid distance bound.
+// Outside its bounding box an operand's distance is at least the distance to
+// the box, so a union skips an operand whose box is farther than the running
+// result (plus k). A difference skips a cut that cannot reach below −v + k
+// (v the running value): one whose box is that far, or whose Bounded
+// evaluation says so. Where v ≥ k, outside the first operand by more than
+// the blend, this returns v itself, a lower bound on the true value with the
+// right sign; everywhere else the result is as if every cut were evaluated.
 
 // smin returns the smooth minimum of a and b with blend radius k (sharp min
 // for k = 0).
@@ -70,7 +74,9 @@ func Union(k float64, s ...SDF3) (SDF3, error) {
 func (u *union) Eval(p geom.Vec3) float64 {
 	d := math.Inf(1)
 	for i, c := range u.s {
-		if boxDist(u.b[i], p) >= d+u.k {
+		// Outside its box an operand's value is at least the box distance;
+		// inside it may be anything, so it is always evaluated there.
+		if b := boxDist(u.b[i], p); b > 0 && b >= d+u.k {
 			continue
 		}
 		d = smin(d, c.Eval(p), u.k)
@@ -194,7 +200,7 @@ func Union2(s ...SDF2) (SDF2, error) {
 func (u *union2) Eval(p geom.Vec2) float64 {
 	d := math.Inf(1)
 	for _, c := range u.s {
-		if boxDist2(c.Bounds(), p) >= d {
+		if b := boxDist2(c.Bounds(), p); b > 0 && b >= d {
 			continue
 		}
 		d = min(d, c.Eval(p))

@@ -80,13 +80,20 @@ func TestLipschitz(t *testing.T) {
 	uni := must[SDF3](t)(Union(1, cyl, Move(box, Translation(geom.Vec3{X: 5}))))
 	dif := must[SDF3](t)(Difference(cyl, Cut{hex, 0.5}, Cut{sweep, 0.3}))
 	inter := must[SDF3](t)(Intersection(0.5, cone, Move(box, RotationZ(0.3))))
+	// A teardrop section: a circle and the 45° roof over it, whose union has
+	// a roof edge inside the circle.
+	k := 0.9 / math.Sqrt2
+	roof := must[*Polygon](t)(NewPolygon(geom.Polyline{{X: -k, Y: k}, {X: k, Y: k}, {Y: 0.9 * math.Sqrt2}}))
+	circ9 := must[*Circle](t)(NewCircle(geom.Vec2{}, 0.9))
+	tear := must[SDF2](t)(Union2(circ9, roof))
+	teardrop := must[*HelixSweep](t)(NewHelixSweep(testHelix(-1), tear))
 	vg := must[*VGroove](t)(NewVGroove([][2]geom.Vec2{{{X: -3}, {X: 3, Y: 2}}, {{Y: -4}, {Y: 4}}}, 2, 0.6, 0.45))
 	shapes := map[string]SDF3{
 		"cylinder": cyl, "cone": cone, "hex": hex, "revolve": rev, "sweep": sweep,
 		"smooth union": uni, "smooth difference": dif, "smooth intersection": inter,
-		"offset": Offset(box, 0.7), "v-groove": vg,
+		"offset": Offset(box, 0.7), "v-groove": vg, "teardrop sweep": teardrop,
 	}
-	for _, name := range []string{"cylinder", "cone", "hex", "revolve", "sweep", "smooth union", "smooth difference", "smooth intersection", "offset", "v-groove"} {
+	for _, name := range []string{"cylinder", "cone", "hex", "revolve", "sweep", "smooth union", "smooth difference", "smooth intersection", "offset", "v-groove", "teardrop sweep"} {
 		s := shapes[name]
 		t.Run(name, func(t *testing.T) {
 			for range 20000 {
