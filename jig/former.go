@@ -214,8 +214,14 @@ func NewFormer(path WirePath, p FormerParams) (*Former, error) {
 	if err != nil {
 		return nil, err
 	}
-	for _, t := range text {
-		cuts = append(cuts, sdf.Cut{Shape: t})
+	// One union per label, so that points away from the lettering test
+	// two boxes instead of one per glyph.
+	for _, label := range text {
+		u, err := sdf.Union(0, label...)
+		if err != nil {
+			return nil, err
+		}
+		cuts = append(cuts, sdf.Cut{Shape: u})
 	}
 	f.Solid, err = sdf.Difference(printed, cuts...)
 	if err != nil {
@@ -489,11 +495,12 @@ func driveCut(p FormerParams, height, driveR float64) (sdf.SDF3, error) {
 // still engraves legibly. Common practice (no published source).
 const minTextHeight = 1.5
 
-// lettering returns the two labels V-engraved into the flange face at height
-// top, set along arcs midway between radii rIn and rOut: the first across
-// the +y side reading clockwise, the second across the −y side reading
-// anticlockwise, both upright for a reader at −y.
-func lettering(p FormerParams, rIn, rOut, top float64) ([]sdf.SDF3, error) {
+// lettering returns the glyph cuts of the two labels, label by label,
+// V-engraved into the flange face at height top, set along arcs midway
+// between radii rIn and rOut: the first across the +y side reading
+// clockwise, the second across the −y side reading anticlockwise, both
+// upright for a reader at −y.
+func lettering(p FormerParams, rIn, rOut, top float64) ([][]sdf.SDF3, error) {
 	// The letters shrink to fit the ring and an arc of 150° on each side,
 	// clear of the vice flats.
 	const arc = 5 * math.Pi / 6
@@ -509,12 +516,13 @@ func lettering(p FormerParams, rIn, rOut, top float64) ([]sdf.SDF3, error) {
 	}
 	scale := th / glyphHeight
 	pen := max(0.3, 0.13*th) // half the width of a stroke at the face
-	var out []sdf.SDF3
+	var out [][]sdf.SDF3
 	for li, label := range p.Labels {
 		runes := []rune(label)
 		if len(runes) == 0 {
 			continue
 		}
+		var glyphCuts []sdf.SDF3
 		width := (float64(len(runes))*glyphAdvance - (glyphAdvance - glyphWidth)) * scale
 		sign, centre := -1.0, math.Pi/2 // clockwise across the top
 		if li == 1 {
@@ -545,7 +553,10 @@ func lettering(p FormerParams, rIn, rOut, top float64) ([]sdf.SDF3, error) {
 			if err != nil {
 				return nil, err
 			}
-			out = append(out, e)
+			glyphCuts = append(glyphCuts, e)
+		}
+		if len(glyphCuts) > 0 {
+			out = append(out, glyphCuts)
 		}
 	}
 	return out, nil

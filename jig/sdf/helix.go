@@ -62,6 +62,7 @@ type HelixSweep struct {
 	dphi       float64
 	rmin, rmax float64
 	zslope     float64 // largest |dz/dφ| in the table, mm/rad
+	zlinErr    float64 // bound on |z − linear interpolation of the table|, mm
 	b          geom.Box3
 }
 
@@ -110,8 +111,13 @@ func NewHelixSweep(h Helix, prof SDF2) (*HelixSweep, error) {
 	// The second difference bounds how far the slope between samples can
 	// exceed the largest chord slope.
 	for i := 1; i+1 < n; i++ {
-		s.zslope = max(s.zslope, (s.zs[i+1]-s.zs[i-1])/(2*s.dphi)+math.Abs(s.zs[i+1]-2*s.zs[i]+s.zs[i-1])/s.dphi)
+		dd := math.Abs(s.zs[i+1] - 2*s.zs[i] + s.zs[i-1])
+		s.zslope = max(s.zslope, (s.zs[i+1]-s.zs[i-1])/(2*s.dphi)+dd/s.dphi)
+		// The cubic leaves the chord by at most about a quarter of the
+		// second difference; a whole one is a safe margin.
+		s.zlinErr = max(s.zlinErr, dd)
 	}
+	s.zlinErr += 1e-9
 	if s.extent >= s.reach {
 		return nil, &ArgError{"helix sweep", "profile extent", s.extent,
 			"profile must fit within half the rise per turn and half the radius"}
@@ -155,8 +161,7 @@ func (s *HelixSweep) EvalBound(p geom.Vec3, bound float64) float64 {
 			if c < s.h.Start-delta || c > s.h.End+delta {
 				continue
 			}
-			_, _, _, z, _, _ := s.curve(max(s.h.Start, min(s.h.End, c)))
-			gap = min(gap, math.Abs(q.Z-z))
+			gap = min(gap, math.Abs(q.Z-s.zLinear(c))-s.zlinErr)
 		}
 		if gap-s.zslope*delta > d {
 			return bound
@@ -183,8 +188,7 @@ func (s *HelixSweep) Eval(p geom.Vec3) float64 {
 	var gaps [2]float64
 	for i, kk := range [2]float64{k, k + 1} {
 		cs[i] = theta + 2*math.Pi*kk
-		_, _, _, z, _, _ := s.curve(max(h.Start, min(h.End, cs[i])))
-		gaps[i] = math.Abs(q.Z - z)
+		gaps[i] = math.Abs(q.Z-s.zLinear(cs[i])) - s.zlinErr
 	}
 	if gaps[1] < gaps[0] {
 		cs[0], cs[1], gaps[0], gaps[1] = cs[1], cs[0], gaps[1], gaps[0]
@@ -309,6 +313,15 @@ func (s *HelixSweep) profileDist(q geom.Vec3, phi float64) float64 {
 		return extrudeDist(d2, w)
 	}
 	return d2
+}
+
+// zLinear returns the height at phi, clamped to the sweep's ends, by linear
+// interpolation in the table: within zlinErr of the curve.
+func (s *HelixSweep) zLinear(phi float64) float64 {
+	x := (max(s.h.Start, min(s.h.End, phi)) - s.h.Start) / s.dphi
+	i := max(0, min(len(s.zs)-2, int(x)))
+	t := x - float64(i)
+	return s.zs[i] + t*(s.zs[i+1]-s.zs[i])
 }
 
 // phiOfZ returns the angle at which the centreline reaches height z, clamped
