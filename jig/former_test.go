@@ -9,6 +9,7 @@ import (
 	"os/exec"
 	"path/filepath"
 	"regexp"
+	"slices"
 	"sort"
 	"strconv"
 	"testing"
@@ -390,6 +391,24 @@ func TestGrooveHand(t *testing.T) {
 				t.Errorf("groove rising %v (%.3f), falling %v (%.3f) from %.3f; want rising %v", gotRising, up, gotFalling, down, z0, c.wantRising)
 			}
 		})
+	}
+}
+
+// TestFormerMeshDeterministic meshes the demo former on one core and on
+// two and requires the same vertices and faces in the same order.
+func TestFormerMeshDeterministic(t *testing.T) {
+	_, f := demoFormer(t, templates.DefaultDemo)
+	const cell = 0.5 // coarse, to keep the test quick
+	a, err := Mesh(f.Solid, MeshOptions{Cell: cell, Workers: 1})
+	if err != nil {
+		t.Fatal(err)
+	}
+	b, err := Mesh(f.Solid, MeshOptions{Cell: cell, Workers: 2})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !slices.Equal(a.Vertices, b.Vertices) || !slices.Equal(a.Faces, b.Faces) {
+		t.Error("the former's mesh differs between one and two workers")
 	}
 }
 
