@@ -225,9 +225,17 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 	s := d.Spec
 	w := cl.Wire
 	cx := cl.Coax
-	lockEnd := TrimPerEndMM + w.LockTailMM
-	marks := fmt.Sprintf("Mark the blank at %s from one end (mark A: the lock end, which goes into the former) and again %s further on (mark B: where the winding ends at the feed). Beyond mark B are the %s feed lead and the %s trim.",
-		mm(lockEnd), mm(w.ArcMM), mm(w.FeedLeadMM), mm(TrimPerEndMM))
+	// The former's lock hole sits at the start of the groove (the coil's
+	// feed end) and its stop notch at the end; the flange is at the feed end
+	// unless the coil widens away from the feed, when the former is printed
+	// the other way up.
+	startEnd := TrimPerEndMM + w.LockTailMM + w.FeedLeadMM
+	marks := fmt.Sprintf("Mark the blank at %s from one end (mark A: the start of the winding; the end before it is the lock end, which goes into the former's lock hole and is later cut down to the feed lead) and again %s further on (mark B: the end of the winding, at the stop notch). The %s beyond mark B is trim.",
+		mm(startEnd), mm(w.ArcMM), mm(TrimPerEndMM))
+	lockAt, windTo := "at the flange end of the former, the coil's feed end", "towards the free end of the former"
+	if d.Former.EndRadius > d.Former.StartRadius {
+		lockAt, windTo = "at the free end of the former, away from the flange: this coil widens away from its feed, so the former is printed feed end up", "towards the flange"
+	}
 	band := fmt.Sprintf("%s MHz ± 3 %%", num(s.FrequencyMHz))
 	if s.BandLowMHz != nil && s.BandHighMHz != nil {
 		band = fmt.Sprintf("%s–%s MHz", num(*s.BandLowMHz), num(*s.BandHighMHz))
@@ -281,25 +289,25 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 			marks,
 		}, Cautions: pick(all, HazardEyes)},
 		{Title: "Lock its end in the former", Text: []string{
-			"Push the lock end into the lock hole at the former's open (top) end, up to mark A or as far as the hole allows.",
+			"Push the lock end into the lock hole at the start of the groove, " + lockAt + ", until mark A sits at the mouth of the hole.",
 			"Check the hand mark on the former: this coil is " + d.Coil.Hand.String() + ", " + handWords(d.Coil.Hand) + ".",
 		}},
 		{Title: "Wind under tension", Text: []string{
 			"Lay the wire into the groove turn by turn, pulling it tight with steady tension so it seats at the bottom of the groove all the way round. Do not let it ride up on the groove wall.",
-			fmt.Sprintf("Wind all %s turns, towards the base, until mark B sits at the end of the groove.", num(d.Coil.Turns)),
+			fmt.Sprintf("Wind all %s turns %s until mark B reaches the stop notch at the end of the groove.", num(d.Coil.Turns), windTo),
 		}},
 		{Title: "Hold and overbend", Text: []string{
 			"Hold the wire at mark B for about ten seconds, then press every turn once more into its groove with a thumb, a little tighter than it lies, to set the bend.",
 		}},
 		{Title: "Release", Text: []string{
-			"Let go of the feed end slowly and let the coil open up on the former: it springs out to its relaxed size. Free the lock end and twist the coil off along the groove.",
+			"Let go of the end at mark B slowly and let the coil open up on the former: it springs out to its relaxed size. Free the lock end and twist the coil off along the groove.",
 		}},
 		{Title: "Measure each turn against the inspection table", Text: []string{
 			"Measure every turn across its middle, over the outside of the wire, and write the reading in the inspection table at the end of this sheet.",
 			"A turn outside the tolerance can be eased open or closed by hand. If every turn is large by about the same amount, this batch of wire springs back more than expected: recalibrate the former from a measured test coil before winding the rest of the batch.",
 		}},
 		{Title: "Trim and form the feed lead", Text: []string{
-			fmt.Sprintf("Cut the lock end off at mark A, and cut the feed end %s beyond mark B. File the cut ends smooth.", mm(w.FeedLeadMM)),
+			fmt.Sprintf("Cut the lock end off %s beyond mark A: that stub is the feed lead. Cut the other end at mark B. File the cut ends smooth.", mm(w.FeedLeadMM)),
 			lead,
 		}, Cautions: pick(all, HazardEyes)},
 		{Title: "Prepare the reflector", Text: []string{

@@ -2,7 +2,7 @@
 // consumables and hardware.
 //
 // The wire blank is the coil's centreline arc length plus three
-// allowances: the tail locked in the former's lock hole at the open end,
+// allowances: the tail locked in the former's lock hole at the start of the groove,
 // the feed lead at the feed end (a radial arm to the axis for a centre
 // feed, then the drop from the wire centre to the top of the coax's
 // dielectric stub), and a trim allowance squared off both ends. The support
@@ -80,7 +80,7 @@ type WireBlank struct {
 	Material   string
 	DiameterMM float64
 	ArcMM      float64 // centreline arc length of the winding (design.json wire_length_mm)
-	LockTailMM float64 // locked in the former's lock hole at the open end
+	LockTailMM float64 // locked in the former's lock hole at the start of the groove (the feed end)
 	FeedLeadMM float64 // drop from the wire centre at the start to the top of the dielectric stub
 	TrimMM     float64 // squared off both ends after release
 	LengthMM   float64 // the blank as cut
