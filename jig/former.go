@@ -105,13 +105,20 @@ func (f *Former) Centreline(phi float64) geom.Vec3 {
 // Mesh meshes the former at the given tolerance in mm (0 for
 // DefaultTolerance), with the grid sized for its smallest radius, and at
 // most that radius and half its thinnest wall, so that no groove or wall is
-// lost between samples.
+// lost between samples, then simplifies the mesh within the tolerance
+// (MeshOptions.Simplify).
 func (f *Former) Mesh(tol float64) (*geom.Mesh, error) {
+	return Mesh(f.Solid, f.MeshOptions(tol, true))
+}
+
+// MeshOptions returns the options Mesh uses at tolerance tol in mm (0 for
+// DefaultTolerance), with or without simplification.
+func (f *Former) MeshOptions(tol float64, simplify bool) MeshOptions {
 	if tol == 0 {
 		tol = DefaultTolerance
 	}
 	cell := min(math.Sqrt(4*tol*f.minRadius), maxCellPerTolerance*tol, f.minWall/2, f.minRadius)
-	return Mesh(f.Solid, MeshOptions{Tolerance: tol, Cell: cell})
+	return MeshOptions{Tolerance: tol, Cell: cell, Simplify: simplify}
 }
 
 // formerError reports a size that cannot make a former.

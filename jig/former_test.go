@@ -425,19 +425,27 @@ func TestFrequencyLabel(t *testing.T) {
 	}
 }
 
-// BenchmarkDemoFormer meshes the default demo former at its spec tolerance.
+// BenchmarkDemoFormer meshes each demo former at its spec tolerance, plain
+// and simplified.
 func BenchmarkDemoFormer(b *testing.B) {
-	d, f := demoFormer(b, templates.DefaultDemo)
-	tol := d.Spec.Former.ToleranceMM
-	b.ReportAllocs()
-	var faces int
-	for b.Loop() {
-		m, err := f.Mesh(tol)
-		if err != nil {
-			b.Fatal(err)
+	for _, name := range templates.Demos() {
+		d, f := demoFormer(b, name)
+		tol := d.Spec.Former.ToleranceMM
+		for _, simplify := range []bool{false, true} {
+			b.Run(fmt.Sprintf("%s simplify %v", name, simplify), func(b *testing.B) {
+				opt := f.MeshOptions(tol, simplify)
+				b.ReportAllocs()
+				var faces int
+				for b.Loop() {
+					m, err := Mesh(f.Solid, opt)
+					if err != nil {
+						b.Fatal(err)
+					}
+					faces = len(m.Faces)
+				}
+				b.ReportMetric(float64(faces), "triangles")
+				b.ReportMetric(float64(84+50*faces)/1e6, "STL-MB")
+			})
 		}
-		faces = len(m.Faces)
 	}
-	b.ReportMetric(float64(faces), "triangles")
-	b.ReportMetric(float64(84+50*faces)/1e6, "STL-MB")
 }

@@ -1,0 +1,181 @@
+package jig
+
+import (
+	"fmt"
+	"math"
+	"math/rand/v2"
+	"slices"
+	"testing"
+
+	"coilwright/cam/geom"
+	"coilwright/jig/sdf"
+	"coilwright/templates"
+)
+
+// TestSimplifyVolumes meshes solids of known volume with simplification and
+// requires the same checks as the plain mesher: a closed, oriented manifold
+// of the right genus, every vertex and centroid within the tolerance, and
+// the volume within 0.5 %; the box's sharp edges and corners must survive
+// so that it keeps its volume.
+func TestSimplifyVolumes(t *testing.T) {
+	const R, r, h = 10.0, 6.0, 25.0
+	frustum := must[*sdf.Cone](t)(sdf.NewCone(h, R, r))
+	torusProf := must[*sdf.Circle](t)(sdf.NewCircle(geom.Vec2{X: 8}, 3))
+	torus := must[*sdf.Revolve](t)(sdf.NewRevolve(torusProf))
+	twoBalls := must[sdf.SDF3](t)(sdf.Union(0, sphere(t, geom.Vec3{}, 4), sphere(t, geom.Vec3{X: 12}, 4)))
+	box := must[*sdf.Box](t)(sdf.NewBox(geom.Vec3{X: 20, Y: 10, Z: 5}))
+	cases := []struct {
+		name   string
+		s      sdf.SDF3
+		want   float64
+		relTol float64
+		parts  int
+		genus  int
+	}{
+		// Source: frustum volume πh(R² + Rr + r²)/3 (any geometry handbook).
+		{"plain frustum", frustum, math.Pi * h * (R*R + R*r + r*r) / 3, 0.005, 1, 0},
+		// Source: Pappus's theorem, V = 2π·8 · π·3².
+		{"torus", torus, 2 * math.Pi * 8 * math.Pi * 9, 0.005, 1, 1},
+		// Source: sphere volume 4πr³/3, twice.
+		{"two spheres", twoBalls, 2 * 4 * math.Pi * 64 / 3, 0.005, 2, 0},
+		// Source: box volume, length × width × height.
+		{"box", box, 20 * 10 * 5, 0.005, 1, 0},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			plain, err := Mesh(c.s, MeshOptions{})
+			if err != nil {
+				t.Fatal(err)
+			}
+			m, err := Mesh(c.s, MeshOptions{Simplify: true})
+			if err != nil {
+				t.Fatal(err)
+			}
+			rep, err := CheckMesh(m, CheckOptions{Components: c.parts, Genus: c.genus, SDF: c.s, Tolerance: DefaultTolerance})
+			if err != nil {
+				t.Fatalf("%v\n%+v", err, rep)
+			}
+			if rel := math.Abs(rep.Volume-c.want) / c.want; rel > c.relTol {
+				t.Errorf("volume %.3f mm³, want %.3f (off by %.3f %%)", rep.Volume, c.want, 100*rel)
+			}
+			if len(m.Faces) >= len(plain.Faces) {
+				t.Errorf("%d faces simplified from %d", len(m.Faces), len(plain.Faces))
+			}
+			t.Logf("%d faces from %d, volume off by %.4f %%, vertex %.5f mm, centroid %.5f mm", rep.Faces, len(plain.Faces),
+				100*math.Abs(rep.Volume-c.want)/c.want, rep.MaxVertexDist, rep.MaxCentroidDist)
+		})
+	}
+}
+
+// TestSimplifyReduces checks that simplification removes most triangles
+// where the surface is flat or gently curved: a cylinder and the long
+// cylindrical demo former.
+func TestSimplifyReduces(t *testing.T) {
+	cyl := must[*sdf.Cylinder](t)(sdf.NewCylinder(10, 40))
+	_, f := demoFormer(t, "demo-2g4-cylinder.toml")
+	cases := []struct {
+		name      string
+		s         sdf.SDF3
+		opt       MeshOptions
+		genus     int
+		minFactor float64 // the measured factor with about a quarter of margin
+	}{
+		// Measured: 48,656 → 1,706 triangles (28.5×).
+		{"cylinder r 10 mm h 40 mm", cyl, MeshOptions{MinRadius: 10}, 0, 20},
+		// Measured at a coarse 0.2 mm tolerance to keep the test quick:
+		// 332,188 → 12,120 triangles (27.4×).
+		{"2.4 GHz demo former", f.Solid, f.MeshOptions(0.2, false), f.Genus, 20},
+	}
+	for _, c := range cases {
+		t.Run(c.name, func(t *testing.T) {
+			plain, err := Mesh(c.s, c.opt)
+			if err != nil {
+				t.Fatal(err)
+			}
+			c.opt.Simplify = true
+			m, err := Mesh(c.s, c.opt)
+			if err != nil {
+				t.Fatal(err)
+			}
+			if _, err := CheckMesh(m, CheckOptions{Genus: c.genus}); err != nil {
+				t.Fatal(err)
+			}
+			factor := float64(len(plain.Faces)) / float64(len(m.Faces))
+			if factor < c.minFactor {
+				t.Errorf("%d → %d triangles, %.1f× fewer; want at least %g×", len(plain.Faces), len(m.Faces), factor, c.minFactor)
+			}
+			t.Logf("%d → %d triangles (%.1f×)", len(plain.Faces), len(m.Faces), factor)
+		})
+	}
+}
+
+// TestSimplifyDeterministic simplifies the demo former's mesh made on one
+// core and on two, and requires the same vertices and faces in the same
+// order.
+func TestSimplifyDeterministic(t *testing.T) {
+	_, f := demoFormer(t, templates.DefaultDemo)
+	const cell = 0.5 // coarse, to keep the test quick
+	a, err := Mesh(f.Solid, MeshOptions{Cell: cell, Workers: 1, Simplify: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	b, err := Mesh(f.Solid, MeshOptions{Cell: cell, Workers: 2, Simplify: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	plain, err := Mesh(f.Solid, MeshOptions{Cell: cell, Workers: 2})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(a.Faces) >= len(plain.Faces) {
+		t.Fatalf("nothing simplified: %d faces from %d", len(a.Faces), len(plain.Faces))
+	}
+	if !slices.Equal(a.Vertices, b.Vertices) || !slices.Equal(a.Faces, b.Faces) {
+		t.Error("the simplified mesh differs between one and two workers")
+	}
+}
+
+// TestDecimateKeepsManifold is a property test: seeded random blobs of
+// balls and boxes are meshed coarsely and decimated with no distance limit,
+// so that only the link condition and the face checks hold the mesh
+// together, some vertices marked fixed. Each result must still be a closed,
+// consistently oriented manifold with no pinched vertex or degenerate face,
+// the same number of parts and the same Euler characteristic, and a
+// positive volume.
+func TestDecimateKeepsManifold(t *testing.T) {
+	rng := rand.New(rand.NewPCG(1997, 1999))
+	for i := range 40 {
+		var parts []sdf.SDF3
+		for range 2 + rng.IntN(5) {
+			c := geom.Vec3{X: rng.Float64() * 10, Y: rng.Float64() * 10, Z: rng.Float64() * 10}
+			size := 1.5 + rng.Float64()*3
+			if rng.IntN(2) == 0 {
+				parts = append(parts, sphere(t, c, size))
+				continue
+			}
+			b := must[*sdf.Box](t)(sdf.NewBox(geom.Vec3{X: 2 * size, Y: size, Z: 1.5 * size}))
+			parts = append(parts, sdf.Move(b, sdf.Translation(c)))
+		}
+		s := must[sdf.SDF3](t)(sdf.Union(0, parts...))
+		cell := 0.4 + rng.Float64()*0.4
+		t.Run(fmt.Sprintf("%02d %d shapes cell %.2f mm", i, len(parts), cell), func(t *testing.T) {
+			m, err := Mesh(s, MeshOptions{Cell: cell})
+			if err != nil {
+				t.Fatal(err)
+			}
+			before, _ := CheckMesh(m, CheckOptions{})
+			fixed := make([]bool, len(m.Vertices))
+			for v := range fixed {
+				fixed[v] = rng.IntN(10) == 0
+			}
+			decimate(m, fixed, s, math.Inf(1))
+			after, err := CheckMesh(m, CheckOptions{Components: before.Components, Genus: before.Components - before.Euler/2})
+			if err != nil {
+				t.Fatalf("%v\nbefore %+v\nafter %+v", err, before, after)
+			}
+			if after.Faces >= before.Faces/2 {
+				t.Errorf("only %d of %d faces removed", before.Faces-after.Faces, before.Faces)
+			}
+		})
+	}
+}
