@@ -34,7 +34,10 @@ package jig
 
 import (
 	"math"
+	"runtime"
 	"slices"
+	"sync"
+	"sync/atomic"
 
 	"coilwright/cam/geom"
 	"coilwright/jig/sdf"
@@ -174,24 +177,36 @@ func (q *vertexHeap) remove(v uint32) {
 	q.down(int(q.at[last]))
 }
 
-// decimator holds the mesh being simplified.
+// slabs is the number of slabs the mesh is cut into along its longest axis
+// for the parallel pass; fixed, so that the result does not depend on the
+// number of cores.
+const slabs = 16
+
+// decimator holds the mesh being simplified, shared by the workers.
 type decimator struct {
 	pos    []geom.Vec3
 	faces  [][3]uint32
 	dead   []bool    // per face
 	vfaces [][]int32 // per vertex: its faces, dead ones dropped lazily
 	q      []quadric
-	fixed  []bool   // per vertex: a crease or corner vertex
-	gone   []bool   // per vertex: collapsed away
-	mark   []uint32 // per vertex: scratch marks for the link test
-	epoch  uint32
-	queue  vertexHeap
-	opts   []option
+	fixed  []bool    // per vertex: a crease or corner vertex
+	gone   []bool    // per vertex: collapsed away
+	slabOf []uint8   // per vertex
+	locked []bool    // per vertex: has a neighbour in another slab
+	queued []float64 // per vertex: queued cost
+	at     []int32   // per vertex: slot in its worker's queue, or −1
 	s      sdf.SDF3
 	tol    float64
-	alive  int // live faces
+}
 
-	// scratch
+// worker collapses edges in one slab, or, with slab −1, anywhere.
+type worker struct {
+	*decimator
+	slab  int
+	queue vertexHeap
+	mark  []uint32 // per vertex: scratch marks for the link test
+	epoch uint32
+	opts  []option
 	ring  []uint32
 	ringK []uint32
 	moved []int32
@@ -200,24 +215,30 @@ type decimator struct {
 
 // decimate simplifies m in place, keeping it within tol of s's surface at
 // the points the collapse test measures; fixed marks vertices (may be nil)
-// that may only be merged with each other. The result is the same for the
-// same input.
-func decimate(m *geom.Mesh, fixed []bool, s sdf.SDF3, tol float64) {
+// that may only be merged with each other. The mesh is cut into slabs
+// whose inner vertices are collapsed on up to workers goroutines (0 for
+// GOMAXPROCS): a vertex all of whose neighbours lie in its slab touches only
+// faces and vertices of that slab, so slabs do not interact. A serial pass
+// over the whole mesh follows. The result is the same for the same input on
+// any number of cores.
+func decimate(m *geom.Mesh, fixed []bool, s sdf.SDF3, tol float64, workers int) {
 	nv, nf := len(m.Vertices), len(m.Faces)
 	if nf <= 4 {
 		return
 	}
 	d := &decimator{
-		pos:   m.Vertices,
-		faces: m.Faces,
-		dead:  make([]bool, nf),
-		q:     make([]quadric, nv),
-		fixed: fixed,
-		gone:  make([]bool, nv),
-		mark:  make([]uint32, nv),
-		s:     s,
-		tol:   tol,
-		alive: nf,
+		pos:    m.Vertices,
+		faces:  m.Faces,
+		dead:   make([]bool, nf),
+		q:      make([]quadric, nv),
+		fixed:  fixed,
+		gone:   make([]bool, nv),
+		slabOf: make([]uint8, nv),
+		locked: make([]bool, nv),
+		queued: make([]float64, nv),
+		at:     make([]int32, nv),
+		s:      s,
+		tol:    tol,
 	}
 	if d.fixed == nil {
 		d.fixed = make([]bool, nv)
@@ -255,13 +276,75 @@ func decimate(m *geom.Mesh, fixed []bool, s sdf.SDF3, tol float64) {
 	d.vfaces = make([][]int32, nv)
 	for v := range nv {
 		d.vfaces[v] = back[count[v]:fill[v]:count[v+1]]
+		d.at[v] = -1
 	}
-	d.queue = vertexHeap{cost: make([]float64, nv), at: make([]int32, nv), h: make([]uint32, 0, nv)}
-	for v := range nv {
-		d.queue.at[v] = -1
-		d.update(uint32(v))
+	d.cutSlabs(m)
+	if workers <= 0 {
+		workers = runtime.GOMAXPROCS(0)
 	}
-	for len(d.queue.h) > 0 && d.alive > 4 {
+	var next atomic.Int64
+	var wg sync.WaitGroup
+	for range min(workers, slabs) {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			w := d.newWorker()
+			for {
+				i := int(next.Add(1) - 1)
+				if i >= slabs {
+					return
+				}
+				w.slab = i
+				w.run()
+			}
+		}()
+	}
+	wg.Wait()
+	w := d.newWorker()
+	w.slab = -1
+	w.run()
+	d.compact(m)
+}
+
+// cutSlabs assigns each vertex to one of the slabs along the longest axis
+// of the mesh's box and locks the vertices with a neighbour in another.
+func (d *decimator) cutSlabs(m *geom.Mesh) {
+	b := m.Bounds()
+	size := b.Size()
+	axis := func(p geom.Vec3) float64 { return p.X - b.Min.X }
+	length := size.X
+	if size.Y > length {
+		axis, length = func(p geom.Vec3) float64 { return p.Y - b.Min.Y }, size.Y
+	}
+	if size.Z > length {
+		axis, length = func(p geom.Vec3) float64 { return p.Z - b.Min.Z }, size.Z
+	}
+	for v, p := range d.pos {
+		d.slabOf[v] = uint8(min(max(int(axis(p)/length*slabs), 0), slabs-1))
+	}
+	for _, f := range d.faces {
+		if d.slabOf[f[0]] != d.slabOf[f[1]] || d.slabOf[f[1]] != d.slabOf[f[2]] {
+			d.locked[f[0]], d.locked[f[1]], d.locked[f[2]] = true, true, true
+		}
+	}
+}
+
+func (d *decimator) newWorker() *worker {
+	return &worker{
+		decimator: d,
+		queue:     vertexHeap{cost: d.queued, at: d.at},
+		mark:      make([]uint32, len(d.pos)),
+	}
+}
+
+// run queues the worker's vertices and collapses until its queue is empty.
+func (d *worker) run() {
+	for v := range d.pos {
+		if d.slab < 0 || int(d.slabOf[v]) == d.slab {
+			d.update(uint32(v))
+		}
+	}
+	for len(d.queue.h) > 0 {
 		r := d.queue.h[0]
 		d.queue.remove(r)
 		d.options(r)
@@ -271,7 +354,6 @@ func decimate(m *geom.Mesh, fixed []bool, s sdf.SDF3, tol float64) {
 			}
 		}
 	}
-	d.compact(m)
 }
 
 // cost returns the error of moving r onto k and whether that move is
@@ -294,7 +376,7 @@ type option struct {
 
 // options fills d.opts with the allowed moves of r, cheapest first, ties by
 // index.
-func (d *decimator) options(r uint32) {
+func (d *worker) options(r uint32) {
 	d.opts = d.opts[:0]
 	d.neighbours(r)
 	for _, k := range d.ring {
@@ -315,7 +397,10 @@ func (d *decimator) options(r uint32) {
 
 // update queues v at the cost of its cheapest allowed move, or takes it
 // out of the queue when it has none.
-func (d *decimator) update(v uint32) {
+func (d *worker) update(v uint32) {
+	if d.slab >= 0 && (int(d.slabOf[v]) != d.slab || d.locked[v]) {
+		return // another slab's, or on the border
+	}
 	best := math.Inf(1)
 	if !d.gone[v] {
 		d.neighbours(v)
@@ -333,7 +418,7 @@ func (d *decimator) update(v uint32) {
 }
 
 // neighbours fills d.ring with the vertices sharing an edge with v.
-func (d *decimator) neighbours(v uint32) {
+func (d *worker) neighbours(v uint32) {
 	d.ring = d.ring[:0]
 	for _, fi := range d.liveFaces(v) {
 		for _, u := range d.faces[fi] {
@@ -359,7 +444,7 @@ func (d *decimator) liveFaces(v uint32) []int32 {
 }
 
 // collapse moves r onto k if every test passes, reporting whether it did.
-func (d *decimator) collapse(r, k uint32) bool {
+func (d *worker) collapse(r, k uint32) bool {
 	fr := d.liveFaces(r)
 	fk := d.liveFaces(k)
 	// The two faces on edge r–k and their opposite vertices.
@@ -454,7 +539,6 @@ func (d *decimator) collapse(r, k uint32) bool {
 	for _, fi := range fr {
 		if !slices.Contains(d.moved, fi) {
 			d.dead[fi] = true
-			d.alive--
 		}
 	}
 	for i, fi := range d.moved {

@@ -170,7 +170,7 @@ func Mesh(s sdf.SDF3, opt MeshOptions) (*geom.Mesh, error) {
 	m, feature := merge(results, g.featureBase())
 	flipCreases(m, feature, s)
 	if opt.Simplify {
-		decimate(m, feature, s, simplifyShare*tol)
+		decimate(m, feature, s, simplifyShare*tol, workers)
 	}
 	return m, nil
 }
