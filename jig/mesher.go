@@ -43,7 +43,11 @@ package jig
 //  6. With MeshOptions.Simplify the welded mesh is then decimated by edge
 //     collapses that keep it a closed manifold of the same topology and keep
 //     the true distance at the points they sample within a share of the
-//     tolerance (decimate.go).
+//     tolerance (decimate.go). On the demo formers at 0.05 mm this leaves
+//     one triangle in 7 (5.8 GHz) and one in 17 (2.4 GHz), with centroids
+//     outside the lettering no farther off (0.025 mm against 0.028 mm) and,
+//     sampled 28 times per face, no point farther off than in the plain
+//     mesh (0.043 and 0.048 mm).
 //
 // Blocks are merged in index order, so the output is the same on any number
 // of cores. Accuracy: vertices lie within 1e-4 cell of the surface (feature
