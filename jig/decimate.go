@@ -362,10 +362,9 @@ func (d *decimator) cost(r, k uint32) (float64, bool) {
 	if d.fixed[r] && !d.fixed[k] {
 		return 0, false
 	}
-	q := d.q[r]
-	q.add(&d.q[k])
-	e := d.pos[r].Sub(d.pos[k])
-	return math.Max(q.eval(d.pos[k]), 0) + lengthWeight*e.Dot(e), true
+	p := d.pos[k]
+	e := d.pos[r].Sub(p)
+	return math.Max(d.q[r].eval(p)+d.q[k].eval(p), 0) + lengthWeight*e.Dot(e), true
 }
 
 // option is a vertex r may be moved onto and the cost of that move.
