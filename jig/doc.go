@@ -10,7 +10,10 @@
 //
 // Mesh turns any bounded distance bound into a closed, outward-oriented,
 // welded triangle mesh (narrow-band marching cubes with feature vertices),
-// deterministic on any number of cores. CheckMesh verifies such a mesh
+// deterministic on any number of cores; with MeshOptions.Simplify it then
+// collapses edges on smooth and flat parts (quadric-ordered, under the link
+// condition, checked against the true distance), which Former.Mesh does.
+// CheckMesh verifies such a mesh
 // independently: edge use and orientation, pinched vertices, degenerate
 // faces, the Euler characteristic of the expected genus, volume, and the
 // distance of vertices and face centroids from the model.
