@@ -194,6 +194,7 @@ type decimator struct {
 	slabOf []uint8   // per vertex
 	locked []bool    // per vertex: has a neighbour in another slab
 	queued []float64 // per vertex: queued cost
+	target []uint32  // per vertex: the neighbour its queued cost moves it onto
 	at     []int32   // per vertex: slot in its worker's queue, or −1
 	s      sdf.SDF3
 	tol    float64
@@ -236,6 +237,7 @@ func decimate(m *geom.Mesh, fixed []bool, s sdf.SDF3, tol float64, workers int) 
 		slabOf: make([]uint8, nv),
 		locked: make([]bool, nv),
 		queued: make([]float64, nv),
+		target: make([]uint32, nv),
 		at:     make([]int32, nv),
 		s:      s,
 		tol:    tol,
@@ -406,6 +408,7 @@ func (d *worker) update(v uint32) {
 		for _, k := range d.ring {
 			if c, ok := d.cost(v, k); ok && c < best {
 				best = c
+				d.target[v] = k
 			}
 		}
 	}
@@ -414,6 +417,24 @@ func (d *worker) update(v uint32) {
 		return
 	}
 	d.queue.set(v, best)
+}
+
+// movedNext requeues v, a neighbour of k after r was moved onto k. Only v's
+// cost onto k has changed, so a queued v whose cheapest move was onto
+// neither needs just that one cost; any other v is updated in full (one
+// whose moves all failed is tried again, as its neighbourhood changed).
+func (d *worker) movedNext(v, r, k uint32) {
+	if d.slab >= 0 && (int(d.slabOf[v]) != d.slab || d.locked[v]) {
+		return
+	}
+	if d.at[v] < 0 || d.target[v] == r || d.target[v] == k {
+		d.update(v)
+		return
+	}
+	if c, ok := d.cost(v, k); ok && c < d.queued[v] {
+		d.target[v] = k
+		d.queue.set(v, c)
+	}
 }
 
 // neighbours fills d.ring with the vertices sharing an edge with v.
@@ -554,7 +575,7 @@ func (d *worker) collapse(r, k uint32) bool {
 	d.ringK = ring
 	d.update(k)
 	for _, v := range ring {
-		d.update(v)
+		d.movedNext(v, r, k)
 	}
 	return true
 }
