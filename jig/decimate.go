@@ -29,8 +29,15 @@ package jig
 // corners may only be kept, or merged with each other, so sharp edges keep
 // their vertices. After a move, k and its neighbours are queued again at
 // their new costs (a vertex whose moves all failed comes back this way when
-// its neighbourhood changes). At the end the surviving vertices and faces
-// are compacted in their original order.
+// its neighbourhood changes).
+//
+// The work is split into a fixed number of slabs along the mesh's longest
+// axis. A vertex whose neighbours all lie in its own slab only ever touches
+// faces and vertices of that slab, so the slabs' inner vertices are
+// collapsed on all cores at once, each slab in its own queue; a serial pass
+// over the whole mesh then takes the vertices along the slab borders. At the
+// end the surviving vertices and faces are compacted in their original
+// order.
 
 import (
 	"math"
@@ -44,8 +51,10 @@ import (
 )
 
 // Collapse limits. minQuality bounds the shape of a moved face by
-// 4√3·area / (sum of squared edges), 1 for an equilateral triangle (about a
-// 5° smallest angle at 0.1); a face already thinner may not get thinner.
+// 4√3·area / (sum of squared edges), 1 for an equilateral triangle (a
+// needle with a 3.3° tip at 0.1); a face already thinner may not get thinner,
+// nor any face thinner than floorQuality, far above what CheckMesh counts
+// as degenerate.
 // maxNormalTurn is the cosine of the largest turn of a moved face's normal.
 // lengthWeight orders collapses of equal quadric error by edge length.
 // maxTries is how many of a vertex's cheapest moves are tried in turn.

@@ -179,3 +179,27 @@ func TestDecimateKeepsManifold(t *testing.T) {
 		})
 	}
 }
+
+// TestQuadricError checks the quadric's value against its definition: the
+// sum of squared distances from the point to the planes (Garland &
+// Heckbert, SIGGRAPH 1997, §5).
+func TestQuadricError(t *testing.T) {
+	const eps = 1e-12
+	rng := rand.New(rand.NewPCG(5, 1997))
+	for i := range 20 {
+		var q quadric
+		p := geom.Vec3{X: rng.NormFloat64(), Y: rng.NormFloat64(), Z: rng.NormFloat64()}
+		want := 0.0
+		for range 1 + i%5 {
+			n := geom.Vec3{X: rng.NormFloat64(), Y: rng.NormFloat64(), Z: rng.NormFloat64()}.Normalize()
+			d := rng.NormFloat64()
+			pq := planeQuadric(n, d)
+			q.add(&pq)
+			dist := n.Dot(p) + d
+			want += dist * dist
+		}
+		if got := q.eval(p); math.Abs(got-want) > eps*(1+want) {
+			t.Errorf("case %d: quadric error %.15g, sum of squared distances %.15g", i, got, want)
+		}
+	}
+}
