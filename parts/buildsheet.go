@@ -14,7 +14,7 @@ import (
 // HazardID names one caution of the build sheet.
 type HazardID string
 
-// The cautions every build sheet carries. Sources (DOMAIN §8): UK HSE,
+// The cautions every build sheet carries. Sources: UK HSE,
 // "Solderers — asthma" and INDG248 (rosin flux fume, lead); EU-OSHA
 // OSHwiki, "Occupational exposure to epoxy resins", and HSE (epoxy skin
 // sensitisation); Barontini et al., Ind. Eng. Chem. Res. 44, 2005

@@ -142,7 +142,7 @@ func TestDowelTooWideIsASpecError(t *testing.T) {
 
 func TestCoaxTypesAreFiftyOhm(t *testing.T) {
 	// Source: coaxial line impedance Z0 = (60/√εr)·ln(D/d) with PTFE
-	// εr = 2.03–2.1 (DOMAIN §7). Semi-rigid data within 3 % of 50 Ω;
+	// εr = 2.03–2.1 (from memory). Semi-rigid data within 3 % of 50 Ω;
 	// RG-316's stranded centre is given over the strands, which reads
 	// low, so it is held to 10 %.
 	for name, c := range CoaxTypes {
@@ -230,7 +230,7 @@ func TestPanelJackMakesAJumper(t *testing.T) {
 	if cx.Jack != "sma-bulkhead" || cx.CutMM != cx.FinishedMM || cx.DielectricMM != 0 || cx.FlareMM != 0 {
 		t.Errorf("jack feed cut as %+v, want a plain jumper", cx)
 	}
-	// Source: connector vendor data, D-hole Ø 6.5 mm (DOMAIN §7).
+	// Source: connector vendor data, D-hole Ø 6.5 mm with 6.0 mm across the flat.
 	if cx.FeedHoleMM != 6.5 {
 		t.Errorf("feed cut-out Ø%.2f mm, want the bulkhead D-hole's 6.5 mm", cx.FeedHoleMM)
 	}

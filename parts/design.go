@@ -64,8 +64,8 @@ type Warning struct {
 }
 
 // Validity limits the warnings check. Source: Kraus, Antennas, 2nd ed.,
-// ch. 7 (axial mode 3/4 < Cλ < 4/3, conductor 0.006–0.05 λ; from memory,
-// DOMAIN §2); pitch-angle and reflector limits are common practice (no
+// ch. 7 (axial mode 3/4 < Cλ < 4/3, conductor 0.006–0.05 λ; from
+// memory); pitch-angle and reflector limits are common practice (no
 // published source).
 const (
 	MinAxialCl        = 0.75

@@ -37,7 +37,7 @@ const krausSource = "Kraus, Marhefka & Khan, Antennas and Wave Propagation, 4th 
 // KrausInputResistance returns the input resistance in ohms of an
 // axial-mode helix: 140·Cλ for an axial (centre) feed, 150/√Cλ for a
 // peripheral feed. From memory (Kraus, Antennas, 2nd ed., ch. 7), ±20 %
-// for 0.8 ≤ Cλ ≤ 1.2; DOMAIN §2.
+// for 0.8 ≤ Cλ ≤ 1.2.
 func KrausInputResistance(cl float64, peripheral bool) float64 {
 	if peripheral {
 		return 150 / math.Sqrt(cl)
@@ -113,7 +113,7 @@ func EstimateHelix(cl, sl, n float64, peripheral bool) HelixEstimates {
 
 // EIRP returns the effective isotropic radiated power in dBm:
 // P_tx − feeder loss + G. Source: the e.i.r.p. definition of the ITU Radio
-// Regulations, Article 1 (article number from memory); DOMAIN §8.
+// Regulations, Article 1 (article number from memory).
 func EIRP(txDBm, lossDB, gainDBi float64) float64 { return txDBm - lossDB + gainDBi }
 
 // DBmToMilliwatt converts dBm to mW.

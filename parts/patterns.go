@@ -37,7 +37,7 @@ type Patterns struct {
 func coaxJacketMM(t string) float64 {
 	switch t {
 	case "semi-rigid-086":
-		return 2.197 // From memory: 0.086 in semi-rigid (DOMAIN §7)
+		return 2.197 // From memory: 0.086 in semi-rigid
 	case "rg316":
 		return 2.49 // Source: IS 11967 (Part 3/Sec 1), RG-316 jacket
 	}

@@ -27,15 +27,15 @@ type CoaxType struct {
 
 // CoaxTypes lists the cable types the spec accepts, by spec name.
 var CoaxTypes = map[string]CoaxType{
-	// Source: published cable data for 0.141 in semi-rigid (RG-402); DOMAIN §7.
+	// Source: published cable data for 0.141 in semi-rigid (RG-402).
 	"semi-rigid-141": {Name: "0.141 in semi-rigid (RG-402 class)", Outer: 3.58, Dielectric: 2.985, Centre: 0.92,
 		Source: "published 0.141 in semi-rigid cable data"},
-	// From memory: 0.086 in semi-rigid (RG-405 class); DOMAIN §7.
+	// From memory: 0.086 in semi-rigid (RG-405 class).
 	"semi-rigid-086": {Name: "0.086 in semi-rigid (RG-405 class)", Outer: 2.197, Dielectric: 1.68, Centre: 0.511,
 		Source: "from memory; check the cable maker's sheet"},
 	// Source: IS 11967 (Part 3/Sec 1) for jacket and dielectric; centre
 	// conductor (7 × 0.17 mm strands, about 0.51 mm over the strands) from
-	// memory. DOMAIN §7.
+	// memory.
 	"rg316": {Name: "RG-316 braided", Outer: 2.49, Dielectric: 1.52, Centre: 0.51, Braided: true,
 		Source: "IS 11967 (Part 3/Sec 1); centre conductor from memory"},
 }

@@ -25,7 +25,7 @@ type ReflectorSpec struct {
 }
 
 // AutoReflectorLambda is the automatic reflector size in wavelengths (disc
-// diameter or square side). Builders use 0.75–1.2 λ; DOMAIN §2, from memory.
+// diameter or square side). Builders use 0.75–1.2 λ (from memory).
 const AutoReflectorLambda = 1.0
 
 // SheetMaterial is a plate or strip material the cutting outputs know.

@@ -75,7 +75,7 @@ func runNew(w io.Writer, o newOptions, sized bool) error {
 		}
 	}
 	// Wire about 0.02 λ, inside the 0.006–0.05 λ the Kraus formulas assume
-	// (DOMAIN §2, from memory), rounded to a stock 0.1 mm and clamped to
+	// (from memory), rounded to a stock 0.1 mm and clamped to
 	// the spec's range.
 	lambda := parts.Wavelength(o.frequencyMHz)
 	st.WireMM = math.Min(math.Max(math.Round(0.02*lambda*10)/10, parts.MinWireMM), parts.MaxWireMM)

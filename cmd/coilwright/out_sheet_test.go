@@ -87,7 +87,7 @@ var requiredStepTitles = []string{
 }
 
 // requiredCautions are the caution headings every build sheet must carry
-// (DOMAIN §8).
+// (soldering, epoxy, wire cutting, laminate, RF).
 var requiredCautions = []string{
 	"Soldering fumes and lead",
 	"Burns",
