@@ -125,6 +125,7 @@ func TestCalibrateRejects(t *testing.T) {
 		{"no coils", nil, "at least one"},
 		{"coil smaller than former", []CalibrationPoint{{FormerDiameter: 16.6, RelaxedDiameter: 16.5}}, "never shrinks"},
 		{"zero former", []CalibrationPoint{{FormerDiameter: 0, RelaxedDiameter: 16.5}}, "must be positive"},
+		{"former inside the wire", []CalibrationPoint{{FormerDiameter: 1.2, RelaxedDiameter: 16.5}}, "must exceed the wire diameter 1.6 mm"},
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
