@@ -148,11 +148,34 @@ func scanPositions(data []byte) (positions, error) {
 			if len(pe.Highlight) > 0 {
 				line = p.Shape(p.Range(pe.Highlight)).Start.Line
 			}
-			return nil, SpecErrors{{Key: strings.Join(pe.Key, "."), Line: line, Problem: "TOML syntax error: " + pe.Message, Fix: "correct the syntax on that line"}}
+			key := strings.Join(pe.Key, ".")
+			if key == "" {
+				key = keyOnLine(data, line, table)
+			}
+			return nil, SpecErrors{{Key: key, Line: line, Problem: "TOML syntax error: " + pe.Message, Fix: "correct the syntax on that line"}}
 		}
 		return nil, SpecErrors{{Key: "spec", Problem: "TOML syntax error: " + err.Error(), Fix: "correct the syntax"}}
 	}
 	return pos, nil
+}
+
+// keyOnLine names the key a broken line was assigning, for a syntax error
+// the parser reports without one: the bare or dotted key before the line's
+// "=", under the current table. It returns "spec" when the line holds no
+// such key (a broken table header, a stray value).
+func keyOnLine(data []byte, line int, table []string) string {
+	lines := strings.Split(string(data), "\n")
+	if line < 1 || line > len(lines) {
+		return "spec"
+	}
+	before, _, ok := strings.Cut(lines[line-1], "=")
+	key := strings.TrimSpace(before)
+	if !ok || key == "" || strings.IndexFunc(key, func(r rune) bool {
+		return !(r == '_' || r == '-' || r == '.' || '0' <= r && r <= '9' || 'a' <= r && r <= 'z' || 'A' <= r && r <= 'Z')
+	}) >= 0 {
+		return "spec"
+	}
+	return strings.Join(append(append([]string{}, table...), key), ".")
 }
 
 // tableLine returns the line of a table header's first key part.

@@ -79,7 +79,9 @@ func TestBadSpecs(t *testing.T) {
 	}{
 		{"unknown key", `hand = "RHCP"`, `hand = "RHCP"` + "\nhandedness = 1", "coil.handedness", 9, "unknown key"},
 		{"wrong type", `turns = 5.0`, `turns = "five"`, "coil.turns", 7, "wrong type"},
-		{"syntax error", `quantity = 2`, `quantity = = 2`, "", 3, "syntax"},
+		{"syntax error", `quantity = 2`, `quantity = = 2`, "quantity", 3, "syntax"},
+		{"value missing", `turns = 5.0`, `turns =`, "coil.turns", 7, "syntax"},
+		{"broken table header", `[wire]`, `[wire`, "spec", 13, "syntax"},
 		{"negative turns", `turns = 5.0`, `turns = -3.0`, "coil.turns", 7, "between 1 and 50"},
 		{"zero frequency", `frequency_mhz = 5800.0`, `frequency_mhz = 0.0`, "frequency_mhz", 2, "between 100 and 30000"},
 		{"diameter and circumference", `base_diameter_mm = 17.5`, "base_diameter_mm = 17.5\nbase_circumference_lambda = 1.0", "coil.base_circumference_lambda", 10, "one or the other"},
