@@ -42,9 +42,7 @@ var CoaxTypes = map[string]CoaxType{
 
 func (x *CoaxSpec) validate(c *checker, _ *Spec) {
 	c.oneOf("coax.type", &x.Type, "semi-rigid-141", "semi-rigid-141", "semi-rigid-086", "rg316")
-	if !c.has("coax.length_mm") && x.LengthMM == 0 {
-		x.LengthMM = 100
-	}
+	c.orDefault("coax.length_mm", &x.LengthMM, 100)
 	c.within("coax.length_mm", x.LengthMM, 10, 5000, "mm")
 	for _, kv := range []struct {
 		key string

@@ -42,15 +42,10 @@ func (x *CuttingSpec) validate(c *checker, s *Spec) {
 	if x.KerfMM != nil {
 		c.within("cutting.kerf_mm", *x.KerfMM, 0, 5, "mm")
 	}
-	def := func(key string, v *float64, d float64) {
-		if !c.has(key) && *v == 0 {
-			*v = d
-		}
-	}
-	def("cutting.sheet_width_mm", &x.SheetWidthMM, DefaultSheetWidthMM)
-	def("cutting.sheet_height_mm", &x.SheetHeightMM, DefaultSheetHeightMM)
-	def("cutting.margin_mm", &x.MarginMM, DefaultMarginMM)
-	def("cutting.spacing_mm", &x.SpacingMM, DefaultSpacingMM)
+	c.orDefault("cutting.sheet_width_mm", &x.SheetWidthMM, DefaultSheetWidthMM)
+	c.orDefault("cutting.sheet_height_mm", &x.SheetHeightMM, DefaultSheetHeightMM)
+	c.orDefault("cutting.margin_mm", &x.MarginMM, DefaultMarginMM)
+	c.orDefault("cutting.spacing_mm", &x.SpacingMM, DefaultSpacingMM)
 	c.within("cutting.sheet_width_mm", x.SheetWidthMM, 20, 5000, "mm")
 	c.within("cutting.sheet_height_mm", x.SheetHeightMM, 20, 5000, "mm")
 	c.within("cutting.margin_mm", x.MarginMM, 0, 100, "mm")

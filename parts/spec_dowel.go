@@ -20,9 +20,7 @@ func (d *DowelSpec) validate(c *checker, _ *Spec) {
 	if d.DiameterMM != nil {
 		c.within("dowel.diameter_mm", *d.DiameterMM, 1, 100, "mm")
 	}
-	if !c.has("dowel.clearance_mm") && d.ClearanceMM == 0 {
-		d.ClearanceMM = DefaultDowelClearanceMM
-	}
+	c.orDefault("dowel.clearance_mm", &d.ClearanceMM, DefaultDowelClearanceMM)
 	c.within("dowel.clearance_mm", d.ClearanceMM, 0, 20, "mm")
 }
 

@@ -26,22 +26,16 @@ const (
 )
 
 func (w *WedgeSpec) validate(c *checker, s *Spec) {
-	if !c.has("wedge.thickness_mm") && w.ThicknessMM == 0 {
-		w.ThicknessMM = DefaultWedgeThicknessMM
-	}
+	c.orDefault("wedge.thickness_mm", &w.ThicknessMM, DefaultWedgeThicknessMM)
 	thickOK := c.within("wedge.thickness_mm", w.ThicknessMM, 0.05, 3, "mm")
 	c.oneOf("wedge.material", &w.Material, "copper", "copper", "brass", "tinplate", "aluminium")
 	c.oneOf("wedge.taper", &w.Taper, "exponential", "exponential", "klopfenstein")
-	if !c.has("wedge.ripple") && w.Ripple == 0 {
-		w.Ripple = DefaultWedgeRipple
-	}
+	c.orDefault("wedge.ripple", &w.Ripple, DefaultWedgeRipple)
 	c.within("wedge.ripple", w.Ripple, 0.001, 0.3, "(reflection magnitude)")
 	if c.has("wedge.ripple") && w.Taper != "klopfenstein" {
 		c.fail("wedge.ripple", num(w.Ripple), `applies only to taper = "klopfenstein"`, "delete it, or set taper = \"klopfenstein\"")
 	}
-	if !c.has("wedge.span_deg") && w.SpanDeg == 0 {
-		w.SpanDeg = DefaultWedgeSpanDeg
-	}
+	c.orDefault("wedge.span_deg", &w.SpanDeg, DefaultWedgeSpanDeg)
 	c.within("wedge.span_deg", w.SpanDeg, 30, 360, "degrees")
 	if !thickOK || s.Wire.DiameterMM <= 0 {
 		return
