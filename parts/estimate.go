@@ -72,12 +72,20 @@ func EmersonGain(ll float64) float64 { return 10.25 + 1.22*ll - 0.0726*ll*ll }
 // DBi converts a power ratio to decibels.
 func DBi(ratio float64) float64 { return 10 * math.Log10(ratio) }
 
+// The pitch-angle range, in radians, in which the Kraus beamwidth,
+// directivity and axial-ratio formulas hold: 12° to 14°. Source: Kraus,
+// Antennas, 2nd ed., ch. 7 (from memory).
+const (
+	minEstimatePitch = 12 * math.Pi / 180
+	maxEstimatePitch = 14 * math.Pi / 180
+)
+
 // EstimateHelix evaluates the published axial-mode formulas for a helix of
 // n turns, circumference cl and spacing sl in wavelengths.
 func EstimateHelix(cl, sl, n float64, peripheral bool) HelixEstimates {
-	inCl := cl >= 0.75 && cl <= 4.0/3
-	alpha := math.Atan(sl/cl) * 180 / math.Pi // tan α = Sλ/Cλ
-	inShape := inCl && alpha >= 12 && alpha <= 14 && n > 3
+	inCl := cl >= MinAxialCl && cl <= MaxAxialCl
+	alpha := math.Atan(sl / cl) // tan α = Sλ/Cλ, radians
+	inShape := inCl && alpha >= minEstimatePitch && alpha <= maxEstimatePitch && n > MinAxialTurns
 	var h HelixEstimates
 	h.InputResistance = Estimate{Name: "input resistance", Value: KrausInputResistance(cl, peripheral), Unit: "ohm",
 		Formula: "R = 140·Cλ (Kraus, axial feed)", Source: "Kraus, Antennas, 2nd ed., ch. 7 (from memory)",
