@@ -45,13 +45,13 @@ func (w *WedgeSpec) validate(c *checker, s *Spec) {
 		z0 = *s.Coil.FirstTurnHeightMM
 	}
 	if h := z0 - s.Wire.DiameterMM/2 - w.ThicknessMM; h < minStripHeightMM {
-		key := "wedge.thickness_mm"
+		key, value := "wedge.thickness_mm", num(w.ThicknessMM)
 		if s.Coil.FirstTurnHeightMM != nil {
-			key = "coil.first_turn_height_mm"
+			key, value = "coil.first_turn_height_mm", num(z0)
 		}
-		c.fail(key, "", fmt.Sprintf("leaves %.2f mm of air under the matching strip at the feed (wire centre %.2f mm up, wire %s mm, strip %s mm); at least %s mm is needed",
+		c.fail(key, value, fmt.Sprintf("leaves %.2f mm of air under the matching strip at the feed (wire centre %.2f mm up, wire %s mm, strip %s mm); at least %s mm is needed",
 			h, z0, num(s.Wire.DiameterMM), num(w.ThicknessMM), num(minStripHeightMM)),
-			fmt.Sprintf("raise coil.first_turn_height_mm to at least %.2f mm or use thinner strip", s.Wire.DiameterMM/2+w.ThicknessMM+minStripHeightMM))
+			fmt.Sprintf("raise coil.first_turn_height_mm to at least %.2f mm or use a thinner strip", s.Wire.DiameterMM/2+w.ThicknessMM+minStripHeightMM))
 	}
 }
 

@@ -190,7 +190,7 @@ length_mm = 80.0
 			t.Fatal(err)
 		}
 		code, _, errs := runCLI(t, "check", specPath)
-		if code != exitBadUse || !strings.Contains(errs, "calibration file not found") {
+		if code != exitBadUse || !strings.Contains(errs, "calibration file not found") || !strings.Contains(errs, `wire.calibration = "batch.toml" (line `) {
 			t.Errorf("exit %d, stderr %q", code, errs)
 		}
 	})
