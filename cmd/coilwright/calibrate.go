@@ -81,9 +81,9 @@ func runCalibrate(w io.Writer, o calibrateOptions) error {
 	case o.material == "":
 		return usageError{errors.New("calibrate needs --material ID (see `coilwright materials`)")}
 	case !(o.wireMM > 0):
-		return usageError{fmt.Errorf("--wire-mm %g: give the bare wire diameter in mm", o.wireMM)}
-	case !(o.formerMM > 0):
-		return usageError{fmt.Errorf("--former-mm %g: give the wire centreline diameter on the former in mm", o.formerMM)}
+		return usageError{fmt.Errorf("--wire-mm %g: must be above 0 mm; give the bare wire diameter, e.g. --wire-mm 1.6", o.wireMM)}
+	case !(o.formerMM > o.wireMM):
+		return usageError{fmt.Errorf("--former-mm %g: must be above --wire-mm; give the wire centreline diameter on the former (rod diameter plus one wire diameter), e.g. --former-mm 16.6", o.formerMM)}
 	case len(o.measured) == 0:
 		return usageError{errors.New("calibrate needs at least one --measured-mm value")}
 	case !(o.spacingMM >= 0):

@@ -86,6 +86,7 @@ func TestCalibrateCommand(t *testing.T) {
 		{"no measurement", []string{"--material", m.ID, "--wire-mm", "1.6", "--former-mm", "16.6"}, "--measured-mm"},
 		{"coil smaller than former", []string{"--material", m.ID, "--wire-mm", "1.6", "--former-mm", "16.6", "--measured-mm", "16"}, "never shrinks"},
 		{"former smaller than the wire", []string{"--material", m.ID, "--wire-mm", "1.6", "--former-mm", "0.5", "--measured-mm", "12"}, "rod diameter plus one wire diameter"},
+		{"negative wire", []string{"--material", m.ID, "--wire-mm", "-1", "--former-mm", "16.6", "--measured-mm", "18"}, "--wire-mm -1: must be above 0 mm"},
 		{"bad model", []string{"--material", m.ID, "--wire-mm", "1.6", "--former-mm", "16.6", "--measured-mm", "18", "--model", "elastic"}, "--model"},
 	}
 	for _, tc := range bad {
