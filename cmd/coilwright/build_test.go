@@ -6,6 +6,7 @@ import (
 	"os"
 	"path/filepath"
 	"sort"
+	"strings"
 	"testing"
 
 	"coilwright/cam"
@@ -131,5 +132,19 @@ func TestSlug(t *testing.T) {
 		if got := slug(in); got != want {
 			t.Errorf("slug(%q) = %q, want %q", in, got, want)
 		}
+	}
+}
+
+func TestBadSourceDateEpoch(t *testing.T) {
+	// A malformed SOURCE_DATE_EPOCH is bad input: exit 2 before any file is
+	// written.
+	t.Setenv("SOURCE_DATE_EPOCH", "yesterday")
+	dir := filepath.Join(t.TempDir(), "out")
+	code, _, errs := runCLI(t, "build", "-o", dir)
+	if code != exitBadUse || !strings.Contains(errs, "SOURCE_DATE_EPOCH") {
+		t.Errorf("exit %d, stderr %q", code, errs)
+	}
+	if _, err := os.Stat(dir); err == nil {
+		t.Error("the build made its output folder despite the bad SOURCE_DATE_EPOCH")
 	}
 }

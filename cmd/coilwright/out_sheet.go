@@ -4,7 +4,6 @@ import (
 	"encoding/csv"
 	"fmt"
 	"io"
-	"os"
 	"strconv"
 	"strings"
 	"text/template"
@@ -68,10 +67,6 @@ func writeSheet(ctx *buildContext) error {
 	if err != nil {
 		return err
 	}
-	created, err := cam.SourceDateEpoch(os.Getenv("SOURCE_DATE_EPOCH"))
-	if err != nil {
-		return usageError{err}
-	}
 	var warns []string
 	if d.Patterns.LaserHalogen {
 		warns = append(warns, parts.LaserHalogenWarning)
@@ -86,7 +81,7 @@ func writeSheet(ctx *buildContext) error {
 	if err != nil {
 		return err
 	}
-	opt := cam.PDFOptions{Title: sheet.Kit + " — build sheet", Subject: sheet.Summary, Creator: "coilwright " + Version, Created: created}
+	opt := cam.PDFOptions{Title: sheet.Kit + " — build sheet", Subject: sheet.Summary, Creator: "coilwright " + Version, Created: ctx.created}
 	return ctx.out.Add("build-sheet.pdf", func(w io.Writer) error { return cam.WritePDF(w, append(pages, tpages...), opt) })
 }
 
