@@ -19,6 +19,7 @@ func TestCutSpecErrors(t *testing.T) {
 		words       string
 	}{
 		{"strip too thick for the first turn's height", "[wedge]\nthickness_mm = 1.0", "wedge.thickness_mm", 18, "of air under the matching strip"},
+		{"strip too thick names the thickest that fits", "[wedge]\nthickness_mm = 1.0", "wedge.thickness_mm", 18, "set wedge.thickness_mm to at most 0.90 mm"},
 		{"ripple without the klopfenstein taper", "[wedge]\nripple = 0.05", "wedge.ripple", 18, "only to taper"},
 		{"unknown taper", "[wedge]\ntaper = \"linear\"", "wedge.taper", 18, `"exponential", "klopfenstein"`},
 		{"span too short", "[wedge]\nspan_deg = 10.0", "wedge.span_deg", 18, "between 30 and 360"},
@@ -45,6 +46,42 @@ func TestCutSpecErrors(t *testing.T) {
 			t.Fatalf("no error for %s on line %d saying %q, in:\n%v", tc.key, tc.line, tc.words, err)
 		})
 	}
+}
+
+func TestDefaultStripThickness(t *testing.T) {
+	// Common practice (no published source): 0.3 mm shim by default, in
+	// 0.05 mm steps, with at least 0.1 mm of air under it.
+	const tol = 1e-12
+	for _, tc := range []struct {
+		name       string
+		room, want float64
+	}{
+		{"plenty of room", 1.0, 0.3},
+		{"just room for 0.3 mm", 0.4, 0.3},
+		{"room for 0.15 mm", 0.25, 0.15},
+		{"room for 0.1 mm", 0.2, 0.1},
+		{"no room keeps the thinnest", 0.1, 0.05},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			if got := defaultStripThickness(tc.room); math.Abs(got-tc.want) > tol {
+				t.Errorf("defaultStripThickness(%g) = %g mm, want %g", tc.room, got, tc.want)
+			}
+		})
+	}
+	t.Run("a 24 GHz spec without a strip thickness parses", func(t *testing.T) {
+		// λ = 12.491 mm at 24 GHz: the default first turn puts the 0.2 mm
+		// wire's underside 0.2 mm up, room for a 0.1 mm strip only.
+		src := strings.NewReplacer("frequency_mhz = 5800.0", "frequency_mhz = 24000.0",
+			"base_diameter_mm = 17.5\ntop_diameter_mm = 12.5", "base_circumference_lambda = 1.1\ntop_circumference_lambda = 0.8",
+			"diameter_mm = 1.6", "diameter_mm = 0.2").Replace(base)
+		s, err := ParseSpec([]byte(src))
+		if err != nil {
+			t.Fatal(err)
+		}
+		if math.Abs(s.Wedge.ThicknessMM-0.1) > tol {
+			t.Errorf("strip %g mm, want 0.1", s.Wedge.ThicknessMM)
+		}
+	})
 }
 
 func designOf(t *testing.T, src string) *Design {

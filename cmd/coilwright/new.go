@@ -64,6 +64,9 @@ func runNew(w io.Writer, o newOptions, sized bool) error {
 	if o.shape != "cylindrical" && o.shape != "conical" {
 		return usageError{fmt.Errorf(`--shape %q: use "cylindrical" or "conical"`, o.shape)}
 	}
+	if o.turns != 0 && !(o.turns >= parts.MinTurns && o.turns <= parts.MaxTurns) {
+		return usageError{fmt.Errorf("--turns %g: must be between %g and %g (fractions allowed), e.g. --turns 6", o.turns, parts.MinTurns, parts.MaxTurns)}
+	}
 	st := starter{Kit: o.kit, FrequencyMHz: o.frequencyMHz, Shape: o.shape, Turns: o.turns}
 	if st.Kit == "" {
 		st.Kit = fmt.Sprintf("Starter %g MHz %s", o.frequencyMHz, o.shape)
