@@ -26,6 +26,9 @@ func TestCutSpecErrors(t *testing.T) {
 		{"unknown cutting method", "[cutting]\nmethod = \"plasma\"", "cutting.method", 18, `"mill"`},
 		{"laser with no kerf", "[cutting]\nmethod = \"laser\"\nkerf_mm = 0.0", "cutting.kerf_mm", 19, "removes some material"},
 		{"tiny sheet", "[cutting]\nsheet_width_mm = 5.0", "cutting.sheet_width_mm", 18, "between 20 and 5000"},
+		// λ = 51.688 mm at 5.8 GHz: the default disc, 1 mm kerf and two
+		// 5 mm margins need 62.7 mm.
+		{"sheet smaller than the reflector", "[cutting]\nsheet_height_mm = 50.0", "cutting.sheet_height_mm", 18, "need 62.7 mm"},
 		{"unknown paper", "[cutting]\npaper = \"A3\"", "cutting.paper", 18, `"A4", "Letter"`},
 		{"corner radius on a disc", "[reflector]\ncorner_radius_mm = 3.0", "reflector.corner_radius_mm", 18, "only to shape"},
 		{"unknown plate material", "[reflector]\nmaterial = \"plywood\"", "reflector.material", 18, `"fr4"`},
@@ -45,6 +48,16 @@ func TestCutSpecErrors(t *testing.T) {
 			}
 			t.Fatalf("no error for %s on line %d saying %q, in:\n%v", tc.key, tc.line, tc.words, err)
 		})
+	}
+}
+
+func TestDefaultSheetHoldsTheReflector(t *testing.T) {
+	// A 250 mm disc with a 1 mm kerf and two 5 mm margins needs 261 mm: the
+	// 200 mm default height grows to the next 10 mm, 270 mm; the 300 mm
+	// default width already holds it.
+	s := mustParse(t, []byte(base+"\n[reflector]\ndiameter_mm = 250.0\n"))
+	if s.Cutting.SheetWidthMM != DefaultSheetWidthMM || s.Cutting.SheetHeightMM != 270 {
+		t.Errorf("sheet %g × %g mm, want 300 × 270", s.Cutting.SheetWidthMM, s.Cutting.SheetHeightMM)
 	}
 }
 

@@ -102,6 +102,7 @@ func (s *Spec) Validate() error {
 	if len(c.errs) == 0 {
 		s.Coil.validateFit(c, s)
 		s.Dowel.validateFit(c, s)
+		s.Cutting.validateFit(c, s)
 	}
 	if len(c.errs) == 0 {
 		s.Wire.validateWinding(c, s)
