@@ -224,10 +224,8 @@ func dowelCut(d *Design) (DowelCut, error) {
 	} else {
 		// i counts the stock sizes below room, so size i−1 is the largest that fits.
 		i, _ := slices.BinarySearch(DowelDiametersMM, room+1e-9)
-		if i == 0 {
-			return DowelCut{}, &SpecError{Key: "dowel.clearance_mm", Line: s.Line("dowel.clearance_mm"), Value: num(dc.ClearanceMM),
-				Problem: fmt.Sprintf("leaves %.2f mm inside the smallest turn (%.2f mm inside): no stock rod of %s mm or more fits", room, inner, num(DowelDiametersMM[0])),
-				Fix:     "reduce the clearance, or support the coil from outside"}
+		if i == 0 { // ParseSpec refuses such a spec (DowelSpec.validateFit)
+			return DowelCut{}, fmt.Errorf("parts: no stock rod fits %.2f mm inside the smallest turn: the spec was not validated", inner)
 		}
 		dc.DiameterMM = DowelDiametersMM[i-1]
 		dc.Automatic = true

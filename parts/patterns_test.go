@@ -85,7 +85,7 @@ func TestDefaultStripThickness(t *testing.T) {
 		// λ = 12.491 mm at 24 GHz: the default first turn puts the 0.2 mm
 		// wire's underside 0.2 mm up, room for a 0.1 mm strip only.
 		src := strings.NewReplacer("frequency_mhz = 5800.0", "frequency_mhz = 24000.0",
-			"base_diameter_mm = 17.5\ntop_diameter_mm = 12.5", "base_circumference_lambda = 1.1\ntop_circumference_lambda = 0.8",
+			"base_diameter_mm = 17.5\ntop_diameter_mm = 12.5", "base_circumference_lambda = 1.1\ntop_circumference_lambda = 1.0",
 			"diameter_mm = 1.6", "diameter_mm = 0.2").Replace(base)
 		s, err := ParseSpec([]byte(src))
 		if err != nil {
@@ -94,7 +94,45 @@ func TestDefaultStripThickness(t *testing.T) {
 		if math.Abs(s.Wedge.ThicknessMM-0.1) > tol {
 			t.Errorf("strip %g mm, want 0.1", s.Wedge.ThicknessMM)
 		}
+		// The top turn, 1.0 λ round, is 3.976 mm across the wire centres,
+		// 3.776 mm inside: a 3 mm rod (the smallest stock size, common
+		// practice) fits with 0.388 mm all round, so the default clearance
+		// closes to 0.35 mm.
+		if math.Abs(s.Dowel.ClearanceMM-0.35) > tol {
+			t.Errorf("dowel clearance %g mm, want 0.35", s.Dowel.ClearanceMM)
+		}
 	})
+}
+
+func TestDowelFitErrors(t *testing.T) {
+	// A 24 GHz cone (λ = 12.491 mm) of 0.2 mm wire. Top 1.0 λ: 3.776 mm
+	// inside the smallest turn; top 0.8 λ: 2.981 mm inside, less than the
+	// smallest 3 mm stock rod (common practice).
+	at24 := func(top, dowel string) string {
+		return strings.NewReplacer("frequency_mhz = 5800.0", "frequency_mhz = 24000.0",
+			"base_diameter_mm = 17.5\ntop_diameter_mm = 12.5", "base_circumference_lambda = 1.1\ntop_circumference_lambda = "+top,
+			"diameter_mm = 1.6", "diameter_mm = 0.2").Replace(base) + dowel
+	}
+	for _, tc := range []struct {
+		name, src, words string
+	}{
+		{"given clearance too wide", at24("1.0", "\n[dowel]\nclearance_mm = 0.5\n"), "reduce the clearance to at most 0.39 mm"},
+		{"no stock rod fits at all", at24("0.8", ""), "give dowel.diameter_mm below 2.98 mm"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			_, err := ParseSpec([]byte(tc.src))
+			var errs SpecErrors
+			if !errors.As(err, &errs) {
+				t.Fatalf("want SpecErrors, got %v", err)
+			}
+			for _, e := range errs {
+				if e.Key == "dowel.clearance_mm" && strings.Contains(e.Error(), tc.words) {
+					return
+				}
+			}
+			t.Fatalf("no dowel.clearance_mm error saying %q, in:\n%v", tc.words, err)
+		})
+	}
 }
 
 func designOf(t *testing.T, src string) *Design {

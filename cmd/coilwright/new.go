@@ -1,6 +1,7 @@
 package main
 
 import (
+	"bytes"
 	"fmt"
 	"io"
 	"math"
@@ -43,7 +44,7 @@ sized for that band and --shape, ready to edit and build.`,
   coilwright new --frequency-mhz 5800 --shape conical --kit "Hilltop 5G8" > hilltop.toml`,
 		Args: exactArgs(0, "no arguments (use flags)"),
 		RunE: func(cmd *cobra.Command, _ []string) error {
-			return runNew(cmd.OutOrStdout(), o, cmd.Flags().Changed("frequency-mhz"))
+			return runNew(cmd.OutOrStdout(), cmd.ErrOrStderr(), o, cmd.Flags().Changed("frequency-mhz"))
 		},
 	}
 	cmd.Flags().Float64Var(&o.frequencyMHz, "frequency-mhz", 0, "centre frequency in MHz (100–30000)")
@@ -53,7 +54,10 @@ sized for that band and --shape, ready to edit and build.`,
 	return cmd
 }
 
-func runNew(w io.Writer, o newOptions, sized bool) error {
+// runNew prints the reference spec, or a sized starter spec. A starter that
+// does not pass check (a coil too small for any stock support rod, say) is
+// still printed, with its problems on stderr, as a start to edit.
+func runNew(w, stderr io.Writer, o newOptions, sized bool) error {
 	if !sized {
 		_, err := w.Write(templates.Reference)
 		return err
@@ -82,5 +86,13 @@ func runNew(w io.Writer, o newOptions, sized bool) error {
 	// the spec's range.
 	lambda := parts.Wavelength(o.frequencyMHz)
 	st.WireMM = math.Min(math.Max(math.Round(0.02*lambda*10)/10, parts.MinWireMM), parts.MaxWireMM)
-	return starterTmpl.Execute(w, st)
+	var buf bytes.Buffer
+	if err := starterTmpl.Execute(&buf, st); err != nil {
+		return err
+	}
+	if _, err := parts.ParseSpec(buf.Bytes()); err != nil {
+		fmt.Fprintf(stderr, "coilwright: the starter spec does not pass check yet; edit it first:\n%v\n", err)
+	}
+	_, err := w.Write(buf.Bytes())
+	return err
 }
