@@ -96,6 +96,9 @@ func runBuild(w io.Writer, path string, o buildOptions) error {
 	if dir == "" {
 		dir = filepath.Join("out", slug(l.Spec.Kit))
 	}
+	if fi, err := os.Stat(dir); err == nil && !fi.IsDir() {
+		return usageError{fmt.Errorf("-o %s: is a file, not a folder; choose a new or empty folder", dir)}
+	}
 	out, err := cam.NewOutput(dir, o.force)
 	if err != nil {
 		return err

@@ -148,3 +148,18 @@ func TestBadSourceDateEpoch(t *testing.T) {
 		t.Error("the build made its output folder despite the bad SOURCE_DATE_EPOCH")
 	}
 }
+
+func TestBuildIntoAFile(t *testing.T) {
+	// -o naming a file is a usage mistake: exit 2, and the file is kept.
+	file := filepath.Join(t.TempDir(), "notes.txt")
+	if err := os.WriteFile(file, []byte("mine"), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	code, _, errs := runCLI(t, "build", "-o", file)
+	if code != exitBadUse || !strings.Contains(errs, "is a file, not a folder") {
+		t.Errorf("exit %d, stderr %q", code, errs)
+	}
+	if b, err := os.ReadFile(file); err != nil || string(b) != "mine" {
+		t.Errorf("the file was touched: %q, %v", b, err)
+	}
+}
