@@ -16,23 +16,11 @@ const cutTol = 1e-9
 
 func demoDesign(t *testing.T, name string, edit func(string) string) *Design {
 	t.Helper()
-	b, ok := templates.Demo(name)
-	if !ok {
-		t.Fatalf("no demo %s", name)
-	}
-	text := string(b)
+	text := string(demoSpec(t, name))
 	if edit != nil {
 		text = edit(text)
 	}
-	s, err := ParseSpec([]byte(text))
-	if err != nil {
-		t.Fatal(err)
-	}
-	d, err := NewDesign(s)
-	if err != nil {
-		t.Fatal(err)
-	}
-	return d
+	return mustDesign(t, text)
 }
 
 func TestWireBlankIsArcPlusAllowances(t *testing.T) {

@@ -135,17 +135,8 @@ func TestDowelFitErrors(t *testing.T) {
 	}
 }
 
-func designOf(t *testing.T, src string) *Design {
-	t.Helper()
-	d, err := NewDesign(mustParse(t, []byte(src)))
-	if err != nil {
-		t.Fatal(err)
-	}
-	return d
-}
-
 func TestPatternsFromDemo(t *testing.T) {
-	d := designOf(t, string(demoSpec(t, "demo-5g8-cone.toml")))
+	d := mustDesign(t, string(demoSpec(t, "demo-5g8-cone.toml")))
 	p := d.Patterns
 	in := p.Reflector.Input
 	// The demo's [reflector] diameter_mm = 50 and [coil] base_diameter_mm =
@@ -195,7 +186,7 @@ func TestMaterialGuard(t *testing.T) {
 		{"aluminium by laser", "[reflector]\nmaterial = \"aluminium\"\n[cutting]\nmethod = \"laser\"", false},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
-			d := designOf(t, base+"\n"+tc.table+"\n")
+			d := mustDesign(t, base+"\n"+tc.table+"\n")
 			p := d.Patterns
 			warned := false
 			for _, w := range d.Warnings {
@@ -215,7 +206,7 @@ func TestPlateTooSmallForFeed(t *testing.T) {
 	// A 20 mm disc cannot hold a Ø 3.68 mm feed hole 8.75 mm from its
 	// centre with 1 mm of web: the design stands, with a warning and no
 	// plate.
-	d := designOf(t, strings.Replace(base, "[wire]", "[reflector]\ndiameter_mm = 20.0\n[wire]", 1))
+	d := mustDesign(t, strings.Replace(base, "[wire]", "[reflector]\ndiameter_mm = 20.0\n[wire]", 1))
 	if d.Patterns.Reflector != nil || !strings.Contains(","+warningCodes(d)+",", ",reflector-fit,") {
 		t.Errorf("plate %v, warnings %q", d.Patterns.Reflector, warningCodes(d))
 	}
@@ -225,7 +216,7 @@ func TestPlateTooSmallForFeed(t *testing.T) {
 }
 
 func TestKlopfensteinWedge(t *testing.T) {
-	d := designOf(t, base+"\n[wedge]\ntaper = \"klopfenstein\"\nripple = 0.05\n")
+	d := mustDesign(t, base+"\n[wedge]\ntaper = \"klopfenstein\"\nripple = 0.05\n")
 	r := d.Report()
 	// Source: Pozar §5.9, A = acosh(Γ0/Γm) with Γ0 = ½·ln(ZL/50).
 	want := math.Acosh(math.Log(d.Patterns.WedgeLoadOhm/50) / 2 / 0.05)

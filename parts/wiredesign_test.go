@@ -54,13 +54,11 @@ pitch_angle_deg = 13.0
 pitch_mode = "constant_angle"`
 )
 
+// mustDesign parses text and works out its design, failing the test on
+// any error.
 func mustDesign(t *testing.T, text string) *Design {
 	t.Helper()
-	s, err := ParseSpec([]byte(text))
-	if err != nil {
-		t.Fatal(err)
-	}
-	d, err := NewDesign(s)
+	d, err := NewDesign(mustParse(t, []byte(text)))
 	if err != nil {
 		t.Fatal(err)
 	}
