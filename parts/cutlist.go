@@ -119,9 +119,8 @@ type CoaxCut struct {
 	Jack string
 }
 
-// FeedHoleClearanceMM is added to what passes through the feed hole when
-// the design has no reflector drawing to take it from. Common practice (no
-// published source).
+// FeedHoleClearanceMM is added to what passes through the feed hole
+// (CoaxType.FeedHoleMM). Common practice (no published source).
 const FeedHoleClearanceMM = 0.1
 
 // SleeveCut is the heat-shrink sleeve for one kit: 2:1 sleeving whose
@@ -163,11 +162,10 @@ func NewCutList(d *Design) (*CutList, error) {
 	cx := CoaxCut{Spec: s.Coax.Type, Cable: cable, FinishedMM: s.Coax.LengthMM,
 		ThroughMM: thick, ProudMM: FeedStandoffMM, DielectricMM: FeedStandoffMM,
 		CentreMM:   math.Max(drop, MinCentreExposedMM),
-		FeedHoleMM: cable.Outer + FeedHoleClearanceMM}
+		FeedHoleMM: cable.FeedHoleMM()}
 	if cable.Braided {
 		cx.FlareMM = BraidFlareMM
 		cx.DielectricMM += thick
-		cx.FeedHoleMM = cable.Dielectric + FeedHoleClearanceMM
 	}
 	cx.CutMM = cx.FinishedMM + cx.ThroughMM + cx.ProudMM + cx.CentreMM
 	if d.Patterns != nil {

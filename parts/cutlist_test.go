@@ -171,6 +171,11 @@ func TestCoaxStripAndSleeve(t *testing.T) {
 			if cx.FeedHoleMM <= passes {
 				t.Errorf("feed hole Ø%.2f mm does not pass Ø%.2f mm", cx.FeedHoleMM, passes)
 			}
+			// A braided cable's flared braid meets the back face: the hole
+			// must stop the jacket.
+			if cx.Cable.Braided && cx.FeedHoleMM >= cx.Cable.Outer {
+				t.Errorf("feed hole Ø%.2f mm lets the Ø%.2f mm jacket through; the braid cannot meet the back face", cx.FeedHoleMM, cx.Cable.Outer)
+			}
 			if cx.ThroughMM != d.Spec.Reflector.ThicknessMM {
 				t.Errorf("cable passes %.2f mm through a %.2f mm sheet", cx.ThroughMM, d.Spec.Reflector.ThicknessMM)
 			}

@@ -25,6 +25,17 @@ type CoaxType struct {
 	Source     string
 }
 
+// FeedHoleMM returns the diameter in mm of the reflector hole the cable
+// passes from behind: over a solid outer conductor, or over the dielectric
+// of a braided cable (whose braid is flared and soldered to the back face),
+// plus FeedHoleClearanceMM.
+func (t CoaxType) FeedHoleMM() float64 {
+	if t.Braided {
+		return t.Dielectric + FeedHoleClearanceMM
+	}
+	return t.Outer + FeedHoleClearanceMM
+}
+
 // CoaxTypes lists the cable types the spec accepts, by spec name.
 var CoaxTypes = map[string]CoaxType{
 	// Source: published cable data for 0.141 in semi-rigid (RG-402).
