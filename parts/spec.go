@@ -74,7 +74,11 @@ func (s *Spec) Validate() error {
 	} else if len(s.Kit) > 80 {
 		c.fail("kit", fmt.Sprintf("%q", s.Kit), "must be at most 80 characters", "shorten the kit name")
 	}
-	c.within("frequency_mhz", s.FrequencyMHz, MinFrequencyMHz, MaxFrequencyMHz, "MHz")
+	if !c.has("frequency_mhz") && s.FrequencyMHz == 0 {
+		c.fail("frequency_mhz", "", fmt.Sprintf("is required: the centre frequency, %s to %s MHz", num(MinFrequencyMHz), num(MaxFrequencyMHz)), "add frequency_mhz = 5800.0")
+	} else {
+		c.within("frequency_mhz", s.FrequencyMHz, MinFrequencyMHz, MaxFrequencyMHz, "MHz")
+	}
 	if s.BandLowMHz != nil && s.BandHighMHz != nil && *s.BandLowMHz >= *s.BandHighMHz {
 		c.fail("band_high_mhz", num(*s.BandHighMHz), fmt.Sprintf("must be above band_low_mhz = %s", num(*s.BandLowMHz)), "swap the band edges")
 	}

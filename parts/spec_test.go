@@ -90,6 +90,7 @@ func TestBadSpecs(t *testing.T) {
 		{"top size on a cylinder", `shape = "conical"`, `shape = "cylindrical"`, "coil.top_diameter_mm", 10, "only"},
 		{"zero quantity", `quantity = 2`, `quantity = 0`, "quantity", 3, "between 1 and"},
 		{"band edges swapped", `quantity = 2`, "quantity = 2\nband_low_mhz = 5900.0\nband_high_mhz = 5700.0", "band_high_mhz", 5, "above band_low_mhz"},
+		{"missing frequency", "frequency_mhz = 5800.0\n", "", "frequency_mhz", 0, "is required"},
 		{"missing wire diameter", "diameter_mm = 1.6\n", "", "wire.diameter_mm", 0, "required"},
 		{"unknown table", `[wire]`, "[antenna]\ngain = 3\n[wire]", "antenna", 13, "unknown key"},
 	} {

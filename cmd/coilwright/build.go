@@ -2,6 +2,7 @@ package main
 
 import (
 	"encoding/json"
+	"errors"
 	"fmt"
 	"io"
 	"os"
@@ -13,6 +14,7 @@ import (
 	"github.com/spf13/cobra"
 
 	"coilwright/cam"
+	"coilwright/parts"
 	"coilwright/templates"
 )
 
@@ -107,6 +109,10 @@ func runBuild(w io.Writer, path string, o buildOptions) error {
 	for _, s := range buildSteps() {
 		if err := s.write(ctx); err != nil {
 			out.Abort()
+			var se *parts.SpecError
+			if errors.As(err, &se) {
+				return inputError{l.Name, err} // a spec key to fix, named like check's
+			}
 			return fmt.Errorf("%s: %w", s.name, err)
 		}
 	}

@@ -163,3 +163,17 @@ func TestBuildIntoAFile(t *testing.T) {
 		t.Errorf("the file was touched: %q, %v", b, err)
 	}
 }
+
+func TestWireBlankLongerThanTheRod(t *testing.T) {
+	// Fifty turns of the demo cone make a wire blank over two metres, longer
+	// than the default 1000 mm rod: a spec problem at its key, exit 2.
+	b, _ := templates.Demo("demo-5g8-cone.toml")
+	spec := filepath.Join(t.TempDir(), "long.toml")
+	if err := os.WriteFile(spec, bytes.Replace(b, []byte("turns = 5.0"), []byte("turns = 50.0"), 1), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	code, _, errs := runCLI(t, "build", spec, "-o", filepath.Join(t.TempDir(), "out"))
+	if code != exitBadUse || !strings.Contains(errs, "long.toml: stock.wire_rod_mm = 1000: is too short for one wire blank") || !strings.Contains(errs, "fix: set wire_rod_mm = ") {
+		t.Errorf("exit %d, stderr %q", code, errs)
+	}
+}
