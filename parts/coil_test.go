@@ -137,3 +137,12 @@ func TestDemoLargestTurn(t *testing.T) {
 		t.Errorf("largest turn %.1f mm round, want about 52 mm (±10 %%)", largest)
 	}
 }
+
+func TestDefaultFirstTurnHeight(t *testing.T) {
+	// Common practice (no published source): the wire's underside 0.02 λ
+	// above the reflector, rounded to 0.1 mm. At 5.8 GHz (λ = 51.688 mm)
+	// with 1.6 mm wire: 1.034 + 0.8 = 1.834 → 1.8 mm [calc].
+	if z := DefaultFirstTurnHeight(Wavelength(5800), 1.6); math.Abs(z-1.8) > 1e-12 {
+		t.Errorf("first turn height %g mm, want 1.8", z)
+	}
+}

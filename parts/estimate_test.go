@@ -27,6 +27,13 @@ func TestKrausWorkedExample(t *testing.T) {
 			t.Errorf("AR = %v, want 33/32", e.AxialRatio.Value)
 		}
 	})
+	t.Run("first-null beamwidth", func(t *testing.T) {
+		// Source: Kraus, Antennas, 2nd ed., ch. 7: FNBW ≈ 115°/(Cλ·√(N·Sλ))
+		// = 115°/√4 = 57.5° for this helix [calc].
+		if math.Abs(e.FNBW.Value-57.5) > degTol {
+			t.Errorf("FNBW = %.3f°, want 57.5°", e.FNBW.Value)
+		}
+	})
 	t.Run("directivity 12 form", func(t *testing.T) {
 		if d := KrausDirectivity(12, 1, 16, 0.25); math.Abs(d-48) > 1e-12 {
 			t.Errorf("D = %v, want 48", d)
