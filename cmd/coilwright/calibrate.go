@@ -5,6 +5,8 @@ import (
 	"errors"
 	"fmt"
 	"io"
+	"os"
+	"path/filepath"
 	"text/tabwriter"
 
 	"github.com/spf13/cobra"
@@ -68,6 +70,12 @@ flag or separate with commas) are averaged by a least-squares fit.`,
 	return cmd
 }
 
+// isDir reports whether path names an existing folder.
+func isDir(path string) bool {
+	fi, err := os.Stat(path)
+	return err == nil && fi.IsDir()
+}
+
 // calibrationJSON is the fit as `calibrate --json` prints it.
 type calibrationJSON struct {
 	File string `json:"file"`
@@ -90,6 +98,9 @@ func runCalibrate(w io.Writer, o calibrateOptions) error {
 		return usageError{fmt.Errorf("--spacing-mm %g must be zero (close-wound) or positive", o.spacingMM)}
 	case o.model != parts.ModelPerfectlyPlastic && o.model != parts.ModelHardening:
 		return usageError{fmt.Errorf("--model %q: use %q or %q", o.model, parts.ModelPerfectlyPlastic, parts.ModelHardening)}
+	}
+	if dir := filepath.Dir(o.out); !isDir(dir) {
+		return usageError{fmt.Errorf("-o %s: folder %s does not exist; create it or choose another path", o.out, dir)}
 	}
 	m, err := parts.LookupMaterial(o.material)
 	if err != nil {
