@@ -44,7 +44,13 @@ sized for that band and --shape, ready to edit and build.`,
   coilwright new --frequency-mhz 5800 --shape conical --kit "Hilltop 5G8" > hilltop.toml`,
 		Args: exactArgs(0, "no arguments (use flags)"),
 		RunE: func(cmd *cobra.Command, _ []string) error {
-			return runNew(cmd.OutOrStdout(), cmd.ErrOrStderr(), o, cmd.Flags().Changed("frequency-mhz"))
+			sized := cmd.Flags().Changed("frequency-mhz")
+			for _, f := range []string{"shape", "kit", "turns"} {
+				if !sized && cmd.Flags().Changed(f) {
+					return usageError{fmt.Errorf("--%s sizes a starter spec and needs --frequency-mhz, e.g. new --frequency-mhz 5800 --%s ...", f, f)}
+				}
+			}
+			return runNew(cmd.OutOrStdout(), cmd.ErrOrStderr(), o, sized)
 		},
 	}
 	cmd.Flags().Float64Var(&o.frequencyMHz, "frequency-mhz", 0, "centre frequency in MHz (100–30000)")
