@@ -117,7 +117,7 @@ func TestDowelFitErrors(t *testing.T) {
 		name, src, words string
 	}{
 		{"given clearance too wide", at24("1.0", "\n[dowel]\nclearance_mm = 0.5\n"), "reduce the clearance to at most 0.39 mm"},
-		{"no stock rod fits at all", at24("0.8", ""), "give dowel.diameter_mm below 2.98 mm"},
+		{"no stock rod fits at all", at24("0.8", ""), "dowel.diameter_mm plus twice clearance_mm at most 2.98 mm"},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			_, err := ParseSpec([]byte(tc.src))

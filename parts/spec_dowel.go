@@ -56,7 +56,7 @@ func (d *DowelSpec) validateFit(c *checker, s *Spec) {
 		}
 		fix := fmt.Sprintf("reduce the clearance to at most %.2f mm, give a thinner dowel.diameter_mm, or support the coil from outside", (inner-smallest)/2)
 		if inner < smallest {
-			fix = fmt.Sprintf("give dowel.diameter_mm below %.2f mm (thinner than the stock sizes), or support the coil from outside", inner)
+			fix = fmt.Sprintf("give a rod thinner than the stock sizes: dowel.diameter_mm plus twice clearance_mm at most %.2f mm; or support the coil from outside", inner)
 		}
 		c.fail("dowel.clearance_mm", num(d.ClearanceMM), fmt.Sprintf("leaves %.2f mm inside the smallest turn (%.2f mm inside): no stock rod of %s mm or more fits", inner-2*d.ClearanceMM, inner, num(smallest)), fix)
 		return
