@@ -114,10 +114,11 @@ func TestDowelFitErrors(t *testing.T) {
 			"diameter_mm = 1.6", "diameter_mm = 0.2").Replace(base) + dowel
 	}
 	for _, tc := range []struct {
-		name, src, words string
+		name, src, key, words string
 	}{
-		{"given clearance too wide", at24("1.0", "\n[dowel]\nclearance_mm = 0.5\n"), "reduce the clearance to at most 0.39 mm"},
-		{"no stock rod fits at all", at24("0.8", ""), "dowel.diameter_mm plus twice clearance_mm at most 2.98 mm"},
+		{"given clearance too wide", at24("1.0", "\n[dowel]\nclearance_mm = 0.5\n"), "dowel.clearance_mm", "reduce the clearance to at most 0.39 mm"},
+		{"given rod and clearance leave no room", at24("0.8", "\n[dowel]\ndiameter_mm = 2.0\nclearance_mm = 1.5\n"), "dowel.diameter_mm", "the rod plus twice the clearance must stay within 2.98 mm"},
+		{"no stock rod fits at all", at24("0.8", ""), "dowel.clearance_mm", "dowel.diameter_mm plus twice clearance_mm at most 2.98 mm"},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			_, err := ParseSpec([]byte(tc.src))
@@ -126,11 +127,11 @@ func TestDowelFitErrors(t *testing.T) {
 				t.Fatalf("want SpecErrors, got %v", err)
 			}
 			for _, e := range errs {
-				if e.Key == "dowel.clearance_mm" && strings.Contains(e.Error(), tc.words) {
+				if e.Key == tc.key && strings.Contains(e.Error(), tc.words) {
 					return
 				}
 			}
-			t.Fatalf("no dowel.clearance_mm error saying %q, in:\n%v", tc.words, err)
+			t.Fatalf("no %s error saying %q, in:\n%v", tc.key, tc.words, err)
 		})
 	}
 }

@@ -18,6 +18,12 @@ type DowelSpec struct {
 // published source).
 const DefaultDowelClearanceMM = 1.0
 
+// The range of a rod diameter the spec may give, mm.
+const (
+	minDowelMM = 1.0
+	maxDowelMM = 100.0
+)
+
 // minDowelClearanceMM is the least default clearance: on a coil too small
 // for the smallest stock rod with DefaultDowelClearanceMM all round, the
 // default closes down to this, in 0.05 mm steps, before the spec is
@@ -28,7 +34,7 @@ const minDowelClearanceMM = 0.25
 func (d *DowelSpec) validate(c *checker, _ *Spec) {
 	c.oneOf("dowel.material", &d.Material, "ptfe", "ptfe", "nylon", "glass-fibre", "wood")
 	if d.DiameterMM != nil {
-		c.within("dowel.diameter_mm", *d.DiameterMM, 1, 100, "mm")
+		c.within("dowel.diameter_mm", *d.DiameterMM, minDowelMM, maxDowelMM, "mm")
 	}
 	c.orDefault("dowel.clearance_mm", &d.ClearanceMM, DefaultDowelClearanceMM)
 	c.within("dowel.clearance_mm", d.ClearanceMM, 0, 20, "mm")
@@ -62,7 +68,10 @@ func (d *DowelSpec) validateFit(c *checker, s *Spec) {
 		return
 	}
 	if room := inner - 2*d.ClearanceMM; *d.DiameterMM > room+1e-9 {
-		c.fail("dowel.diameter_mm", num(*d.DiameterMM), fmt.Sprintf("does not pass inside the smallest turn (%.2f mm inside) with %s mm clearance all round", inner, num(d.ClearanceMM)),
-			fmt.Sprintf("use a rod of at most %.1f mm, or omit diameter_mm to choose one", room))
+		fix := fmt.Sprintf("use a rod of at most %.1f mm, or omit diameter_mm to choose one", room)
+		if room < minDowelMM {
+			fix = fmt.Sprintf("reduce clearance_mm: the rod plus twice the clearance must stay within %.2f mm", inner)
+		}
+		c.fail("dowel.diameter_mm", num(*d.DiameterMM), fmt.Sprintf("does not pass inside the smallest turn (%.2f mm inside) with %s mm clearance all round", inner, num(d.ClearanceMM)), fix)
 	}
 }
