@@ -384,7 +384,7 @@ func TestGrooveHand(t *testing.T) {
 			pts := meridian(m, th0+dTheta)
 			up, nu := grooveCentre(pts, rho, z0+rise, a)
 			down, nd := grooveCentre(pts, rho, z0-rise, a)
-			// Source: helix hand, IEEE Std 145 (DOMAIN §2).
+			// Source: helix hand, IEEE Std 145.
 			gotRising := nu >= 4 && math.Abs(up-(z0+rise)) < 0.2
 			gotFalling := nd >= 4 && math.Abs(down-(z0-rise)) < 0.2
 			if gotRising == gotFalling || gotRising != c.wantRising {
