@@ -441,3 +441,33 @@ func BenchmarkDemoFormer(b *testing.B) {
 	b.ReportMetric(float64(faces), "triangles")
 	b.ReportMetric(float64(84+50*faces)/1e6, "STL-MB")
 }
+
+// TestFormerEnvelope holds the design's estimate of the former's height,
+// which decides whether the former fits the print volume, to the height of
+// the solid the former model builds, on the demos and on random specs.
+func TestFormerEnvelope(t *testing.T) {
+	const tol = 1e-6 // mm: both follow the same construction
+	check := func(t *testing.T, d *parts.Design, f *Former) {
+		if got, want := d.FormerEnvelope().HeightMM, f.Height; math.Abs(got-want) > tol {
+			t.Errorf("envelope height %.6f mm, former %.6f mm", got, want)
+		}
+		b := f.Solid.Bounds()
+		if got, want := d.FormerEnvelope().DiameterMM, b.Max.X-b.Min.X; got < want-tol {
+			t.Errorf("envelope diameter %.4f mm is less than the solid's width %.4f mm", got, want)
+		}
+	}
+	for _, name := range templates.Demos() {
+		t.Run(name, func(t *testing.T) {
+			d, f := demoFormer(t, name)
+			check(t, d, f)
+		})
+	}
+	rng := rand.New(rand.NewPCG(7, 7))
+	for i := range 20 {
+		s := randomSpec(rng)
+		t.Run(fmt.Sprintf("random %02d", i), func(t *testing.T) {
+			d, f := designFormer(t, s)
+			check(t, d, f)
+		})
+	}
+}
