@@ -57,7 +57,7 @@ flag or separate with commas) are averaged by a least-squares fit.`,
 		},
 	}
 	f := cmd.Flags()
-	f.StringVar(&o.material, "material", "", "wire material id (see `coilwright materials`)")
+	f.StringVar(&o.material, "material", "", "wire material `ID` (list them with coilwright materials)")
 	f.Float64Var(&o.wireMM, "wire-mm", 0, "bare wire diameter, mm")
 	f.Float64Var(&o.formerMM, "former-mm", 0, "wire centreline diameter on the former, mm")
 	f.Float64SliceVar(&o.measured, "measured-mm", nil, "measured relaxed diameter(s), mm (centreline unless --outside)")
