@@ -30,9 +30,9 @@ import (
 type DXFVersion int
 
 const (
-	// DXFR12 writes AutoCAD Release 12 (AC1009), the default.
+	// DXFR12 writes DXF release 12 (version AC1009), the default.
 	DXFR12 DXFVersion = iota
-	// DXFR2000 writes AutoCAD 2000 (AC1015).
+	// DXFR2000 writes DXF release 2000 (version AC1015).
 	DXFR2000
 )
 
@@ -44,8 +44,8 @@ type DXFOptions struct {
 	Comments []string
 }
 
-// layerColor returns the AutoCAD colour index of a layer: red for CUT,
-// blue for MARK, white otherwise. Common practice (no published source):
+// layerColor returns the DXF colour index (group code 62) of a layer: red
+// for CUT, blue for MARK, white otherwise. Common practice (no published source):
 // red cut, blue mark is the usual laser-shop convention.
 func layerColor(name string) int {
 	switch name {

@@ -165,7 +165,9 @@ func TestDXFExternal(t *testing.T) {
 				}
 				radii = append(radii, r)
 			}
-			// Radius tolerance after the kerf: 1e-6 mm.
+			// Common practice (no published source): half the 0.2 mm kerf
+			// outside the 25 mm outline and inside the 1.84 mm hole, as in
+			// TestApplyKerf. Radius tolerance after the kerf: 1e-6 mm.
 			const radiusTol = 1e-6
 			if len(radii) != 2 || math.Abs(radii[0]-25.1) > radiusTol || math.Abs(radii[1]-1.74) > radiusTol {
 				t.Errorf("circle radii %v, want 25.1 and 1.74", radii)

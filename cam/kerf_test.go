@@ -154,6 +154,9 @@ func TestApplyKerf(t *testing.T) {
 		t.Fatal(err)
 	}
 	cut, _ := k.Layer("CUT")
+	// Common practice (no published source): the tool path runs half a
+	// kerf outside an outline and half a kerf inside a hole, so a 0.2 mm
+	// kerf gives 25 + 0.1, 1.84 − 0.1 and a 4 − 0.2 mm square.
 	if r := cut.Entities[0].(geom.Circle).Radius; math.Abs(r-25.1) > kerfTol {
 		t.Errorf("outline radius %.9f, want 25.1", r)
 	}

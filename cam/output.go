@@ -216,10 +216,28 @@ func (o *Output) Abort() {
 	o.staged = nil
 }
 
+// maxTempTries bounds the search for an unused temporary file name.
+const maxTempTries = 1000
+
+// createTemp creates a new hidden temporary file for name in dir with mode
+// 0666 less the process umask, the mode os.Create gives, so that renamed
+// outputs are as readable as any other file the user makes (os.CreateTemp
+// would leave them 0600).
+func createTemp(dir, name string) (*os.File, error) {
+	for i := range maxTempTries {
+		p := filepath.Join(dir, fmt.Sprintf(".%s.tmp-%d-%d", name, os.Getpid(), i))
+		f, err := os.OpenFile(p, os.O_RDWR|os.O_CREATE|os.O_EXCL, 0o666)
+		if !errors.Is(err, fs.ErrExist) {
+			return f, err
+		}
+	}
+	return nil, fmt.Errorf("cam: no free temporary name for %s in %s", name, dir)
+}
+
 // writeTemp writes a hidden temporary file for name in dir and returns its
 // path, size and SHA-256; on failure nothing is left behind.
 func writeTemp(dir, name string, write func(io.Writer) error) (string, int64, string, error) {
-	f, err := os.CreateTemp(dir, "."+name+".tmp-*")
+	f, err := createTemp(dir, name)
 	if err != nil {
 		return "", 0, "", err
 	}

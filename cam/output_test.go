@@ -139,3 +139,28 @@ func TestWriteFileAtomic(t *testing.T) {
 		t.Errorf("temporary files left behind: %v", got)
 	}
 }
+
+func TestWrittenFilesGetTheUsualMode(t *testing.T) {
+	// Outputs get the mode os.Create gives (0666 less the umask), not the
+	// 0600 of a temporary file: compare with a file made by os.WriteFile.
+	dir := t.TempDir()
+	ref := filepath.Join(dir, "ref.txt")
+	if err := os.WriteFile(ref, []byte("x"), 0o666); err != nil {
+		t.Fatal(err)
+	}
+	out := filepath.Join(dir, "out.txt")
+	if err := WriteFileAtomic(out, false, func(w io.Writer) error { _, err := w.Write([]byte("x")); return err }); err != nil {
+		t.Fatal(err)
+	}
+	want, err := os.Stat(ref)
+	if err != nil {
+		t.Fatal(err)
+	}
+	got, err := os.Stat(out)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got.Mode().Perm() != want.Mode().Perm() {
+		t.Errorf("written file mode %v, want %v as os.WriteFile gives", got.Mode().Perm(), want.Mode().Perm())
+	}
+}

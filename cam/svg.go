@@ -1,6 +1,6 @@
-// SVG writer: one group per layer, hairline strokes, no fill, and a page
-// whose width and height are given in millimetres so the file prints and
-// imports at true size. Drawing coordinates (y up) are mapped to SVG user
+// SVG writer: one group per layer (its id the layer name), hairline
+// strokes, no fill, and a page whose width and height are given in
+// millimetres so the file prints and imports at true size. Drawing coordinates (y up) are mapped to SVG user
 // units of 1 mm (y down) inside the frame.
 
 package cam
@@ -78,7 +78,7 @@ func WriteSVG(w io.Writer, d geom.Drawing, opt SVGOptions) error {
 	}
 	sw := &svgWriter{w: bufio.NewWriter(w), frame: f}
 	sw.printf("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n")
-	sw.printf("<svg xmlns=\"http://www.w3.org/2000/svg\" xmlns:inkscape=\"http://www.inkscape.org/namespaces/inkscape\" version=\"1.1\" width=\"%smm\" height=\"%smm\" viewBox=\"0 0 %s %s\">\n",
+	sw.printf("<svg xmlns=\"http://www.w3.org/2000/svg\" version=\"1.1\" width=\"%smm\" height=\"%smm\" viewBox=\"0 0 %s %s\">\n",
 		svgNum(size.X), svgNum(size.Y), svgNum(size.X), svgNum(size.Y))
 	for _, c := range opt.Comments {
 		sw.printf("<!-- %s -->\n", strings.ReplaceAll(strings.Join(strings.Fields(c), " "), "--", "- -"))
@@ -90,8 +90,8 @@ func WriteSVG(w io.Writer, d geom.Drawing, opt SVGOptions) error {
 		if !validLayerName(l.Name) {
 			return fmt.Errorf("cam: layer name %q: use A–Z, 0–9 and _", l.Name)
 		}
-		sw.printf("<g id=\"%s\" inkscape:groupmode=\"layer\" inkscape:label=\"%s\" fill=\"none\" stroke=\"%s\" stroke-width=\"%s\">\n",
-			l.Name, l.Name, layerStroke(l.Name), svgNum(HairlineMM))
+		sw.printf("<g id=\"%s\" fill=\"none\" stroke=\"%s\" stroke-width=\"%s\">\n",
+			l.Name, layerStroke(l.Name), svgNum(HairlineMM))
 		for _, e := range l.Entities {
 			if err := sw.entity(e); err != nil {
 				return err

@@ -384,7 +384,7 @@ func TestGrooveHand(t *testing.T) {
 			pts := meridian(m, th0+dTheta)
 			up, nu := grooveCentre(pts, rho, z0+rise, a)
 			down, nd := grooveCentre(pts, rho, z0-rise, a)
-			// Source: helix hand, IEEE Std 145 (DOMAIN §2).
+			// Source: helix hand, IEEE Std 145.
 			gotRising := nu >= 4 && math.Abs(up-(z0+rise)) < 0.2
 			gotFalling := nd >= 4 && math.Abs(down-(z0-rise)) < 0.2
 			if gotRising == gotFalling || gotRising != c.wantRising {
@@ -447,5 +447,35 @@ func BenchmarkDemoFormer(b *testing.B) {
 				b.ReportMetric(float64(84+50*faces)/1e6, "STL-MB")
 			})
 		}
+	}
+}
+
+// TestFormerEnvelope holds the design's estimate of the former's height,
+// which decides whether the former fits the print volume, to the height of
+// the solid the former model builds, on the demos and on random specs.
+func TestFormerEnvelope(t *testing.T) {
+	const tol = 1e-6 // mm: both follow the same construction
+	check := func(t *testing.T, d *parts.Design, f *Former) {
+		if got, want := d.FormerEnvelope().HeightMM, f.Height; math.Abs(got-want) > tol {
+			t.Errorf("envelope height %.6f mm, former %.6f mm", got, want)
+		}
+		b := f.Solid.Bounds()
+		if got, want := d.FormerEnvelope().DiameterMM, b.Max.X-b.Min.X; got < want-tol {
+			t.Errorf("envelope diameter %.4f mm is less than the solid's width %.4f mm", got, want)
+		}
+	}
+	for _, name := range templates.Demos() {
+		t.Run(name, func(t *testing.T) {
+			d, f := demoFormer(t, name)
+			check(t, d, f)
+		})
+	}
+	rng := rand.New(rand.NewPCG(7, 7))
+	for i := range 20 {
+		s := randomSpec(rng)
+		t.Run(fmt.Sprintf("random %02d", i), func(t *testing.T) {
+			d, f := designFormer(t, s)
+			check(t, d, f)
+		})
 	}
 }

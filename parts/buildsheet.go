@@ -14,7 +14,7 @@ import (
 // HazardID names one caution of the build sheet.
 type HazardID string
 
-// The cautions every build sheet carries. Sources (DOMAIN §8): UK HSE,
+// The cautions every build sheet carries. Sources: UK HSE,
 // "Solderers — asthma" and INDG248 (rosin flux fume, lead); EU-OSHA
 // OSHwiki, "Occupational exposure to epoxy resins", and HSE (epoxy skin
 // sensitisation); Barontini et al., Ind. Eng. Chem. Res. 44, 2005
@@ -203,7 +203,7 @@ func cautions(d *Design) []Hazard {
 		{HazardEyes, "Eye protection when cutting wire",
 			"Cut ends of hard or springy wire fly off at speed, and so do drilling chips. Wear safety glasses, cover the cut with a hand or a cloth, and hold the offcut when cutting."},
 		{HazardLaminate, "Laminate dust and no laser on FR-4",
-			"If the reflector is cut from glass-epoxy laminate (FR-4), never cut it on a hobby CO2 laser: it gives off toxic brominated fumes and chars. Saw, shear or mill it with dust extraction and a dust mask, or order it from a circuit-board maker. Sheet copper or brass is a safer reflector."},
+			"If the reflector is cut from glass-epoxy laminate (FR-4), never cut it on a hobby CO2 laser: it gives off toxic brominated fumes and chars. Saw, shear or mill it with dust extraction and a dust mask, with a sharp tool at a slow feed so the resin does not scorch and fume, or order it from a circuit-board maker. Sheet copper or brass is a safer reflector."},
 		{HazardRF, "RF exposure and EIRP limits", rf},
 	}
 }

@@ -43,7 +43,7 @@ func TestEveryCautionRepeatedAtAStep(t *testing.T) {
 
 func TestCautionsNeededAtSteps(t *testing.T) {
 	// The steps that handle solder, epoxy, cutting and transmitting carry
-	// the matching caution (DOMAIN §8).
+	// the matching caution. Common practice (no published source).
 	_, b := demoSheet(t, templates.DefaultDemo)
 	want := map[string][]HazardID{
 		"Straighten and clean the wire":              {HazardEyes},
@@ -83,7 +83,8 @@ func TestRFCautionCarriesGainAndEIRP(t *testing.T) {
 	if g := fmt.Sprintf("%.1f dBi", d.Estimates.Gain.Value); !strings.Contains(rf, g) {
 		t.Errorf("RF caution lacks the gain %s: %s", g, rf)
 	}
-	// Source: EIRP = P − loss + G (DOMAIN §8): 14 − 0.3 + G.
+	// Source: e.i.r.p. definition, ITU Radio Regulations, Article 1:
+	// EIRP = P − loss + G = 14 − 0.3 + G.
 	e := 14 - 0.3 + d.Estimates.Gain.Value
 	if s := fmt.Sprintf("%.1f dBm", e); !strings.Contains(rf, s) {
 		t.Errorf("RF caution lacks the EIRP %s: %s", s, rf)

@@ -89,8 +89,9 @@ func (c Calibration) Factor() float64 { return c.EffectiveYield / c.LibraryYield
 
 // Calibrate fits the effective yield of material m from test coils of wire
 // diameter d mm wound with axial spacing mm per turn (zero for flat rings).
-// hardening selects the law as for NewWireSpringback. Every measured relaxed
-// diameter must exceed its former diameter.
+// hardening selects the law as for NewWireSpringback. Every former diameter
+// (wire centreline, mm) must exceed d, and every measured relaxed diameter
+// must exceed its former diameter.
 func Calibrate(m Material, d, spacing float64, hardening bool, pts []CalibrationPoint) (Calibration, error) {
 	if len(pts) == 0 {
 		return Calibration{}, errors.New("calibrate: need at least one measured coil")
@@ -102,6 +103,10 @@ func Calibrate(m Material, d, spacing float64, hardening bool, pts []Calibration
 	kmin := math.Inf(1) // loosest former curvature: the first to stop setting
 	var meas float64
 	for i, p := range pts {
+		if p.FormerDiameter > 0 && !(p.FormerDiameter > d) {
+			return Calibration{}, fmt.Errorf("calibrate: coil %d: former diameter %g mm must exceed the wire diameter %g mm: give the wire centreline diameter on the former (rod diameter plus one wire diameter)",
+				i+1, p.FormerDiameter, d)
+		}
 		if err := checkHelix("former", p.FormerDiameter/2, spacing); err != nil {
 			return Calibration{}, fmt.Errorf("calibrate: coil %d: %w", i+1, err)
 		}

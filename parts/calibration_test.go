@@ -79,7 +79,7 @@ func TestCalibrateFit(t *testing.T) {
 }
 
 func TestCalibrationUncertainty(t *testing.T) {
-	// Source: DOMAIN §5, mostly plastic round wire: 1/Rf ≈ 1/Rw − kσy with
+	// Source: derived, mostly plastic round wire: 1/Rf ≈ 1/Rw − kσy with
 	// k = 32/(3π·E·d), so a flat ring's relaxed diameter D moves by
 	// dD/dσy = D²·k/2, and a 0.05 mm reading error by 0.05/(D²k/2) in yield.
 	m, _ := LookupMaterial("brass-c26000-half-hard")
@@ -125,6 +125,7 @@ func TestCalibrateRejects(t *testing.T) {
 		{"no coils", nil, "at least one"},
 		{"coil smaller than former", []CalibrationPoint{{FormerDiameter: 16.6, RelaxedDiameter: 16.5}}, "never shrinks"},
 		{"zero former", []CalibrationPoint{{FormerDiameter: 0, RelaxedDiameter: 16.5}}, "must be positive"},
+		{"former inside the wire", []CalibrationPoint{{FormerDiameter: 1.2, RelaxedDiameter: 16.5}}, "must exceed the wire diameter 1.6 mm"},
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {

@@ -23,6 +23,14 @@ func (c *checker) fail(key, value, problem, fix string) {
 	c.errs = append(c.errs, &SpecError{Key: key, Line: c.pos[key], Value: value, Problem: problem, Fix: fix})
 }
 
+// orDefault sets *v to def when the key is absent from the spec and *v is
+// still zero (a Spec built in code leaves it zero).
+func (c *checker) orDefault(key string, v *float64, def float64) {
+	if !c.has(key) && *v == 0 {
+		*v = def
+	}
+}
+
 // within checks lo ≤ v ≤ hi.
 func (c *checker) within(key string, v, lo, hi float64, unit string) bool {
 	if v >= lo && v <= hi {

@@ -66,7 +66,7 @@ func (c Coil) rate() float64 {
 
 // coneSin returns sin θ0 of the cone half-angle for ConstantAngle, from
 // k = sin θ0 · tan α (Source: Dyson, IEEE Trans. AP-13, 1965, equiangular
-// spiral on a cone; DOMAIN §3).
+// spiral on a cone).
 func (c Coil) coneSin() float64 { return c.rate() / math.Tan(c.PitchAngle) }
 
 // Radius returns the centreline radius at azimuth φ in mm.
@@ -125,8 +125,9 @@ func (c Coil) MinSpacing() float64 {
 }
 
 // Length returns the exact arc length of the centreline in mm, in closed
-// form. Source: DOMAIN §3 — for constant spacing ∫√(r² + a² + b²) dφ with
-// r = r0 + aφ, b = S/2π; for constant pitch angle L = (r1 − r0)/(sin θ0 · sin α).
+// form (derived; tested against numerical quadrature): for constant
+// spacing ∫√(r² + a² + b²) dφ with r = r0 + aφ, b = S/2π; for constant
+// pitch angle L = (r1 − r0)/(sin θ0 · sin α).
 func (c Coil) Length() float64 { return c.LengthBetween(0, c.Span()) }
 
 // LengthBetween returns the centreline arc length from φ0 to φ1 in mm.

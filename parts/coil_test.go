@@ -47,7 +47,7 @@ func TestArcLengthAgainstQuadrature(t *testing.T) {
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			// Source: gonum integrate/quad, Gauss–Legendre, as the outside
-			// reference for the closed forms of DOMAIN §3.
+			// reference for the closed-form arc lengths.
 			want := quad.Fixed(speed(tc.c), 0, tc.c.Span(), 400, quad.Legendre{}, 0)
 			got := tc.c.Length()
 			if rel := math.Abs(got-want) / want; rel > quadRelTol {
@@ -59,8 +59,8 @@ func TestArcLengthAgainstQuadrature(t *testing.T) {
 
 func TestArcLengthCheckValues(t *testing.T) {
 	t.Run("constant spacing", func(t *testing.T) {
-		// Source: DOMAIN §3 check: r0 = 20, r1 = 10, h = 100 mm, N = 5 →
-		// 482.2315 mm.
+		// Source: gonum integrate/quad (TestArcLengthAgainstQuadrature's
+		// reference) [calc]: r0 = 20, r1 = 10, h = 100 mm, N = 5 → 482.2315 mm.
 		c := Coil{StartRadius: 20, EndRadius: 10, Turns: 5, Spacing: 100.0 / 5}
 		if got := c.Length(); math.Abs(got-482.2315) > 5e-5 {
 			t.Errorf("Length = %.5f, want 482.2315", got)
@@ -70,7 +70,7 @@ func TestArcLengthCheckValues(t *testing.T) {
 		}
 	})
 	t.Run("constant pitch angle", func(t *testing.T) {
-		// Source: DOMAIN §3 check: r0 = 10, r1 = 30 mm, θ0 = 10°,
+		// Source: L = (r1 − r0)/(sin θ0 · sin α) [calc]: r0 = 10, r1 = 30 mm, θ0 = 10°,
 		// α = 12.5° → 532.1365 mm over N = 4.542 turns; k = sin θ0·tan α
 		// (Dyson, IEEE Trans. AP-13, 1965).
 		alpha, theta := 12.5*math.Pi/180, 10*math.Pi/180
@@ -112,7 +112,7 @@ func TestHand(t *testing.T) {
 
 func TestPitchAngleCylinder(t *testing.T) {
 	// Source: Kraus, Antennas, 2nd ed., §7-2: tan α = S/C; for Cλ = 1 and
-	// α = 12.5°, Sλ = 0.2217 (DOMAIN §2).
+	// α = 12.5°, Sλ = tan 12.5° = 0.2217 [calc].
 	lambda := Wavelength(2440)
 	r := lambda / (2 * math.Pi)
 	c := Coil{StartRadius: r, EndRadius: r, Turns: 6, Spacing: 0.2217 * lambda}
@@ -135,5 +135,14 @@ func TestDemoLargestTurn(t *testing.T) {
 	}
 	if math.Abs(largest-52)/52 > 0.10 {
 		t.Errorf("largest turn %.1f mm round, want about 52 mm (±10 %%)", largest)
+	}
+}
+
+func TestDefaultFirstTurnHeight(t *testing.T) {
+	// Common practice (no published source): the wire's underside 0.02 λ
+	// above the reflector, rounded to 0.1 mm. At 5.8 GHz (λ = 51.688 mm)
+	// with 1.6 mm wire: 1.034 + 0.8 = 1.834 → 1.8 mm [calc].
+	if z := DefaultFirstTurnHeight(Wavelength(5800), 1.6); math.Abs(z-1.8) > 1e-12 {
+		t.Errorf("first turn height %g mm, want 1.8", z)
 	}
 }

@@ -119,9 +119,8 @@ type CoaxCut struct {
 	Jack string
 }
 
-// FeedHoleClearanceMM is added to what passes through the feed hole when
-// the design has no reflector drawing to take it from. Common practice (no
-// published source).
+// FeedHoleClearanceMM is added to what passes through the feed hole
+// (CoaxType.FeedHoleMM). Common practice (no published source).
 const FeedHoleClearanceMM = 0.1
 
 // SleeveCut is the heat-shrink sleeve for one kit: 2:1 sleeving whose
@@ -163,11 +162,10 @@ func NewCutList(d *Design) (*CutList, error) {
 	cx := CoaxCut{Spec: s.Coax.Type, Cable: cable, FinishedMM: s.Coax.LengthMM,
 		ThroughMM: thick, ProudMM: FeedStandoffMM, DielectricMM: FeedStandoffMM,
 		CentreMM:   math.Max(drop, MinCentreExposedMM),
-		FeedHoleMM: cable.Outer + FeedHoleClearanceMM}
+		FeedHoleMM: cable.FeedHoleMM()}
 	if cable.Braided {
 		cx.FlareMM = BraidFlareMM
 		cx.DielectricMM += thick
-		cx.FeedHoleMM = cable.Dielectric + FeedHoleClearanceMM
 	}
 	cx.CutMM = cx.FinishedMM + cx.ThroughMM + cx.ProudMM + cx.CentreMM
 	if d.Patterns != nil {
@@ -224,10 +222,8 @@ func dowelCut(d *Design) (DowelCut, error) {
 	} else {
 		// i counts the stock sizes below room, so size i−1 is the largest that fits.
 		i, _ := slices.BinarySearch(DowelDiametersMM, room+1e-9)
-		if i == 0 {
-			return DowelCut{}, &SpecError{Key: "dowel.clearance_mm", Line: s.Line("dowel.clearance_mm"), Value: num(dc.ClearanceMM),
-				Problem: fmt.Sprintf("leaves %.2f mm inside the smallest turn (%.2f mm inside): no stock rod of %s mm or more fits", room, inner, num(DowelDiametersMM[0])),
-				Fix:     "reduce the clearance, or support the coil from outside"}
+		if i == 0 { // ParseSpec refuses such a spec (DowelSpec.validateFit)
+			return DowelCut{}, fmt.Errorf("parts: no stock rod fits %.2f mm inside the smallest turn: the spec was not validated", inner)
 		}
 		dc.DiameterMM = DowelDiametersMM[i-1]
 		dc.Automatic = true

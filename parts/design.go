@@ -64,18 +64,18 @@ type Warning struct {
 }
 
 // Validity limits the warnings check. Source: Kraus, Antennas, 2nd ed.,
-// ch. 7 (axial mode 3/4 < Cλ < 4/3, conductor 0.006–0.05 λ; from memory,
-// DOMAIN §2); pitch-angle and reflector limits are common practice (no
+// ch. 7 (axial mode 3/4 < Cλ < 4/3, conductor 0.006–0.05 λ; from
+// memory); pitch-angle and reflector limits are common practice (no
 // published source).
 const (
-	MinAxialCl        = 0.75
-	MaxAxialCl        = 4.0 / 3
-	MinPitchWarnDeg   = 5.0
-	MaxPitchWarnDeg   = 20.0
-	MinAxialTurns     = 3.0
-	MinWireLambda     = 0.006
-	MaxWireLambda     = 0.05
-	MinReflectorLamda = 0.5
+	MinAxialCl         = 0.75
+	MaxAxialCl         = 4.0 / 3
+	MinPitchWarnDeg    = 5.0
+	MaxPitchWarnDeg    = 20.0
+	MinAxialTurns      = 3.0
+	MinWireLambda      = 0.006
+	MaxWireLambda      = 0.05
+	MinReflectorLambda = 0.5
 )
 
 // NewDesign works out the design from a validated spec. It fails only when
@@ -113,6 +113,7 @@ func NewDesign(s *Spec) (*Design, error) {
 		return nil, err
 	}
 	d.Warnings = append(d.Warnings, sw...)
+	d.Warnings = append(d.Warnings, d.formerSizeWarning()...)
 	p, warns, err := newPatterns(d)
 	if err != nil {
 		return nil, err
@@ -172,8 +173,8 @@ func (d *Design) warnings(meanCl float64) []Warning {
 	if wl < MinWireLambda || wl > MaxWireLambda {
 		add("wire-diameter", "wire diameter %.4f λ lies outside %.3f–%.2f λ", wl, MinWireLambda, MaxWireLambda)
 	}
-	if r := d.Spec.Reflector.SizeMM(d.Wavelength) / d.Wavelength; r < MinReflectorLamda {
-		add("reflector-size", "reflector %.2f λ across is smaller than %.1f λ: expect a strong back lobe", r, MinReflectorLamda)
+	if r := d.Spec.Reflector.SizeMM(d.Wavelength) / d.Wavelength; r < MinReflectorLambda {
+		add("reflector-size", "reflector %.2f λ across is smaller than %.1f λ: expect a strong back lobe", r, MinReflectorLambda)
 	}
 	if d.EIRP != nil {
 		add("eirp", "EIRP %.1f dBm (%.0f mW) with this antenna: check the limit that applies where you transmit and under your licence", d.EIRP.EIRPDBm, d.EIRP.EIRPmW)

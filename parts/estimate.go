@@ -37,7 +37,7 @@ const krausSource = "Kraus, Marhefka & Khan, Antennas and Wave Propagation, 4th 
 // KrausInputResistance returns the input resistance in ohms of an
 // axial-mode helix: 140·Cλ for an axial (centre) feed, 150/√Cλ for a
 // peripheral feed. From memory (Kraus, Antennas, 2nd ed., ch. 7), ±20 %
-// for 0.8 ≤ Cλ ≤ 1.2; DOMAIN §2.
+// for 0.8 ≤ Cλ ≤ 1.2.
 func KrausInputResistance(cl float64, peripheral bool) float64 {
 	if peripheral {
 		return 150 / math.Sqrt(cl)
@@ -72,12 +72,20 @@ func EmersonGain(ll float64) float64 { return 10.25 + 1.22*ll - 0.0726*ll*ll }
 // DBi converts a power ratio to decibels.
 func DBi(ratio float64) float64 { return 10 * math.Log10(ratio) }
 
+// The pitch-angle range, in radians, in which the Kraus beamwidth,
+// directivity and axial-ratio formulas hold: 12° to 14°. Source: Kraus,
+// Antennas, 2nd ed., ch. 7 (from memory).
+const (
+	minEstimatePitch = 12 * math.Pi / 180
+	maxEstimatePitch = 14 * math.Pi / 180
+)
+
 // EstimateHelix evaluates the published axial-mode formulas for a helix of
 // n turns, circumference cl and spacing sl in wavelengths.
 func EstimateHelix(cl, sl, n float64, peripheral bool) HelixEstimates {
-	inCl := cl >= 0.75 && cl <= 4.0/3
-	alpha := math.Atan(sl/cl) * 180 / math.Pi // tan α = Sλ/Cλ
-	inShape := inCl && alpha >= 12 && alpha <= 14 && n > 3
+	inCl := cl >= MinAxialCl && cl <= MaxAxialCl
+	alpha := math.Atan(sl / cl) // tan α = Sλ/Cλ, radians
+	inShape := inCl && alpha >= minEstimatePitch && alpha <= maxEstimatePitch && n > MinAxialTurns
 	var h HelixEstimates
 	h.InputResistance = Estimate{Name: "input resistance", Value: KrausInputResistance(cl, peripheral), Unit: "ohm",
 		Formula: "R = 140·Cλ (Kraus, axial feed)", Source: "Kraus, Antennas, 2nd ed., ch. 7 (from memory)",
@@ -113,7 +121,7 @@ func EstimateHelix(cl, sl, n float64, peripheral bool) HelixEstimates {
 
 // EIRP returns the effective isotropic radiated power in dBm:
 // P_tx − feeder loss + G. Source: the e.i.r.p. definition of the ITU Radio
-// Regulations, Article 1 (article number from memory); DOMAIN §8.
+// Regulations, Article 1 (article number from memory).
 func EIRP(txDBm, lossDB, gainDBi float64) float64 { return txDBm - lossDB + gainDBi }
 
 // DBmToMilliwatt converts dBm to mW.

@@ -27,6 +27,13 @@ func TestKrausWorkedExample(t *testing.T) {
 			t.Errorf("AR = %v, want 33/32", e.AxialRatio.Value)
 		}
 	})
+	t.Run("first-null beamwidth", func(t *testing.T) {
+		// Source: Kraus, Antennas, 2nd ed., ch. 7: FNBW ≈ 115°/(Cλ·√(N·Sλ))
+		// = 115°/√4 = 57.5° for this helix [calc].
+		if math.Abs(e.FNBW.Value-57.5) > degTol {
+			t.Errorf("FNBW = %.3f°, want 57.5°", e.FNBW.Value)
+		}
+	})
 	t.Run("directivity 12 form", func(t *testing.T) {
 		if d := KrausDirectivity(12, 1, 16, 0.25); math.Abs(d-48) > 1e-12 {
 			t.Errorf("D = %v, want 48", d)
@@ -46,7 +53,8 @@ func TestKrausDirectivityTenTurns(t *testing.T) {
 }
 
 func TestEmersonAgainstKraus(t *testing.T) {
-	// Source: DOMAIN §2 [calc]: at Lλ = 2.217 Emerson's fit gives 12.60 dBi
+	// Source: Emerson, ARRL Antenna Compendium vol. 4, 1995, and Kraus's
+	// D ≈ 15 Cλ² N Sλ [calc]: at Lλ = 2.217 Emerson's fit gives 12.60 dBi
 	// where the 15 form gives 15.22 dBi (Cλ = 1).
 	if g := EmersonGain(2.217); math.Abs(g-12.60) > dbTol {
 		t.Errorf("Emerson(2.217) = %.4f dBi, want 12.60", g)
@@ -72,7 +80,7 @@ func TestEstimatesChooseGain(t *testing.T) {
 }
 
 func TestInputResistance(t *testing.T) {
-	// Source: Kraus, Antennas, 2nd ed., ch. 7 (from memory, DOMAIN §2):
+	// Source: Kraus, Antennas, 2nd ed., ch. 7 (from memory):
 	// R ≈ 140·Cλ axial feed, 150/√Cλ peripheral.
 	if r := KrausInputResistance(1, false); r != 140 {
 		t.Errorf("axial R(1) = %v, want 140", r)
@@ -83,8 +91,8 @@ func TestInputResistance(t *testing.T) {
 }
 
 func TestEIRP(t *testing.T) {
-	// Source: DOMAIN §8: EIRP(dBm) = P_tx − feeder loss + G; 14 dBm is
-	// 25.12 mW.
+	// Source: e.i.r.p. definition, ITU Radio Regulations, Article 1:
+	// EIRP(dBm) = P_tx − feeder loss + G; 14 dBm is 25.12 mW.
 	if e := EIRP(14, 1, 11); e != 24 {
 		t.Errorf("EIRP = %v dBm, want 24", e)
 	}

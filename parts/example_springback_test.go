@@ -8,6 +8,9 @@ import (
 
 // A 1.6 mm half-hard brass wire is to relax to a 16.6 mm coil (wire
 // centreline) with 11.46 mm between turns; the former must be smaller.
+// The printed figures are the round-wire model's own [calc]; the model is
+// checked against Gardiner's formula and the plasticity closed forms in
+// springback_test.go.
 func ExampleSpringback_Compensate() {
 	m, err := parts.LookupMaterial("brass-c26000-half-hard")
 	if err != nil {
@@ -27,7 +30,9 @@ func ExampleSpringback_Compensate() {
 }
 
 // Far from the elastic limit nothing sets: the error names the largest
-// former radius that still does.
+// former radius that still does. The elastic-limit curvature is
+// σy/(E·a) = 448/(110000·0.8) = 0.005091 1/mm (elastic bending, any
+// strength-of-materials text) [calc].
 func ExampleNoSetError() {
 	m, _ := parts.LookupMaterial("brass-c26000-half-hard")
 	sb, _ := parts.NewWireSpringback(m, 1.6, false)

@@ -20,12 +20,12 @@ type HardeningKind int
 
 // Hardening laws.
 const (
-	// HardeningNone: perfectly plastic beyond yield.
+	// HardeningNone is perfectly plastic beyond yield.
 	HardeningNone HardeningKind = iota
-	// HardeningPowerLaw: flow stress max(σy, K·εⁿ) (Hollomon's power law
+	// HardeningPowerLaw has flow stress max(σy, K·εⁿ) (Hollomon's power law
 	// on total strain).
 	HardeningPowerLaw
-	// HardeningLinear: flow stress σy + Et·(ε − σy/E) (bilinear law with
+	// HardeningLinear has flow stress σy + Et·(ε − σy/E) (bilinear law with
 	// tangent modulus Et).
 	HardeningLinear
 )

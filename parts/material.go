@@ -32,12 +32,12 @@ type Caution string
 
 // Cautions a material can carry.
 const (
-	// CautionStiff: the wire is too stiff and springy to wind by hand on a
+	// CautionStiff says the wire is too stiff and springy to wind by hand on a
 	// printed former.
 	CautionStiff Caution = "stiff"
-	// CautionSpecialFlux: ordinary rosin flux does not wet the wire.
+	// CautionSpecialFlux says ordinary rosin flux does not wet the wire.
 	CautionSpecialFlux Caution = "special-flux"
-	// CautionStripEnamel: the insulating enamel must be removed where the
+	// CautionStripEnamel says the insulating enamel must be removed where the
 	// wire is soldered.
 	CautionStripEnamel Caution = "strip-enamel"
 )

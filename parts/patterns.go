@@ -33,21 +33,6 @@ type Patterns struct {
 	LaserHalogen bool
 }
 
-// coaxJacketMM returns the outer diameter in mm of a coax type.
-func coaxJacketMM(t string) float64 {
-	switch t {
-	case "semi-rigid-086":
-		return 2.197 // From memory: 0.086 in semi-rigid (DOMAIN §7)
-	case "rg316":
-		return 2.49 // Source: IS 11967 (Part 3/Sec 1), RG-316 jacket
-	}
-	return 3.58 // Source: published cable data, 0.141 in semi-rigid
-}
-
-// coaxClearanceMM is added to the jacket for a pass-through hole.
-// Common practice (no published source).
-const coaxClearanceMM = 0.1
-
 // LaserHalogenWarning is the text put on every output when laser cutting
 // is asked for a halogenated laminate.
 const LaserHalogenWarning = "WARNING: laser cutting was asked for a halogenated laminate (FR-4). Its brominated resin gives off toxic fumes and chars under a laser: mill, saw or shear it with dust extraction and a mask, or order the plate from a PCB fab."
@@ -90,7 +75,7 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 	case "sma-bulkhead":
 		in.Feed = FeedHole{Kind: FeedSMABulkhead}
 	default:
-		in.Feed = FeedHole{Kind: FeedCoax, Diameter: coaxJacketMM(s.Coax.Type) + coaxClearanceMM}
+		in.Feed = FeedHole{Kind: FeedCoax, Diameter: s.Coax.Cable().FeedHoleMM()}
 	}
 	if rs.FeedHoleMM != nil {
 		in.Feed.Diameter = *rs.FeedHoleMM

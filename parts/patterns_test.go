@@ -19,12 +19,16 @@ func TestCutSpecErrors(t *testing.T) {
 		words       string
 	}{
 		{"strip too thick for the first turn's height", "[wedge]\nthickness_mm = 1.0", "wedge.thickness_mm", 18, "of air under the matching strip"},
+		{"strip too thick names the thickest that fits", "[wedge]\nthickness_mm = 1.0", "wedge.thickness_mm", 18, "set wedge.thickness_mm to at most 0.90 mm"},
 		{"ripple without the klopfenstein taper", "[wedge]\nripple = 0.05", "wedge.ripple", 18, "only to taper"},
 		{"unknown taper", "[wedge]\ntaper = \"linear\"", "wedge.taper", 18, `"exponential", "klopfenstein"`},
 		{"span too short", "[wedge]\nspan_deg = 10.0", "wedge.span_deg", 18, "between 30 and 360"},
 		{"unknown cutting method", "[cutting]\nmethod = \"plasma\"", "cutting.method", 18, `"mill"`},
 		{"laser with no kerf", "[cutting]\nmethod = \"laser\"\nkerf_mm = 0.0", "cutting.kerf_mm", 19, "removes some material"},
 		{"tiny sheet", "[cutting]\nsheet_width_mm = 5.0", "cutting.sheet_width_mm", 18, "between 20 and 5000"},
+		// λ = 51.688 mm at 5.8 GHz: the default disc, 1 mm kerf and two
+		// 5 mm margins need 62.7 mm.
+		{"sheet smaller than the reflector", "[cutting]\nsheet_height_mm = 50.0", "cutting.sheet_height_mm", 18, "need 62.7 mm"},
 		{"unknown paper", "[cutting]\npaper = \"A3\"", "cutting.paper", 18, `"A4", "Letter"`},
 		{"corner radius on a disc", "[reflector]\ncorner_radius_mm = 3.0", "reflector.corner_radius_mm", 18, "only to shape"},
 		{"unknown plate material", "[reflector]\nmaterial = \"plywood\"", "reflector.material", 18, `"fr4"`},
@@ -47,17 +51,93 @@ func TestCutSpecErrors(t *testing.T) {
 	}
 }
 
-func designOf(t *testing.T, src string) *Design {
-	t.Helper()
-	d, err := NewDesign(mustParse(t, []byte(src)))
-	if err != nil {
-		t.Fatal(err)
+func TestDefaultSheetHoldsTheReflector(t *testing.T) {
+	// A 250 mm disc with a 1 mm kerf and two 5 mm margins needs 261 mm: the
+	// 200 mm default height grows to the next 10 mm, 270 mm; the 300 mm
+	// default width already holds it.
+	s := mustParse(t, []byte(base+"\n[reflector]\ndiameter_mm = 250.0\n"))
+	if s.Cutting.SheetWidthMM != DefaultSheetWidthMM || s.Cutting.SheetHeightMM != 270 {
+		t.Errorf("sheet %g × %g mm, want 300 × 270", s.Cutting.SheetWidthMM, s.Cutting.SheetHeightMM)
 	}
-	return d
+}
+
+func TestDefaultStripThickness(t *testing.T) {
+	// Common practice (no published source): 0.3 mm shim by default, in
+	// 0.05 mm steps, with at least 0.1 mm of air under it.
+	const tol = 1e-12
+	for _, tc := range []struct {
+		name       string
+		room, want float64
+	}{
+		{"plenty of room", 1.0, 0.3},
+		{"just room for 0.3 mm", 0.4, 0.3},
+		{"room for 0.15 mm", 0.25, 0.15},
+		{"room for 0.1 mm", 0.2, 0.1},
+		{"no room keeps the thinnest", 0.1, 0.05},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			if got := defaultStripThickness(tc.room); math.Abs(got-tc.want) > tol {
+				t.Errorf("defaultStripThickness(%g) = %g mm, want %g", tc.room, got, tc.want)
+			}
+		})
+	}
+	t.Run("a 24 GHz spec without a strip thickness parses", func(t *testing.T) {
+		// λ = 12.491 mm at 24 GHz: the default first turn puts the 0.2 mm
+		// wire's underside 0.2 mm up, room for a 0.1 mm strip only.
+		src := strings.NewReplacer("frequency_mhz = 5800.0", "frequency_mhz = 24000.0",
+			"base_diameter_mm = 17.5\ntop_diameter_mm = 12.5", "base_circumference_lambda = 1.1\ntop_circumference_lambda = 1.0",
+			"diameter_mm = 1.6", "diameter_mm = 0.2").Replace(base)
+		s, err := ParseSpec([]byte(src))
+		if err != nil {
+			t.Fatal(err)
+		}
+		if math.Abs(s.Wedge.ThicknessMM-0.1) > tol {
+			t.Errorf("strip %g mm, want 0.1", s.Wedge.ThicknessMM)
+		}
+		// The top turn, 1.0 λ round, is 3.976 mm across the wire centres,
+		// 3.776 mm inside: a 3 mm rod (the smallest stock size, common
+		// practice) fits with 0.388 mm all round, so the default clearance
+		// closes to 0.35 mm.
+		if math.Abs(s.Dowel.ClearanceMM-0.35) > tol {
+			t.Errorf("dowel clearance %g mm, want 0.35", s.Dowel.ClearanceMM)
+		}
+	})
+}
+
+func TestDowelFitErrors(t *testing.T) {
+	// A 24 GHz cone (λ = 12.491 mm) of 0.2 mm wire. Top 1.0 λ: 3.776 mm
+	// inside the smallest turn; top 0.8 λ: 2.981 mm inside, less than the
+	// smallest 3 mm stock rod (common practice).
+	at24 := func(top, dowel string) string {
+		return strings.NewReplacer("frequency_mhz = 5800.0", "frequency_mhz = 24000.0",
+			"base_diameter_mm = 17.5\ntop_diameter_mm = 12.5", "base_circumference_lambda = 1.1\ntop_circumference_lambda = "+top,
+			"diameter_mm = 1.6", "diameter_mm = 0.2").Replace(base) + dowel
+	}
+	for _, tc := range []struct {
+		name, src, key, words string
+	}{
+		{"given clearance too wide", at24("1.0", "\n[dowel]\nclearance_mm = 0.5\n"), "dowel.clearance_mm", "reduce the clearance to at most 0.39 mm"},
+		{"given rod and clearance leave no room", at24("0.8", "\n[dowel]\ndiameter_mm = 2.0\nclearance_mm = 1.5\n"), "dowel.diameter_mm", "the rod plus twice the clearance must stay within 2.98 mm"},
+		{"no stock rod fits at all", at24("0.8", ""), "dowel.clearance_mm", "dowel.diameter_mm plus twice clearance_mm at most 2.98 mm"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			_, err := ParseSpec([]byte(tc.src))
+			var errs SpecErrors
+			if !errors.As(err, &errs) {
+				t.Fatalf("want SpecErrors, got %v", err)
+			}
+			for _, e := range errs {
+				if e.Key == tc.key && strings.Contains(e.Error(), tc.words) {
+					return
+				}
+			}
+			t.Fatalf("no %s error saying %q, in:\n%v", tc.key, tc.words, err)
+		})
+	}
 }
 
 func TestPatternsFromDemo(t *testing.T) {
-	d := designOf(t, string(demoSpec(t, "demo-5g8-cone.toml")))
+	d := mustDesign(t, string(demoSpec(t, "demo-5g8-cone.toml")))
 	p := d.Patterns
 	in := p.Reflector.Input
 	// The demo's [reflector] diameter_mm = 50 and [coil] base_diameter_mm =
@@ -107,7 +187,7 @@ func TestMaterialGuard(t *testing.T) {
 		{"aluminium by laser", "[reflector]\nmaterial = \"aluminium\"\n[cutting]\nmethod = \"laser\"", false},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
-			d := designOf(t, base+"\n"+tc.table+"\n")
+			d := mustDesign(t, base+"\n"+tc.table+"\n")
 			p := d.Patterns
 			warned := false
 			for _, w := range d.Warnings {
@@ -127,7 +207,7 @@ func TestPlateTooSmallForFeed(t *testing.T) {
 	// A 20 mm disc cannot hold a Ø 3.68 mm feed hole 8.75 mm from its
 	// centre with 1 mm of web: the design stands, with a warning and no
 	// plate.
-	d := designOf(t, strings.Replace(base, "[wire]", "[reflector]\ndiameter_mm = 20.0\n[wire]", 1))
+	d := mustDesign(t, strings.Replace(base, "[wire]", "[reflector]\ndiameter_mm = 20.0\n[wire]", 1))
 	if d.Patterns.Reflector != nil || !strings.Contains(","+warningCodes(d)+",", ",reflector-fit,") {
 		t.Errorf("plate %v, warnings %q", d.Patterns.Reflector, warningCodes(d))
 	}
@@ -137,7 +217,7 @@ func TestPlateTooSmallForFeed(t *testing.T) {
 }
 
 func TestKlopfensteinWedge(t *testing.T) {
-	d := designOf(t, base+"\n[wedge]\ntaper = \"klopfenstein\"\nripple = 0.05\n")
+	d := mustDesign(t, base+"\n[wedge]\ntaper = \"klopfenstein\"\nripple = 0.05\n")
 	r := d.Report()
 	// Source: Pozar §5.9, A = acosh(Γ0/Γm) with Γ0 = ½·ln(ZL/50).
 	want := math.Acosh(math.Log(d.Patterns.WedgeLoadOhm/50) / 2 / 0.05)

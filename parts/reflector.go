@@ -89,9 +89,8 @@ func DefaultFeedHole(k FeedKind) FeedHole {
 		// across the flat.
 		return FeedHole{Kind: k, Diameter: 6.5, Flat: 6.0}
 	default:
-		// Source: published cable data: 0.141 in semi-rigid, jacket OD
-		// 3.58 mm; Common practice (no published source): 0.1 mm clearance.
-		return FeedHole{Kind: FeedCoax, Diameter: 3.68}
+		// The hole for 0.141 in semi-rigid, the spec's default cable.
+		return FeedHole{Kind: FeedCoax, Diameter: CoaxTypes["semi-rigid-141"].FeedHoleMM()}
 	}
 }
 

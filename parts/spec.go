@@ -75,7 +75,11 @@ func (s *Spec) Validate() error {
 	} else if len(s.Kit) > 80 {
 		c.fail("kit", fmt.Sprintf("%q", s.Kit), "must be at most 80 characters", "shorten the kit name")
 	}
-	c.within("frequency_mhz", s.FrequencyMHz, MinFrequencyMHz, MaxFrequencyMHz, "MHz")
+	if !c.has("frequency_mhz") && s.FrequencyMHz == 0 {
+		c.fail("frequency_mhz", "", fmt.Sprintf("is required: the centre frequency, %s to %s MHz", num(MinFrequencyMHz), num(MaxFrequencyMHz)), "add frequency_mhz = 5800.0")
+	} else {
+		c.within("frequency_mhz", s.FrequencyMHz, MinFrequencyMHz, MaxFrequencyMHz, "MHz")
+	}
 	if s.BandLowMHz != nil && s.BandHighMHz != nil && *s.BandLowMHz >= *s.BandHighMHz {
 		c.fail("band_high_mhz", num(*s.BandHighMHz), fmt.Sprintf("must be above band_low_mhz = %s", num(*s.BandLowMHz)), "swap the band edges")
 	}
@@ -104,6 +108,7 @@ func (s *Spec) Validate() error {
 	if len(c.errs) == 0 {
 		s.Coil.validateFit(c, s)
 		s.Dowel.validateFit(c, s)
+		s.Cutting.validateFit(c, s)
 	}
 	if len(c.errs) == 0 {
 		s.Wire.validateWinding(c, s)
@@ -153,11 +158,34 @@ func scanPositions(data []byte) (positions, error) {
 			if len(pe.Highlight) > 0 {
 				line = p.Shape(p.Range(pe.Highlight)).Start.Line
 			}
-			return nil, SpecErrors{{Key: strings.Join(pe.Key, "."), Line: line, Problem: "TOML syntax error: " + pe.Message, Fix: "correct the syntax on that line"}}
+			key := strings.Join(pe.Key, ".")
+			if key == "" {
+				key = keyOnLine(data, line, table)
+			}
+			return nil, SpecErrors{{Key: key, Line: line, Problem: "TOML syntax error: " + pe.Message, Fix: "correct the syntax on that line"}}
 		}
 		return nil, SpecErrors{{Key: "spec", Problem: "TOML syntax error: " + err.Error(), Fix: "correct the syntax"}}
 	}
 	return pos, nil
+}
+
+// keyOnLine names the key a broken line was assigning, for a syntax error
+// the parser reports without one: the bare or dotted key before the line's
+// "=", under the current table. It returns "spec" when the line holds no
+// such key (a broken table header, a stray value).
+func keyOnLine(data []byte, line int, table []string) string {
+	lines := strings.Split(string(data), "\n")
+	if line < 1 || line > len(lines) {
+		return "spec"
+	}
+	before, _, ok := strings.Cut(lines[line-1], "=")
+	key := strings.TrimSpace(before)
+	if !ok || key == "" || strings.IndexFunc(key, func(r rune) bool {
+		return !(r == '_' || r == '-' || r == '.' || '0' <= r && r <= '9' || 'a' <= r && r <= 'z' || 'A' <= r && r <= 'Z')
+	}) >= 0 {
+		return "spec"
+	}
+	return strings.Join(append(append([]string{}, table...), key), ".")
 }
 
 // tableLine returns the line of a table header's first key part.

@@ -25,26 +25,35 @@ type CoaxType struct {
 	Source     string
 }
 
+// FeedHoleMM returns the diameter in mm of the reflector hole the cable
+// passes from behind: over a solid outer conductor, or over the dielectric
+// of a braided cable (whose braid is flared and soldered to the back face),
+// plus FeedHoleClearanceMM.
+func (t CoaxType) FeedHoleMM() float64 {
+	if t.Braided {
+		return t.Dielectric + FeedHoleClearanceMM
+	}
+	return t.Outer + FeedHoleClearanceMM
+}
+
 // CoaxTypes lists the cable types the spec accepts, by spec name.
 var CoaxTypes = map[string]CoaxType{
-	// Source: published cable data for 0.141 in semi-rigid (RG-402); DOMAIN §7.
+	// Source: published cable data for 0.141 in semi-rigid (RG-402).
 	"semi-rigid-141": {Name: "0.141 in semi-rigid (RG-402 class)", Outer: 3.58, Dielectric: 2.985, Centre: 0.92,
 		Source: "published 0.141 in semi-rigid cable data"},
-	// From memory: 0.086 in semi-rigid (RG-405 class); DOMAIN §7.
+	// From memory: 0.086 in semi-rigid (RG-405 class).
 	"semi-rigid-086": {Name: "0.086 in semi-rigid (RG-405 class)", Outer: 2.197, Dielectric: 1.68, Centre: 0.511,
 		Source: "from memory; check the cable maker's sheet"},
 	// Source: IS 11967 (Part 3/Sec 1) for jacket and dielectric; centre
 	// conductor (7 × 0.17 mm strands, about 0.51 mm over the strands) from
-	// memory. DOMAIN §7.
+	// memory.
 	"rg316": {Name: "RG-316 braided", Outer: 2.49, Dielectric: 1.52, Centre: 0.51, Braided: true,
 		Source: "IS 11967 (Part 3/Sec 1); centre conductor from memory"},
 }
 
 func (x *CoaxSpec) validate(c *checker, _ *Spec) {
 	c.oneOf("coax.type", &x.Type, "semi-rigid-141", "semi-rigid-141", "semi-rigid-086", "rg316")
-	if !c.has("coax.length_mm") && x.LengthMM == 0 {
-		x.LengthMM = 100
-	}
+	c.orDefault("coax.length_mm", &x.LengthMM, 100)
 	c.within("coax.length_mm", x.LengthMM, 10, 5000, "mm")
 	for _, kv := range []struct {
 		key string

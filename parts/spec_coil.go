@@ -29,12 +29,12 @@ type CoilSpec struct {
 
 // Limits of the [coil] table.
 const (
-	MinTurns              = 1.0
-	MaxTurns              = 50.0
-	MinPitchAngleDeg      = 2.0
-	MaxPitchAngleDeg      = 45.0
-	MinCircumferenceLamda = 0.2
-	MaxCircumferenceLamda = 3.0
+	MinTurns               = 1.0
+	MaxTurns               = 50.0
+	MinPitchAngleDeg       = 2.0
+	MaxPitchAngleDeg       = 45.0
+	MinCircumferenceLambda = 0.2
+	MaxCircumferenceLambda = 3.0
 	// MinTurnGapMM is the least clear gap between neighbouring turns: the
 	// former needs a wall between its grooves and turns must not touch.
 	// Common practice (no published source).
@@ -69,12 +69,12 @@ func (cs *CoilSpec) validate(c *checker, s *Spec) {
 		}
 	}
 	if lambda > 0 && !math.IsInf(lambda, 0) {
-		lo, hi := MinCircumferenceLamda*lambda/math.Pi, MaxCircumferenceLamda*lambda/math.Pi
-		checkSize("coil.base_diameter_mm", cs.BaseDiameterMM, round3(lo), round3(hi), fmt.Sprintf("mm (%s–%s wavelengths round at %s MHz)", num(MinCircumferenceLamda), num(MaxCircumferenceLamda), num(s.FrequencyMHz)))
-		checkSize("coil.top_diameter_mm", cs.TopDiameterMM, round3(lo), round3(hi), fmt.Sprintf("mm (%s–%s wavelengths round at %s MHz)", num(MinCircumferenceLamda), num(MaxCircumferenceLamda), num(s.FrequencyMHz)))
+		lo, hi := MinCircumferenceLambda*lambda/math.Pi, MaxCircumferenceLambda*lambda/math.Pi
+		checkSize("coil.base_diameter_mm", cs.BaseDiameterMM, round3(lo), round3(hi), fmt.Sprintf("mm (%s–%s wavelengths round at %s MHz)", num(MinCircumferenceLambda), num(MaxCircumferenceLambda), num(s.FrequencyMHz)))
+		checkSize("coil.top_diameter_mm", cs.TopDiameterMM, round3(lo), round3(hi), fmt.Sprintf("mm (%s–%s wavelengths round at %s MHz)", num(MinCircumferenceLambda), num(MaxCircumferenceLambda), num(s.FrequencyMHz)))
 	}
-	checkSize("coil.base_circumference_lambda", cs.BaseCircumferenceLambda, MinCircumferenceLamda, MaxCircumferenceLamda, "wavelengths")
-	checkSize("coil.top_circumference_lambda", cs.TopCircumferenceLambda, MinCircumferenceLamda, MaxCircumferenceLamda, "wavelengths")
+	checkSize("coil.base_circumference_lambda", cs.BaseCircumferenceLambda, MinCircumferenceLambda, MaxCircumferenceLambda, "wavelengths")
+	checkSize("coil.top_circumference_lambda", cs.TopCircumferenceLambda, MinCircumferenceLambda, MaxCircumferenceLambda, "wavelengths")
 
 	c.exclusive("coil.pitch_angle_deg", cs.PitchAngleDeg, "coil.spacing_mm", cs.SpacingMM, true)
 	if cs.PitchAngleDeg != nil {

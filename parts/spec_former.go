@@ -30,6 +30,8 @@ type FormerSpec struct {
 	TextHeightMM      float64 `toml:"text_height_mm"`      // flange letter height, default 3.5, 2–10
 	EndMarginMM       float64 `toml:"end_margin_mm"`       // core beyond the groove at the free end, default 3, 0.5–50
 	ToleranceMM       float64 `toml:"tolerance_mm"`        // mesh distance from the true surface, default 0.05, 0.01–0.5
+	PrintHeightMM     float64 `toml:"print_height_mm"`     // tallest former the printer takes, default 250, 20–2000
+	PrintWidthMM      float64 `toml:"print_width_mm"`      // widest former the printer takes, default 220, 20–2000
 }
 
 // Former defaults and limits. The wall and land minima are three 0.4 mm
@@ -42,11 +44,7 @@ const (
 )
 
 func (f *FormerSpec) validate(c *checker, s *Spec) {
-	def := func(key string, v *float64, d float64) {
-		if *v == 0 && !c.has(key) {
-			*v = d
-		}
-	}
+	def := c.orDefault
 	def("former.clearance_mm", &f.ClearanceMM, 0.2)
 	def("former.groove_depth_ratio", &f.GrooveDepthRatio, 0.6)
 	def("former.lead_in_deg", &f.LeadInDeg, 45)
@@ -69,6 +67,10 @@ func (f *FormerSpec) validate(c *checker, s *Spec) {
 	def("former.text_height_mm", &f.TextHeightMM, 3.5)
 	def("former.end_margin_mm", &f.EndMarginMM, 3)
 	def("former.tolerance_mm", &f.ToleranceMM, DefaultFormerToleranceMM)
+	// A common desktop FDM print volume, about 220 × 220 × 250 mm. Common
+	// practice (no published source).
+	def("former.print_height_mm", &f.PrintHeightMM, 250)
+	def("former.print_width_mm", &f.PrintWidthMM, 220)
 	c.oneOf("former.groove_profile", &f.GrooveProfile, "teardrop", "teardrop", "round")
 	c.oneOf("former.drive", &f.Drive, "hex", "hex", "bore")
 	for _, r := range []struct {
@@ -95,6 +97,8 @@ func (f *FormerSpec) validate(c *checker, s *Spec) {
 		{"former.text_height_mm", f.TextHeightMM, 2, 10, "mm"},
 		{"former.end_margin_mm", f.EndMarginMM, 0.5, 50, "mm"},
 		{"former.tolerance_mm", f.ToleranceMM, 0.01, 0.5, "mm"},
+		{"former.print_height_mm", f.PrintHeightMM, 20, 2000, "mm"},
+		{"former.print_width_mm", f.PrintWidthMM, 20, 2000, "mm"},
 	} {
 		if math.IsNaN(r.v) {
 			c.fail(r.key, "NaN", "must be a number", "give a number")

@@ -25,7 +25,7 @@ type ReflectorSpec struct {
 }
 
 // AutoReflectorLambda is the automatic reflector size in wavelengths (disc
-// diameter or square side). Builders use 0.75–1.2 λ; DOMAIN §2, from memory.
+// diameter or square side). Builders use 0.75–1.2 λ (from memory).
 const AutoReflectorLambda = 1.0
 
 // SheetMaterial is a plate or strip material the cutting outputs know.
@@ -90,9 +90,7 @@ func (r *ReflectorSpec) validate(c *checker, s *Spec) {
 			c.within(kv.key, *kv.v, 5, 2000, "mm")
 		}
 	}
-	if !c.has("reflector.thickness_mm") && r.ThicknessMM == 0 {
-		r.ThicknessMM = 1.6
-	}
+	c.orDefault("reflector.thickness_mm", &r.ThicknessMM, 1.6)
 	c.within("reflector.thickness_mm", r.ThicknessMM, 0.05, 10, "mm")
 
 	c.oneOf("reflector.material", &r.Material, "fr4", sheetMaterialIDs()...)
@@ -111,16 +109,12 @@ func (r *ReflectorSpec) validate(c *checker, s *Spec) {
 	if r.MountingHoles < 0 || r.MountingHoles > 12 {
 		c.fail("reflector.mounting_holes", fmt.Sprint(r.MountingHoles), "must be between 0 and 12", "give the number of mounting holes")
 	}
-	if !c.has("reflector.mounting_hole_mm") && r.MountingHoleMM == 0 {
-		r.MountingHoleMM = DefaultMountingHoleMM
-	}
+	c.orDefault("reflector.mounting_hole_mm", &r.MountingHoleMM, DefaultMountingHoleMM)
 	c.within("reflector.mounting_hole_mm", r.MountingHoleMM, 1, 20, "mm")
 	if r.MountingCircleMM != nil {
 		c.within("reflector.mounting_circle_mm", *r.MountingCircleMM, 2, 2000, "mm")
 	}
-	if !c.has("reflector.mounting_angle_deg") && r.MountingAngleDeg == 0 {
-		r.MountingAngleDeg = DefaultMountingAngleDeg
-	}
+	c.orDefault("reflector.mounting_angle_deg", &r.MountingAngleDeg, DefaultMountingAngleDeg)
 	if math.IsNaN(r.MountingAngleDeg) || !c.within("reflector.mounting_angle_deg", r.MountingAngleDeg, -360, 360, "degrees") {
 		return
 	}

@@ -25,17 +25,12 @@ const (
 )
 
 func (st *StockSpec) validate(c *checker, _ *Spec) {
-	def := func(key string, v *float64, d float64) {
-		if !c.has(key) && *v == 0 {
-			*v = d
-		}
-	}
-	def("stock.wire_rod_mm", &st.WireRodMM, DefaultRodMM)
-	def("stock.dowel_rod_mm", &st.DowelRodMM, DefaultRodMM)
-	def("stock.wire_kerf_mm", &st.WireKerfMM, DefaultWireKerfMM)
-	def("stock.dowel_kerf_mm", &st.DowelKerfMM, DefaultDowelKerfMM)
-	def("stock.end_trim_mm", &st.EndTrimMM, DefaultEndTrimMM)
-	def("stock.solder_wire_mm", &st.SolderWireMM, DefaultSolderMM)
+	c.orDefault("stock.wire_rod_mm", &st.WireRodMM, DefaultRodMM)
+	c.orDefault("stock.dowel_rod_mm", &st.DowelRodMM, DefaultRodMM)
+	c.orDefault("stock.wire_kerf_mm", &st.WireKerfMM, DefaultWireKerfMM)
+	c.orDefault("stock.dowel_kerf_mm", &st.DowelKerfMM, DefaultDowelKerfMM)
+	c.orDefault("stock.end_trim_mm", &st.EndTrimMM, DefaultEndTrimMM)
+	c.orDefault("stock.solder_wire_mm", &st.SolderWireMM, DefaultSolderMM)
 	c.within("stock.wire_rod_mm", st.WireRodMM, 50, 10000, "mm")
 	c.within("stock.dowel_rod_mm", st.DowelRodMM, 50, 10000, "mm")
 	c.within("stock.wire_kerf_mm", st.WireKerfMM, 0, 10, "mm")

@@ -79,7 +79,9 @@ func TestBadSpecs(t *testing.T) {
 	}{
 		{"unknown key", `hand = "RHCP"`, `hand = "RHCP"` + "\nhandedness = 1", "coil.handedness", 9, "unknown key"},
 		{"wrong type", `turns = 5.0`, `turns = "five"`, "coil.turns", 7, "wrong type"},
-		{"syntax error", `quantity = 2`, `quantity = = 2`, "", 3, "syntax"},
+		{"syntax error", `quantity = 2`, `quantity = = 2`, "quantity", 3, "syntax"},
+		{"value missing", `turns = 5.0`, `turns =`, "coil.turns", 7, "syntax"},
+		{"broken table header", `[wire]`, `[wire`, "spec", 13, "syntax"},
 		{"negative turns", `turns = 5.0`, `turns = -3.0`, "coil.turns", 7, "between 1 and 50"},
 		{"zero frequency", `frequency_mhz = 5800.0`, `frequency_mhz = 0.0`, "frequency_mhz", 2, "between 100 and 30000"},
 		{"diameter and circumference", `base_diameter_mm = 17.5`, "base_diameter_mm = 17.5\nbase_circumference_lambda = 1.0", "coil.base_circumference_lambda", 10, "one or the other"},
@@ -88,6 +90,7 @@ func TestBadSpecs(t *testing.T) {
 		{"top size on a cylinder", `shape = "conical"`, `shape = "cylindrical"`, "coil.top_diameter_mm", 10, "only"},
 		{"zero quantity", `quantity = 2`, `quantity = 0`, "quantity", 3, "between 1 and"},
 		{"band edges swapped", `quantity = 2`, "quantity = 2\nband_low_mhz = 5900.0\nband_high_mhz = 5700.0", "band_high_mhz", 5, "above band_low_mhz"},
+		{"missing frequency", "frequency_mhz = 5800.0\n", "", "frequency_mhz", 0, "is required"},
 		{"missing wire diameter", "diameter_mm = 1.6\n", "", "wire.diameter_mm", 0, "required"},
 		{"unknown table", `[wire]`, "[antenna]\ngain = 3\n[wire]", "antenna", 13, "unknown key"},
 	} {

@@ -28,7 +28,7 @@ func mustSpringback(t testing.TB, sec Section, law FlowLaw) *Springback {
 // helix5800Spacing is the axial spacing per turn of an axial-mode helix with
 // circumference one wavelength at 5.8 GHz and pitch angle 12.5°:
 // S = λ·tan 12.5°, λ = 51.6884 mm.
-// Source: DOMAIN §1 (λ = c/f) and Kraus, Antennas, 2nd ed., ch. 7 (C = λ, α = 12.5°).
+// Source: λ = c/f with the SI value of c (SI Brochure, 9th ed.) and Kraus, Antennas, 2nd ed., ch. 7 (C = λ, α = 12.5°).
 var helix5800Spacing = 51.6884 * math.Tan(12.5*math.Pi/180)
 
 func TestSectionInertia(t *testing.T) {
@@ -58,14 +58,14 @@ func TestRoundWireMoments(t *testing.T) {
 	s := mustSpringback(t, RoundSection{Diameter: d}, FlowLaw{YoungsModulus: E, Yield: sy})
 	ke := sy / (E * a)
 	t.Run("yield moment", func(t *testing.T) {
-		// Source: My = (π/4)·σy·a³ (Chakrabarty, Theory of Plasticity; DOMAIN §5).
+		// Source: My = (π/4)·σy·a³ (Chakrabarty, Theory of Plasticity).
 		want := math.Pi / 4 * sy * a * a * a
 		if got := s.Moment(ke); relErr(got, want) > relTol {
 			t.Errorf("M(κy) = %.15g, want %.15g", got, want)
 		}
 	})
 	t.Run("fully plastic moment", func(t *testing.T) {
-		// Source: Mp = (4/3)·σy·a³ (Chakrabarty; DOMAIN §5). At 10⁷ times
+		// Source: Mp = (4/3)·σy·a³ (Chakrabarty, Theory of Plasticity). At 10⁷ times
 		// the yield curvature the elastic core is negligible.
 		want := 4.0 / 3 * sy * a * a * a
 		if got := s.Moment(1e7 * ke); relErr(got, want) > relTol {
@@ -73,14 +73,14 @@ func TestRoundWireMoments(t *testing.T) {
 		}
 	})
 	t.Run("shape factor", func(t *testing.T) {
-		// Source: shape factor of a circle 16/(3π) = 1.6977 (DOMAIN §5).
+		// Source: shape factor of a circle 16/(3π) = 1.6977 (Chakrabarty, Theory of Plasticity).
 		if got := s.Moment(1e7*ke) / s.Moment(ke); math.Abs(got-16/(3*math.Pi)) > 1e-12 {
 			t.Errorf("Mp/My = %.15g, want 16/(3π)", got)
 		}
 	})
 	// Source: closed form of the elastic–perfectly plastic circle,
-	// M/(σy a³) = (5 − 2s²)√(1 − s²)/6 + asin(s)/(2s), s = κy/κ (DOMAIN §5,
-	// derived; it reproduces My at s = 1 and Mp as s → 0).
+	// M/(σy a³) = (5 − 2s²)√(1 − s²)/6 + asin(s)/(2s), s = κy/κ
+	// (derived; it reproduces My at s = 1 and Mp as s → 0).
 	for _, sr := range []float64{1, 0.999, 0.9, 0.5, 0.2, 0.05, 0.01, 0.001} {
 		t.Run(fmt.Sprintf("closed form at s = %g", sr), func(t *testing.T) {
 			want := sy * a * a * a * ((5-2*sr*sr)*math.Sqrt(1-sr*sr)/6 + math.Asin(sr)/(2*sr))
@@ -92,7 +92,7 @@ func TestRoundWireMoments(t *testing.T) {
 }
 
 func TestRoundWireSmallCoreSeries(t *testing.T) {
-	// Source: DOMAIN §5, small-s series of the round-wire springback,
+	// Source: derived, the small-s series of the round-wire springback,
 	// κf/κi ≈ 1 − (16/3π)s + (8/3π)s³ with s = σy·R/(E·a); the next term is
 	// O(s⁵), so the tolerance is s⁵.
 	const sy, E, d = 448.0, 110000.0, 1.6
@@ -128,7 +128,8 @@ func TestGardinerSheetLimit(t *testing.T) {
 }
 
 func TestGardinerWorkedChecks(t *testing.T) {
-	// Source: DOMAIN §5 [calc] from Gardiner's formula: Ri = 0.5 in,
+	// Source: Gardiner, Trans. ASME 79, 1957 (as in Kalpakjian & Schmid),
+	// Ri/Rf = 4x³ − 3x + 1 [calc]: Ri = 0.5 in,
 	// Y = 40 ksi, E = 29e6 psi, T = 0.0359 in → Ri/Rf = 0.94240,
 	// Rf = 0.5306 in, and to finish at 0.500 in wind at 0.4728 in; and
 	// Y = 300 MPa, E = 210 GPa, Ri = 50 mm, T = 2 mm → Ri/Rf = 0.89304.
@@ -159,7 +160,7 @@ func TestGardinerWorkedChecks(t *testing.T) {
 }
 
 func TestRoundWireWorkedChecks(t *testing.T) {
-	// Source: DOMAIN §5 [calc, round-wire form]: d = 1.0 mm, target
+	// Source: the round-wire closed form above [calc]: d = 1.0 mm, target
 	// R = 19.555 mm; C26000 half-hard (σy 448 MPa, E 110 GPa) springs to
 	// 26.68 mm and must be wound at 15.42 mm; annealed copper (70 MPa,
 	// 117 GPa) springs to 20.36 mm and must be wound at 18.81 mm. These are
@@ -326,7 +327,7 @@ func TestHardening(t *testing.T) {
 		}
 	})
 	// Source: rigid–plastic power law σ = K·εⁿ on a circle gives
-	// M = 2K·κⁿ·a^(n+3)·B(1 + n/2, 3/2) (DOMAIN §5, derived; n = 0 gives
+	// M = 2K·κⁿ·a^(n+3)·B(1 + n/2, 3/2) (derived; n = 0 gives
 	// Mp); the beta function is gonum's. A very stiff elastic part and zero
 	// yield approach the rigid–plastic law.
 	const tol = 5e-7
@@ -448,7 +449,7 @@ func TestSteepHelix(t *testing.T) {
 
 func TestHelixRadiusOfCurvature(t *testing.T) {
 	// Source: κ = R/(R² + p²) and its inverse R = (1 + √(1 − 4κ²p²))/(2κ)
-	// (DOMAIN §2); here the round trip and κ = cos²α/R at α = 12.5°.
+	// (differential geometry of the helix); here the round trip and κ = cos²α/R at α = 12.5°.
 	r := 51.6884 / (2 * math.Pi)
 	k := HelixCurvature(r, helix5800Spacing)
 	c := math.Cos(12.5 * math.Pi / 180)

@@ -95,3 +95,26 @@ func TestTaperValidate(t *testing.T) {
 		})
 	}
 }
+
+func TestMismatchFigures(t *testing.T) {
+	// Source: Pozar, Microwave Engineering, 4th ed., §2.3: VSWR =
+	// (1 + |Γ|)/(1 − |Γ|) and return loss RL = −20·log10|Γ| dB [calc].
+	const tol = 1e-4
+	for _, tc := range []struct {
+		name            string
+		gamma, vswr, rl float64
+	}{
+		{"|Γ| = 0.1", 0.1, 1.2222, 20},
+		{"|Γ| = 1/3", 1.0 / 3, 2, 9.5424},
+		{"10 dB return loss", 0.31623, 1.9249, 10.0},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			if v := VSWR(tc.gamma); math.Abs(v-tc.vswr) > tol {
+				t.Errorf("VSWR(%g) = %.5f, want %.4f", tc.gamma, v, tc.vswr)
+			}
+			if rl := ReturnLossDB(tc.gamma); math.Abs(rl-tc.rl) > tol {
+				t.Errorf("ReturnLossDB(%g) = %.5f dB, want %.4f", tc.gamma, rl, tc.rl)
+			}
+		})
+	}
+}

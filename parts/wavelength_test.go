@@ -16,7 +16,7 @@ func TestSpeedOfLightIsExact(t *testing.T) {
 }
 
 func TestWavelength(t *testing.T) {
-	// Source: λ = c/f with the SI value of c (DOMAIN §1 table).
+	// Source: λ = c/f with the SI value of c (SI Brochure, 9th ed., BIPM 2019) [calc].
 	for _, tc := range []struct {
 		name string
 		fMHz float64

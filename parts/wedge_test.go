@@ -15,10 +15,10 @@ func helixPath(r, z0, rise float64) func(float64) geom.Vec3 {
 	}
 }
 
-// demoWedge is a 5.8 GHz wedge: λ = 51.6884 mm (DOMAIN §1, c/f), helix
+// demoWedge is a 5.8 GHz wedge: λ = 51.6884 mm (c/f), helix
 // circumference one wavelength, 1 mm wire, 0.2 mm sheet, strip 1 mm above
 // the reflector at the feed, a quarter-turn rise of a 12.5° helix
-// (Sλ = 0.2217, DOMAIN §2) and a 140 Ω load (Kraus axial feed, Cλ = 1).
+// (Sλ = tan 12.5° = 0.2217) and a 140 Ω load (Kraus axial feed, Cλ = 1).
 func demoWedge(t *testing.T, kind TaperKind) *Wedge {
 	t.Helper()
 	const lambda = 51.6884

@@ -117,7 +117,7 @@ func compensateCoil(target Coil, model *Springback) (Coil, error) {
 			return f, nil
 		}
 		// On the cone, Z − Z0 = (r − r0)·cos θ0/sin θ0 with sin θ0 = k/tan α
-		// (Dyson, IEEE Trans. AP-13, 1965; DOMAIN §3). Holding the height H
+		// (Dyson, IEEE Trans. AP-13, 1965). Holding the height H
 		// fixes u = tan θ0 = (r1 − r0)/H, hence sin θ0 = u/√(1 + u²) and
 		// tan α = k/sin θ0.
 		u := (f.EndRadius - f.StartRadius) / target.Height()

@@ -54,13 +54,11 @@ pitch_angle_deg = 13.0
 pitch_mode = "constant_angle"`
 )
 
+// mustDesign parses text and works out its design, failing the test on
+// any error.
 func mustDesign(t *testing.T, text string) *Design {
 	t.Helper()
-	s, err := ParseSpec([]byte(text))
-	if err != nil {
-		t.Fatal(err)
-	}
-	d, err := NewDesign(s)
+	d, err := NewDesign(mustParse(t, []byte(text)))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -150,7 +148,8 @@ diameter_mm = 1.6`, "wire-special-flux"},
 		{"enamel to strip", "5800", cylinder5800, `material = "copper-enamelled"
 diameter_mm = 1.6`, "wire-strip-enamel"},
 		// Source: C26000 half-hard 1.0 mm on a 2.44 GHz helix springs
-		// out by about 14 mm in diameter (DOMAIN §5 worked numbers), so a
+		// out by about 14 mm in diameter (the round-wire model's worked numbers in
+		// TestRoundWireWorkedChecks), so a
 		// 10 % yield scatter moves it far beyond the 0.39 mm tolerance.
 		{"uncalibrated stiff wire", "2440", cylinder5800, `material = "brass-c26000-half-hard"
 diameter_mm = 1.0`, "springback-calibration"},
@@ -336,7 +335,7 @@ func TestInspectionTolerance(t *testing.T) {
 func TestNoFormerCanWind(t *testing.T) {
 	// Source: a helix of spacing S bends at most to 1/(2p), p = S/2π. Thin
 	// spring-temper stainless on a 1.28 GHz helix (R ≈ 37 mm, S ≈ 52 mm)
-	// loses about 32σy/(3πE·d) ≈ 0.088 1/mm on release (DOMAIN §5), so the
+	// loses about 32σy/(3πE·d) ≈ 0.088 1/mm on release (derived, mostly plastic round wire), so the
 	// former would need more than the 0.06 1/mm such a helix can have. At a
 	// 45° pitch angle the coil already has that largest curvature, so no
 	// wire can be compensated.

@@ -2,15 +2,19 @@ package main
 
 import (
 	"encoding/json"
+	"errors"
 	"fmt"
 	"io"
+	"os"
 	"path/filepath"
 	"strings"
+	"time"
 	"unicode"
 
 	"github.com/spf13/cobra"
 
 	"coilwright/cam"
+	"coilwright/parts"
 	"coilwright/templates"
 )
 
@@ -22,11 +26,13 @@ type buildOptions struct {
 	json   bool
 }
 
-// buildContext is what every output step sees: the loaded spec and design
-// and the staged output folder to add files to.
+// buildContext is what every output step sees: the loaded spec and design,
+// the staged output folder to add files to, and the creation time PDFs
+// record (from SOURCE_DATE_EPOCH; zero when it is unset, and left out).
 type buildContext struct {
-	spec *loadedSpec
-	out  *cam.Output
+	spec    *loadedSpec
+	out     *cam.Output
+	created time.Time
 }
 
 // outputStep writes one group of outputs. Each step lives in its own
@@ -85,18 +91,29 @@ func runBuild(w io.Writer, path string, o buildOptions) error {
 	if err != nil {
 		return err
 	}
+	created, err := cam.SourceDateEpoch(os.Getenv("SOURCE_DATE_EPOCH"))
+	if err != nil {
+		return usageError{err}
+	}
 	dir := o.outDir
 	if dir == "" {
 		dir = filepath.Join("out", slug(l.Spec.Kit))
+	}
+	if fi, err := os.Stat(dir); err == nil && !fi.IsDir() {
+		return usageError{fmt.Errorf("-o %s: is a file, not a folder; choose a new or empty folder", dir)}
 	}
 	out, err := cam.NewOutput(dir, o.force)
 	if err != nil {
 		return err
 	}
-	ctx := &buildContext{spec: l, out: out}
+	ctx := &buildContext{spec: l, out: out, created: created}
 	for _, s := range buildSteps() {
 		if err := s.write(ctx); err != nil {
 			out.Abort()
+			var se *parts.SpecError
+			if errors.As(err, &se) {
+				return inputError{l.Name, err} // a spec key to fix, named like check's
+			}
 			return fmt.Errorf("%s: %w", s.name, err)
 		}
 	}

@@ -6,6 +6,7 @@ import (
 	"os"
 	"path/filepath"
 	"sort"
+	"strings"
 	"testing"
 
 	"coilwright/cam"
@@ -131,5 +132,48 @@ func TestSlug(t *testing.T) {
 		if got := slug(in); got != want {
 			t.Errorf("slug(%q) = %q, want %q", in, got, want)
 		}
+	}
+}
+
+func TestBadSourceDateEpoch(t *testing.T) {
+	// A malformed SOURCE_DATE_EPOCH is bad input: exit 2 before any file is
+	// written.
+	t.Setenv("SOURCE_DATE_EPOCH", "yesterday")
+	dir := filepath.Join(t.TempDir(), "out")
+	code, _, errs := runCLI(t, "build", "-o", dir)
+	if code != exitBadUse || !strings.Contains(errs, "SOURCE_DATE_EPOCH") {
+		t.Errorf("exit %d, stderr %q", code, errs)
+	}
+	if _, err := os.Stat(dir); err == nil {
+		t.Error("the build made its output folder despite the bad SOURCE_DATE_EPOCH")
+	}
+}
+
+func TestBuildIntoAFile(t *testing.T) {
+	// -o naming a file is a usage mistake: exit 2, and the file is kept.
+	file := filepath.Join(t.TempDir(), "notes.txt")
+	if err := os.WriteFile(file, []byte("mine"), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	code, _, errs := runCLI(t, "build", "-o", file)
+	if code != exitBadUse || !strings.Contains(errs, "is a file, not a folder") {
+		t.Errorf("exit %d, stderr %q", code, errs)
+	}
+	if b, err := os.ReadFile(file); err != nil || string(b) != "mine" {
+		t.Errorf("the file was touched: %q, %v", b, err)
+	}
+}
+
+func TestWireBlankLongerThanTheRod(t *testing.T) {
+	// Fifty turns of the demo cone make a wire blank over two metres, longer
+	// than the default 1000 mm rod: a spec problem at its key, exit 2.
+	b, _ := templates.Demo("demo-5g8-cone.toml")
+	spec := filepath.Join(t.TempDir(), "long.toml")
+	if err := os.WriteFile(spec, bytes.Replace(b, []byte("turns = 5.0"), []byte("turns = 50.0"), 1), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	code, _, errs := runCLI(t, "build", spec, "-o", filepath.Join(t.TempDir(), "out"))
+	if code != exitBadUse || !strings.Contains(errs, "long.toml: stock.wire_rod_mm = 1000: is too short for one wire blank") || !strings.Contains(errs, "fix: set wire_rod_mm = ") {
+		t.Errorf("exit %d, stderr %q", code, errs)
 	}
 }

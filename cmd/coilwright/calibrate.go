@@ -5,6 +5,8 @@ import (
 	"errors"
 	"fmt"
 	"io"
+	"os"
+	"path/filepath"
 	"text/tabwriter"
 
 	"github.com/spf13/cobra"
@@ -55,7 +57,7 @@ flag or separate with commas) are averaged by a least-squares fit.`,
 		},
 	}
 	f := cmd.Flags()
-	f.StringVar(&o.material, "material", "", "wire material id (see `coilwright materials`)")
+	f.StringVar(&o.material, "material", "", "wire material `ID` (list them with coilwright materials)")
 	f.Float64Var(&o.wireMM, "wire-mm", 0, "bare wire diameter, mm")
 	f.Float64Var(&o.formerMM, "former-mm", 0, "wire centreline diameter on the former, mm")
 	f.Float64SliceVar(&o.measured, "measured-mm", nil, "measured relaxed diameter(s), mm (centreline unless --outside)")
@@ -66,6 +68,12 @@ flag or separate with commas) are averaged by a least-squares fit.`,
 	f.BoolVar(&o.force, "force", false, "replace the calibration file if it exists")
 	f.BoolVar(&o.json, "json", false, "print the fit as JSON")
 	return cmd
+}
+
+// isDir reports whether path names an existing folder.
+func isDir(path string) bool {
+	fi, err := os.Stat(path)
+	return err == nil && fi.IsDir()
 }
 
 // calibrationJSON is the fit as `calibrate --json` prints it.
@@ -81,15 +89,18 @@ func runCalibrate(w io.Writer, o calibrateOptions) error {
 	case o.material == "":
 		return usageError{errors.New("calibrate needs --material ID (see `coilwright materials`)")}
 	case !(o.wireMM > 0):
-		return usageError{fmt.Errorf("--wire-mm %g: give the bare wire diameter in mm", o.wireMM)}
-	case !(o.formerMM > 0):
-		return usageError{fmt.Errorf("--former-mm %g: give the wire centreline diameter on the former in mm", o.formerMM)}
+		return usageError{fmt.Errorf("--wire-mm %g: must be above 0 mm; give the bare wire diameter, e.g. --wire-mm 1.6", o.wireMM)}
+	case !(o.formerMM > o.wireMM):
+		return usageError{fmt.Errorf("--former-mm %g: must be above --wire-mm; give the wire centreline diameter on the former (rod diameter plus one wire diameter), e.g. --former-mm 16.6", o.formerMM)}
 	case len(o.measured) == 0:
 		return usageError{errors.New("calibrate needs at least one --measured-mm value")}
 	case !(o.spacingMM >= 0):
 		return usageError{fmt.Errorf("--spacing-mm %g must be zero (close-wound) or positive", o.spacingMM)}
 	case o.model != parts.ModelPerfectlyPlastic && o.model != parts.ModelHardening:
 		return usageError{fmt.Errorf("--model %q: use %q or %q", o.model, parts.ModelPerfectlyPlastic, parts.ModelHardening)}
+	}
+	if dir := filepath.Dir(o.out); !isDir(dir) {
+		return usageError{fmt.Errorf("-o %s: folder %s does not exist; create it or choose another path", o.out, dir)}
 	}
 	m, err := parts.LookupMaterial(o.material)
 	if err != nil {

@@ -85,6 +85,9 @@ func TestCalibrateCommand(t *testing.T) {
 		{"unknown material", []string{"--material", "unobtainium", "--wire-mm", "1.6", "--former-mm", "16.6", "--measured-mm", "18"}, "copper-annealed"},
 		{"no measurement", []string{"--material", m.ID, "--wire-mm", "1.6", "--former-mm", "16.6"}, "--measured-mm"},
 		{"coil smaller than former", []string{"--material", m.ID, "--wire-mm", "1.6", "--former-mm", "16.6", "--measured-mm", "16"}, "never shrinks"},
+		{"former smaller than the wire", []string{"--material", m.ID, "--wire-mm", "1.6", "--former-mm", "0.5", "--measured-mm", "12"}, "rod diameter plus one wire diameter"},
+		{"negative wire", []string{"--material", m.ID, "--wire-mm", "-1", "--former-mm", "16.6", "--measured-mm", "18"}, "--wire-mm -1: must be above 0 mm"},
+		{"missing output folder", []string{"--material", m.ID, "--wire-mm", "1.6", "--former-mm", "16.6", "--measured-mm", "18", "-o", filepath.Join(dir, "no-such-folder", "x.toml")}, "does not exist"},
 		{"bad model", []string{"--material", m.ID, "--wire-mm", "1.6", "--former-mm", "16.6", "--measured-mm", "18", "--model", "elastic"}, "--model"},
 	}
 	for _, tc := range bad {
@@ -189,7 +192,7 @@ length_mm = 80.0
 			t.Fatal(err)
 		}
 		code, _, errs := runCLI(t, "check", specPath)
-		if code != exitBadUse || !strings.Contains(errs, "calibration file not found") {
+		if code != exitBadUse || !strings.Contains(errs, "calibration file not found") || !strings.Contains(errs, `wire.calibration = "batch.toml" (line `) {
 			t.Errorf("exit %d, stderr %q", code, errs)
 		}
 	})

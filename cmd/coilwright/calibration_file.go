@@ -5,6 +5,7 @@ import (
 	"io/fs"
 	"os"
 	"path/filepath"
+	"strconv"
 
 	"coilwright/parts"
 )
@@ -23,7 +24,9 @@ func attachCalibration(specPath string, s *parts.Spec) error {
 	}
 	b, err := os.ReadFile(path)
 	if errors.Is(err, fs.ErrNotExist) {
-		return inputError{path, errors.New("calibration file not found; write one with `coilwright calibrate`, or remove wire.calibration from the spec")}
+		return &parts.SpecError{Key: "wire.calibration", Line: s.Line("wire.calibration"), Value: strconv.Quote(name),
+			Problem: "calibration file not found at " + path + " (the name is relative to the spec's folder)",
+			Fix:     "write one with `coilwright calibrate ... -o " + path + "`, or remove wire.calibration from the spec"}
 	}
 	if err != nil {
 		return inputError{path, err}

@@ -1,6 +1,7 @@
 package main
 
 import (
+	"bytes"
 	"fmt"
 	"io"
 	"math"
@@ -43,7 +44,13 @@ sized for that band and --shape, ready to edit and build.`,
   coilwright new --frequency-mhz 5800 --shape conical --kit "Hilltop 5G8" > hilltop.toml`,
 		Args: exactArgs(0, "no arguments (use flags)"),
 		RunE: func(cmd *cobra.Command, _ []string) error {
-			return runNew(cmd.OutOrStdout(), o, cmd.Flags().Changed("frequency-mhz"))
+			sized := cmd.Flags().Changed("frequency-mhz")
+			for _, f := range []string{"shape", "kit", "turns"} {
+				if !sized && cmd.Flags().Changed(f) {
+					return usageError{fmt.Errorf("--%s sizes a starter spec and needs --frequency-mhz, e.g. new --frequency-mhz 5800 --%s ...", f, f)}
+				}
+			}
+			return runNew(cmd.OutOrStdout(), cmd.ErrOrStderr(), o, sized)
 		},
 	}
 	cmd.Flags().Float64Var(&o.frequencyMHz, "frequency-mhz", 0, "centre frequency in MHz (100–30000)")
@@ -53,7 +60,10 @@ sized for that band and --shape, ready to edit and build.`,
 	return cmd
 }
 
-func runNew(w io.Writer, o newOptions, sized bool) error {
+// runNew prints the reference spec, or a sized starter spec. A starter that
+// does not pass check (a coil too small for any stock support rod, say) is
+// still printed, with its problems on stderr, as a start to edit.
+func runNew(w, stderr io.Writer, o newOptions, sized bool) error {
 	if !sized {
 		_, err := w.Write(templates.Reference)
 		return err
@@ -63,6 +73,9 @@ func runNew(w io.Writer, o newOptions, sized bool) error {
 	}
 	if o.shape != "cylindrical" && o.shape != "conical" {
 		return usageError{fmt.Errorf(`--shape %q: use "cylindrical" or "conical"`, o.shape)}
+	}
+	if o.turns != 0 && !(o.turns >= parts.MinTurns && o.turns <= parts.MaxTurns) {
+		return usageError{fmt.Errorf("--turns %g: must be between %g and %g (fractions allowed), e.g. --turns 6", o.turns, parts.MinTurns, parts.MaxTurns)}
 	}
 	st := starter{Kit: o.kit, FrequencyMHz: o.frequencyMHz, Shape: o.shape, Turns: o.turns}
 	if st.Kit == "" {
@@ -75,9 +88,17 @@ func runNew(w io.Writer, o newOptions, sized bool) error {
 		}
 	}
 	// Wire about 0.02 λ, inside the 0.006–0.05 λ the Kraus formulas assume
-	// (DOMAIN §2, from memory), rounded to a stock 0.1 mm and clamped to
+	// (from memory), rounded to a stock 0.1 mm and clamped to
 	// the spec's range.
 	lambda := parts.Wavelength(o.frequencyMHz)
 	st.WireMM = math.Min(math.Max(math.Round(0.02*lambda*10)/10, parts.MinWireMM), parts.MaxWireMM)
-	return starterTmpl.Execute(w, st)
+	var buf bytes.Buffer
+	if err := starterTmpl.Execute(&buf, st); err != nil {
+		return err
+	}
+	if _, err := parts.ParseSpec(buf.Bytes()); err != nil {
+		fmt.Fprintf(stderr, "coilwright: the starter spec does not pass check yet; edit it first:\n%v\n", err)
+	}
+	_, err := w.Write(buf.Bytes())
+	return err
 }

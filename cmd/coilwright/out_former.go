@@ -10,9 +10,13 @@ import (
 
 // writeFormer meshes the winding former and writes former.stl, former.3mf
 // and former.png. The mesh is checked to be closed and consistently
-// oriented before anything is written.
+// oriented before anything is written. A former larger than the spec's
+// print volume is not made; the design carries a former-size warning.
 func writeFormer(ctx *buildContext) error {
 	s := ctx.spec.Spec
+	if !ctx.spec.Design.FormerEnvelope().Fits {
+		return nil
+	}
 	f, err := jig.FormerFromDesign(ctx.spec.Design)
 	if err != nil {
 		return err

@@ -3,7 +3,6 @@ package main
 import (
 	"fmt"
 	"io"
-	"os"
 
 	"coilwright/cam"
 	"coilwright/cam/geom"
@@ -150,7 +149,7 @@ func writePatterns(ctx *buildContext) error {
 	}
 	var warns []string
 	if d.Patterns.LaserHalogen {
-		warns = append(warns, "WARNING: laser cutting was asked for FR-4, a halogenated laminate. Do not laser-cut it.")
+		warns = append(warns, parts.LaserHalogenWarning)
 	}
 	pages, err := cam.TemplatePages(tparts, cam.TemplateOptions{
 		Page: paper, Heading: s.Kit + ": 1:1 cutting templates (" + d.Coil.Hand.String() + ")", Warnings: warns,
@@ -158,12 +157,8 @@ func writePatterns(ctx *buildContext) error {
 	if err != nil {
 		return err
 	}
-	created, err := cam.SourceDateEpoch(os.Getenv("SOURCE_DATE_EPOCH"))
-	if err != nil {
-		return err
-	}
 	return ctx.out.Add("templates.pdf", func(w io.Writer) error {
-		return cam.WritePDF(w, pages, cam.PDFOptions{Title: s.Kit + " cutting templates", Creator: "coilwright " + Version, Created: created})
+		return cam.WritePDF(w, pages, cam.PDFOptions{Title: s.Kit + " cutting templates", Creator: "coilwright " + Version, Created: ctx.created})
 	})
 }
 

@@ -16,20 +16,6 @@ import (
 	"coilwright/templates"
 )
 
-// needChecker returns an external checker's path, skipping the test when it
-// is missing unless COILWRIGHT_REQUIRE_TOOLS=1.
-func needChecker(t *testing.T, name string) string {
-	t.Helper()
-	p, err := exec.LookPath(name)
-	if err != nil {
-		if os.Getenv("COILWRIGHT_REQUIRE_TOOLS") == "1" {
-			t.Fatalf("%s is required (COILWRIGHT_REQUIRE_TOOLS=1) but not installed", name)
-		}
-		t.Skipf("%s not installed", name)
-	}
-	return p
-}
-
 func readReport(t *testing.T, dir string) parts.Report {
 	t.Helper()
 	b, err := os.ReadFile(filepath.Join(dir, "design.json"))
@@ -92,16 +78,11 @@ for f in sys.argv[1:]:
 `
 
 func TestPatternFilesExternal(t *testing.T) {
-	if err := exec.Command("/usr/bin/python3", "-c", "import ezdxf").Run(); err != nil {
-		if os.Getenv("COILWRIGHT_REQUIRE_TOOLS") == "1" {
-			t.Fatal("python3-ezdxf is required (COILWRIGHT_REQUIRE_TOOLS=1)")
-		}
-		t.Skip("python3-ezdxf not installed")
-	}
-	rsvg := needChecker(t, "rsvg-convert")
-	pdfinfo := needChecker(t, "pdfinfo")
-	qpdf := needChecker(t, "qpdf")
-	pdftotext := needChecker(t, "pdftotext")
+	py := needEzdxf(t)
+	rsvg := needTool(t, "rsvg-convert")
+	pdfinfo := needTool(t, "pdfinfo")
+	qpdf := needTool(t, "qpdf")
+	pdftotext := needTool(t, "pdftotext")
 	dir := t.TempDir()
 	buildDemo(t, "demo-5g8-cone.toml", dir)
 	r := readReport(t, dir)
@@ -111,7 +92,7 @@ func TestPatternFilesExternal(t *testing.T) {
 	for _, n := range []string{"reflector.dxf", "wedge.dxf", "panel-reflector.dxf", "panel-wedge.dxf"} {
 		files = append(files, filepath.Join(dir, n))
 	}
-	out, err := exec.Command("/usr/bin/python3", append([]string{"-c", ezdxfScript}, files...)...).CombinedOutput()
+	out, err := exec.Command(py, append([]string{"-c", ezdxfScript}, files...)...).CombinedOutput()
 	if err != nil {
 		t.Fatalf("ezdxf: %v\n%s", err, out)
 	}
@@ -200,12 +181,7 @@ func TestLaserGuardLabelsFiles(t *testing.T) {
 }
 
 func TestR2000Option(t *testing.T) {
-	if err := exec.Command("/usr/bin/python3", "-c", "import ezdxf").Run(); err != nil {
-		if os.Getenv("COILWRIGHT_REQUIRE_TOOLS") == "1" {
-			t.Fatal("python3-ezdxf is required (COILWRIGHT_REQUIRE_TOOLS=1)")
-		}
-		t.Skip("python3-ezdxf not installed")
-	}
+	py := needEzdxf(t)
 	b, _ := templates.Demo("demo-5g8-cone.toml")
 	spec := filepath.Join(t.TempDir(), "r2000.toml")
 	if err := os.WriteFile(spec, append(b, []byte("\n[cutting]\ndxf = \"R2000\"\n")...), 0o644); err != nil {
@@ -223,7 +199,7 @@ for f in sys.argv[1:]:
     a = d.audit()
     print(d.dxfversion, d.header.get('$INSUNITS', 0), len(a.errors), len(a.fixes))
 `
-	out, err := exec.Command("/usr/bin/python3", "-c", script, filepath.Join(dir, "reflector.dxf"), filepath.Join(dir, "panel-wedge.dxf")).CombinedOutput()
+	out, err := exec.Command(py, "-c", script, filepath.Join(dir, "reflector.dxf"), filepath.Join(dir, "panel-wedge.dxf")).CombinedOutput()
 	if err != nil {
 		t.Fatalf("ezdxf: %v\n%s", err, out)
 	}

@@ -2,9 +2,10 @@ package main
 
 import (
 	"encoding/csv"
+	"errors"
 	"fmt"
 	"io"
-	"os"
+	"math"
 	"strconv"
 	"strings"
 	"text/template"
@@ -68,10 +69,6 @@ func writeSheet(ctx *buildContext) error {
 	if err != nil {
 		return err
 	}
-	created, err := cam.SourceDateEpoch(os.Getenv("SOURCE_DATE_EPOCH"))
-	if err != nil {
-		return usageError{err}
-	}
 	var warns []string
 	if d.Patterns.LaserHalogen {
 		warns = append(warns, parts.LaserHalogenWarning)
@@ -86,7 +83,7 @@ func writeSheet(ctx *buildContext) error {
 	if err != nil {
 		return err
 	}
-	opt := cam.PDFOptions{Title: sheet.Kit + " — build sheet", Subject: sheet.Summary, Creator: "coilwright " + Version, Created: created}
+	opt := cam.PDFOptions{Title: sheet.Kit + " — build sheet", Subject: sheet.Summary, Creator: "coilwright " + Version, Created: ctx.created}
 	return ctx.out.Add("build-sheet.pdf", func(w io.Writer) error { return cam.WritePDF(w, append(pages, tpages...), opt) })
 }
 
@@ -153,20 +150,27 @@ func newBatchPlan(d *parts.Design, cl *parts.CutList, cps []cutPart) (*batchPlan
 	n := s.Quantity
 	bp := &batchPlan{Kit: s.Kit, Quantity: n}
 	for _, st := range []struct {
-		name, item string
-		piece      float64
-		rod        cam.Rod
+		name, item, key string
+		piece           float64
+		rod             cam.Rod
 	}{
-		{"Wire", "wire blank", cl.Wire.LengthMM, cam.Rod{Length: s.Stock.WireRodMM, Kerf: s.Stock.WireKerfMM, EndTrim: s.Stock.EndTrimMM}},
-		{"Support rod", "support rod", cl.Dowel.LengthMM, cam.Rod{Length: s.Stock.DowelRodMM, Kerf: s.Stock.DowelKerfMM, EndTrim: s.Stock.EndTrimMM}},
+		{"Wire", "wire blank", "stock.wire_rod_mm", cl.Wire.LengthMM, cam.Rod{Length: s.Stock.WireRodMM, Kerf: s.Stock.WireKerfMM, EndTrim: s.Stock.EndTrimMM}},
+		{"Support rod", "support rod", "stock.dowel_rod_mm", cl.Dowel.LengthMM, cam.Rod{Length: s.Stock.DowelRodMM, Kerf: s.Stock.DowelKerfMM, EndTrim: s.Stock.EndTrimMM}},
 	} {
 		pieces := make([]cam.Piece, n)
 		for i := range pieces {
 			pieces[i] = cam.Piece{Label: st.item, Length: st.piece}
 		}
 		plan, err := cam.PlanStock(pieces, st.rod)
+		if errors.Is(err, cam.ErrPieceTooLong) {
+			need := math.Ceil((st.piece+st.rod.Kerf+st.rod.EndTrim)/10) * 10
+			return nil, &parts.SpecError{Key: st.key, Line: s.Line(st.key), Value: strconv.FormatFloat(st.rod.Length, 'g', -1, 64),
+				Problem: fmt.Sprintf("is too short for one %s of %.1f mm with %s mm kerf and %s mm end trim", st.item, st.piece,
+					strconv.FormatFloat(st.rod.Kerf, 'g', -1, 64), strconv.FormatFloat(st.rod.EndTrim, 'g', -1, 64)),
+				Fix: fmt.Sprintf("set %s = %.0f or more", st.key[strings.LastIndex(st.key, ".")+1:], need)}
+		}
 		if err != nil {
-			return nil, fmt.Errorf("%s: %w; raise stock.%s", st.item, err, map[string]string{"Wire": "wire_rod_mm", "Support rod": "dowel_rod_mm"}[st.name])
+			return nil, fmt.Errorf("%s: %w", st.item, err)
 		}
 		bs := batchStock{Name: st.name, Item: st.item, PieceMM: st.piece, Plan: plan, Patterns: patterns(plan)}
 		for _, r := range plan.Rods {

@@ -20,20 +20,6 @@ import (
 
 var update = flag.Bool("update", false, "rewrite the golden files in testdata/golden")
 
-// needTool returns the path of an external checker, skipping the test when
-// it is missing unless COILWRIGHT_REQUIRE_TOOLS=1.
-func needTool(t *testing.T, name string) string {
-	t.Helper()
-	p, err := exec.LookPath(name)
-	if err != nil {
-		if os.Getenv("COILWRIGHT_REQUIRE_TOOLS") == "1" {
-			t.Fatalf("%s is required (Debian package poppler-utils or qpdf)", name)
-		}
-		t.Skipf("%s not installed", name)
-	}
-	return p
-}
-
 func runTool(t *testing.T, name string, args ...string) string {
 	t.Helper()
 	out, err := exec.Command(needTool(t, name), args...).CombinedOutput()
@@ -87,7 +73,7 @@ var requiredStepTitles = []string{
 }
 
 // requiredCautions are the caution headings every build sheet must carry
-// (DOMAIN §8).
+// (soldering, epoxy, wire cutting, laminate, RF).
 var requiredCautions = []string{
 	"Soldering fumes and lead",
 	"Burns",
