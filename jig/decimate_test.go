@@ -12,61 +12,6 @@ import (
 	"coilwright/templates"
 )
 
-// TestSimplifyVolumes meshes solids of known volume with simplification and
-// requires the same checks as the plain mesher: a closed, oriented manifold
-// of the right genus, every vertex and centroid within the tolerance, and
-// the volume within 0.5 %; the box's sharp edges and corners must survive
-// so that it keeps its volume.
-func TestSimplifyVolumes(t *testing.T) {
-	const R, r, h = 10.0, 6.0, 25.0
-	frustum := must[*sdf.Cone](t)(sdf.NewCone(h, R, r))
-	torusProf := must[*sdf.Circle](t)(sdf.NewCircle(geom.Vec2{X: 8}, 3))
-	torus := must[*sdf.Revolve](t)(sdf.NewRevolve(torusProf))
-	twoBalls := must[sdf.SDF3](t)(sdf.Union(0, sphere(t, geom.Vec3{}, 4), sphere(t, geom.Vec3{X: 12}, 4)))
-	box := must[*sdf.Box](t)(sdf.NewBox(geom.Vec3{X: 20, Y: 10, Z: 5}))
-	cases := []struct {
-		name   string
-		s      sdf.SDF3
-		want   float64
-		relTol float64
-		parts  int
-		genus  int
-	}{
-		// Source: frustum volume πh(R² + Rr + r²)/3 (any geometry handbook).
-		{"plain frustum", frustum, math.Pi * h * (R*R + R*r + r*r) / 3, 0.005, 1, 0},
-		// Source: Pappus's theorem, V = 2π·8 · π·3².
-		{"torus", torus, 2 * math.Pi * 8 * math.Pi * 9, 0.005, 1, 1},
-		// Source: sphere volume 4πr³/3, twice.
-		{"two spheres", twoBalls, 2 * 4 * math.Pi * 64 / 3, 0.005, 2, 0},
-		// Source: box volume, length × width × height.
-		{"box", box, 20 * 10 * 5, 0.005, 1, 0},
-	}
-	for _, c := range cases {
-		t.Run(c.name, func(t *testing.T) {
-			plain, err := Mesh(c.s, MeshOptions{})
-			if err != nil {
-				t.Fatal(err)
-			}
-			m, err := Mesh(c.s, MeshOptions{Simplify: true})
-			if err != nil {
-				t.Fatal(err)
-			}
-			rep, err := CheckMesh(m, CheckOptions{Components: c.parts, Genus: c.genus, SDF: c.s, Tolerance: DefaultTolerance})
-			if err != nil {
-				t.Fatalf("%v\n%+v", err, rep)
-			}
-			if rel := math.Abs(rep.Volume-c.want) / c.want; rel > c.relTol {
-				t.Errorf("volume %.3f mm³, want %.3f (off by %.3f %%)", rep.Volume, c.want, 100*rel)
-			}
-			if len(m.Faces) >= len(plain.Faces) {
-				t.Errorf("%d faces simplified from %d", len(m.Faces), len(plain.Faces))
-			}
-			t.Logf("%d faces from %d, volume off by %.4f %%, vertex %.5f mm, centroid %.5f mm", rep.Faces, len(plain.Faces),
-				100*math.Abs(rep.Volume-c.want)/c.want, rep.MaxVertexDist, rep.MaxCentroidDist)
-		})
-	}
-}
-
 // TestSimplifyReduces checks that simplification removes most triangles
 // where the surface is flat or gently curved: a cylinder and the long
 // cylindrical demo former.

@@ -2,6 +2,7 @@ package jig
 
 import (
 	"errors"
+	"fmt"
 	"math"
 	"math/rand/v2"
 	"slices"
@@ -27,14 +28,18 @@ func sphere(t testing.TB, c geom.Vec3, r float64) sdf.SDF3 {
 	return sdf.Move(must[*sdf.Revolve](t)(sdf.NewRevolve(circ)), sdf.Translation(c))
 }
 
-// TestMeshVolumes meshes solids of known volume and checks the mesh is a
-// closed manifold of the expected genus whose volume matches.
+// TestMeshVolumes meshes solids of known volume, plain and simplified, and
+// requires a closed, oriented manifold of the expected genus, every vertex
+// and centroid within the tolerance, and the volume within 0.5 %; the box's
+// sharp edges and corners must survive simplification so that it keeps its
+// volume, and simplification must remove faces.
 func TestMeshVolumes(t *testing.T) {
 	const R, r, h = 10.0, 6.0, 25.0
 	frustum := must[*sdf.Cone](t)(sdf.NewCone(h, R, r))
 	torusProf := must[*sdf.Circle](t)(sdf.NewCircle(geom.Vec2{X: 8}, 3))
 	torus := must[*sdf.Revolve](t)(sdf.NewRevolve(torusProf))
 	twoBalls := must[sdf.SDF3](t)(sdf.Union(0, sphere(t, geom.Vec3{}, 4), sphere(t, geom.Vec3{X: 12}, 4)))
+	box := must[*sdf.Box](t)(sdf.NewBox(geom.Vec3{X: 20, Y: 10, Z: 5}))
 	cases := []struct {
 		name   string
 		s      sdf.SDF3
@@ -49,23 +54,33 @@ func TestMeshVolumes(t *testing.T) {
 		{"torus", torus, 2 * math.Pi * 8 * math.Pi * 9, 0.005, 1, 1},
 		// Source: sphere volume 4πr³/3, twice.
 		{"two spheres", twoBalls, 2 * 4 * math.Pi * 64 / 3, 0.005, 2, 0},
+		// Source: box volume, length × width × height.
+		{"box", box, 20 * 10 * 5, 0.005, 1, 0},
 	}
 	for _, c := range cases {
-		t.Run(c.name, func(t *testing.T) {
-			m, err := Mesh(c.s, MeshOptions{})
-			if err != nil {
-				t.Fatal(err)
-			}
-			rep, err := CheckMesh(m, CheckOptions{Components: c.parts, Genus: c.genus, SDF: c.s, Tolerance: DefaultTolerance})
-			if err != nil {
-				t.Fatalf("%v\n%+v", err, rep)
-			}
-			if rel := math.Abs(rep.Volume-c.want) / c.want; rel > c.relTol {
-				t.Errorf("volume %.3f mm³, want %.3f (off by %.3f %%)", rep.Volume, c.want, 100*rel)
-			}
-			t.Logf("%d faces, volume off by %.4f %%, vertex %.5f mm, centroid %.5f mm", rep.Faces,
-				100*math.Abs(rep.Volume-c.want)/c.want, rep.MaxVertexDist, rep.MaxCentroidDist)
-		})
+		plainFaces := 0
+		for _, simplify := range []bool{false, true} {
+			t.Run(fmt.Sprintf("%s simplified %v", c.name, simplify), func(t *testing.T) {
+				m, err := Mesh(c.s, MeshOptions{Simplify: simplify})
+				if err != nil {
+					t.Fatal(err)
+				}
+				rep, err := CheckMesh(m, CheckOptions{Components: c.parts, Genus: c.genus, SDF: c.s, Tolerance: DefaultTolerance})
+				if err != nil {
+					t.Fatalf("%v\n%+v", err, rep)
+				}
+				if rel := math.Abs(rep.Volume-c.want) / c.want; rel > c.relTol {
+					t.Errorf("volume %.3f mm³, want %.3f (off by %.3f %%)", rep.Volume, c.want, 100*rel)
+				}
+				if !simplify {
+					plainFaces = len(m.Faces)
+				} else if len(m.Faces) >= plainFaces {
+					t.Errorf("%d faces simplified from %d", len(m.Faces), plainFaces)
+				}
+				t.Logf("%d faces, volume off by %.4f %%, vertex %.5f mm, centroid %.5f mm", rep.Faces,
+					100*math.Abs(rep.Volume-c.want)/c.want, rep.MaxVertexDist, rep.MaxCentroidDist)
+			})
+		}
 	}
 }
 

@@ -6,22 +6,8 @@ import (
 	"testing"
 )
 
-const formerBase = `kit = "Test Kit"
-frequency_mhz = 5800.0
-[coil]
-shape = "conical"
-turns = 5.0
-hand = "RHCP"
-base_diameter_mm = 17.5
-top_diameter_mm = 12.5
-pitch_angle_deg = 13.0
-[wire]
-material = "copper-annealed"
-diameter_mm = 1.6
-`
-
 func TestFormerDefaults(t *testing.T) {
-	s, err := ParseSpec([]byte(formerBase))
+	s, err := ParseSpec([]byte(base))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -45,7 +31,7 @@ func TestFormerErrors(t *testing.T) {
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
-			_, err := ParseSpec([]byte(formerBase + c.extra))
+			_, err := ParseSpec([]byte(base + c.extra))
 			var se *SpecError
 			if !errors.As(err, &se) || !strings.Contains(err.Error(), c.key) {
 				t.Fatalf("got %v, want an error on %s", err, c.key)
@@ -62,7 +48,7 @@ func TestFormerErrors(t *testing.T) {
 func TestFormerGrooveNeedsSpacing(t *testing.T) {
 	// 3 mm wire with 0.2 mm clearance: groove radius 1.6 mm needs
 	// max(1.6·(1 + √2) + 0.8, 3.5·1.6) = 5.6 mm of spacing; 4.5 mm is short.
-	spec := strings.Replace(formerBase, "pitch_angle_deg = 13.0", "spacing_mm = 4.5", 1)
+	spec := strings.Replace(base, "pitch_angle_deg = 13.0", "spacing_mm = 4.5", 1)
 	spec = strings.Replace(spec, "diameter_mm = 1.6", "diameter_mm = 3.0", 1)
 	_, err := ParseSpec([]byte(spec))
 	if err == nil || !strings.Contains(err.Error(), "coil.spacing_mm") || !strings.Contains(err.Error(), "groove") {
