@@ -370,8 +370,9 @@ func TestSpringoutOrdering(t *testing.T) {
 	//   phosphor bronze spring (750 MPa)    +2.61 mm
 	// Common practice (no published source): stiff brass wire wound on such
 	// a former springs out by up to about 2 mm. The model agrees for the
-	// brasses. The domain note's far larger spring-out (C26000 half-hard,
-	// d = 1.0 mm, 19.555 → 26.68 mm radius) is the same physics: the
+	// brasses. The far larger spring-out of the round-wire worked check
+	// above (C26000 half-hard, d = 1.0 mm, 19.555 → 26.68 mm radius) is
+	// the same physics: the
 	// curvature lost is nearly independent of the radius,
 	// Δ(1/R) ≈ 32σy/(3πE·d), so the growth in radius scales with R²/d and
 	// is about 5 times larger there (R/d about 20 instead of 5).
