@@ -33,6 +33,21 @@ type buildContext struct {
 	spec    *loadedSpec
 	out     *cam.Output
 	created time.Time
+
+	parts    []cutPart // the flat parts, worked out once by cutParts
+	partsErr error
+	partsSet bool
+}
+
+// cutParts returns the flat parts with their kerf offsets and nests,
+// working them out on first use: the report, the pattern files and the
+// build sheet all need them.
+func (ctx *buildContext) cutParts() ([]cutPart, error) {
+	if !ctx.partsSet {
+		ctx.parts, ctx.partsErr = cutParts(ctx.spec.Design)
+		ctx.partsSet = true
+	}
+	return ctx.parts, ctx.partsErr
 }
 
 // outputStep writes one group of outputs. Each step lives in its own

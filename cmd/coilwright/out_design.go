@@ -25,7 +25,7 @@ var reportFuncs = template.FuncMap{
 // writeDesign writes design.md and design.json.
 func writeDesign(ctx *buildContext) error {
 	r := ctx.spec.Design.Report()
-	if err := addPanels(ctx.spec.Design, &r); err != nil {
+	if err := addPanels(ctx, &r); err != nil {
 		return err
 	}
 	if err := ctx.out.Add("design.json", func(w io.Writer) error {

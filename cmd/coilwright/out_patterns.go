@@ -93,8 +93,9 @@ func (c cutPart) panelReport(quantity int) *parts.PanelReport {
 }
 
 // addPanels puts each part's nesting figures into the report.
-func addPanels(d *parts.Design, r *parts.Report) error {
-	cps, err := cutParts(d)
+func addPanels(ctx *buildContext, r *parts.Report) error {
+	d := ctx.spec.Design
+	cps, err := ctx.cutParts()
 	if err != nil {
 		return err
 	}
@@ -114,7 +115,7 @@ func addPanels(d *parts.Design, r *parts.Report) error {
 func writePatterns(ctx *buildContext) error {
 	d := ctx.spec.Design
 	s := d.Spec
-	cps, err := cutParts(d)
+	cps, err := ctx.cutParts()
 	if err != nil {
 		return err
 	}

@@ -45,7 +45,7 @@ func writeSheet(ctx *buildContext) error {
 	if err := ctx.out.Add("cutlist.md", func(w io.Writer) error { return cutlistTmpl.Execute(w, view) }); err != nil {
 		return err
 	}
-	cps, err := cutParts(d)
+	cps, err := ctx.cutParts()
 	if err != nil {
 		return err
 	}
