@@ -20,10 +20,11 @@ import (
 
 // buildOptions are the flags of `coilwright build`.
 type buildOptions struct {
-	outDir string
-	force  bool
-	demo   string
-	json   bool
+	outDir   string
+	force    bool
+	demo     string
+	json     bool
+	progress io.Writer // step names go here as they start; nil for none
 }
 
 // buildContext is what every output step sees: the loaded spec and design,
@@ -91,6 +92,7 @@ not make, unless --force is given.`,
 			if path == "" && o.demo == "" {
 				o.demo = templates.DefaultDemo
 			}
+			o.progress = terminal(cmd.ErrOrStderr())
 			return runBuild(cmd.OutOrStdout(), path, o)
 		},
 	}
@@ -123,6 +125,9 @@ func runBuild(w io.Writer, path string, o buildOptions) error {
 	}
 	ctx := &buildContext{spec: l, out: out, created: created}
 	for _, s := range buildSteps() {
+		if o.progress != nil {
+			fmt.Fprintf(o.progress, "coilwright: %s…\n", s.name)
+		}
 		if err := s.write(ctx); err != nil {
 			out.Abort()
 			var se *parts.SpecError
@@ -148,6 +153,19 @@ func runBuild(w io.Writer, path string, o buildOptions) error {
 		fmt.Fprintf(w, "  %-24s %9d bytes\n", f.Name, f.Size)
 	}
 	return nil
+}
+
+// terminal returns w when it is a terminal, for progress lines, and nil
+// otherwise, so pipes, files and tests get no progress noise.
+func terminal(w io.Writer) io.Writer {
+	f, ok := w.(*os.File)
+	if !ok {
+		return nil
+	}
+	if fi, err := f.Stat(); err != nil || fi.Mode()&os.ModeCharDevice == 0 {
+		return nil
+	}
+	return w
 }
 
 // slug turns a kit name into a folder name: lower case letters, digits and
