@@ -12,10 +12,7 @@ import (
 func demoSheet(t *testing.T, name string) (*Design, *BuildSheet) {
 	t.Helper()
 	d := demoDesign(t, name, nil)
-	cl, err := NewCutList(d)
-	if err != nil {
-		t.Fatal(err)
-	}
+	cl := mustCutList(t, d)
 	return d, NewBuildSheet(d, cl, strings.Repeat("ab", 32))
 }
 
@@ -136,10 +133,7 @@ func TestHandWordsFollowTheCoil(t *testing.T) {
 
 func TestMaterialCautionsReachStepOne(t *testing.T) {
 	d := demoDesign(t, templates.DefaultDemo, nil)
-	cl, err := NewCutList(d)
-	if err != nil {
-		t.Fatal(err)
-	}
+	cl := mustCutList(t, d)
 	d.Wire.Material.Cautions = []Caution{CautionStripEnamel}
 	b := NewBuildSheet(d, cl, strings.Repeat("0", 64))
 	if !strings.Contains(strings.Join(b.Steps[0].Text, " "), CautionStripEnamel.Text()) {

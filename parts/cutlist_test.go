@@ -23,14 +23,21 @@ func demoDesign(t *testing.T, name string, edit func(string) string) *Design {
 	return mustDesign(t, text)
 }
 
+// mustCutList works out d's cut list or fails t.
+func mustCutList(t *testing.T, d *Design) *CutList {
+	t.Helper()
+	cl, err := NewCutList(d)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return cl
+}
+
 func TestWireBlankIsArcPlusAllowances(t *testing.T) {
 	for _, name := range templates.Demos() {
 		t.Run(name, func(t *testing.T) {
 			d := demoDesign(t, name, nil)
-			cl, err := NewCutList(d)
-			if err != nil {
-				t.Fatal(err)
-			}
+			cl := mustCutList(t, d)
 			w := cl.Wire
 			// Source: gonum adaptive quadrature of |dP/dφ| along the
 			// coil's own Point function, independent of the closed form.
@@ -65,10 +72,7 @@ func TestConicalBlankFitsShortRod(t *testing.T) {
 	if d.Spec.FrequencyMHz != 5800 || d.Coil.Turns != 5 || d.Spec.Wire.DiameterMM != 1.6 {
 		t.Fatal("the 5.8 GHz demo no longer matches this check")
 	}
-	cl, err := NewCutList(d)
-	if err != nil {
-		t.Fatal(err)
-	}
+	cl := mustCutList(t, d)
 	if need := cl.Wire.LengthMM + d.Spec.Stock.EndTrimMM + d.Spec.Stock.WireKerfMM; need > 300 {
 		t.Errorf("blank %.1f mm plus end trim and kerf needs %.1f mm, more than a 300 mm rod", cl.Wire.LengthMM, need)
 	}
@@ -91,10 +95,7 @@ func TestDowelFitsSmallestTurn(t *testing.T) {
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
 			d := demoDesign(t, "demo-5g8-cone.toml", c.edit)
-			cl, err := NewCutList(d)
-			if err != nil {
-				t.Fatal(err)
-			}
+			cl := mustCutList(t, d)
 			// The smallest inside diameter found by sampling the path.
 			inner := math.Inf(1)
 			for i := 0; i <= 10000; i++ {
@@ -151,10 +152,7 @@ func TestCoaxStripAndSleeve(t *testing.T) {
 	for _, name := range templates.Demos() {
 		t.Run(name, func(t *testing.T) {
 			d := demoDesign(t, name, nil)
-			cl, err := NewCutList(d)
-			if err != nil {
-				t.Fatal(err)
-			}
+			cl := mustCutList(t, d)
 			cx := cl.Coax
 			if math.Abs(cx.CutMM-(cx.FinishedMM+cx.ThroughMM+cx.ProudMM+cx.CentreMM)) > cutTol {
 				t.Errorf("cut %.2f mm is not finished + through + proud + centre", cx.CutMM)
@@ -198,10 +196,7 @@ func TestWoodDowelWarns(t *testing.T) {
 	d := demoDesign(t, "demo-5g8-cone.toml", func(s string) string {
 		return strings.Replace(s, `material = "ptfe"`, `material = "wood"`, 1)
 	})
-	cl, err := NewCutList(d)
-	if err != nil {
-		t.Fatal(err)
-	}
+	cl := mustCutList(t, d)
 	found := false
 	for _, w := range cl.Warnings {
 		found = found || w.Code == "wood-dowel" && strings.Contains(w.Message, "water")
@@ -215,10 +210,7 @@ func TestPanelJackMakesAJumper(t *testing.T) {
 	d := demoDesign(t, "demo-5g8-cone.toml", func(s string) string {
 		return strings.Replace(s, "[reflector]", "[reflector]\nconnector = \"sma-bulkhead\"", 1)
 	})
-	cl, err := NewCutList(d)
-	if err != nil {
-		t.Fatal(err)
-	}
+	cl := mustCutList(t, d)
 	cx := cl.Coax
 	if cx.Jack != "sma-bulkhead" || cx.CutMM != cx.FinishedMM || cx.DielectricMM != 0 || cx.FlareMM != 0 {
 		t.Errorf("jack feed cut as %+v, want a plain jumper", cx)
