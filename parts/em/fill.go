@@ -1,0 +1,175 @@
+package em
+
+// Filling the impedance matrix. Segment pairs (p, q ≥ p) are integrated in
+// parallel a block of test segments at a time into pre-indexed storage;
+// one goroutine then scatters each pair's moments into the basis functions
+// that live on p and q, in a fixed order, so the matrix is the same bit for
+// bit on any number of cores and exactly symmetric.
+//
+// Z_mn = jωμ ∫∫ f_m·f_n G − (j/ωε) ∫∫ (∇·f_m)(∇·f_n) G (+ surface impedance
+// on the diagonal blocks), plus, over a ground plane, the same with the
+// source mirrored and negated (image current: horizontal part reversed,
+// vertical part kept; image charge negated).
+// Source: Harrington 1968 ch. 4; Balanis ch. 8; EM.md §2.
+
+import (
+	"math"
+	"math/cmplx"
+
+	"coilwright/cam/geom"
+)
+
+// Physical constants (SI). Source: CODATA 2018 (c exact; μ0 measured).
+const (
+	c0   = 299792458.0
+	mu0  = 1.25663706212e-6
+	eps0 = 1 / (mu0 * c0 * c0)
+	eta0 = mu0 * c0
+)
+
+const fillBlock = 32
+
+// fill writes the n×n impedance matrix at angular frequency omega into z
+// (row-major, overwritten).
+func (m *Mesh) fill(z []complex128, omega float64) {
+	n := m.nBasis
+	clear(z[:n*n])
+	k := omega / c0
+	ns := len(m.segs)
+	vec := complex(0, omega*mu0)
+	sca := complex(0, -1/(omega*eps0))
+	direct := make([]moments, fillBlock*ns)
+	var image []moments
+	if m.ground {
+		image = make([]moments, fillBlock*ns)
+	}
+	for p0 := 0; p0 < ns; p0 += fillBlock {
+		p1 := min(p0+fillBlock, ns)
+		parallelFor(p1-p0, func(i int) {
+			p := p0 + i
+			m.row(direct[i*ns:(i+1)*ns], p, m.segs, &m.near, k)
+			if m.ground {
+				m.row(image[i*ns:(i+1)*ns], p, m.img, &m.nearImg, k)
+			}
+		})
+		for p := p0; p < p1; p++ {
+			i := p - p0
+			for q := p; q < ns; q++ {
+				m.scatter(z, p, q, direct[i*ns+q], m.segs[q].t, 1, vec, sca)
+				if m.ground {
+					m.scatter(z, p, q, image[i*ns+q], m.img[q].t, -1, vec, sca)
+				}
+			}
+			if s := m.segs[p]; s.sigma > 0 {
+				m.addLoss(z, p, omega)
+			}
+		}
+	}
+}
+
+// row integrates test segment p against sources src[q], q ≥ p, into out[q].
+func (m *Mesh) row(out []moments, p int, src []segment, near *pairList, k float64) {
+	sp := &m.segs[p]
+	ni := near.start[p]
+	for q := p; q < len(src); q++ {
+		sq := &src[q]
+		a2 := pairA2(sp, sq)
+		if ni < near.start[p+1] && near.q[ni] == q {
+			st := &near.st[ni]
+			r := remainderPair(sp, sq, a2, k, &m.rules.rem)
+			h := 0.5 * k * k
+			for j := range 4 {
+				r[j] += complex(st[j]-h*st[4+j], 0)
+			}
+			out[q] = r
+			ni++
+			continue
+		}
+		sep := separation(sp, sq)
+		ru := &m.rules.far[0]
+		for j := 2; j > 0; j-- {
+			if sep >= m.rules.farRatio[j] {
+				ru = &m.rules.far[j]
+				break
+			}
+		}
+		out[q] = farPair(sp, sq, a2, k, ru)
+	}
+}
+
+// scatter adds one pair's contribution to z: sign is +1 for the direct
+// source and −1 for its image; tq is the source segment's direction and
+// pi4 the Green's function's 1/(4π) is applied here.
+func (m *Mesh) scatter(z []complex128, p, q int, mo moments, tq geom.Vec3, sign float64, vec, sca complex128) {
+	n := m.nBasis
+	sp, sq := &m.segs[p], &m.segs[q]
+	for j := range mo {
+		mo[j] *= complex(sign/(4*math.Pi), 0)
+	}
+	lp, lq := sp.l, sq.l
+	var shape [2][2]complex128 // [rising on p][rising on q]
+	shape[1][1] = mo[3] / complex(lp*lq, 0)
+	shape[1][0] = (mo[1] - mo[3]/complex(lq, 0)) / complex(lp, 0)
+	shape[0][1] = (mo[2] - mo[3]/complex(lp, 0)) / complex(lq, 0)
+	shape[0][0] = mo[0] - mo[1]/complex(lp, 0) - mo[2]/complex(lq, 0) + mo[3]/complex(lp*lq, 0)
+	v := vec * complex(sp.t.Dot(tq), 0)
+	s := sca * mo[0] / complex(lp*lq, 0)
+	for _, h := range m.halves[p] {
+		for _, g := range m.halves[q] {
+			ds := s
+			if h.rising != g.rising {
+				ds = -s
+			}
+			val := complex(h.sign*g.sign, 0) * (v*shape[b2i(h.rising)][b2i(g.rising)] + ds)
+			z[h.basis*n+g.basis] += val
+			if p != q {
+				z[g.basis*n+h.basis] += val
+			}
+		}
+	}
+}
+
+// addLoss adds the surface-impedance term ∫ f_m·f_n Z_s/(2πa) ds of segment
+// p, Z_s = (1 + j)√(ωμ0/(2σ)).
+// Source: skin-effect surface impedance of a good conductor, e.g. Balanis
+// ch. 2 (loss resistance of a wire); EM.md §2.
+func (m *Mesh) addLoss(z []complex128, p int, omega float64) {
+	n := m.nBasis
+	sp := &m.segs[p]
+	rs := math.Sqrt(omega * mu0 / (2 * sp.sigma))
+	zl := complex(rs, rs) / complex(2*math.Pi*sp.a, 0)
+	for _, h := range m.halves[p] {
+		for _, g := range m.halves[p] {
+			w := sp.l / 6
+			if h.rising == g.rising {
+				w = sp.l / 3
+			}
+			z[h.basis*n+g.basis] += complex(h.sign*g.sign*w, 0) * zl
+		}
+	}
+}
+
+func b2i(b bool) int {
+	if b {
+		return 1
+	}
+	return 0
+}
+
+// lossPower returns ½ Σ ∫ |I|² Re(Z_s)/(2πa) ds over all lossy segments,
+// from the segment end currents (A), in watts.
+func (m *Mesh) lossPower(ends [][2]complex128, omega float64) float64 {
+	var p float64
+	for i, s := range m.segs {
+		if s.sigma <= 0 {
+			continue
+		}
+		rs := math.Sqrt(omega * mu0 / (2 * s.sigma))
+		i0, i1 := ends[i][0], ends[i][1]
+		sq := (abs2(i0) + abs2(i1) + real(i0*cmplx.Conj(i1))) * s.l / 3
+		p += 0.5 * rs / (2 * math.Pi * s.a) * sq
+	}
+	return p
+}
+
+func abs2(c complex128) float64 { return real(c)*real(c) + imag(c)*imag(c) }

@@ -1,0 +1,205 @@
+package em
+
+// Segment-pair integrals of the reduced kernel.
+//
+// For a test segment p (ξ ∈ [0, lp]) and a source segment q (ξ′ ∈ [0, lq])
+// every function here returns the four moments
+//
+//	M0 = ∫∫ g,  M1 = ∫∫ ξ g,  M2 = ∫∫ ξ′ g,  M3 = ∫∫ ξ ξ′ g
+//
+// of a kernel g(R), R = √(|r − r′|² + a²), from which the products of the
+// rising (ξ/l) and falling (1 − ξ/l) halves of triangle functions follow.
+// Far pairs integrate e^{−jkR}/R by Gauss–Legendre on both segments. Near
+// pairs split e^{−jkR}/R = 1/R − k²R/2 + rem(R): the two static terms are
+// integrated in closed form along q and by tanh-sinh quadrature along p,
+// once per geometry; the smooth remainder by Gauss–Legendre per frequency.
+// Source: W. C. Gibson, The Method of Moments in Electromagnetics, thin-wire
+// chapter (reduced kernel and singularity extraction); the closed forms are
+// the elementary integrals of 1/√(x²+ρ²) and √(x²+ρ²).
+
+import (
+	"math"
+	"sort"
+
+	"coilwright/cam/geom"
+)
+
+// segment is one straight piece of wire, in metres.
+type segment struct {
+	p0, p1 geom.Vec3 // ends
+	t      geom.Vec3 // unit direction p0 → p1
+	c      geom.Vec3 // midpoint
+	l      float64   // length
+	a      float64   // radius
+	sigma  float64   // conductivity S/m; 0 means perfect
+	wire   int       // index into Model.Wires
+	piece  int       // polyline piece index within that wire
+}
+
+func newSegment(p0, p1 geom.Vec3, a float64) segment {
+	d := p1.Sub(p0)
+	l := d.Len()
+	return segment{p0: p0, p1: p1, t: d.Scale(1 / l), c: p0.Add(p1).Scale(0.5), l: l, a: a}
+}
+
+// mirror returns the segment reflected in the plane z = 0 (same parameter
+// direction, mirrored points).
+func (s segment) mirror() segment {
+	m := s
+	m.p0.Z, m.p1.Z, m.t.Z, m.c.Z = -s.p0.Z, -s.p1.Z, -s.t.Z, -s.c.Z
+	return m
+}
+
+// moments holds M0..M3 of a complex kernel.
+type moments [4]complex128
+
+// staticMoments holds the moments of 1/R (first four) and R (last four).
+type staticMoments [8]float64
+
+// pairA2 is the squared reduced-kernel radius for a pair: the mean of the
+// squared radii, symmetric in p and q so the matrix stays symmetric.
+func pairA2(p, q *segment) float64 { return 0.5 * (p.a*p.a + q.a*q.a) }
+
+// separation returns a lower bound on the distance between two segments
+// divided by the longer length.
+func separation(p, q *segment) float64 {
+	d := p.c.Sub(q.c).Len() - 0.5*(p.l+q.l)
+	return d / max(p.l, q.l)
+}
+
+// farPair integrates e^{−jkR}/R with the Gauss–Legendre rule r on both
+// segments.
+func farPair(p, q *segment, a2, k float64, r *rule) moments {
+	var m moments
+	n := len(r.X)
+	for i := range n {
+		xi := r.X[i] * p.l
+		ri := p.p0.Add(p.t.Scale(xi))
+		wi := r.W[i] * p.l
+		var s0, s2 complex128
+		for j := range n {
+			xj := r.X[j] * q.l
+			d := ri.Sub(q.p0.Add(q.t.Scale(xj)))
+			R := math.Sqrt(d.Dot(d) + a2)
+			sn, cs := math.Sincos(k * R)
+			g := complex(cs/R, -sn/R) * complex(r.W[j]*q.l, 0)
+			s0 += g
+			s2 += g * complex(xj, 0)
+		}
+		w := complex(wi, 0)
+		m[0] += w * s0
+		m[1] += w * complex(xi, 0) * s0
+		m[2] += w * s2
+		m[3] += w * complex(xi, 0) * s2
+	}
+	return m
+}
+
+// remainderPair integrates rem(R) = (e^{−jkR} − 1)/R + k²R/2 with the
+// Gauss–Legendre rule r on both segments.
+func remainderPair(p, q *segment, a2, k float64, r *rule) moments {
+	var m moments
+	n := len(r.X)
+	h := 0.5 * k * k
+	for i := range n {
+		xi := r.X[i] * p.l
+		ri := p.p0.Add(p.t.Scale(xi))
+		wi := r.W[i] * p.l
+		var s0, s2 complex128
+		for j := range n {
+			xj := r.X[j] * q.l
+			d := ri.Sub(q.p0.Add(q.t.Scale(xj)))
+			R := math.Sqrt(d.Dot(d) + a2)
+			sn, _ := math.Sincos(k * R)
+			half := math.Sin(0.5 * k * R)
+			// (cos kR − 1)/R + k²R/2 written without cancellation of the
+			// leading terms.
+			re := (-2*half*half)/R + h*R
+			g := complex(re, -sn/R) * complex(r.W[j]*q.l, 0)
+			s0 += g
+			s2 += g * complex(xj, 0)
+		}
+		w := complex(wi, 0)
+		m[0] += w * s0
+		m[1] += w * complex(xi, 0) * s0
+		m[2] += w * s2
+		m[3] += w * complex(xi, 0) * s2
+	}
+	return m
+}
+
+// staticPair integrates 1/R and R: in closed form along q, by the
+// tanh-sinh rule de along p, split where the integrand has its sharp
+// features (the projections of q's ends and the closest approach).
+func staticPair(p, q *segment, a2 float64, de *rule) staticMoments {
+	var out staticMoments
+	brk := []float64{0, p.l}
+	for _, x := range []float64{q.p0.Sub(p.p0).Dot(p.t), q.p1.Sub(p.p0).Dot(p.t), closestOnP(p, q)} {
+		if x > 1e-6*p.l && x < p.l*(1-1e-6) {
+			brk = append(brk, x)
+		}
+	}
+	sort.Float64s(brk)
+	for b := 0; b+1 < len(brk); b++ {
+		u0, u1 := brk[b], brk[b+1]
+		if u1-u0 < 1e-9*p.l {
+			continue
+		}
+		for i, x := range de.X {
+			xi := u0 + (u1-u0)*x
+			w := de.W[i] * (u1 - u0)
+			d := p.p0.Add(p.t.Scale(xi)).Sub(q.p0)
+			s0 := d.Dot(q.t)
+			rho2 := max(d.Dot(d)-s0*s0, 0) + a2
+			rho := math.Sqrt(rho2)
+			x1, x2 := -s0, q.l-s0
+			R1 := math.Sqrt(x1*x1 + rho2)
+			R2 := math.Sqrt(x2*x2 + rho2)
+			var i0 float64
+			if x1 < 0 && x2 < 0 {
+				i0 = math.Asinh(-x1/rho) - math.Asinh(-x2/rho)
+			} else {
+				i0 = math.Asinh(x2/rho) - math.Asinh(x1/rho)
+			}
+			i1 := (R2 - R1) + s0*i0
+			j0 := 0.5 * (x2*R2 - x1*R1 + rho2*i0)
+			j1 := (R2*R2*R2-R1*R1*R1)/3 + s0*j0
+			out[0] += w * i0
+			out[1] += w * xi * i0
+			out[2] += w * i1
+			out[3] += w * xi * i1
+			out[4] += w * j0
+			out[5] += w * xi * j0
+			out[6] += w * j1
+			out[7] += w * xi * j1
+		}
+	}
+	return out
+}
+
+// closestOnP returns the parameter on p (0..p.l) of the point closest to
+// segment q. Source: C. Ericson, Real-Time Collision Detection, 2005, §5.1.9.
+func closestOnP(p, q *segment) float64 {
+	d1 := p.p1.Sub(p.p0)
+	d2 := q.p1.Sub(q.p0)
+	r := p.p0.Sub(q.p0)
+	a, e, f := d1.Dot(d1), d2.Dot(d2), d2.Dot(r)
+	c, b := d1.Dot(r), d1.Dot(d2)
+	den := a*e - b*b
+	s := 0.0
+	if den > 1e-12*a*e {
+		s = clamp01((b*f - c*e) / den)
+	}
+	t := (b*s + f) / e
+	if t < 0 {
+		s = clamp01(-c / a)
+	} else if t > 1 {
+		s = clamp01((b - c) / a)
+	}
+	return s * p.l
+}
+
+func clamp01(x float64) float64 { return min(max(x, 0), 1) }
+
+// transpose returns the moments of the pair with p and q swapped.
+func (m moments) transpose() moments { return moments{m[0], m[2], m[1], m[3]} }

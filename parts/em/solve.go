@@ -1,0 +1,119 @@
+package em
+
+import (
+	"math"
+	"math/cmplx"
+)
+
+// singularPivot is the pivot size, relative to the largest matrix entry,
+// below which the impedance matrix counts as singular.
+const singularPivot = 1e-9
+
+// Solution is the current distribution at one frequency and what follows
+// from it. It keeps a reference to its Mesh for far-field work.
+type Solution struct {
+	// Frequency in hertz.
+	Frequency float64
+	// Impedance is the input impedance at the feed, ohms.
+	Impedance complex128
+	// Voltage is the feed's gap voltage, volts.
+	Voltage complex128
+	// FeedCurrent is the current through the gap along the fed wire, amperes.
+	FeedCurrent complex128
+	// Coefficients are the basis-function amplitudes, amperes.
+	Coefficients []complex128
+
+	mesh  *Mesh
+	omega float64
+	ends  [][2]complex128 // current at each segment's start and end, along t
+}
+
+// Solve fills and solves the moment-method system at freq (Hz). It
+// returns a *FrequencyError, *SingularMatrixError or *NotFiniteError on
+// failure.
+func (m *Mesh) Solve(freq float64) (*Solution, error) {
+	z := make([]complex128, m.nBasis*m.nBasis)
+	return m.solve(freq, z, make([]int, m.nBasis))
+}
+
+// Sweep solves at each frequency (Hz) in turn, reusing one matrix buffer.
+// Each frequency's fill and factorisation run in parallel.
+func (m *Mesh) Sweep(freqs []float64) ([]*Solution, error) {
+	z := make([]complex128, m.nBasis*m.nBasis)
+	piv := make([]int, m.nBasis)
+	out := make([]*Solution, len(freqs))
+	for i, f := range freqs {
+		s, err := m.solve(f, z, piv)
+		if err != nil {
+			return nil, err
+		}
+		out[i] = s
+	}
+	return out, nil
+}
+
+// matrix returns the impedance matrix at freq (Hz), row-major n×n. It is
+// for checks (symmetry, reciprocity); Solve does not keep it.
+func (m *Mesh) matrix(freq float64) []complex128 {
+	z := make([]complex128, m.nBasis*m.nBasis)
+	m.fill(z, 2*math.Pi*freq)
+	return z
+}
+
+func (m *Mesh) solve(freq float64, z []complex128, piv []int) (*Solution, error) {
+	if !(freq > 0) || math.IsInf(freq, 0) {
+		return nil, &FrequencyError{Value: freq}
+	}
+	n := m.nBasis
+	omega := 2 * math.Pi * freq
+	m.fill(z, omega)
+	scale := 0.0
+	for _, v := range z[:n*n] {
+		if c := cabs1(v); c > scale || math.IsNaN(c) {
+			scale = c
+		}
+	}
+	if math.IsNaN(scale) || math.IsInf(scale, 0) {
+		return nil, &NotFiniteError{Frequency: freq, Quantity: "impedance matrix"}
+	}
+	if col := luFactor(z, n, piv, singularPivot*scale); col >= 0 {
+		return nil, &SingularMatrixError{Frequency: freq, Column: col}
+	}
+	x := make([]complex128, n)
+	gw := m.gapWeights()
+	for _, g := range gw {
+		x[g.basis] = m.voltage * complex(g.w, 0)
+	}
+	luSolve(z, n, piv, x)
+	var iGap complex128
+	for _, g := range gw {
+		iGap += x[g.basis] * complex(g.w, 0)
+	}
+	s := &Solution{Frequency: freq, Voltage: m.voltage, FeedCurrent: iGap, Coefficients: x, mesh: m, omega: omega}
+	s.Impedance = m.voltage / iGap
+	if cmplx.IsNaN(s.Impedance) || cmplx.IsInf(s.Impedance) {
+		return nil, &NotFiniteError{Frequency: freq, Quantity: "input impedance"}
+	}
+	s.ends = make([][2]complex128, len(m.segs))
+	for p, hs := range m.halves {
+		for _, h := range hs {
+			s.ends[p][b2i(h.rising)] += complex(h.sign, 0) * x[h.basis]
+		}
+	}
+	return s, nil
+}
+
+// InputPower returns ½ Re(V I*) at the feed, watts.
+func (s *Solution) InputPower() float64 {
+	return 0.5 * real(s.Voltage*cmplx.Conj(s.FeedCurrent))
+}
+
+// LossPower returns the power dissipated in the wires' conductivity,
+// watts, from the surface-impedance model.
+func (s *Solution) LossPower() float64 { return s.mesh.lossPower(s.ends, s.omega) }
+
+// Efficiency returns the radiation efficiency 1 − P_loss/P_in (0..1).
+func (s *Solution) Efficiency() float64 { return 1 - s.LossPower()/s.InputPower() }
+
+// Wavenumber returns k = ω/c in rad/m.
+func (s *Solution) Wavenumber() float64 { return s.omega / c0 }
