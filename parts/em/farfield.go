@@ -82,7 +82,7 @@ func (s *Solution) Field(d Direction) FarField {
 	if m.ground && d.Theta > math.Pi/2+1e-12 {
 		return FarField{}
 	}
-	r, th, ph := d.unit()
+	r, _, _ := d.unit()
 	k := s.omega / c0
 	var vx, vy, vz complex128
 	accumulate := func(sg *segment, i0, i1 complex128, t geom.Vec3) {
@@ -103,8 +103,15 @@ func (s *Solution) Field(d Direction) FarField {
 		}
 	}
 	f := complex(0, -s.omega*mu0/(4*math.Pi))
+	return transverse([3]complex128{f * vx, f * vy, f * vz}, d)
+}
+
+// transverse returns the θ̂ and φ̂ components of the complex vector e in
+// direction d.
+func transverse(e [3]complex128, d Direction) FarField {
+	_, th, ph := d.unit()
 	proj := func(u geom.Vec3) complex128 {
-		return f * (vx*complex(u.X, 0) + vy*complex(u.Y, 0) + vz*complex(u.Z, 0))
+		return e[0]*complex(u.X, 0) + e[1]*complex(u.Y, 0) + e[2]*complex(u.Z, 0)
 	}
 	return FarField{Theta: proj(th), Phi: proj(ph)}
 }
