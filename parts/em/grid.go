@@ -16,8 +16,8 @@ type PlateShape int
 
 const (
 	// Disc is a round plate; Size is its diameter. Its grid is polar: rings
-	// and radial wires, the radials doubling in number outward so no gap
-	// exceeds the spacing.
+	// and radial wires, the radials doubling in number outward to keep the
+	// gaps near the spacing.
 	Disc PlateShape = iota
 	// Square is a square plate with sides parallel to x and y; Size is its
 	// side. Its grid is Cartesian.
@@ -106,12 +106,19 @@ func (g PlateGrid) Wires() ([]Wire, error) {
 		}
 		rings = rings[1:] // the centre is a node, not a ring
 		phi0 := math.Atan2(j.Y, j.X)
-		// Radials per annulus: 8 doubled until the arc gap at the annulus's
-		// outer ring is at most the spacing.
+		// Radials per annulus: 8, doubled until the arc gap at the annulus's
+		// outer ring is at most the spacing, but not so far that the chords
+		// of its inner ring (which carries every radial's foot) would fall
+		// below half the spacing; there the gap may exceed the spacing until
+		// the next ring.
 		m := make([]int, len(rings))
 		n := 8
 		for i, ri := range rings {
-			for 2*math.Pi*ri/float64(n) > s {
+			inner := 0.0
+			if i > 0 {
+				inner = rings[i-1]
+			}
+			for 2*math.Pi*ri/float64(n) > s && (inner == 0 || 2*inner*math.Sin(math.Pi/float64(2*n)) >= s/2) {
 				n *= 2
 			}
 			m[i] = n

@@ -64,14 +64,21 @@ func luFactor(a []complex128, n int, piv []int, tiny float64) int {
 		parallelFor((rows+1)/2, func(t int) {
 			for i := kb + 2*t; i < min(kb+2*t+2, n); i++ {
 				dst := a[i*n+kb : (i+1)*n]
-				for c := k; c < kb; c++ {
-					l := a[i*n+c]
-					if l == 0 {
-						continue
+				c := k
+				for ; c+1 < kb; c += 2 {
+					l0, l1 := a[i*n+c], a[i*n+c+1]
+					s0 := a[c*n+kb : (c+1)*n]
+					s1 := a[(c+1)*n+kb : (c+2)*n]
+					s0, s1 = s0[:len(dst)], s1[:len(dst)]
+					for x := range dst {
+						dst[x] -= l0*s0[x] + l1*s1[x]
 					}
-					src := a[c*n+kb : (c+1)*n]
-					for x, u := range src {
-						dst[x] -= l * u
+				}
+				for ; c < kb; c++ {
+					l := a[i*n+c]
+					src := a[c*n+kb : (c+1)*n][:len(dst)]
+					for x := range dst {
+						dst[x] -= l * src[x]
 					}
 				}
 			}

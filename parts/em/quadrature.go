@@ -66,7 +66,7 @@ func newRules(lvl int) *rules {
 	lvl = max(lvl, 0)
 	add := 4 * lvl
 	r := &rules{
-		far:       [3]rule{legendre(8 + add), legendre(6 + add), legendre(4 + add)},
+		far:       [3]rule{legendre(6 + add), legendre(4 + add), legendre(3 + add)},
 		farRatio:  [3]float64{0, 4, 10},
 		nearRatio: 2 * (1 + 0.5*float64(lvl)),
 		rem:       legendre(6 + add),

@@ -3,6 +3,7 @@ package em
 import (
 	"math"
 	"math/cmplx"
+	"sync"
 )
 
 // singularPivot is the pivot size, relative to the largest matrix entry,
@@ -36,20 +37,33 @@ func (m *Mesh) Solve(freq float64) (*Solution, error) {
 	return m.solve(freq, z, make([]int, m.nBasis))
 }
 
-// Sweep solves at each frequency (Hz) in turn, reusing one matrix buffer.
-// Each frequency's fill and factorisation run in parallel.
+// Sweep solves at each frequency (Hz), GOMAXPROCS frequencies at a time,
+// each worker reusing its own matrix buffer. Results are in the order of
+// freqs and do not depend on the number of cores; the first error in that
+// order is returned.
 func (m *Mesh) Sweep(freqs []float64) ([]*Solution, error) {
-	z := make([]complex128, m.nBasis*m.nBasis)
-	piv := make([]int, m.nBasis)
 	out := make([]*Solution, len(freqs))
-	for i, f := range freqs {
-		s, err := m.solve(f, z, piv)
+	errs := make([]error, len(freqs))
+	pool := sync.Pool{New: func() any {
+		return &buffers{z: make([]complex128, m.nBasis*m.nBasis), piv: make([]int, m.nBasis)}
+	}}
+	parallelFor(len(freqs), func(i int) {
+		b := pool.Get().(*buffers)
+		out[i], errs[i] = m.solve(freqs[i], b.z, b.piv)
+		pool.Put(b)
+	})
+	for _, err := range errs {
 		if err != nil {
 			return nil, err
 		}
-		out[i] = s
 	}
 	return out, nil
+}
+
+// buffers is one worker's matrix storage.
+type buffers struct {
+	z   []complex128
+	piv []int
 }
 
 // matrix returns the impedance matrix at freq (Hz), row-major n×n. It is
