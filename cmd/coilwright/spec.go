@@ -1,35 +1,21 @@
 package main
 
 import (
-	"crypto/sha256"
-	"encoding/hex"
 	"errors"
 	"fmt"
 	"io/fs"
 	"os"
+	"time"
 
+	"coilwright/kit"
 	"coilwright/parts"
 	"coilwright/templates"
 )
 
-// loadedSpec is a validated spec with its origin and the bytes it came from.
-type loadedSpec struct {
-	Name   string // file path, or "demo:NAME" for an embedded demo
-	Bytes  []byte
-	Spec   *parts.Spec
-	Design *parts.Design
-}
-
-// SHA256 returns the hex SHA-256 of the spec's bytes.
-func (l *loadedSpec) SHA256() string {
-	h := sha256.Sum256(l.Bytes)
-	return hex.EncodeToString(h[:])
-}
-
 // loadSpec reads and validates a spec from path, or the named embedded demo
 // when demo is set. Problems in the spec come back as inputError.
-func loadSpec(path, demo string) (*loadedSpec, error) {
-	var l loadedSpec
+func loadSpec(path, demo string) (*kit.Source, error) {
+	var l kit.Source
 	switch {
 	case demo != "" && path != "":
 		return nil, usageError{errors.New("give a spec file or --demo, not both")}
@@ -56,10 +42,19 @@ func loadSpec(path, demo string) (*loadedSpec, error) {
 	if err := attachCalibration(path, s); err != nil {
 		return nil, inputError{l.Name, err}
 	}
-	d, err := parts.NewDesign(s)
-	if err != nil {
+	l.Spec = s
+	return &l, nil
+}
+
+// newKit plans the build of a loaded spec. Problems in the spec, found
+// only once the design and its parts are worked out, come back as
+// inputError naming the spec.
+func newKit(l *kit.Source, created time.Time) (*kit.Kit, error) {
+	k, err := kit.New(*l, kit.Options{Version: Version, Created: created})
+	var se *parts.SpecError
+	var ses parts.SpecErrors
+	if errors.As(err, &se) || errors.As(err, &ses) {
 		return nil, inputError{l.Name, err}
 	}
-	l.Spec, l.Design = s, d
-	return &l, nil
+	return k, err
 }

@@ -1,8 +1,10 @@
-package main
+package kit
 
 import (
 	"fmt"
 	"io"
+
+	"github.com/tdewolff/canvas"
 
 	"coilwright/cam"
 	"coilwright/cam/geom"
@@ -93,13 +95,9 @@ func (c cutPart) panelReport(quantity int) *parts.PanelReport {
 }
 
 // addPanels puts each part's nesting figures into the report.
-func addPanels(ctx *buildContext, r *parts.Report) error {
-	d := ctx.spec.Design
-	cps, err := ctx.cutParts()
-	if err != nil {
-		return err
-	}
-	for _, c := range cps {
+func (k *Kit) addPanels(r *parts.Report) {
+	d := k.Design
+	for _, c := range k.parts {
 		switch {
 		case c.name == "reflector" && r.Reflector != nil:
 			r.Reflector.Panel = c.panelReport(d.Spec.Quantity)
@@ -107,30 +105,23 @@ func addPanels(ctx *buildContext, r *parts.Report) error {
 			r.Wedge.Panel = c.panelReport(d.Spec.Quantity)
 		}
 	}
-	return nil
 }
 
 // writePatterns writes each part's DXF and SVG (kerf compensated), the
 // 1:1 paper templates, and, for a batch, each part's panel files.
-func writePatterns(ctx *buildContext) error {
-	d := ctx.spec.Design
-	s := d.Spec
-	cps, err := ctx.cutParts()
-	if err != nil {
-		return err
-	}
+func (k *Kit) writePatterns(out Sink) error {
+	s := k.Design.Spec
 	version := cam.DXFR12
 	if s.Cutting.DXF == "R2000" {
 		version = cam.DXFR2000
 	}
-	var tparts []cam.TemplatePart
-	for _, c := range cps {
+	for _, c := range k.parts {
 		comments := []string{
-			fmt.Sprintf("coilwright %s: %s, %s", Version, s.Kit, c.title),
+			fmt.Sprintf("coilwright %s: %s, %s", k.opt.Version, s.Kit, c.title),
 			"Units: millimetres. Layer CUT: cut paths; layer MARK: marks, not cut through.",
 			c.label,
 		}
-		if err := writeDrawing(ctx, c.name, c.cut, nil, version, comments); err != nil {
+		if err := writeDrawing(out, c.name, c.cut, nil, version, comments); err != nil {
 			return err
 		}
 		if s.Quantity > 1 {
@@ -138,39 +129,54 @@ func writePatterns(ctx *buildContext) error {
 			pc := append(comments,
 				fmt.Sprintf("Panel: sheet %g x %g mm, origin at its lower-left corner, margin %g mm, spacing %g mm.", c.sheet.Width, c.sheet.Height, c.sheet.Margin, c.sheet.Spacing),
 				fmt.Sprintf("%d parts per sheet; %d sheets for %d parts; this panel holds %d.", c.nest.PerSheet, c.nest.Sheets, s.Quantity, len(c.nest.Placements)))
-			if err := writeDrawing(ctx, "panel-"+c.name, cam.PanelDrawing(c.cut, c.nest), &frame, version, pc); err != nil {
+			if err := writeDrawing(out, "panel-"+c.name, cam.PanelDrawing(c.cut, c.nest), &frame, version, pc); err != nil {
 				return err
 			}
 		}
-		tparts = append(tparts, cam.TemplatePart{Title: c.title, Notes: append(c.notes, c.label), Drawing: c.nominal})
+	}
+	return out.Add("templates.pdf", func(w io.Writer) error {
+		return cam.WritePDF(w, k.templates, cam.PDFOptions{Title: s.Kit + " cutting templates", Creator: k.creator(), Created: k.opt.Created})
+	})
+}
+
+// creator is the PDF creator field: the tool and its version.
+func (k *Kit) creator() string {
+	if k.opt.Version == "" {
+		return "coilwright"
+	}
+	return "coilwright " + k.opt.Version
+}
+
+// templatePages lays out the 1:1 templates once: each part as designed (no
+// kerf) with its notes and label. templates.pdf holds them and the build
+// sheet ends with them.
+func templatePages(d *parts.Design, cps []cutPart) ([]*canvas.Canvas, error) {
+	s := d.Spec
+	tparts := make([]cam.TemplatePart, len(cps))
+	for i, c := range cps {
+		tparts[i] = cam.TemplatePart{Title: c.title, Notes: append(append([]string{}, c.notes...), c.label), Drawing: c.nominal}
 	}
 	paper, err := cam.PageSizeByName(s.Cutting.Paper)
 	if err != nil {
-		return err
+		return nil, err
 	}
 	var warns []string
 	if d.Patterns.LaserHalogen {
 		warns = append(warns, parts.LaserHalogenWarning)
 	}
-	pages, err := cam.TemplatePages(tparts, cam.TemplateOptions{
-		Page: paper, Heading: s.Kit + ": 1:1 cutting templates (" + d.Coil.Hand.String() + ")", Warnings: warns,
-	})
-	if err != nil {
-		return err
-	}
-	return ctx.out.Add("templates.pdf", func(w io.Writer) error {
-		return cam.WritePDF(w, pages, cam.PDFOptions{Title: s.Kit + " cutting templates", Creator: "coilwright " + Version, Created: ctx.created})
+	return cam.TemplatePages(tparts, cam.TemplateOptions{
+		Page: paper, Heading: s.Kit + ": 1:1 templates (" + d.Coil.Hand.String() + "), print at 100 %", Warnings: warns,
 	})
 }
 
 // writeDrawing writes name.dxf and name.svg for one drawing.
-func writeDrawing(ctx *buildContext, name string, d geom.Drawing, frame *geom.Box2, version cam.DXFVersion, comments []string) error {
-	if err := ctx.out.Add(name+".dxf", func(w io.Writer) error {
+func writeDrawing(out Sink, name string, d geom.Drawing, frame *geom.Box2, version cam.DXFVersion, comments []string) error {
+	if err := out.Add(name+".dxf", func(w io.Writer) error {
 		return cam.WriteDXF(w, d, cam.DXFOptions{Version: version, Comments: comments})
 	}); err != nil {
 		return err
 	}
-	return ctx.out.Add(name+".svg", func(w io.Writer) error {
+	return out.Add(name+".svg", func(w io.Writer) error {
 		return cam.WriteSVG(w, d, cam.SVGOptions{Frame: frame, Title: comments[0], Comments: comments[1:]})
 	})
 }

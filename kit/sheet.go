@@ -1,4 +1,4 @@
-package main
+package kit
 
 import (
 	"encoding/csv"
@@ -31,60 +31,40 @@ type cutlistView struct {
 
 // writeSheet writes the cut list, the batch plan (more than one kit) and
 // the build sheet.
-func writeSheet(ctx *buildContext) error {
-	d := ctx.spec.Design
-	cl, err := parts.NewCutList(d)
-	if err != nil {
-		return err
-	}
+func (k *Kit) writeSheet(out Sink) error {
+	d, cl := k.Design, k.cutList
 	rows := cl.Rows()
-	if err := ctx.out.Add("cutlist.csv", func(w io.Writer) error { return writeCutCSV(w, rows) }); err != nil {
+	if err := out.Add("cutlist.csv", func(w io.Writer) error { return writeCutCSV(w, rows) }); err != nil {
 		return err
 	}
-	view := cutlistView{CutList: cl, Kit: d.Spec.Kit, SpecSHA256: ctx.spec.SHA256(), Rows: rows}
-	if err := ctx.out.Add("cutlist.md", func(w io.Writer) error { return cutlistTmpl.Execute(w, view) }); err != nil {
+	view := cutlistView{CutList: cl, Kit: d.Spec.Kit, SpecSHA256: k.Source.SHA256(), Rows: rows}
+	if err := out.Add("cutlist.md", func(w io.Writer) error { return cutlistTmpl.Execute(w, view) }); err != nil {
 		return err
 	}
-	cps, err := ctx.cutParts()
-	if err != nil {
-		return err
-	}
-	if d.Spec.Quantity > 1 {
-		bp, err := newBatchPlan(d, cl, cps)
-		if err != nil {
+	if bp := k.batch; bp != nil {
+		if err := out.Add("batch.csv", func(w io.Writer) error { return writeBatchCSV(w, bp) }); err != nil {
 			return err
 		}
-		if err := ctx.out.Add("batch.csv", func(w io.Writer) error { return writeBatchCSV(w, bp) }); err != nil {
-			return err
-		}
-		if err := ctx.out.Add("batch.md", func(w io.Writer) error { return batchTmpl.Execute(w, bp) }); err != nil {
+		if err := out.Add("batch.md", func(w io.Writer) error { return batchTmpl.Execute(w, bp) }); err != nil {
 			return err
 		}
 	}
-	sheet := parts.NewBuildSheet(d, cl, ctx.spec.SHA256())
-	if err := ctx.out.Add("build-sheet.md", func(w io.Writer) error { return sheetTmpl.Execute(w, sheet) }); err != nil {
+	sheet := parts.NewBuildSheet(d, cl, k.Source.SHA256())
+	if err := out.Add("build-sheet.md", func(w io.Writer) error { return sheetTmpl.Execute(w, sheet) }); err != nil {
 		return err
 	}
 	page, err := cam.PageSizeByName(sheet.Paper)
 	if err != nil {
 		return err
 	}
-	var warns []string
-	if d.Patterns.LaserHalogen {
-		warns = append(warns, parts.LaserHalogenWarning)
-	}
-	tpages, err := cam.TemplatePages(sheetTemplates(cps), cam.TemplateOptions{Page: page, Heading: sheet.Kit + ": 1:1 templates (" + sheet.Hand + "), print at 100 %", Warnings: warns})
-	if err != nil {
-		return err
-	}
 	doc := sheetDocument(sheet, page)
-	doc.TrailingPages = len(tpages)
+	doc.TrailingPages = len(k.templates)
 	pages, err := doc.Pages()
 	if err != nil {
 		return err
 	}
-	opt := cam.PDFOptions{Title: sheet.Kit + " — build sheet", Subject: sheet.Summary, Creator: "coilwright " + Version, Created: ctx.created}
-	return ctx.out.Add("build-sheet.pdf", func(w io.Writer) error { return cam.WritePDF(w, append(pages, tpages...), opt) })
+	opt := cam.PDFOptions{Title: sheet.Kit + " — build sheet", Subject: sheet.Summary, Creator: k.creator(), Created: k.opt.Created}
+	return out.Add("build-sheet.pdf", func(w io.Writer) error { return cam.WritePDF(w, append(pages, k.templates...), opt) })
 }
 
 // fmtMM formats a length or amount for CSV: one decimal, empty when zero.

@@ -1,4 +1,4 @@
-package main
+package kit
 
 import (
 	"encoding/json"
@@ -22,18 +22,18 @@ var reportFuncs = template.FuncMap{
 	"pct":   func(v float64) float64 { return 100 * v },
 }
 
+// WriteReportJSON writes the design report as indented JSON: the content
+// of design.json, and what check --json prints.
+func (k *Kit) WriteReportJSON(w io.Writer) error {
+	enc := json.NewEncoder(w)
+	enc.SetIndent("", "  ")
+	return enc.Encode(k.Report)
+}
+
 // writeDesign writes design.md and design.json.
-func writeDesign(ctx *buildContext) error {
-	r := ctx.spec.Design.Report()
-	if err := addPanels(ctx, &r); err != nil {
+func (k *Kit) writeDesign(s Sink) error {
+	if err := s.Add("design.json", k.WriteReportJSON); err != nil {
 		return err
 	}
-	if err := ctx.out.Add("design.json", func(w io.Writer) error {
-		enc := json.NewEncoder(w)
-		enc.SetIndent("", "  ")
-		return enc.Encode(r)
-	}); err != nil {
-		return err
-	}
-	return ctx.out.Add("design.md", func(w io.Writer) error { return designTmpl.Execute(w, r) })
+	return s.Add("design.md", func(w io.Writer) error { return designTmpl.Execute(w, k.Report) })
 }

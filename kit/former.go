@@ -1,4 +1,4 @@
-package main
+package kit
 
 import (
 	"fmt"
@@ -12,12 +12,12 @@ import (
 // and former.png. The mesh is checked to be closed and consistently
 // oriented before anything is written. A former larger than the spec's
 // print volume is not made; the design carries a former-size warning.
-func writeFormer(ctx *buildContext) error {
-	s := ctx.spec.Spec
-	if !ctx.spec.Design.FormerEnvelope().Fits {
+func (k *Kit) writeFormer(out Sink) error {
+	s := k.Source.Spec
+	if !k.Design.FormerEnvelope().Fits {
 		return nil
 	}
-	f, err := jig.FormerFromDesign(ctx.spec.Design)
+	f, err := jig.FormerFromDesign(k.Design)
 	if err != nil {
 		return err
 	}
@@ -29,17 +29,17 @@ func writeFormer(ctx *buildContext) error {
 		return fmt.Errorf("former mesh: %w", err)
 	}
 	header := stlHeader("coilwright former: " + s.Kit)
-	if err := ctx.out.Add("former.stl", func(w io.Writer) error {
+	if err := out.Add("former.stl", func(w io.Writer) error {
 		return cam.WriteSTL(w, m, cam.STLOptions{Header: header})
 	}); err != nil {
 		return err
 	}
-	if err := ctx.out.Add("former.3mf", func(w io.Writer) error {
+	if err := out.Add("former.3mf", func(w io.Writer) error {
 		return cam.Write3MF(w, m, cam.ThreeMFOptions{Name: s.Kit})
 	}); err != nil {
 		return err
 	}
-	return ctx.out.Add("former.png", func(w io.Writer) error {
+	return out.Add("former.png", func(w io.Writer) error {
 		return cam.WritePreview(w, m, cam.PreviewOptions{})
 	})
 }

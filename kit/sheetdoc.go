@@ -1,4 +1,4 @@
-package main
+package kit
 
 import (
 	"fmt"
@@ -8,17 +8,6 @@ import (
 	"coilwright/cam/geom"
 	"coilwright/parts"
 )
-
-// sheetTemplates returns the 1:1 template parts the build sheet ends
-// with: the same reflector and wedge, notes and labels as templates.pdf,
-// drawn as designed (no kerf).
-func sheetTemplates(cps []cutPart) []cam.TemplatePart {
-	out := make([]cam.TemplatePart, len(cps))
-	for i, c := range cps {
-		out[i] = cam.TemplatePart{Title: c.title, Notes: append(append([]string{}, c.notes...), c.label), Drawing: c.nominal}
-	}
-	return out
-}
 
 // num formats a number compactly.
 func num(v float64) string { return fmt.Sprintf("%g", v) }
