@@ -49,7 +49,8 @@ func designFormer(t testing.TB, s *parts.Spec) (*parts.Design, *Former) {
 
 // randomSpec draws a former spec: either hand, cylindrical or conical
 // (either way up), 1–20 turns, 0.5–3 mm wire, 5–12 GHz so that the formers
-// stay a hand's length. Draws the spec rules reject are redrawn.
+// stay a hand's length. Draws the spec rules or the former plan reject are
+// redrawn.
 func randomSpec(rng *rand.Rand) *parts.Spec {
 	for {
 		f := 5000 + rng.Float64()*7000
@@ -74,7 +75,10 @@ func randomSpec(rng *rand.Rand) *parts.Spec {
 		if rng.IntN(4) == 0 {
 			s.Former.GrooveProfile = "round"
 		}
-		if s.Validate() == nil {
+		if s.Validate() != nil {
+			continue
+		}
+		if d, err := parts.NewDesign(s); err == nil && len(Plan(d).Problems) == 0 {
 			return s
 		}
 	}
@@ -450,17 +454,17 @@ func BenchmarkDemoFormer(b *testing.B) {
 	}
 }
 
-// TestFormerEnvelope holds the design's estimate of the former's height,
-// which decides whether the former fits the print volume, to the height of
-// the solid the former model builds, on the demos and on random specs.
+// TestFormerEnvelope holds the plan's size of the former, which decides
+// whether the former fits the print volume, to the height and width of the
+// solid the former model builds, on the demos and on random specs.
 func TestFormerEnvelope(t *testing.T) {
 	const tol = 1e-6 // mm: both follow the same construction
 	check := func(t *testing.T, d *parts.Design, f *Former) {
-		if got, want := d.FormerEnvelope().HeightMM, f.Height; math.Abs(got-want) > tol {
+		if got, want := Plan(d).HeightMM, f.Height; math.Abs(got-want) > tol {
 			t.Errorf("envelope height %.6f mm, former %.6f mm", got, want)
 		}
 		b := f.Solid.Bounds()
-		if got, want := d.FormerEnvelope().DiameterMM, b.Max.X-b.Min.X; got < want-tol {
+		if got, want := Plan(d).DiameterMM, b.Max.X-b.Min.X; got < want-tol {
 			t.Errorf("envelope diameter %.4f mm is less than the solid's width %.4f mm", got, want)
 		}
 	}

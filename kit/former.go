@@ -14,10 +14,10 @@ import (
 // print volume is not made; the design carries a former-size warning.
 func (k *Kit) writeFormer(out Sink) error {
 	s := k.Source.Spec
-	if !k.Design.FormerEnvelope().Fits {
+	if !k.Former.FitsPrinter {
 		return nil
 	}
-	f, err := jig.FormerFromDesign(k.Design)
+	f, err := k.Former.Former()
 	if err != nil {
 		return err
 	}

@@ -9,6 +9,7 @@ import (
 
 	"github.com/tdewolff/canvas"
 
+	"coilwright/jig"
 	"coilwright/parts"
 )
 
@@ -39,7 +40,8 @@ type Options struct {
 type Kit struct {
 	Source Source
 	Design *parts.Design
-	Report parts.Report // as in design.json and check --json
+	Former jig.FormerPlan // the former's sizes, drive and envelope
+	Report parts.Report   // as in design.json and check --json
 
 	opt       Options
 	parts     []cutPart
@@ -56,6 +58,9 @@ func New(src Source, opt Options) (*Kit, error) {
 		return nil, err
 	}
 	k := &Kit{Source: src, Design: d, opt: opt}
+	if k.Former, err = planFormer(d); err != nil {
+		return nil, err
+	}
 	if k.parts, err = cutParts(d); err != nil {
 		return nil, err
 	}

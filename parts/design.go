@@ -113,7 +113,6 @@ func NewDesign(s *Spec) (*Design, error) {
 		return nil, err
 	}
 	d.Warnings = append(d.Warnings, sw...)
-	d.Warnings = append(d.Warnings, d.formerSizeWarning()...)
 	p, warns, err := newPatterns(d)
 	if err != nil {
 		return nil, err

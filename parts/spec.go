@@ -113,9 +113,6 @@ func (s *Spec) Validate() error {
 	if len(c.errs) == 0 {
 		s.Wire.validateWinding(c, s)
 	}
-	if len(c.errs) == 0 {
-		s.Former.validateFit(c, s)
-	}
 	return c.result()
 }
 

@@ -34,12 +34,9 @@ type FormerSpec struct {
 	PrintWidthMM      float64 `toml:"print_width_mm"`      // widest former the printer takes, default 220, 20–2000
 }
 
-// Former defaults and limits. The wall and land minima are three 0.4 mm
-// perimeters. Common practice (no published source).
+// Former defaults. Common practice (no published source).
 const (
 	DefaultFormerToleranceMM = 0.05
-	MinFormerWallMM          = 1.2
-	MinGrooveLandMM          = 0.8
 	hexDriveMM               = 6.35 // 1/4 inch hex drive across flats
 )
 
@@ -114,95 +111,5 @@ func (f *FormerSpec) validate(c *checker, s *Spec) {
 	}
 	if f.EngraveDepthMM >= f.FlangeThicknessMM/2 {
 		c.fail("former.engrave_depth_mm", num(f.EngraveDepthMM), fmt.Sprintf("must be less than half of flange_thickness_mm = %s", num(f.FlangeThicknessMM)), "engrave shallower")
-	}
-}
-
-// GrooveRadius returns the radius of the groove's round part in mm: half of
-// the wire diameter plus the clearance.
-func (f *FormerSpec) GrooveRadius(wireMM float64) float64 { return (wireMM + f.ClearanceMM) / 2 }
-
-// DriveRadius returns the radius of the drive cut in mm: the hex socket's
-// corner radius or the bore's radius.
-func (f *FormerSpec) DriveRadius() float64 {
-	if f.Drive == "bore" {
-		return f.BoreDiameterMM / 2
-	}
-	return f.HexAcrossFlatsMM / math.Sqrt(3)
-}
-
-// formerPath returns the centreline the former's groove carries: the coil
-// compensated for springback, or the target coil when the wire model cannot
-// be built (its own checks report that).
-func formerPath(s *Spec) (Coil, error) {
-	coil, err := coilFromSpec(s)
-	if err != nil {
-		return Coil{}, err
-	}
-	w, err := newWireDesign(s)
-	if err != nil {
-		return coil, nil
-	}
-	if fc, err := compensateCoil(coil, w.Model); err == nil {
-		return fc, nil
-	}
-	return coil, nil
-}
-
-// validateFit checks that the former can be built around the coil: the
-// groove fits between turns with a land and does not reach the axis, and the
-// drive cut leaves a wall under the groove and room for the wire-lock hole.
-// When drive is not written and the default hex socket does not fit, it
-// falls back to a through-bore as wide as the walls allow (it mutates f).
-// It runs after the coil and wire checks.
-func (f *FormerSpec) validateFit(c *checker, s *Spec) {
-	coil, err := formerPath(s)
-	if err != nil {
-		return
-	}
-	d := s.Wire.DiameterMM
-	a := f.GrooveRadius(d)
-	// The teardrop's mouth spans a(1 + √2) along the axis; the swept
-	// groove needs 3.5 groove radii of spacing and of radius to tell
-	// neighbouring turns apart.
-	needS := math.Max(a*(1+math.Sqrt2)+MinGrooveLandMM, 3.5*a)
-	if sp := coil.MinSpacing(); sp < needS {
-		key, val := "coil.spacing_mm", deref(s.Coil.SpacingMM)
-		if s.Coil.SpacingMM == nil {
-			key, val = "coil.pitch_angle_deg", deref(s.Coil.PitchAngleDeg)
-		}
-		c.fail(key, num(val), fmt.Sprintf("gives a smallest spacing of %.2f mm; the former's %.2f mm groove needs at least %.2f mm", sp, 2*a, needS),
-			"raise the spacing or use thinner wire or less clearance")
-	}
-	rmin := math.Min(coil.StartRadius, coil.EndRadius)
-	if 3.5*a > rmin {
-		c.fail("wire.diameter_mm", num(d), fmt.Sprintf("makes a %.2f mm groove too large for the former's %.2f mm smallest radius", 2*a, rmin), "use thinner wire or a wider coil")
-		return
-	}
-	bottom := rmin - d/2                  // groove bottom at the narrow end
-	startBottom := coil.StartRadius - d/2 // groove bottom at the wire-lock hole
-	// Room for the drive: a wall under the groove everywhere and a wire-lock
-	// hole of at least one wire diameter at the start.
-	room := math.Min(bottom-MinFormerWallMM, startBottom-MinFormerWallMM-d)
-	if f.Drive == "hex" && !c.has("former.drive") && f.DriveRadius() > room {
-		f.Drive = "bore"
-		if !c.has("former.bore_diameter_mm") {
-			// Half a millimetre inside the limit, on a 0.1 mm step.
-			f.BoreDiameterMM = math.Max(1, math.Min(f.BoreDiameterMM, math.Floor(20*(room-0.5))/10))
-		}
-	}
-	key, val := "former.hex_across_flats_mm", f.HexAcrossFlatsMM
-	if f.Drive == "bore" {
-		key, val = "former.bore_diameter_mm", f.BoreDiameterMM
-	}
-	if wall := bottom - f.DriveRadius(); wall < MinFormerWallMM {
-		c.fail(key, num(val), fmt.Sprintf("leaves a %.2f mm wall under the groove; at least %s mm is needed", wall, num(MinFormerWallMM)),
-			"use a smaller drive socket or bore")
-		return
-	}
-	// The wire-lock hole stops a wall short of the drive cut; it must still
-	// take half a wire diameter of wire.
-	if avail := math.Min(f.LockHoleDepthMM, startBottom-f.DriveRadius()-MinFormerWallMM); avail < d/2 {
-		c.fail("former.lock_hole_depth_mm", num(f.LockHoleDepthMM), fmt.Sprintf("gives %.2f mm of wire-lock hole; at least half a wire diameter (%s mm) is needed", avail, num(d/2)),
-			"deepen the hole, or use a smaller drive socket or bore")
 	}
 }
