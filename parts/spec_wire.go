@@ -1,6 +1,7 @@
 package parts
 
 import (
+	"coilwright/parts/wire"
 	"fmt"
 	"math"
 	"strconv"
@@ -22,7 +23,7 @@ type WireSpec struct {
 	// the relaxed centreline diameter, mm (0.02–5).
 	InspectionToleranceMM *float64 `toml:"inspection_tolerance_mm"`
 
-	calibration *Calibration // attached by AttachCalibration
+	calibration *wire.Calibration // attached by AttachCalibration
 }
 
 // Limits of the [wire] table, in mm.
@@ -48,8 +49,8 @@ const calibrationDiameterSlack = 0.02
 func (w *WireSpec) validate(c *checker, s *Spec) {
 	if w.Material == "" {
 		c.fail("wire.material", "", "is required", `add material = "copper-annealed" to [wire]`)
-	} else if _, err := LookupMaterial(w.Material); err != nil {
-		c.fail("wire.material", strconv.Quote(w.Material), "is not in the material library: must be one of "+quoteAll(MaterialIDs()),
+	} else if _, err := wire.LookupMaterial(w.Material); err != nil {
+		c.fail("wire.material", strconv.Quote(w.Material), "is not in the material library: must be one of "+quoteAll(wire.MaterialIDs()),
 			"pick an id from `coilwright materials`")
 	}
 	c.oneOf("wire.springback_model", &w.SpringbackModel, ModelPerfectlyPlastic, ModelPerfectlyPlastic, ModelHardening)
@@ -100,7 +101,7 @@ func (w *WireSpec) Hardening() bool { return w.SpringbackModel == ModelHardening
 // wire.calibration key names; NewDesign then uses the calibrated yield. It
 // returns a *SpecError when the calibration is for another material or was
 // fitted with the other springback model. It mutates s.
-func (s *Spec) AttachCalibration(cal Calibration) error {
+func (s *Spec) AttachCalibration(cal wire.Calibration) error {
 	w := &s.Wire
 	fail := func(problem, fix string) error {
 		return &SpecError{Key: "wire.calibration", Line: s.Line("wire.calibration"), Value: strconv.Quote(w.Calibration), Problem: problem, Fix: fix}
@@ -128,4 +129,4 @@ func (s *Spec) AttachCalibration(cal Calibration) error {
 }
 
 // CalibrationData returns the attached calibration, or nil.
-func (w *WireSpec) CalibrationData() *Calibration { return w.calibration }
+func (w *WireSpec) CalibrationData() *wire.Calibration { return w.calibration }

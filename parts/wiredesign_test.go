@@ -1,6 +1,7 @@
 package parts
 
 import (
+	"coilwright/parts/wire"
 	"encoding/json"
 	"errors"
 	"fmt"
@@ -221,8 +222,8 @@ func TestAttachCalibration(t *testing.T) {
 	text := specText(5800, cylinder5800, `material = "brass-c26000-half-hard"
 diameter_mm = 1.6
 calibration = "batch.toml"`)
-	m, _ := LookupMaterial("brass-c26000-half-hard")
-	cal, err := Calibrate(m, 1.6, 1.6, false, []CalibrationPoint{{FormerDiameter: 16.6, RelaxedDiameter: 18.2}})
+	m, _ := wire.LookupMaterial("brass-c26000-half-hard")
+	cal, err := wire.Calibrate(m, 1.6, 1.6, false, []wire.CalibrationPoint{{FormerDiameter: 16.6, RelaxedDiameter: 18.2}})
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -256,11 +257,11 @@ calibration = "batch.toml"`)
 	})
 	mismatch := []struct {
 		name string
-		edit func(*Calibration)
+		edit func(*wire.Calibration)
 		want string
 	}{
-		{"other material", func(c *Calibration) { c.Material = "copper-annealed" }, "is for material"},
-		{"other model", func(c *Calibration) { c.Hardening = true }, "springback_model"},
+		{"other material", func(c *wire.Calibration) { c.Material = "copper-annealed" }, "is for material"},
+		{"other model", func(c *wire.Calibration) { c.Hardening = true }, "springback_model"},
 	}
 	for _, tc := range mismatch {
 		t.Run(tc.name, func(t *testing.T) {
@@ -354,3 +355,5 @@ func TestNoFormerCanWind(t *testing.T) {
 		})
 	}
 }
+
+func relErr(got, want float64) float64 { return math.Abs(got-want) / math.Abs(want) }

@@ -13,6 +13,7 @@ import (
 
 	"coilwright/cam"
 	"coilwright/parts"
+	"coilwright/parts/wire"
 )
 
 // calibrateOptions are the flags of `coilwright calibrate`.
@@ -79,7 +80,7 @@ func isDir(path string) bool {
 // calibrationJSON is the fit as `calibrate --json` prints it.
 type calibrationJSON struct {
 	File string `json:"file"`
-	parts.Calibration
+	wire.Calibration
 	Factor   float64  `json:"factor"`
 	Warnings []string `json:"warnings"`
 }
@@ -102,7 +103,7 @@ func runCalibrate(w io.Writer, o calibrateOptions) error {
 	if dir := filepath.Dir(o.out); !isDir(dir) {
 		return usageError{fmt.Errorf("-o %s: folder %s does not exist; create it or choose another path", o.out, dir)}
 	}
-	m, err := parts.LookupMaterial(o.material)
+	m, err := wire.LookupMaterial(o.material)
 	if err != nil {
 		return usageError{err}
 	}
@@ -110,18 +111,18 @@ func runCalibrate(w io.Writer, o calibrateOptions) error {
 	if spacing == 0 {
 		spacing = o.wireMM
 	}
-	pts := make([]parts.CalibrationPoint, len(o.measured))
+	pts := make([]wire.CalibrationPoint, len(o.measured))
 	for i, v := range o.measured {
 		if o.outside {
 			v -= o.wireMM
 		}
-		pts[i] = parts.CalibrationPoint{FormerDiameter: o.formerMM, RelaxedDiameter: v}
+		pts[i] = wire.CalibrationPoint{FormerDiameter: o.formerMM, RelaxedDiameter: v}
 	}
-	cal, err := parts.Calibrate(m, o.wireMM, spacing, o.model == parts.ModelHardening, pts)
+	cal, err := wire.Calibrate(m, o.wireMM, spacing, o.model == parts.ModelHardening, pts)
 	if err != nil {
 		return inputError{err: err}
 	}
-	data, err := parts.MarshalCalibration(cal)
+	data, err := wire.MarshalCalibration(cal)
 	if err != nil {
 		return err
 	}

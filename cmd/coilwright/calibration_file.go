@@ -8,6 +8,7 @@ import (
 	"strconv"
 
 	"coilwright/parts"
+	"coilwright/parts/wire"
 )
 
 // attachCalibration reads the calibration file a spec's wire.calibration key
@@ -31,7 +32,7 @@ func attachCalibration(specPath string, s *parts.Spec) error {
 	if err != nil {
 		return inputError{path, err}
 	}
-	cal, err := parts.ParseCalibration(b)
+	cal, err := wire.ParseCalibration(b)
 	if err != nil {
 		return inputError{path, err}
 	}

@@ -1,4 +1,4 @@
-package parts
+package wire
 
 import "math"
 

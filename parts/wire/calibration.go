@@ -11,7 +11,7 @@
 // tightest former), so the fit is one bracketed root. The effective yield
 // f·σy is what the calibration file keeps.
 
-package parts
+package wire
 
 import (
 	"bytes"

@@ -7,7 +7,7 @@
 // Drawn wire varies from batch to batch far more than these single figures
 // suggest: a calibration from one test coil (Calibration) corrects the yield.
 
-package parts
+package wire
 
 import (
 	"fmt"

@@ -9,7 +9,7 @@
 // Source: R. P. Brent, Algorithms for Minimization without Derivatives,
 // Prentice-Hall 1973, ch. 4 (procedure zero).
 
-package parts
+package wire
 
 import (
 	"errors"

@@ -1,9 +1,9 @@
-package parts_test
+package wire_test
 
 import (
 	"fmt"
 
-	"coilwright/parts"
+	"coilwright/parts/wire"
 )
 
 // A 1.6 mm half-hard brass wire is to relax to a 16.6 mm coil (wire
@@ -12,11 +12,11 @@ import (
 // checked against Gardiner's formula and the plasticity closed forms in
 // springback_test.go.
 func ExampleSpringback_Compensate() {
-	m, err := parts.LookupMaterial("brass-c26000-half-hard")
+	m, err := wire.LookupMaterial("brass-c26000-half-hard")
 	if err != nil {
 		panic(err)
 	}
-	sb, err := parts.NewWireSpringback(m, 1.6, false)
+	sb, err := wire.NewWireSpringback(m, 1.6, false)
 	if err != nil {
 		panic(err)
 	}
@@ -34,8 +34,8 @@ func ExampleSpringback_Compensate() {
 // σy/(E·a) = 448/(110000·0.8) = 0.005091 1/mm (elastic bending, any
 // strength-of-materials text) [calc].
 func ExampleNoSetError() {
-	m, _ := parts.LookupMaterial("brass-c26000-half-hard")
-	sb, _ := parts.NewWireSpringback(m, 1.6, false)
+	m, _ := wire.LookupMaterial("brass-c26000-half-hard")
+	sb, _ := wire.NewWireSpringback(m, 1.6, false)
 	_, err := sb.Relax(250, 0)
 	fmt.Println(err)
 	// Output:

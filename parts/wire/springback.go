@@ -22,7 +22,7 @@
 // the inverse (target → former) solves relaxed(κ) = target with a bracketed
 // root finder, the relaxed curvature being increasing in κ.
 
-package parts
+package wire
 
 import (
 	"errors"

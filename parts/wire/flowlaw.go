@@ -8,7 +8,7 @@
 // and K equal to the yield the power law is exactly perfectly plastic.
 // Tension and compression are taken as symmetric.
 
-package parts
+package wire
 
 import (
 	"fmt"
