@@ -4,20 +4,16 @@ import (
 	"fmt"
 	"math"
 	"math/rand/v2"
-	"slices"
 	"testing"
 
 	"coilwright/cam/geom"
 	"coilwright/jig/sdf"
-	"coilwright/templates"
 )
 
 // TestSimplifyReduces checks that simplification removes most triangles
-// where the surface is flat or gently curved: a cylinder and the long
-// cylindrical demo former.
+// where the surface is flat or gently curved.
 func TestSimplifyReduces(t *testing.T) {
 	cyl := must[*sdf.Cylinder](t)(sdf.NewCylinder(10, 40))
-	_, f := demoFormer(t, "demo-2g4-cylinder.toml")
 	cases := []struct {
 		name      string
 		s         sdf.SDF3
@@ -27,9 +23,6 @@ func TestSimplifyReduces(t *testing.T) {
 	}{
 		// Measured: 48,656 → 1,756 triangles (27.7×).
 		{"cylinder r 10 mm h 40 mm", cyl, MeshOptions{MinRadius: 10}, 0, 20},
-		// Measured at a coarse 0.2 mm tolerance to keep the test quick:
-		// 332,188 → 12,060 triangles (27.5×).
-		{"2.4 GHz demo former", f.Solid, f.MeshOptions(0.2, false), f.Genus, 20},
 	}
 	for _, c := range cases {
 		t.Run(c.name, func(t *testing.T) {
@@ -51,32 +44,6 @@ func TestSimplifyReduces(t *testing.T) {
 			}
 			t.Logf("%d → %d triangles (%.1f×)", len(plain.Faces), len(m.Faces), factor)
 		})
-	}
-}
-
-// TestSimplifyDeterministic simplifies the demo former's mesh made on one
-// core and on two, and requires the same vertices and faces in the same
-// order.
-func TestSimplifyDeterministic(t *testing.T) {
-	_, f := demoFormer(t, templates.DefaultDemo)
-	const cell = 0.5 // coarse, to keep the test quick
-	a, err := Mesh(f.Solid, MeshOptions{Cell: cell, Workers: 1, Simplify: true})
-	if err != nil {
-		t.Fatal(err)
-	}
-	b, err := Mesh(f.Solid, MeshOptions{Cell: cell, Workers: 2, Simplify: true})
-	if err != nil {
-		t.Fatal(err)
-	}
-	plain, err := Mesh(f.Solid, MeshOptions{Cell: cell, Workers: 2})
-	if err != nil {
-		t.Fatal(err)
-	}
-	if len(a.Faces) >= len(plain.Faces) {
-		t.Fatalf("nothing simplified: %d faces from %d", len(a.Faces), len(plain.Faces))
-	}
-	if !slices.Equal(a.Vertices, b.Vertices) || !slices.Equal(a.Faces, b.Faces) {
-		t.Error("the simplified mesh differs between one and two workers")
 	}
 }
 

@@ -117,7 +117,7 @@ func (f *Former) MeshOptions(tol float64, simplify bool) MeshOptions {
 	if tol == 0 {
 		tol = DefaultTolerance
 	}
-	cell := min(math.Sqrt(4*tol*f.minRadius), maxCellPerTolerance*tol, f.minWall/2, f.minRadius)
+	cell := min(math.Sqrt(4*tol*f.minRadius), MaxCellPerTolerance*tol, f.minWall/2, f.minRadius)
 	return MeshOptions{Tolerance: tol, Cell: cell, Simplify: simplify}
 }
 

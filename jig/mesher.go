@@ -81,8 +81,10 @@ const DefaultTolerance = 0.05
 // curved parts within tol. Without a known smallest radius the cell is
 // cellPerTolerance tolerances.
 const (
-	cellPerTolerance    = 4
-	maxCellPerTolerance = 8
+	cellPerTolerance = 4
+	// MaxCellPerTolerance is the largest grid cell, in tolerances, for a
+	// caller that sizes the cell from its own smallest radius.
+	MaxCellPerTolerance = 8
 )
 
 // simplifyShare is the part of the tolerance that simplification may use at
@@ -130,7 +132,7 @@ func Mesh(s sdf.SDF3, opt MeshOptions) (*geom.Mesh, error) {
 	cell := opt.Cell
 	switch {
 	case cell == 0 && opt.MinRadius > 0:
-		cell = min(math.Sqrt(4*tol*opt.MinRadius), maxCellPerTolerance*tol)
+		cell = min(math.Sqrt(4*tol*opt.MinRadius), MaxCellPerTolerance*tol)
 	case cell == 0:
 		cell = cellPerTolerance * tol
 	}
