@@ -27,6 +27,7 @@ import (
 	"math"
 
 	"coilwright/cam/geom"
+	"coilwright/jig/mesh"
 	"coilwright/jig/sdf"
 )
 
@@ -108,17 +109,17 @@ func (f *Former) Centreline(phi float64) geom.Vec3 {
 // lost between samples, then simplifies the mesh within the tolerance
 // (MeshOptions.Simplify).
 func (f *Former) Mesh(tol float64) (*geom.Mesh, error) {
-	return Mesh(f.Solid, f.MeshOptions(tol, true))
+	return mesh.Mesh(f.Solid, f.MeshOptions(tol, true))
 }
 
 // MeshOptions returns the options Mesh uses at tolerance tol in mm (0 for
 // DefaultTolerance), with or without simplification.
-func (f *Former) MeshOptions(tol float64, simplify bool) MeshOptions {
+func (f *Former) MeshOptions(tol float64, simplify bool) mesh.MeshOptions {
 	if tol == 0 {
-		tol = DefaultTolerance
+		tol = mesh.DefaultTolerance
 	}
-	cell := min(math.Sqrt(4*tol*f.minRadius), MaxCellPerTolerance*tol, f.minWall/2, f.minRadius)
-	return MeshOptions{Tolerance: tol, Cell: cell, Simplify: simplify}
+	cell := min(math.Sqrt(4*tol*f.minRadius), mesh.MaxCellPerTolerance*tol, f.minWall/2, f.minRadius)
+	return mesh.MeshOptions{Tolerance: tol, Cell: cell, Simplify: simplify}
 }
 
 // formerError reports a size that cannot make a former.

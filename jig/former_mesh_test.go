@@ -4,6 +4,7 @@ import (
 	"slices"
 	"testing"
 
+	"coilwright/jig/mesh"
 	"coilwright/templates"
 )
 
@@ -16,16 +17,16 @@ func TestSimplifyFormer(t *testing.T) {
 	// the measured one with about a quarter of margin.
 	const minFactor = 20
 	opt := f.MeshOptions(0.2, false)
-	plain, err := Mesh(f.Solid, opt)
+	plain, err := mesh.Mesh(f.Solid, opt)
 	if err != nil {
 		t.Fatal(err)
 	}
 	opt.Simplify = true
-	m, err := Mesh(f.Solid, opt)
+	m, err := mesh.Mesh(f.Solid, opt)
 	if err != nil {
 		t.Fatal(err)
 	}
-	if _, err := CheckMesh(m, CheckOptions{Genus: f.Genus}); err != nil {
+	if _, err := mesh.CheckMesh(m, mesh.CheckOptions{Genus: f.Genus}); err != nil {
 		t.Fatal(err)
 	}
 	factor := float64(len(plain.Faces)) / float64(len(m.Faces))
@@ -40,15 +41,15 @@ func TestSimplifyFormer(t *testing.T) {
 func TestSimplifyDeterministic(t *testing.T) {
 	_, f := demoFormer(t, templates.DefaultDemo)
 	const cell = 0.5 // coarse, to keep the test quick
-	a, err := Mesh(f.Solid, MeshOptions{Cell: cell, Workers: 1, Simplify: true})
+	a, err := mesh.Mesh(f.Solid, mesh.MeshOptions{Cell: cell, Workers: 1, Simplify: true})
 	if err != nil {
 		t.Fatal(err)
 	}
-	b, err := Mesh(f.Solid, MeshOptions{Cell: cell, Workers: 2, Simplify: true})
+	b, err := mesh.Mesh(f.Solid, mesh.MeshOptions{Cell: cell, Workers: 2, Simplify: true})
 	if err != nil {
 		t.Fatal(err)
 	}
-	plain, err := Mesh(f.Solid, MeshOptions{Cell: cell, Workers: 2})
+	plain, err := mesh.Mesh(f.Solid, mesh.MeshOptions{Cell: cell, Workers: 2})
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -59,4 +60,3 @@ func TestSimplifyDeterministic(t *testing.T) {
 		t.Error("the simplified mesh differs between one and two workers")
 	}
 }
-

@@ -14,8 +14,11 @@ import (
 	"strconv"
 	"testing"
 
+	"gonum.org/v1/gonum/mat"
+
 	"coilwright/cam"
 	"coilwright/cam/geom"
+	"coilwright/jig/mesh"
 	"coilwright/parts"
 	"coilwright/templates"
 )
@@ -103,7 +106,7 @@ func TestRandomFormers(t *testing.T) {
 			if err != nil {
 				t.Fatal(err)
 			}
-			rep, err := CheckMesh(m, CheckOptions{Genus: f.Genus, SDF: f.Solid})
+			rep, err := mesh.CheckMesh(m, mesh.CheckOptions{Genus: f.Genus, SDF: f.Solid})
 			if err != nil {
 				t.Fatalf("%v\n%+v", err, rep)
 			}
@@ -128,7 +131,7 @@ func TestDemoFormerAccuracy(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	rep, err := CheckMesh(m, CheckOptions{Genus: f.Genus, SDF: f.Solid})
+	rep, err := mesh.CheckMesh(m, mesh.CheckOptions{Genus: f.Genus, SDF: f.Solid})
 	if err != nil {
 		t.Fatalf("%v\n%+v", err, rep)
 	}
@@ -261,11 +264,15 @@ func grooveCentre(pts []geom.Vec2, rho0, z0, a float64) (float64, int) {
 			r[i] += row[i] * rhs
 		}
 	}
-	x, ok := solve3(m, r)
-	if !ok || n < 3 {
+	if n < 3 {
 		return math.NaN(), n
 	}
-	return -x[1] / 2, n
+	var x mat.VecDense
+	lhs := mat.NewDense(3, 3, []float64{m[0][0], m[0][1], m[0][2], m[1][0], m[1][1], m[1][2], m[2][0], m[2][1], m[2][2]})
+	if err := x.SolveVec(lhs, mat.NewVecDense(3, r[:])); err != nil {
+		return math.NaN(), n
+	}
+	return -x.AtVec(1) / 2, n
 }
 
 // printAzimuthParam returns the coil angle φ (within the first turn) whose
@@ -403,11 +410,11 @@ func TestGrooveHand(t *testing.T) {
 func TestFormerMeshDeterministic(t *testing.T) {
 	_, f := demoFormer(t, templates.DefaultDemo)
 	const cell = 0.5 // coarse, to keep the test quick
-	a, err := Mesh(f.Solid, MeshOptions{Cell: cell, Workers: 1})
+	a, err := mesh.Mesh(f.Solid, mesh.MeshOptions{Cell: cell, Workers: 1})
 	if err != nil {
 		t.Fatal(err)
 	}
-	b, err := Mesh(f.Solid, MeshOptions{Cell: cell, Workers: 2})
+	b, err := mesh.Mesh(f.Solid, mesh.MeshOptions{Cell: cell, Workers: 2})
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -441,7 +448,7 @@ func BenchmarkDemoFormer(b *testing.B) {
 				b.ReportAllocs()
 				var faces int
 				for b.Loop() {
-					m, err := Mesh(f.Solid, opt)
+					m, err := mesh.Mesh(f.Solid, opt)
 					if err != nil {
 						b.Fatal(err)
 					}

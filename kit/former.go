@@ -5,7 +5,7 @@ import (
 	"io"
 
 	"coilwright/cam"
-	"coilwright/jig"
+	"coilwright/jig/mesh"
 )
 
 // writeFormer meshes the winding former and writes former.stl, former.3mf
@@ -25,7 +25,7 @@ func (k *Kit) writeFormer(out Sink) error {
 	if err != nil {
 		return err
 	}
-	if _, err := jig.CheckMesh(m, jig.CheckOptions{Genus: f.Genus}); err != nil {
+	if _, err := mesh.CheckMesh(m, mesh.CheckOptions{Genus: f.Genus}); err != nil {
 		return fmt.Errorf("former mesh: %w", err)
 	}
 	header := stlHeader("coilwright former: " + s.Kit)

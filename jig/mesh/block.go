@@ -1,4 +1,4 @@
-package jig
+package mesh
 
 // A block worker samples one block of the grid and runs marching cubes over
 // its cells; see the overview in mesher.go.

@@ -1,4 +1,4 @@
-package jig
+package mesh
 
 // CheckMesh verifies a triangle mesh without trusting the mesher: it sorts
 // every face edge by its vertex pair to find edges used by one face, by more

@@ -1,4 +1,4 @@
-package jig
+package mesh
 
 // The mesher turns a signed distance bound into a closed triangle mesh by
 // narrow-band marching cubes on a uniform grid.

@@ -1,4 +1,4 @@
-package jig
+package mesh
 
 // Decimation by half-edge collapse, which moves a vertex r onto a
 // neighbour k and drops the two faces on edge r–k.

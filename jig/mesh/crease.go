@@ -1,4 +1,4 @@
-package jig
+package mesh
 
 // Feature vertices and crease flips. A cycle whose vertices' normals differ by
 // more than the feature angle spans a crease or a corner; it is fanned about
