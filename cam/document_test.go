@@ -9,6 +9,7 @@ import (
 	"strings"
 	"testing"
 
+	"coilwright/cam/checktool"
 	"coilwright/cam/geom"
 )
 
@@ -16,13 +17,7 @@ import (
 // when poppler is missing unless COILWRIGHT_REQUIRE_TOOLS=1.
 func popplerText(t *testing.T, pages int, doc Document) string {
 	t.Helper()
-	tool, err := exec.LookPath("pdftotext")
-	if err != nil {
-		if os.Getenv("COILWRIGHT_REQUIRE_TOOLS") == "1" {
-			t.Fatal("pdftotext is required (Debian package poppler-utils)")
-		}
-		t.Skip("pdftotext not installed")
-	}
+	tool := checktool.Need(t, "pdftotext")
 	ps, err := doc.Pages()
 	if err != nil {
 		t.Fatal(err)

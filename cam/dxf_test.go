@@ -9,6 +9,7 @@ import (
 	"strings"
 	"testing"
 
+	"coilwright/cam/checktool"
 	"coilwright/cam/geom"
 )
 
@@ -126,7 +127,7 @@ for e in d.modelspace():
 `
 
 func TestDXFExternal(t *testing.T) {
-	py := needEzdxf(t)
+	py := checktool.NeedPython(t, "ezdxf")
 	// After a 0.2 mm kerf the 25 mm disc's path is 25.1 mm and the
 	// 1.84 mm hole's 1.74 mm (half the kerf each way).
 	k, err := ApplyKerf(plateDrawing(), 0.2)
@@ -145,7 +146,7 @@ func TestDXFExternal(t *testing.T) {
 			if err := WriteDXF(&buf, k, tc.opt); err != nil {
 				t.Fatal(err)
 			}
-			out, err := exec.Command(py, "-c", ezdxfCheck, writeTempFile(t, "k.dxf", buf.Bytes())).CombinedOutput()
+			out, err := exec.Command(py, "-c", ezdxfCheck, checktool.TempFile(t, "k.dxf", buf.Bytes())).CombinedOutput()
 			if err != nil {
 				t.Fatalf("ezdxf: %v\n%s", err, out)
 			}

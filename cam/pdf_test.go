@@ -16,6 +16,7 @@ import (
 	"testing"
 	"time"
 
+	"coilwright/cam/checktool"
 	"coilwright/cam/geom"
 )
 
@@ -80,10 +81,10 @@ func TestSourceDateEpoch(t *testing.T) {
 }
 
 func TestPDFExternal(t *testing.T) {
-	qpdf := needTool(t, "qpdf")
-	pdfinfo := needTool(t, "pdfinfo")
-	pdftotext := needTool(t, "pdftotext")
-	pdffonts := needTool(t, "pdffonts")
+	qpdf := checktool.Need(t, "qpdf")
+	pdfinfo := checktool.Need(t, "pdfinfo")
+	pdftotext := checktool.Need(t, "pdftotext")
+	pdffonts := checktool.Need(t, "pdffonts")
 	for _, tc := range []struct {
 		page  PageSize
 		pages int
@@ -95,7 +96,7 @@ func TestPDFExternal(t *testing.T) {
 		{PageLetter, 5, "612 x 792 pts (letter)"},
 	} {
 		t.Run(tc.page.Name, func(t *testing.T) {
-			path := writeTempFile(t, "t.pdf", templateDoc(t, tc.page, PDFOptions{Title: "Test", Created: time.Unix(0, 0)}))
+			path := checktool.TempFile(t, "t.pdf", templateDoc(t, tc.page, PDFOptions{Title: "Test", Created: time.Unix(0, 0)}))
 			out, err := exec.Command(qpdf, "--check", path).CombinedOutput()
 			if err != nil || !strings.Contains(string(out), "No syntax or stream encoding errors") {
 				t.Fatalf("qpdf --check: %v\n%s", err, out)
@@ -142,8 +143,8 @@ func readPGM(t *testing.T, b []byte) (w, h int, pix []byte) {
 }
 
 func TestTemplateScaleBar(t *testing.T) {
-	pdftoppm := needTool(t, "pdftoppm")
-	path := writeTempFile(t, "t.pdf", templateDoc(t, PageA4, PDFOptions{}))
+	pdftoppm := checktool.Need(t, "pdftoppm")
+	path := checktool.TempFile(t, "t.pdf", templateDoc(t, PageA4, PDFOptions{}))
 	// Render page 1 at 254 dpi (10 px per mm) in a band round the bar.
 	const dpmm = 10
 	o := ScaleBarOrigin()

@@ -4,13 +4,13 @@ import (
 	"bytes"
 	"encoding/xml"
 	"math"
-	"os"
 	"os/exec"
 	"regexp"
 	"strconv"
 	"strings"
 	"testing"
 
+	"coilwright/cam/checktool"
 	"coilwright/cam/geom"
 )
 
@@ -68,8 +68,8 @@ func TestWriteSVG(t *testing.T) {
 var pdfPageSize = regexp.MustCompile(`Page size:\s+([0-9.]+) x ([0-9.]+) pts`)
 
 func TestSVGExternal(t *testing.T) {
-	rsvg := needTool(t, "rsvg-convert")
-	pdfinfo := needTool(t, "pdfinfo")
+	rsvg := checktool.Need(t, "rsvg-convert")
+	pdfinfo := checktool.Need(t, "pdfinfo")
 	for _, tc := range []struct {
 		name string
 		d    geom.Drawing
@@ -84,7 +84,7 @@ func TestSVGExternal(t *testing.T) {
 			if err := WriteSVG(&buf, tc.d, tc.opt); err != nil {
 				t.Fatal(err)
 			}
-			svg := writeTempFile(t, "p.svg", buf.Bytes())
+			svg := checktool.TempFile(t, "p.svg", buf.Bytes())
 			pdf := svg + ".pdf"
 			if out, err := exec.Command(rsvg, "-f", "pdf", "-o", pdf, svg).CombinedOutput(); err != nil {
 				t.Fatalf("rsvg-convert: %v\n%s", err, out)
@@ -120,12 +120,7 @@ print(sum(1 for e in els if isinstance(e, (s.Path, s.Circle))))
 `
 
 func TestSVGElementsKeepsEveryShape(t *testing.T) {
-	if err := exec.Command("/usr/bin/python3", "-c", "import svgelements").Run(); err != nil {
-		if os.Getenv("COILWRIGHT_REQUIRE_TOOLS") == "1" {
-			t.Fatal("python3-svgelements is required (COILWRIGHT_REQUIRE_TOOLS=1)")
-		}
-		t.Skip("python3-svgelements not installed")
-	}
+	py := checktool.NeedPython(t, "svgelements")
 	d, err := ExpandText(plateDrawing())
 	if err != nil {
 		t.Fatal(err)
@@ -138,7 +133,7 @@ func TestSVGElementsKeepsEveryShape(t *testing.T) {
 	if err := WriteSVG(&buf, plateDrawing(), SVGOptions{}); err != nil {
 		t.Fatal(err)
 	}
-	out, err := exec.Command("/usr/bin/python3", "-c", svgelementsCount, writeTempFile(t, "p.svg", buf.Bytes())).CombinedOutput()
+	out, err := exec.Command(py, "-c", svgelementsCount, checktool.TempFile(t, "p.svg", buf.Bytes())).CombinedOutput()
 	if err != nil {
 		t.Fatalf("svgelements: %v\n%s", err, out)
 	}

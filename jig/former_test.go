@@ -17,6 +17,7 @@ import (
 	"gonum.org/v1/gonum/mat"
 
 	"coilwright/cam"
+	"coilwright/cam/checktool"
 	"coilwright/cam/geom"
 	"coilwright/jig/mesh"
 	"coilwright/parts"
@@ -164,13 +165,7 @@ func TestDemoFormerAccuracy(t *testing.T) {
 // TestDemoFormerAdmesh writes the demo former as STL and reads admesh's
 // report: no repairs of any kind and one part.
 func TestDemoFormerAdmesh(t *testing.T) {
-	bin, err := exec.LookPath("admesh")
-	if err != nil {
-		if os.Getenv("COILWRIGHT_REQUIRE_TOOLS") == "1" {
-			t.Fatal("admesh is required (Debian package admesh)")
-		}
-		t.Skip("admesh not installed (Debian package admesh)")
-	}
+	bin := checktool.Need(t, "admesh")
 	d, f := demoFormer(t, templates.DefaultDemo)
 	m, err := f.Mesh(d.Spec.Former.ToleranceMM)
 	if err != nil {

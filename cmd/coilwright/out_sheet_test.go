@@ -14,6 +14,7 @@ import (
 	"strings"
 	"testing"
 
+	"coilwright/cam/checktool"
 	"coilwright/parts"
 	"coilwright/templates"
 )
@@ -22,7 +23,7 @@ var update = flag.Bool("update", false, "rewrite the golden files in testdata/go
 
 func runTool(t *testing.T, name string, args ...string) string {
 	t.Helper()
-	out, err := exec.Command(needTool(t, name), args...).CombinedOutput()
+	out, err := exec.Command(checktool.Need(t, name), args...).CombinedOutput()
 	if err != nil {
 		t.Fatalf("%s %v: %v\n%s", name, args, err, out)
 	}
