@@ -5,10 +5,12 @@ import (
 	"io"
 	"math"
 	"testing"
+
+	"coilwright/cam/internal/fixture"
 )
 
 func BenchmarkWriteDXF(b *testing.B) {
-	d := plateDrawing()
+	d := fixture.Plate()
 	var buf bytes.Buffer
 	if err := WriteDXF(&buf, d, DXFOptions{}); err != nil {
 		b.Fatal(err)
@@ -23,7 +25,7 @@ func BenchmarkWriteDXF(b *testing.B) {
 }
 
 func BenchmarkWriteSVG(b *testing.B) {
-	d := plateDrawing()
+	d := fixture.Plate()
 	var buf bytes.Buffer
 	if err := WriteSVG(&buf, d, SVGOptions{}); err != nil {
 		b.Fatal(err)
@@ -38,7 +40,7 @@ func BenchmarkWriteSVG(b *testing.B) {
 }
 
 func BenchmarkNestPolygon(b *testing.B) {
-	poly := strip(8.2, math.Pi/2, 4.6, 2.7)
+	poly := fixture.Strip(8.2, math.Pi/2, 4.6, 2.7)
 	for _, size := range []struct {
 		name string
 		s    Sheet

@@ -11,28 +11,8 @@ import (
 
 	"coilwright/cam/checktool"
 	"coilwright/cam/geom"
+	"coilwright/cam/internal/fixture"
 )
-
-// plateDrawing is a small reflector-like drawing using every entity kind:
-// a 50 mm disc, a round hole, a D-hole, an arc, lines and text.
-func plateDrawing() geom.Drawing {
-	var d geom.Drawing
-	y, r := 2.75, 3.25
-	x := math.Sqrt(r*r - y*y)
-	theta := 2*math.Pi - 2*math.Atan2(x, y)
-	d.Add("CUT",
-		geom.Circle{Radius: 25},
-		geom.Circle{Center: geom.Vec2{X: 8.5}, Radius: 1.84},
-		geom.Contour{Closed: true, Vertices: []geom.Vertex{{P: geom.Vec2{X: -x - 10, Y: y}, Bulge: math.Tan(theta / 4)}, {P: geom.Vec2{X: x - 10, Y: y}}}},
-	)
-	d.Add("MARK",
-		geom.Line{A: geom.Vec2{X: -2}, B: geom.Vec2{X: 2}},
-		geom.Line{A: geom.Vec2{Y: -2}, B: geom.Vec2{Y: 2}},
-		geom.Arc{Radius: 15, Start: -math.Pi / 6, End: math.Pi / 6},
-		geom.Text{At: geom.Vec2{Y: -12}, Height: 3, Value: "TEST 5G8", Align: geom.AlignCenter},
-	)
-	return d
-}
 
 // dxfPairs parses an ASCII DXF into group code/value pairs, failing on a
 // malformed code line.
@@ -64,10 +44,10 @@ func TestWriteDXF(t *testing.T) {
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			var buf bytes.Buffer
-			if err := WriteDXF(&buf, plateDrawing(), tc.opt); err != nil {
+			if err := WriteDXF(&buf, fixture.Plate(), tc.opt); err != nil {
 				t.Fatal(err)
 			}
-			golden(t, tc.file, buf.Bytes())
+			fixture.Golden(t, tc.file, buf.Bytes())
 			pairs := dxfPairs(t, buf.Bytes())
 			if last := pairs[len(pairs)-1]; last != [2]string{"0", "EOF"} {
 				t.Errorf("last pair %v, want 0/EOF", last)
@@ -130,7 +110,7 @@ func TestDXFExternal(t *testing.T) {
 	py := checktool.NeedPython(t, "ezdxf")
 	// After a 0.2 mm kerf the 25 mm disc's path is 25.1 mm and the
 	// 1.84 mm hole's 1.74 mm (half the kerf each way).
-	k, err := ApplyKerf(plateDrawing(), 0.2)
+	k, err := ApplyKerf(fixture.Plate(), 0.2)
 	if err != nil {
 		t.Fatal(err)
 	}

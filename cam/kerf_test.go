@@ -5,6 +5,7 @@ import (
 	"testing"
 
 	"coilwright/cam/geom"
+	"coilwright/cam/internal/fixture"
 )
 
 // kerfTol is the tolerance in mm on offset distances and radii.
@@ -124,7 +125,7 @@ func TestOffsetContour(t *testing.T) {
 		}
 	})
 	t.Run("curved strip like a wedge", func(t *testing.T) {
-		poly := strip(8.2, math.Pi/2, 4.6, 2.7)
+		poly := fixture.Strip(8.2, math.Pi/2, 4.6, 2.7)
 		c := geom.Contour{Closed: true}
 		for _, p := range poly {
 			c.Vertices = append(c.Vertices, geom.Vertex{P: p})

@@ -12,6 +12,7 @@ import (
 	"testing"
 
 	"coilwright/cam/geom"
+	"coilwright/cam/internal/fixture"
 )
 
 // tetra is a right tetrahedron with legs 10, 20 and 30 mm, faces
@@ -32,7 +33,7 @@ func TestSTLRoundTrip(t *testing.T) {
 	if want := 84 + 4*50; buf.Len() != want {
 		t.Fatalf("size %d, want %d", buf.Len(), want)
 	}
-	golden(t, "tetra.stl", buf.Bytes())
+	fixture.Golden(t, "tetra.stl", buf.Bytes())
 	m, head, err := ReadSTL(bytes.NewReader(buf.Bytes()))
 	if err != nil {
 		t.Fatal(err)
@@ -121,7 +122,7 @@ func Test3MFRoundTrip(t *testing.T) {
 	if want := []string{"[Content_Types].xml", "_rels/.rels", "3D/3dmodel.model"}; !slices.Equal(names, want) {
 		t.Fatalf("parts %v, want %v", names, want)
 	}
-	golden(t, "tetra.model", modelXML)
+	fixture.Golden(t, "tetra.model", modelXML)
 	var m model3MF
 	if err := xml.Unmarshal(modelXML, &m); err != nil {
 		t.Fatal(err)

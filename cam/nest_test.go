@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	"coilwright/cam/geom"
+	"coilwright/cam/internal/fixture"
 )
 
 // orient returns the sign of the turn a→b→c.
@@ -52,25 +53,6 @@ func overlapOrClose(a, b geom.Polyline, gap float64) bool {
 	return vertexEdge(a, b) || vertexEdge(b, a)
 }
 
-// strip returns a curved tapering strip like a matching wedge: centreline
-// radius r over span radians, width w0 at the start and w1 at the end.
-func strip(r, span, w0, w1 float64) geom.Polyline {
-	const n = 24
-	var in, out geom.Polyline
-	for i := 0; i <= n; i++ {
-		f := float64(i) / n
-		a := span * f
-		w := w0 + (w1-w0)*f
-		in = append(in, geom.Vec2{X: (r - w/2) * math.Cos(a), Y: (r - w/2) * math.Sin(a)})
-		out = append(out, geom.Vec2{X: (r + w/2) * math.Cos(a), Y: (r + w/2) * math.Sin(a)})
-	}
-	poly := append(geom.Polyline{}, out...)
-	for i := len(in) - 1; i >= 0; i-- {
-		poly = append(poly, in[i])
-	}
-	return poly
-}
-
 func checkNest(t *testing.T, outline geom.Polyline, n Nest, s Sheet) {
 	t.Helper()
 	placed := make([]geom.Polyline, len(n.Placements))
@@ -113,7 +95,7 @@ func TestNestRandomBatches(t *testing.T) {
 		})
 		t.Run("interlocked strips", func(t *testing.T) {
 			w0 := 1 + 7*rng.Float64()
-			poly := strip(5+15*rng.Float64(), math.Pi/3+math.Pi/2*rng.Float64(), w0, 0.5+w0*rng.Float64())
+			poly := fixture.Strip(5+15*rng.Float64(), math.Pi/3+math.Pi/2*rng.Float64(), w0, 0.5+w0*rng.Float64())
 			n, err := NestPolygon(poly, count, s, NestOptions{Interlock: true})
 			if err != nil {
 				t.Fatalf("seed %d: %v", seed, err)
@@ -142,7 +124,7 @@ func TestNestDiscsHexCount(t *testing.T) {
 
 func TestNestInterlockHelps(t *testing.T) {
 	// A curved strip packs tighter against its half-turned copy than alone.
-	poly := strip(10, math.Pi/2, 5, 2.7)
+	poly := fixture.Strip(10, math.Pi/2, 5, 2.7)
 	s := Sheet{Width: 200, Height: 200, Margin: 5, Spacing: 2}
 	alone, err := NestPolygon(poly, 1, s, NestOptions{})
 	if err != nil {
@@ -162,7 +144,7 @@ func TestNestRejects(t *testing.T) {
 	if _, err := NestDiscs(60, 1, Sheet{Width: 100, Height: 100}); err == nil {
 		t.Error("a disc wider than the sheet was placed")
 	}
-	if _, err := NestPolygon(strip(10, 1, 2, 2), 3, Sheet{Width: -1, Height: 10}, NestOptions{}); err == nil {
+	if _, err := NestPolygon(fixture.Strip(10, 1, 2, 2), 3, Sheet{Width: -1, Height: 10}, NestOptions{}); err == nil {
 		t.Error("a negative sheet was accepted")
 	}
 }

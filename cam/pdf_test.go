@@ -18,6 +18,7 @@ import (
 
 	"coilwright/cam/checktool"
 	"coilwright/cam/geom"
+	"coilwright/cam/internal/fixture"
 )
 
 // templateDoc renders a two-part template: the plate on one page and a
@@ -27,7 +28,7 @@ func templateDoc(t *testing.T, page PageSize, opt PDFOptions) []byte {
 	var big geom.Drawing
 	big.Add("CUT", geom.Circle{Radius: 125})
 	pages, err := TemplatePages([]TemplatePart{
-		{Title: "Reflector", Notes: []string{"disc Ø 50 mm"}, Drawing: plateDrawing()},
+		{Title: "Reflector", Notes: []string{"disc Ø 50 mm"}, Drawing: fixture.Plate()},
 		{Title: "Large reflector", Drawing: big},
 	}, TemplateOptions{Page: page, Heading: "Test kit", Warnings: []string{"FR-4: mill or shear only"}})
 	if err != nil {

@@ -12,6 +12,7 @@ import (
 
 	"coilwright/cam/checktool"
 	"coilwright/cam/geom"
+	"coilwright/cam/internal/fixture"
 )
 
 // svgDoc is the part of an SVG file the tests read back.
@@ -31,10 +32,10 @@ type svgDoc struct {
 
 func TestWriteSVG(t *testing.T) {
 	var buf bytes.Buffer
-	if err := WriteSVG(&buf, plateDrawing(), SVGOptions{Title: "Test plate", Comments: []string{"for milling -- or shearing"}}); err != nil {
+	if err := WriteSVG(&buf, fixture.Plate(), SVGOptions{Title: "Test plate", Comments: []string{"for milling -- or shearing"}}); err != nil {
 		t.Fatal(err)
 	}
-	golden(t, "plate.svg", buf.Bytes())
+	fixture.Golden(t, "plate.svg", buf.Bytes())
 	var doc svgDoc
 	if err := xml.Unmarshal(buf.Bytes(), &doc); err != nil {
 		t.Fatal(err)
@@ -55,7 +56,7 @@ func TestWriteSVG(t *testing.T) {
 	t.Run("sheet frame", func(t *testing.T) {
 		var b bytes.Buffer
 		frame := geom.Box2{Max: geom.Vec2{X: 300, Y: 200}}
-		if err := WriteSVG(&b, plateDrawing(), SVGOptions{Frame: &frame}); err != nil {
+		if err := WriteSVG(&b, fixture.Plate(), SVGOptions{Frame: &frame}); err != nil {
 			t.Fatal(err)
 		}
 		if !bytes.Contains(b.Bytes(), []byte(`width="300mm" height="200mm" viewBox="0 0 300 200"`)) {
@@ -76,8 +77,8 @@ func TestSVGExternal(t *testing.T) {
 		opt  SVGOptions
 		w, h float64 // expected page in mm
 	}{
-		{"part framed by its bounds", plateDrawing(), SVGOptions{}, 54, 54},
-		{"sheet frame", plateDrawing(), SVGOptions{Frame: &geom.Box2{Max: geom.Vec2{X: 300, Y: 200}}}, 300, 200},
+		{"part framed by its bounds", fixture.Plate(), SVGOptions{}, 54, 54},
+		{"sheet frame", fixture.Plate(), SVGOptions{Frame: &geom.Box2{Max: geom.Vec2{X: 300, Y: 200}}}, 300, 200},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			var buf bytes.Buffer
@@ -121,7 +122,7 @@ print(sum(1 for e in els if isinstance(e, (s.Path, s.Circle))))
 
 func TestSVGElementsKeepsEveryShape(t *testing.T) {
 	py := checktool.NeedPython(t, "svgelements")
-	d, err := ExpandText(plateDrawing())
+	d, err := ExpandText(fixture.Plate())
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -130,7 +131,7 @@ func TestSVGElementsKeepsEveryShape(t *testing.T) {
 		want += len(l.Entities)
 	}
 	var buf bytes.Buffer
-	if err := WriteSVG(&buf, plateDrawing(), SVGOptions{}); err != nil {
+	if err := WriteSVG(&buf, fixture.Plate(), SVGOptions{}); err != nil {
 		t.Fatal(err)
 	}
 	out, err := exec.Command(py, "-c", svgelementsCount, checktool.TempFile(t, "p.svg", buf.Bytes())).CombinedOutput()
