@@ -16,9 +16,9 @@ import (
 
 	"gonum.org/v1/gonum/mat"
 
-	"coilwright/cam"
 	"coilwright/cam/checktool"
 	"coilwright/cam/geom"
+	"coilwright/cam/stl"
 	"coilwright/jig/mesh"
 	"coilwright/parts"
 	"coilwright/templates"
@@ -173,7 +173,7 @@ func TestDemoFormerAdmesh(t *testing.T) {
 	}
 	path := filepath.Join(t.TempDir(), "former.stl")
 	var buf bytes.Buffer
-	if err := cam.WriteSTL(&buf, m, cam.STLOptions{}); err != nil {
+	if err := stl.WriteSTL(&buf, m, stl.STLOptions{}); err != nil {
 		t.Fatal(err)
 	}
 	if err := os.WriteFile(path, buf.Bytes(), 0o644); err != nil {

@@ -4,7 +4,9 @@ import (
 	"fmt"
 	"io"
 
-	"coilwright/cam"
+	"coilwright/cam/preview"
+	"coilwright/cam/stl"
+	"coilwright/cam/threemf"
 	"coilwright/jig/mesh"
 )
 
@@ -30,17 +32,17 @@ func (k *Kit) writeFormer(out Sink) error {
 	}
 	header := stlHeader("coilwright former: " + s.Kit)
 	if err := out.Add("former.stl", func(w io.Writer) error {
-		return cam.WriteSTL(w, m, cam.STLOptions{Header: header})
+		return stl.WriteSTL(w, m, stl.STLOptions{Header: header})
 	}); err != nil {
 		return err
 	}
 	if err := out.Add("former.3mf", func(w io.Writer) error {
-		return cam.Write3MF(w, m, cam.ThreeMFOptions{Name: s.Kit})
+		return threemf.Write3MF(w, m, threemf.ThreeMFOptions{Name: s.Kit})
 	}); err != nil {
 		return err
 	}
 	return out.Add("former.png", func(w io.Writer) error {
-		return cam.WritePreview(w, m, cam.PreviewOptions{})
+		return preview.WritePreview(w, m, preview.PreviewOptions{})
 	})
 }
 

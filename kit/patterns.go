@@ -6,8 +6,11 @@ import (
 
 	"github.com/tdewolff/canvas"
 
-	"coilwright/cam"
+	"coilwright/cam/cut"
+	"coilwright/cam/dxf"
 	"coilwright/cam/geom"
+	"coilwright/cam/pdf"
+	"coilwright/cam/svg"
 	"coilwright/parts"
 )
 
@@ -25,15 +28,15 @@ type cutPart struct {
 	notes   []string
 	nominal geom.Drawing
 	cut     geom.Drawing
-	nest    cam.Nest
-	sheet   cam.Sheet
+	nest    cut.Nest
+	sheet   cut.Sheet
 }
 
 // cutParts works out both parts of d with their kerf offsets and nests.
 func cutParts(d *parts.Design) ([]cutPart, error) {
 	p := d.Patterns
 	s := d.Spec
-	sheet := cam.Sheet{Width: s.Cutting.SheetWidthMM, Height: s.Cutting.SheetHeightMM, Margin: s.Cutting.MarginMM, Spacing: s.Cutting.SpacingMM}
+	sheet := cut.Sheet{Width: s.Cutting.SheetWidthMM, Height: s.Cutting.SheetHeightMM, Margin: s.Cutting.MarginMM, Spacing: s.Cutting.SpacingMM}
 	w := p.Wedge
 	var out []cutPart
 	if p.Reflector != nil {
@@ -53,18 +56,18 @@ func cutParts(d *parts.Design) ([]cutPart, error) {
 				s.Wedge.SpanDeg, w.Reflection, parts.VSWR(w.Reflection), s.FrequencyMHz),
 		}})
 	for i := range out {
-		c, err := cam.ApplyKerf(out[i].nominal, p.Kerf)
+		c, err := cut.ApplyKerf(out[i].nominal, p.Kerf)
 		if err != nil {
 			return nil, fmt.Errorf("%s: %w", out[i].name, err)
 		}
 		out[i].cut, out[i].sheet = c, sheet
 		switch {
 		case out[i].name == "wedge":
-			out[i].nest, err = cam.NestPolygon(outerOutline(c), s.Quantity, sheet, cam.NestOptions{Interlock: true, Tolerance: nestTolerance})
+			out[i].nest, err = cut.NestPolygon(outerOutline(c), s.Quantity, sheet, cut.NestOptions{Interlock: true, Tolerance: nestTolerance})
 		case p.Reflector.Input.Shape == parts.ReflectorDisc:
-			out[i].nest, err = cam.NestDiscs(p.Reflector.Input.Size/2+p.Kerf/2, s.Quantity, sheet)
+			out[i].nest, err = cut.NestDiscs(p.Reflector.Input.Size/2+p.Kerf/2, s.Quantity, sheet)
 		default:
-			out[i].nest, err = cam.NestPolygon(outerOutline(c), s.Quantity, sheet, cam.NestOptions{Tolerance: nestTolerance, Angles: []float64{0}})
+			out[i].nest, err = cut.NestPolygon(outerOutline(c), s.Quantity, sheet, cut.NestOptions{Tolerance: nestTolerance, Angles: []float64{0}})
 		}
 		if err != nil {
 			return nil, fmt.Errorf("%s panel: %w", out[i].name, err)
@@ -111,9 +114,9 @@ func (k *Kit) addPanels(r *parts.Report) {
 // 1:1 paper templates, and, for a batch, each part's panel files.
 func (k *Kit) writePatterns(out Sink) error {
 	s := k.Design.Spec
-	version := cam.DXFR12
+	version := dxf.DXFR12
 	if s.Cutting.DXF == "R2000" {
-		version = cam.DXFR2000
+		version = dxf.DXFR2000
 	}
 	for _, c := range k.parts {
 		comments := []string{
@@ -129,13 +132,13 @@ func (k *Kit) writePatterns(out Sink) error {
 			pc := append(comments,
 				fmt.Sprintf("Panel: sheet %g x %g mm, origin at its lower-left corner, margin %g mm, spacing %g mm.", c.sheet.Width, c.sheet.Height, c.sheet.Margin, c.sheet.Spacing),
 				fmt.Sprintf("%d parts per sheet; %d sheets for %d parts; this panel holds %d.", c.nest.PerSheet, c.nest.Sheets, s.Quantity, len(c.nest.Placements)))
-			if err := writeDrawing(out, "panel-"+c.name, cam.PanelDrawing(c.cut, c.nest), &frame, version, pc); err != nil {
+			if err := writeDrawing(out, "panel-"+c.name, cut.PanelDrawing(c.cut, c.nest), &frame, version, pc); err != nil {
 				return err
 			}
 		}
 	}
 	return out.Add("templates.pdf", func(w io.Writer) error {
-		return cam.WritePDF(w, k.templates, cam.PDFOptions{Title: s.Kit + " cutting templates", Creator: k.creator(), Created: k.opt.Created})
+		return pdf.WritePDF(w, k.templates, pdf.PDFOptions{Title: s.Kit + " cutting templates", Creator: k.creator(), Created: k.opt.Created})
 	})
 }
 
@@ -152,11 +155,11 @@ func (k *Kit) creator() string {
 // sheet ends with them.
 func templatePages(d *parts.Design, cps []cutPart) ([]*canvas.Canvas, error) {
 	s := d.Spec
-	tparts := make([]cam.TemplatePart, len(cps))
+	tparts := make([]pdf.TemplatePart, len(cps))
 	for i, c := range cps {
-		tparts[i] = cam.TemplatePart{Title: c.title, Notes: append(append([]string{}, c.notes...), c.label), Drawing: c.nominal}
+		tparts[i] = pdf.TemplatePart{Title: c.title, Notes: append(append([]string{}, c.notes...), c.label), Drawing: c.nominal}
 	}
-	paper, err := cam.PageSizeByName(s.Cutting.Paper)
+	paper, err := pdf.PageSizeByName(s.Cutting.Paper)
 	if err != nil {
 		return nil, err
 	}
@@ -164,19 +167,19 @@ func templatePages(d *parts.Design, cps []cutPart) ([]*canvas.Canvas, error) {
 	if d.Patterns.LaserHalogen {
 		warns = append(warns, parts.LaserHalogenWarning)
 	}
-	return cam.TemplatePages(tparts, cam.TemplateOptions{
+	return pdf.TemplatePages(tparts, pdf.TemplateOptions{
 		Page: paper, Heading: s.Kit + ": 1:1 templates (" + d.Coil.Hand.String() + "), print at 100 %", Warnings: warns,
 	})
 }
 
 // writeDrawing writes name.dxf and name.svg for one drawing.
-func writeDrawing(out Sink, name string, d geom.Drawing, frame *geom.Box2, version cam.DXFVersion, comments []string) error {
+func writeDrawing(out Sink, name string, d geom.Drawing, frame *geom.Box2, version dxf.DXFVersion, comments []string) error {
 	if err := out.Add(name+".dxf", func(w io.Writer) error {
-		return cam.WriteDXF(w, d, cam.DXFOptions{Version: version, Comments: comments})
+		return dxf.WriteDXF(w, d, dxf.DXFOptions{Version: version, Comments: comments})
 	}); err != nil {
 		return err
 	}
 	return out.Add(name+".svg", func(w io.Writer) error {
-		return cam.WriteSVG(w, d, cam.SVGOptions{Frame: frame, Title: comments[0], Comments: comments[1:]})
+		return svg.WriteSVG(w, d, svg.SVGOptions{Frame: frame, Title: comments[0], Comments: comments[1:]})
 	})
 }

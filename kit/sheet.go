@@ -10,7 +10,8 @@ import (
 	"strings"
 	"text/template"
 
-	"coilwright/cam"
+	"coilwright/cam/cut"
+	"coilwright/cam/pdf"
 	"coilwright/parts"
 	"coilwright/templates"
 )
@@ -53,7 +54,7 @@ func (k *Kit) writeSheet(out Sink) error {
 	if err := out.Add("build-sheet.md", func(w io.Writer) error { return sheetTmpl.Execute(w, sheet) }); err != nil {
 		return err
 	}
-	page, err := cam.PageSizeByName(sheet.Paper)
+	page, err := pdf.PageSizeByName(sheet.Paper)
 	if err != nil {
 		return err
 	}
@@ -63,8 +64,8 @@ func (k *Kit) writeSheet(out Sink) error {
 	if err != nil {
 		return err
 	}
-	opt := cam.PDFOptions{Title: sheet.Kit + " — build sheet", Subject: sheet.Summary, Creator: k.creator(), Created: k.opt.Created}
-	return out.Add("build-sheet.pdf", func(w io.Writer) error { return cam.WritePDF(w, append(pages, k.templates...), opt) })
+	opt := pdf.PDFOptions{Title: sheet.Kit + " — build sheet", Subject: sheet.Summary, Creator: k.creator(), Created: k.opt.Created}
+	return out.Add("build-sheet.pdf", func(w io.Writer) error { return pdf.WritePDF(w, append(pages, k.templates...), opt) })
 }
 
 // fmtMM formats a length or amount for CSV: one decimal, empty when zero.
@@ -111,7 +112,7 @@ type batchStock struct {
 	Name     string // "Wire", "Support rod"
 	Item     string // the piece's cut-list item
 	PieceMM  float64
-	Plan     cam.StockPlan
+	Plan     cut.StockPlan
 	Patterns []rodPattern
 	// ReusableMM is the offcut, counted in the waste, from rods whose
 	// offcut would still give another piece.
@@ -132,17 +133,17 @@ func newBatchPlan(d *parts.Design, cl *parts.CutList, cps []cutPart) (*batchPlan
 	for _, st := range []struct {
 		name, item, key string
 		piece           float64
-		rod             cam.Rod
+		rod             cut.Rod
 	}{
-		{"Wire", "wire blank", "stock.wire_rod_mm", cl.Wire.LengthMM, cam.Rod{Length: s.Stock.WireRodMM, Kerf: s.Stock.WireKerfMM, EndTrim: s.Stock.EndTrimMM}},
-		{"Support rod", "support rod", "stock.dowel_rod_mm", cl.Dowel.LengthMM, cam.Rod{Length: s.Stock.DowelRodMM, Kerf: s.Stock.DowelKerfMM, EndTrim: s.Stock.EndTrimMM}},
+		{"Wire", "wire blank", "stock.wire_rod_mm", cl.Wire.LengthMM, cut.Rod{Length: s.Stock.WireRodMM, Kerf: s.Stock.WireKerfMM, EndTrim: s.Stock.EndTrimMM}},
+		{"Support rod", "support rod", "stock.dowel_rod_mm", cl.Dowel.LengthMM, cut.Rod{Length: s.Stock.DowelRodMM, Kerf: s.Stock.DowelKerfMM, EndTrim: s.Stock.EndTrimMM}},
 	} {
-		pieces := make([]cam.Piece, n)
+		pieces := make([]cut.Piece, n)
 		for i := range pieces {
-			pieces[i] = cam.Piece{Label: st.item, Length: st.piece}
+			pieces[i] = cut.Piece{Label: st.item, Length: st.piece}
 		}
-		plan, err := cam.PlanStock(pieces, st.rod)
-		if errors.Is(err, cam.ErrPieceTooLong) {
+		plan, err := cut.PlanStock(pieces, st.rod)
+		if errors.Is(err, cut.ErrPieceTooLong) {
 			need := math.Ceil((st.piece+st.rod.Kerf+st.rod.EndTrim)/10) * 10
 			return nil, &parts.SpecError{Key: st.key, Line: s.Line(st.key), Value: strconv.FormatFloat(st.rod.Length, 'g', -1, 64),
 				Problem: fmt.Sprintf("is too short for one %s of %.1f mm with %s mm kerf and %s mm end trim", st.item, st.piece,
@@ -186,7 +187,7 @@ func newBatchPlan(d *parts.Design, cl *parts.CutList, cps []cutPart) (*batchPlan
 }
 
 // patterns groups consecutive rods with the same piece count and offcut.
-func patterns(p cam.StockPlan) []rodPattern {
+func patterns(p cut.StockPlan) []rodPattern {
 	var out []rodPattern
 	start := 0
 	for i := 1; i <= len(p.Rods); i++ {

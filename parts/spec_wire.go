@@ -1,11 +1,12 @@
 package parts
 
 import (
-	"coilwright/parts/wire"
 	"fmt"
 	"math"
 	"strconv"
 	"strings"
+
+	"coilwright/parts/wire"
 )
 
 // WireSpec is the [wire] table: the wire the coil is wound from and how its

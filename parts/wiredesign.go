@@ -18,10 +18,11 @@
 package parts
 
 import (
-	"coilwright/parts/wire"
 	"fmt"
 	"math"
 	"strings"
+
+	"coilwright/parts/wire"
 )
 
 // Inspection tolerance of the relaxed centreline diameter. Common practice

@@ -1,7 +1,6 @@
 package parts
 
 import (
-	"coilwright/parts/wire"
 	"encoding/json"
 	"errors"
 	"fmt"
@@ -9,6 +8,8 @@ import (
 	"slices"
 	"strings"
 	"testing"
+
+	"coilwright/parts/wire"
 )
 
 // specText returns a complete spec with the given [coil] body and [wire]

@@ -12,6 +12,7 @@ import (
 	"github.com/spf13/cobra"
 
 	"coilwright/cam"
+	"coilwright/cam/pdf"
 	"coilwright/templates"
 )
 
@@ -64,7 +65,7 @@ func runBuild(w io.Writer, path string, o buildOptions) error {
 	if err != nil {
 		return err
 	}
-	created, err := cam.SourceDateEpoch(os.Getenv("SOURCE_DATE_EPOCH"))
+	created, err := pdf.SourceDateEpoch(os.Getenv("SOURCE_DATE_EPOCH"))
 	if err != nil {
 		return usageError{err}
 	}

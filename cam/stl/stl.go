@@ -1,4 +1,4 @@
-package cam
+package stl
 
 import (
 	"bufio"

@@ -1,4 +1,4 @@
-package cam
+package dxf
 
 import (
 	"bufio"
@@ -10,6 +10,7 @@ import (
 	"testing"
 
 	"coilwright/cam/checktool"
+	"coilwright/cam/cut"
 	"coilwright/cam/geom"
 	"coilwright/cam/internal/fixture"
 )
@@ -110,7 +111,7 @@ func TestDXFExternal(t *testing.T) {
 	py := checktool.NeedPython(t, "ezdxf")
 	// After a 0.2 mm kerf the 25 mm disc's path is 25.1 mm and the
 	// 1.84 mm hole's 1.74 mm (half the kerf each way).
-	k, err := ApplyKerf(fixture.Plate(), 0.2)
+	k, err := cut.ApplyKerf(fixture.Plate(), 0.2)
 	if err != nil {
 		t.Fatal(err)
 	}

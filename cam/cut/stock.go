@@ -11,7 +11,7 @@
 // rods before the one the previous equal piece went into, and gives up
 // after a fixed number of nodes.
 
-package cam
+package cut
 
 import (
 	"errors"

@@ -16,7 +16,7 @@
 // holding the most parts wins. Every layout is checked pair by pair before
 // it is returned.
 
-package cam
+package cut
 
 import (
 	"fmt"

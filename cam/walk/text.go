@@ -2,7 +2,7 @@
 // so text is drawn as closed polylines traced from the Go Regular font
 // (embedded, so every machine draws the same letters).
 
-package cam
+package walk
 
 import (
 	"fmt"
@@ -113,4 +113,18 @@ func ExpandText(d geom.Drawing) (geom.Drawing, error) {
 		}
 	}
 	return out, nil
+}
+
+// ValidLayerName reports whether name is non-empty upper-case ASCII letters,
+// digits and underscores.
+func ValidLayerName(name string) bool {
+	if name == "" {
+		return false
+	}
+	for _, r := range name {
+		if !(r >= 'A' && r <= 'Z' || r >= '0' && r <= '9' || r == '_') {
+			return false
+		}
+	}
+	return true
 }

@@ -3,7 +3,7 @@
 // millimetres so the file prints and imports at true size. Drawing coordinates (y up) are mapped to SVG user
 // units of 1 mm (y down) inside the frame.
 
-package cam
+package svg
 
 import (
 	"bufio"
@@ -15,6 +15,7 @@ import (
 	"strings"
 
 	"coilwright/cam/geom"
+	"coilwright/cam/walk"
 )
 
 // DefaultSVGMargin is the clear border in mm around a drawing's bounds
@@ -67,7 +68,7 @@ func SVGFrame(d geom.Drawing, opt SVGOptions) geom.Box2 {
 // outlined first. It returns an error for an entity it cannot draw, an
 // empty frame, or a failed write.
 func WriteSVG(w io.Writer, d geom.Drawing, opt SVGOptions) error {
-	d, err := ExpandText(d)
+	d, err := walk.ExpandText(d)
 	if err != nil {
 		return err
 	}
@@ -87,7 +88,7 @@ func WriteSVG(w io.Writer, d geom.Drawing, opt SVGOptions) error {
 		sw.printf("<title>%s</title>\n", html.EscapeString(opt.Title))
 	}
 	for _, l := range d.Layers {
-		if !validLayerName(l.Name) {
+		if !walk.ValidLayerName(l.Name) {
 			return fmt.Errorf("cam: layer name %q: use A–Z, 0–9 and _", l.Name)
 		}
 		sw.printf("<g id=\"%s\" fill=\"none\" stroke=\"%s\" stroke-width=\"%s\">\n",

@@ -13,7 +13,7 @@
 // depth on the CUT layer: a closed entity inside an odd number of others
 // is a hole.
 
-package cam
+package cut
 
 import (
 	"fmt"

@@ -1,4 +1,4 @@
-package cam
+package svg
 
 import (
 	"bytes"
@@ -13,6 +13,7 @@ import (
 	"coilwright/cam/checktool"
 	"coilwright/cam/geom"
 	"coilwright/cam/internal/fixture"
+	"coilwright/cam/walk"
 )
 
 // svgDoc is the part of an SVG file the tests read back.
@@ -122,7 +123,7 @@ print(sum(1 for e in els if isinstance(e, (s.Path, s.Circle))))
 
 func TestSVGElementsKeepsEveryShape(t *testing.T) {
 	py := checktool.NeedPython(t, "svgelements")
-	d, err := ExpandText(fixture.Plate())
+	d, err := walk.ExpandText(fixture.Plate())
 	if err != nil {
 		t.Fatal(err)
 	}

@@ -5,7 +5,7 @@
 // page shows a window of the part, windows overlapping by TileOverlap, with
 // the window's frame drawn so the sheets can be trimmed and taped together.
 
-package cam
+package pdf
 
 import (
 	"fmt"
@@ -14,6 +14,7 @@ import (
 	"github.com/tdewolff/canvas"
 
 	"coilwright/cam/geom"
+	"coilwright/cam/walk"
 )
 
 // Template layout constants, in mm.
@@ -64,13 +65,13 @@ func TemplatePages(parts []TemplatePart, opt TemplateOptions) ([]*canvas.Canvas,
 	if opt.Page.Width == 0 {
 		opt.Page = PageA4
 	}
-	fam, err := DocumentFont()
+	fam, err := walk.DocumentFont()
 	if err != nil {
 		return nil, err
 	}
 	var pages []*canvas.Canvas
 	for _, part := range parts {
-		d, err := ExpandText(part.Drawing)
+		d, err := walk.ExpandText(part.Drawing)
 		if err != nil {
 			return nil, err
 		}
@@ -244,7 +245,7 @@ func drawScaleBar(ctx *canvas.Context, fam *canvas.FontFamily) {
 // clipPath returns the parts of p inside the box b, as straight segments.
 func clipPath(p *canvas.Path, b geom.Box2) *canvas.Path {
 	out := &canvas.Path{}
-	for _, sub := range p.Flatten(TextTolerance).Split() {
+	for _, sub := range p.Flatten(walk.TextTolerance).Split() {
 		pts := sub.Coords()
 		for i := 1; i < len(pts); i++ {
 			a := geom.Vec2{X: pts[i-1].X, Y: pts[i-1].Y}

@@ -1,4 +1,4 @@
-package cam
+package threemf
 
 import (
 	"archive/zip"

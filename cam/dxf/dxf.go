@@ -13,7 +13,7 @@
 // point with at most nine decimals, so output is reproducible byte for
 // byte.
 
-package cam
+package dxf
 
 import (
 	"bytes"
@@ -24,6 +24,7 @@ import (
 	"strings"
 
 	"coilwright/cam/geom"
+	"coilwright/cam/walk"
 )
 
 // DXFVersion selects the DXF release to write.
@@ -61,12 +62,12 @@ func layerColor(name string) int {
 // entities are outlined first. It returns an error for an entity type it
 // cannot write, an invalid layer name, or a failed write.
 func WriteDXF(w io.Writer, d geom.Drawing, opt DXFOptions) error {
-	d, err := ExpandText(d)
+	d, err := walk.ExpandText(d)
 	if err != nil {
 		return err
 	}
 	for _, l := range d.Layers {
-		if !validLayerName(l.Name) {
+		if !walk.ValidLayerName(l.Name) {
 			return fmt.Errorf("cam: layer name %q: use A–Z, 0–9 and _", l.Name)
 		}
 	}
@@ -84,20 +85,6 @@ func WriteDXF(w io.Writer, d geom.Drawing, opt DXFOptions) error {
 	}
 	_, err = w.Write(body.buf.Bytes())
 	return err
-}
-
-// validLayerName reports whether name is non-empty upper-case ASCII letters,
-// digits and underscores.
-func validLayerName(name string) bool {
-	if name == "" {
-		return false
-	}
-	for _, r := range name {
-		if !(r >= 'A' && r <= 'Z' || r >= '0' && r <= '9' || r == '_') {
-			return false
-		}
-	}
-	return true
 }
 
 // dxfWriter accumulates group code/value pairs.

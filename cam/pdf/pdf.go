@@ -11,7 +11,7 @@
 // always give the same bytes. Fonts are embedded and subset by the canvas
 // writer in the order first used, which is deterministic.
 
-package cam
+package pdf
 
 import (
 	"bytes"

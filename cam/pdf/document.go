@@ -10,7 +10,7 @@
 // title and "page n of m". Text is set in the embedded Go fonts, so the
 // PDF embeds them and every machine sets the same lines.
 
-package cam
+package pdf
 
 import (
 	"fmt"
