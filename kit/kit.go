@@ -7,8 +7,7 @@ import (
 	"io"
 	"time"
 
-	"github.com/tdewolff/canvas"
-
+	"coilwright/cam/pdf"
 	"coilwright/jig"
 	"coilwright/parts"
 )
@@ -46,8 +45,8 @@ type Kit struct {
 	opt       Options
 	parts     []cutPart
 	cutList   *parts.CutList
-	batch     *batchPlan       // nil for one kit
-	templates []*canvas.Canvas // the 1:1 template pages, laid out once
+	batch     *batchPlan // nil for one kit
+	templates []pdf.Page // the 1:1 template pages, laid out once
 }
 
 // New works out the design for src and plans every part of the build.

@@ -4,8 +4,6 @@ import (
 	"fmt"
 	"io"
 
-	"github.com/tdewolff/canvas"
-
 	"coilwright/cam/cut"
 	"coilwright/cam/dxf"
 	"coilwright/cam/geom"
@@ -153,7 +151,7 @@ func (k *Kit) creator() string {
 // templatePages lays out the 1:1 templates once: each part as designed (no
 // kerf) with its notes and label. templates.pdf holds them and the build
 // sheet ends with them.
-func templatePages(d *parts.Design, cps []cutPart) ([]*canvas.Canvas, error) {
+func templatePages(d *parts.Design, cps []cutPart) ([]pdf.Page, error) {
 	s := d.Spec
 	tparts := make([]pdf.TemplatePart, len(cps))
 	for i, c := range cps {

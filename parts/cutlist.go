@@ -150,7 +150,7 @@ type HardwareItem struct {
 func NewCutList(d *Design) (*CutList, error) {
 	s := d.Spec
 	if s == nil {
-		return nil, fmt.Errorf("parts: design without a spec")
+		return nil, fmt.Errorf("design without a spec")
 	}
 	wd := s.Wire.DiameterMM
 	cable := s.Coax.Cable()
@@ -223,7 +223,7 @@ func dowelCut(d *Design) (DowelCut, error) {
 		// i counts the stock sizes below room, so size i−1 is the largest that fits.
 		i, _ := slices.BinarySearch(DowelDiametersMM, room+1e-9)
 		if i == 0 { // ParseSpec refuses such a spec (DowelSpec.validateFit)
-			return DowelCut{}, fmt.Errorf("parts: no stock rod fits %.2f mm inside the smallest turn: the spec was not validated", inner)
+			return DowelCut{}, fmt.Errorf("no stock rod fits %.2f mm inside the smallest turn: the spec was not validated", inner)
 		}
 		dc.DiameterMM = DowelDiametersMM[i-1]
 		dc.Automatic = true
@@ -254,7 +254,7 @@ func sleeveFor(outer float64) (SleeveCut, error) {
 			return SleeveCut{SuppliedMM: dia, RecoveredMM: dia / 2, LengthMM: SleeveLengthMM}, nil
 		}
 	}
-	return SleeveCut{}, fmt.Errorf("parts: no 2:1 heat-shrink size fits a %.2f mm cable", outer)
+	return SleeveCut{}, fmt.Errorf("no 2:1 heat-shrink size fits a %.2f mm cable", outer)
 }
 
 // solderEstimate adds up the fillets of the kit's three joints and turns

@@ -82,7 +82,7 @@ const (
 // the spec was not validated or is inconsistent.
 func NewDesign(s *Spec) (*Design, error) {
 	if s == nil {
-		return nil, fmt.Errorf("parts: nil spec")
+		return nil, fmt.Errorf("nil spec")
 	}
 	coil, err := coilFromSpec(s)
 	if err != nil {

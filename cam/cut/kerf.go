@@ -78,7 +78,7 @@ func (s offSeg) bulge() float64 {
 // to nothing.
 func OffsetContour(c geom.Contour, d float64) (geom.Contour, error) {
 	if !c.Closed || len(c.Vertices) < 2 {
-		return geom.Contour{}, fmt.Errorf("cam: only closed contours of two or more vertices can be offset")
+		return geom.Contour{}, fmt.Errorf("only closed contours of two or more vertices can be offset")
 	}
 	if d == 0 {
 		return c, nil
@@ -107,7 +107,7 @@ func OffsetContour(c geom.Contour, d float64) (geom.Contour, error) {
 			r = a.Radius - d
 		}
 		if !(r > offsetTol) {
-			return geom.Contour{}, fmt.Errorf("cam: an arc of radius %.3f mm cannot be offset by %.3f mm", a.Radius, d)
+			return geom.Contour{}, fmt.Errorf("an arc of radius %.3f mm cannot be offset by %.3f mm", a.Radius, d)
 		}
 		move := func(x geom.Vec2) geom.Vec2 { return a.Center.Add(x.Sub(a.Center).Scale(r / a.Radius)) }
 		segs = append(segs, offSeg{p: move(p), q: move(q), arc: true, c: a.Center, r: r, ccw: ccw, op: p, oq: q})
@@ -128,7 +128,7 @@ func OffsetContour(c geom.Contour, d float64) (geom.Contour, error) {
 		}
 		segs = append(segs[:fold:fold], segs[fold+1:]...)
 	}
-	return geom.Contour{}, fmt.Errorf("cam: contour too small to offset by %.3f mm", d)
+	return geom.Contour{}, fmt.Errorf("contour too small to offset by %.3f mm", d)
 }
 
 // joinOffsets joins consecutive offset segments: a round arc about the
@@ -155,7 +155,7 @@ func joinOffsets(segs []offSeg, d float64) (out []offSeg, fold int, err error) {
 		}
 		x, ok := crossNear(a, b, v)
 		if !ok {
-			return nil, -1, fmt.Errorf("cam: offset segments at (%.3f, %.3f) do not meet; the feature is smaller than the kerf", v.X, v.Y)
+			return nil, -1, fmt.Errorf("offset segments at (%.3f, %.3f) do not meet; the feature is smaller than the kerf", v.X, v.Y)
 		}
 		work[k].q = x
 		work[(k+1)%m].p = x
@@ -249,7 +249,7 @@ func circleCircle(c0 geom.Vec2, r0 float64, c1 geom.Vec2, r1 float64) []geom.Vec
 // entity on the CUT layer or a feature too small for the kerf.
 func ApplyKerf(d geom.Drawing, kerf float64) (geom.Drawing, error) {
 	if kerf < 0 || math.IsNaN(kerf) {
-		return geom.Drawing{}, fmt.Errorf("cam: kerf %g mm must not be negative", kerf)
+		return geom.Drawing{}, fmt.Errorf("kerf %g mm must not be negative", kerf)
 	}
 	out := geom.Drawing{Layers: make([]geom.Layer, len(d.Layers))}
 	for i, l := range d.Layers {
@@ -270,7 +270,7 @@ func ApplyKerf(d geom.Drawing, kerf float64) (geom.Drawing, error) {
 			switch e := e.(type) {
 			case geom.Circle:
 				if !(e.Radius+off > 0) {
-					return geom.Drawing{}, fmt.Errorf("cam: a hole of Ø %.3f mm is smaller than the kerf %.3f mm", 2*e.Radius, kerf)
+					return geom.Drawing{}, fmt.Errorf("a hole of Ø %.3f mm is smaller than the kerf %.3f mm", 2*e.Radius, kerf)
 				}
 				out.Layers[i].Entities = append(out.Layers[i].Entities, geom.Circle{Center: e.Center, Radius: e.Radius + off})
 			case geom.Contour:
@@ -301,11 +301,11 @@ func nestingDepth(es []geom.Entity) ([]int, error) {
 			regs[i] = closedRegion{e.Flatten(1e-4), e.Center.Add(geom.Vec2{X: e.Radius})}
 		case geom.Contour:
 			if !e.Closed || len(e.Vertices) < 2 {
-				return nil, fmt.Errorf("cam: the CUT layer holds an open polyline; kerf compensation needs closed contours")
+				return nil, fmt.Errorf("the CUT layer holds an open polyline; kerf compensation needs closed contours")
 			}
 			regs[i] = closedRegion{e.Flatten(1e-4), e.Vertices[0].P}
 		default:
-			return nil, fmt.Errorf("cam: the CUT layer holds a %T; kerf compensation needs closed contours", e)
+			return nil, fmt.Errorf("the CUT layer holds a %T; kerf compensation needs closed contours", e)
 		}
 	}
 	depth := make([]int, len(es))

@@ -38,7 +38,7 @@ type Sheet struct {
 // validate checks the sheet leaves room to place anything.
 func (s Sheet) validate() error {
 	if !(s.Width > 0) || !(s.Height > 0) || s.Margin < 0 || s.Spacing < 0 || math.IsNaN(s.Margin+s.Spacing) {
-		return fmt.Errorf("cam: sheet %g × %g mm with margin %g and spacing %g is not usable", s.Width, s.Height, s.Margin, s.Spacing)
+		return fmt.Errorf("sheet %g × %g mm with margin %g and spacing %g is not usable", s.Width, s.Height, s.Margin, s.Spacing)
 	}
 	return nil
 }
@@ -58,7 +58,7 @@ type Nest struct {
 func (n *Nest) finish(count int) error {
 	n.PerSheet = len(n.Placements)
 	if n.PerSheet == 0 {
-		return fmt.Errorf("cam: the part does not fit on the sheet inside its margin")
+		return fmt.Errorf("the part does not fit on the sheet inside its margin")
 	}
 	n.Sheets = (count + n.PerSheet - 1) / n.PerSheet
 	if count < len(n.Placements) {
@@ -74,7 +74,7 @@ func NestDiscs(radius float64, count int, s Sheet) (Nest, error) {
 		return Nest{}, err
 	}
 	if !(radius > 0) || count < 1 {
-		return Nest{}, fmt.Errorf("cam: cannot nest %d discs of radius %g mm", count, radius)
+		return Nest{}, fmt.Errorf("cannot nest %d discs of radius %g mm", count, radius)
 	}
 	p := 2*radius + s.Spacing
 	best := []geom.Vec2(nil)
@@ -136,7 +136,7 @@ func NestPolygon(outline geom.Polyline, count int, s Sheet, opt NestOptions) (Ne
 		return Nest{}, err
 	}
 	if len(outline) < 3 || count < 1 {
-		return Nest{}, fmt.Errorf("cam: cannot nest %d copies of a %d-point outline", count, len(outline))
+		return Nest{}, fmt.Errorf("cannot nest %d copies of a %d-point outline", count, len(outline))
 	}
 	gap := s.Spacing + opt.Tolerance
 	angles := opt.Angles
@@ -399,7 +399,7 @@ func checkLayout(ps []placedPoly, gap float64, s Sheet) error {
 			a := member{poly: ps[i].poly, box: ps[i].box}
 			b := member{poly: ps[j].poly, box: ps[j].box}
 			if !apart(a, b, gap-1e-9) {
-				return fmt.Errorf("cam: nesting placed parts %d and %d closer than %.3f mm", i+1, j+1, gap)
+				return fmt.Errorf("nesting placed parts %d and %d closer than %.3f mm", i+1, j+1, gap)
 			}
 		}
 	}

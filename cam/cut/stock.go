@@ -89,7 +89,7 @@ const fitTol = 1e-9
 func PlanStock(pieces []Piece, rod Rod) (StockPlan, error) {
 	usable := rod.Usable()
 	if !(rod.Length > 0) || !(usable > 0) || rod.Kerf < 0 || rod.EndTrim < 0 {
-		return StockPlan{}, fmt.Errorf("cam: rod %g mm with %g mm end trim and %g mm kerf has no usable length", rod.Length, rod.EndTrim, rod.Kerf)
+		return StockPlan{}, fmt.Errorf("rod %g mm with %g mm end trim and %g mm kerf has no usable length", rod.Length, rod.EndTrim, rod.Kerf)
 	}
 	order := make([]Piece, len(pieces))
 	copy(order, pieces)
@@ -97,10 +97,10 @@ func PlanStock(pieces []Piece, rod Rod) (StockPlan, error) {
 	plan := StockPlan{Rod: rod, Pieces: len(order)}
 	for _, p := range order {
 		if !(p.Length > 0) {
-			return StockPlan{}, fmt.Errorf("cam: piece %q is %g mm long", p.Label, p.Length)
+			return StockPlan{}, fmt.Errorf("piece %q is %g mm long", p.Label, p.Length)
 		}
 		if p.Length+rod.Kerf > usable+fitTol {
-			return StockPlan{}, fmt.Errorf("cam: %q, %.1f mm plus %.1f mm kerf, is longer than the rod's usable %.1f mm: %w", p.Label, p.Length, rod.Kerf, usable, ErrPieceTooLong)
+			return StockPlan{}, fmt.Errorf("%q, %.1f mm plus %.1f mm kerf, is longer than the rod's usable %.1f mm: %w", p.Label, p.Length, rod.Kerf, usable, ErrPieceTooLong)
 		}
 		plan.Demand += p.Length
 		plan.KerfLoss += rod.Kerf

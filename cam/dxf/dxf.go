@@ -62,14 +62,9 @@ func layerColor(name string) int {
 // entities are outlined first. It returns an error for an entity type it
 // cannot write, an invalid layer name, or a failed write.
 func WriteDXF(w io.Writer, d geom.Drawing, opt DXFOptions) error {
-	d, err := walk.ExpandText(d)
+	d, err := walk.Prepare(d)
 	if err != nil {
 		return err
-	}
-	for _, l := range d.Layers {
-		if !walk.ValidLayerName(l.Name) {
-			return fmt.Errorf("cam: layer name %q: use A–Z, 0–9 and _", l.Name)
-		}
 	}
 	body := &dxfWriter{r2000: opt.Version == DXFR2000, handle: 1}
 	if err := body.body(d); err != nil {
@@ -178,12 +173,8 @@ func (dw *dxfWriter) body(d geom.Drawing) error {
 	dw.tables(d)
 	dw.blocks()
 	dw.section("ENTITIES")
-	for _, l := range d.Layers {
-		for _, e := range l.Entities {
-			if err := dw.entity(l.Name, e); err != nil {
-				return err
-			}
-		}
+	if err := walk.Walk(d, dw); err != nil {
+		return err
 	}
 	dw.endsec()
 	if dw.r2000 {
@@ -393,70 +384,69 @@ func degrees(a float64) float64 {
 	return d
 }
 
-// entity writes one drawing entity.
-func (dw *dxfWriter) entity(layer string, e geom.Entity) error {
-	switch e := e.(type) {
-	case geom.Circle:
-		if !(e.Radius > 0) {
-			return fmt.Errorf("cam: circle of radius %g mm", e.Radius)
-		}
-		dw.entityStart("CIRCLE", layer)
-		dw.subclass("AcDbCircle")
-		dw.point(10, e.Center)
-		dw.num(40, e.Radius)
-	case geom.Arc:
-		if !(e.Radius > 0) {
-			return fmt.Errorf("cam: arc of radius %g mm", e.Radius)
-		}
-		dw.entityStart("ARC", layer)
-		dw.subclass("AcDbCircle")
-		dw.point(10, e.Center)
-		dw.num(40, e.Radius)
-		dw.subclass("AcDbArc")
-		dw.num(50, degrees(e.Start))
-		dw.num(51, degrees(e.End))
-	case geom.Line:
-		dw.entityStart("LINE", layer)
-		dw.subclass("AcDbLine")
-		dw.point(10, e.A)
-		dw.point(11, e.B)
-	case geom.Contour:
-		if len(e.Vertices) < 2 {
-			return fmt.Errorf("cam: polyline of %d vertices", len(e.Vertices))
-		}
-		flags := 0
-		if e.Closed {
-			flags = 1
-		}
-		if dw.r2000 {
-			dw.entityStart("LWPOLYLINE", layer)
-			dw.subclass("AcDbPolyline")
-			dw.integer(90, len(e.Vertices))
-			dw.integer(70, flags)
-			for _, v := range e.Vertices {
-				dw.num(10, v.P.X)
-				dw.num(20, v.P.Y)
-				if v.Bulge != 0 {
-					dw.num(42, v.Bulge)
-				}
-			}
-			return nil
-		}
-		dw.entityStart("POLYLINE", layer)
-		dw.integer(66, 1)
-		dw.point(10, geom.Vec2{})
+// Circle writes a CIRCLE.
+func (dw *dxfWriter) Circle(layer string, e geom.Circle) error {
+	dw.entityStart("CIRCLE", layer)
+	dw.subclass("AcDbCircle")
+	dw.point(10, e.Center)
+	dw.num(40, e.Radius)
+	return nil
+}
+
+// Arc writes an ARC, its angles in degrees anticlockwise.
+func (dw *dxfWriter) Arc(layer string, e geom.Arc) error {
+	dw.entityStart("ARC", layer)
+	dw.subclass("AcDbCircle")
+	dw.point(10, e.Center)
+	dw.num(40, e.Radius)
+	dw.subclass("AcDbArc")
+	dw.num(50, degrees(e.Start))
+	dw.num(51, degrees(e.End))
+	return nil
+}
+
+// Line writes a LINE.
+func (dw *dxfWriter) Line(layer string, e geom.Line) error {
+	dw.entityStart("LINE", layer)
+	dw.subclass("AcDbLine")
+	dw.point(10, e.A)
+	dw.point(11, e.B)
+	return nil
+}
+
+// Contour writes an LWPOLYLINE (R2000) or a POLYLINE with VERTEX records
+// (R12), bulges included.
+func (dw *dxfWriter) Contour(layer string, e geom.Contour) error {
+	flags := 0
+	if e.Closed {
+		flags = 1
+	}
+	if dw.r2000 {
+		dw.entityStart("LWPOLYLINE", layer)
+		dw.subclass("AcDbPolyline")
+		dw.integer(90, len(e.Vertices))
 		dw.integer(70, flags)
 		for _, v := range e.Vertices {
-			dw.entityStart("VERTEX", layer)
-			dw.point(10, v.P)
+			dw.num(10, v.P.X)
+			dw.num(20, v.P.Y)
 			if v.Bulge != 0 {
 				dw.num(42, v.Bulge)
 			}
 		}
-		dw.entityStart("SEQEND", layer)
-	default:
-		return fmt.Errorf("cam: DXF cannot hold a %T", e)
+		return nil
 	}
+	dw.entityStart("POLYLINE", layer)
+	dw.integer(66, 1)
+	dw.point(10, geom.Vec2{})
+	dw.integer(70, flags)
+	for _, v := range e.Vertices {
+		dw.entityStart("VERTEX", layer)
+		dw.point(10, v.P)
+		if v.Bulge != 0 {
+			dw.num(42, v.Bulge)
+		}
+	}
+	dw.entityStart("SEQEND", layer)
 	return nil
 }
 

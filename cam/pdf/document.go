@@ -16,13 +16,11 @@ import (
 	"fmt"
 	"image/color"
 	"math"
-	"sync"
 
 	"github.com/tdewolff/canvas"
-	"golang.org/x/image/font/gofont/gobold"
-	"golang.org/x/image/font/gofont/goregular"
 
 	"coilwright/cam/geom"
+	"coilwright/cam/internal/font"
 )
 
 // Document is a flowing document printed on pages of Page (zero: A4).
@@ -125,18 +123,6 @@ const (
 	hairline    = 0.2
 )
 
-// docFonts loads the embedded regular and bold Go fonts once.
-var docFonts = sync.OnceValues(func() (*canvas.FontFamily, error) {
-	f := canvas.NewFontFamily("Go")
-	if err := f.LoadFont(goregular.TTF, 0, canvas.FontRegular); err != nil {
-		return nil, fmt.Errorf("cam: loading the embedded font: %w", err)
-	}
-	if err := f.LoadFont(gobold.TTF, 0, canvas.FontBold); err != nil {
-		return nil, fmt.Errorf("cam: loading the embedded bold font: %w", err)
-	}
-	return f, nil
-})
-
 // layout is the state of a document being set.
 type layout struct {
 	doc   *Document
@@ -149,11 +135,11 @@ type layout struct {
 
 // Pages sets the document and returns its pages, ready for WritePDF. It
 // fails when a single block is taller than a page.
-func (d Document) Pages() ([]*canvas.Canvas, error) {
+func (d Document) Pages() ([]Page, error) {
 	if d.Page.Width == 0 {
 		d.Page = PageA4
 	}
-	fam, err := docFonts()
+	fam, err := font.Family()
 	if err != nil {
 		return nil, err
 	}
@@ -161,7 +147,7 @@ func (d Document) Pages() ([]*canvas.Canvas, error) {
 	l.newPage()
 	for i, b := range d.Blocks {
 		if err := l.place(b); err != nil {
-			return nil, fmt.Errorf("cam: document block %d: %w", i+1, err)
+			return nil, fmt.Errorf("document block %d: %w", i+1, err)
 		}
 	}
 	for i, p := range l.pages {
@@ -170,11 +156,15 @@ func (d Document) Pages() ([]*canvas.Canvas, error) {
 		ctx.DrawText(docMargin, docBottom/2, canvas.NewTextLine(face, d.Footer, canvas.Left))
 		ctx.DrawText(d.Page.Width-docMargin, docBottom/2, canvas.NewTextLine(face, fmt.Sprintf("page %d of %d", i+1, len(l.pages)+d.TrailingPages), canvas.Right))
 	}
-	return l.pages, nil
+	out := make([]Page, len(l.pages))
+	for i, p := range l.pages {
+		out[i] = Page{p}
+	}
+	return out, nil
 }
 
 func (l *layout) newPage() {
-	p := NewPage(l.doc.Page)
+	p := newPage(l.doc.Page)
 	l.pages = append(l.pages, p)
 	l.ctx = canvas.NewContext(p)
 	l.y = l.doc.Page.Height - docMargin

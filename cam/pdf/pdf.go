@@ -51,12 +51,16 @@ func PageSizeByName(name string) (PageSize, error) {
 			return p, nil
 		}
 	}
-	return PageSize{}, fmt.Errorf("cam: unknown paper size %q: use A4 or Letter", name)
+	return PageSize{}, fmt.Errorf("unknown paper size %q: use A4 or Letter", name)
 }
 
-// NewPage returns an empty canvas the size of p, in millimetres with the
+// Page is one laid-out PDF page, ready for WritePDF; documents and template
+// pages make them. A Page is not changed once made.
+type Page struct{ c *canvas.Canvas }
+
+// newPage returns an empty canvas the size of p, in millimetres with the
 // origin at the bottom-left corner and y up.
-func NewPage(p PageSize) *canvas.Canvas { return canvas.New(p.Width, p.Height) }
+func newPage(p PageSize) *canvas.Canvas { return canvas.New(p.Width, p.Height) }
 
 // PDFOptions tunes WritePDF. The zero value writes no creation date, so
 // the output depends only on the pages.
@@ -85,16 +89,17 @@ func SourceDateEpoch(v string) (time.Time, error) {
 // WritePDF renders pages (at least one) as a PDF document, one page each at
 // its canvas size, and writes it to w. Same pages and options give the
 // same bytes.
-func WritePDF(w io.Writer, pages []*canvas.Canvas, opt PDFOptions) error {
+func WritePDF(w io.Writer, pages []Page, opt PDFOptions) error {
 	if len(pages) == 0 {
-		return fmt.Errorf("cam: a PDF needs at least one page")
+		return fmt.Errorf("a PDF needs at least one page")
 	}
 	var buf bytes.Buffer
-	first := pages[0]
+	first := pages[0].c
 	o := pdf.DefaultOptions
 	r := pdf.New(&buf, first.W, first.H, &o)
 	r.SetInfo(opt.Title, opt.Subject, "", "", opt.Creator)
-	for i, p := range pages {
+	for i, pg := range pages {
+		p := pg.c
 		if i > 0 {
 			r.NewPage(p.W, p.H)
 		}
@@ -136,11 +141,11 @@ func dateEdit(b []byte, date string) (pdfEdit, error) {
 	key := []byte("/CreationDate(")
 	start := bytes.LastIndex(b, key)
 	if start < 0 {
-		return pdfEdit{}, fmt.Errorf("cam: PDF has no creation date to set")
+		return pdfEdit{}, fmt.Errorf("PDF has no creation date to set")
 	}
 	n := bytes.IndexByte(b[start+len(key):], ')')
 	if n < 0 {
-		return pdfEdit{}, fmt.Errorf("cam: PDF creation date is not terminated")
+		return pdfEdit{}, fmt.Errorf("PDF creation date is not terminated")
 	}
 	e := pdfEdit{start: start, end: start + len(key) + n + 1}
 	if date != "" {
@@ -168,22 +173,22 @@ func fontEdits(b []byte) ([]pdfEdit, error) {
 		head := []byte("\n" + ref + " 0 obj\n")
 		at := bytes.Index(b, head)
 		if at < 0 {
-			return nil, fmt.Errorf("cam: PDF font object %s not found", ref)
+			return nil, fmt.Errorf("PDF font object %s not found", ref)
 		}
 		dictStart := at + len(head)
 		sm := bytes.Index(b[dictStart:], []byte(">>stream\n"))
 		if sm < 0 {
-			return nil, fmt.Errorf("cam: PDF font object %s has no stream", ref)
+			return nil, fmt.Errorf("PDF font object %s has no stream", ref)
 		}
 		dict := b[dictStart : dictStart+sm+2]
 		lm := streamLength.FindSubmatch(dict)
 		if lm == nil || !bytes.Contains(dict, []byte("/Filter/FlateDecode")) {
-			return nil, fmt.Errorf("cam: PDF font object %s is not a compressed stream of known length", ref)
+			return nil, fmt.Errorf("PDF font object %s is not a compressed stream of known length", ref)
 		}
 		n, _ := strconv.Atoi(string(lm[1]))
 		dataStart := dictStart + sm + len(">>stream\n")
 		if dataStart+n > len(b) {
-			return nil, fmt.Errorf("cam: PDF font object %s runs past the end", ref)
+			return nil, fmt.Errorf("PDF font object %s runs past the end", ref)
 		}
 		zr, err := zlib.NewReader(bytes.NewReader(b[dataStart : dataStart+n]))
 		if err != nil {
@@ -216,7 +221,7 @@ func fontEdits(b []byte) ([]pdfEdit, error) {
 // adjustment is 0xB1B0AFBA less the whole font's sum).
 func pinFontModified(f []byte) error {
 	if len(f) < 12 {
-		return fmt.Errorf("cam: embedded font too short")
+		return fmt.Errorf("embedded font too short")
 	}
 	num := int(binary.BigEndian.Uint16(f[4:]))
 	for i := range num {
@@ -226,7 +231,7 @@ func pinFontModified(f []byte) error {
 		}
 		off, ln := int(binary.BigEndian.Uint32(rec[8:])), int(binary.BigEndian.Uint32(rec[12:]))
 		if ln < 36 || off+ln > len(f) {
-			return fmt.Errorf("cam: embedded font's head table is damaged")
+			return fmt.Errorf("embedded font's head table is damaged")
 		}
 		h := f[off : off+ln]
 		copy(h[28:36], h[20:28])
@@ -235,7 +240,7 @@ func pinFontModified(f []byte) error {
 		binary.BigEndian.PutUint32(h[8:], 0xB1B0AFBA-sfntChecksum(f))
 		return nil
 	}
-	return fmt.Errorf("cam: embedded font has no head table")
+	return fmt.Errorf("embedded font has no head table")
 }
 
 // sfntChecksum sums b as big-endian uint32 words, zero-padding the tail.
@@ -258,7 +263,7 @@ func applyEdits(b []byte, edits []pdfEdit) ([]byte, error) {
 	prev := 0
 	for _, e := range edits {
 		if e.start < prev {
-			return nil, fmt.Errorf("cam: overlapping PDF edits")
+			return nil, fmt.Errorf("overlapping PDF edits")
 		}
 		out = append(append(out, b[prev:e.start]...), e.repl...)
 		prev = e.end
@@ -275,18 +280,18 @@ func applyEdits(b []byte, edits []pdfEdit) ([]byte, error) {
 
 	x := bytes.LastIndex(out, []byte("\nxref\n"))
 	if x < 0 {
-		return nil, fmt.Errorf("cam: PDF has no cross-reference table")
+		return nil, fmt.Errorf("PDF has no cross-reference table")
 	}
 	line := out[x+len("\nxref\n"):]
 	nl := bytes.IndexByte(line, '\n')
 	var first, count int
 	if _, err := fmt.Sscanf(string(line[:nl]), "%d %d", &first, &count); err != nil || first != 0 {
-		return nil, fmt.Errorf("cam: unexpected cross-reference header %q", line[:nl])
+		return nil, fmt.Errorf("unexpected cross-reference header %q", line[:nl])
 	}
 	entries := line[nl+1:]
 	const entryLen = 20 // "nnnnnnnnnn ggggg n \n"
 	if len(entries) < count*entryLen {
-		return nil, fmt.Errorf("cam: cross-reference table is cut short")
+		return nil, fmt.Errorf("cross-reference table is cut short")
 	}
 	for i := range count {
 		e := entries[i*entryLen : (i+1)*entryLen]
@@ -295,19 +300,19 @@ func applyEdits(b []byte, edits []pdfEdit) ([]byte, error) {
 		}
 		off, err := strconv.Atoi(string(e[:10]))
 		if err != nil {
-			return nil, fmt.Errorf("cam: bad cross-reference entry %q", e)
+			return nil, fmt.Errorf("bad cross-reference entry %q", e)
 		}
 		copy(e[:10], fmt.Sprintf("%010d", shift(off)))
 	}
 	sx := bytes.LastIndex(out, []byte("startxref\n"))
 	if sx < 0 {
-		return nil, fmt.Errorf("cam: PDF has no startxref")
+		return nil, fmt.Errorf("PDF has no startxref")
 	}
 	tail := out[sx+len("startxref\n"):]
 	nl = bytes.IndexByte(tail, '\n')
 	pos, err := strconv.Atoi(string(tail[:nl]))
 	if err != nil {
-		return nil, fmt.Errorf("cam: bad startxref %q", tail[:nl])
+		return nil, fmt.Errorf("bad startxref %q", tail[:nl])
 	}
 	res := append([]byte{}, out[:sx+len("startxref\n")]...)
 	res = strconv.AppendInt(res, int64(shift(pos)), 10)

@@ -14,6 +14,7 @@ import (
 	"github.com/tdewolff/canvas"
 
 	"coilwright/cam/geom"
+	"coilwright/cam/internal/font"
 	"coilwright/cam/walk"
 )
 
@@ -61,23 +62,23 @@ func ScaleBarOrigin() geom.Vec2 {
 // TemplatePages lays the parts out at 1:1, one part per page or, for a
 // part too large for the page, one page per tile. Text is set in the
 // embedded Go Regular font.
-func TemplatePages(parts []TemplatePart, opt TemplateOptions) ([]*canvas.Canvas, error) {
+func TemplatePages(parts []TemplatePart, opt TemplateOptions) ([]Page, error) {
 	if opt.Page.Width == 0 {
 		opt.Page = PageA4
 	}
-	fam, err := walk.DocumentFont()
+	fam, err := font.Family()
 	if err != nil {
 		return nil, err
 	}
-	var pages []*canvas.Canvas
+	var pages []Page
 	for _, part := range parts {
-		d, err := walk.ExpandText(part.Drawing)
+		d, err := walk.Prepare(part.Drawing)
 		if err != nil {
 			return nil, err
 		}
 		b := d.Bounds()
 		if b.IsEmpty() {
-			return nil, fmt.Errorf("cam: template part %q is empty", part.Title)
+			return nil, fmt.Errorf("template part %q is empty", part.Title)
 		}
 		// Header lines: heading, title, notes, warnings; 5 mm each.
 		lines := 2 + len(part.Notes) + len(opt.Warnings)
@@ -86,14 +87,14 @@ func TemplatePages(parts []TemplatePart, opt TemplateOptions) ([]*canvas.Canvas,
 			Max: geom.Vec2{X: opt.Page.Width - templateMargin, Y: opt.Page.Height - templateMargin - 5*float64(lines) - 4},
 		}
 		if area.Size().X <= 2*TileOverlap || area.Size().Y <= 2*TileOverlap {
-			return nil, fmt.Errorf("cam: %d header lines leave no room to draw on a %s page", lines, opt.Page.Name)
+			return nil, fmt.Errorf("%d header lines leave no room to draw on a %s page", lines, opt.Page.Name)
 		}
 		size, room := b.Size(), area.Size()
 		cols := tileCount(size.X, room.X)
 		rows := tileCount(size.Y, room.Y)
 		for r := range rows {
 			for c := range cols {
-				page := NewPage(opt.Page)
+				page := newPage(opt.Page)
 				ctx := canvas.NewContext(page)
 				title := part.Title
 				// Window of the part shown on this tile, in drawing mm.
@@ -122,7 +123,9 @@ func TemplatePages(parts []TemplatePart, opt TemplateOptions) ([]*canvas.Canvas,
 				if rows*cols > 1 {
 					clip = &win
 				}
-				drawOnPage(ctx, d, off, clip)
+				if err := drawOnPage(ctx, d, off, clip); err != nil {
+					return nil, fmt.Errorf("template part %q: %w", part.Title, err)
+				}
 				y := opt.Page.Height - templateMargin - 5
 				text := func(s string, pt float64, col any) {
 					ctx.DrawText(templateMargin, y, canvas.NewTextLine(fam.Face(pt, col), s, canvas.Left))
@@ -137,7 +140,7 @@ func TemplatePages(parts []TemplatePart, opt TemplateOptions) ([]*canvas.Canvas,
 					text(w, 8.5, canvas.Red)
 				}
 				drawScaleBar(ctx, fam)
-				pages = append(pages, page)
+				pages = append(pages, Page{page})
 			}
 		}
 	}
@@ -157,7 +160,7 @@ func tileCount(size, room float64) int {
 // 0.3 mm wide, other layers blue and 0.15 mm. With clip set, only the parts
 // inside that window (drawing mm) are drawn, as chords within
 // TextTolerance of the curves.
-func drawOnPage(ctx *canvas.Context, d geom.Drawing, off geom.Vec2, clip *geom.Box2) {
+func drawOnPage(ctx *canvas.Context, d geom.Drawing, off geom.Vec2, clip *geom.Box2) error {
 	ctx.SetFill(nil)
 	for _, l := range d.Layers {
 		if l.Name == "CUT" {
@@ -167,59 +170,75 @@ func drawOnPage(ctx *canvas.Context, d geom.Drawing, off geom.Vec2, clip *geom.B
 			ctx.SetStrokeColor(canvas.Blue)
 			ctx.SetStrokeWidth(0.15)
 		}
-		for _, e := range l.Entities {
-			p := entityPath(e)
-			if p == nil {
-				continue
-			}
-			if clip != nil {
-				p = clipPath(p, *clip)
-			}
-			ctx.DrawPath(off.X, off.Y, p)
+		if err := walk.Layer(l, pageShapes{ctx: ctx, off: off, clip: clip}); err != nil {
+			return err
 		}
 	}
+	return nil
 }
 
-// entityPath returns e as a canvas path in drawing coordinates, or nil for
-// an entity it cannot draw.
-func entityPath(e geom.Entity) *canvas.Path {
-	deg := 180 / math.Pi
-	p := &canvas.Path{}
-	switch e := e.(type) {
-	case geom.Circle:
-		return canvas.Circle(e.Radius).Translate(e.Center.X, e.Center.Y)
-	case geom.Arc:
-		s := e.Point(e.Start)
-		p.MoveTo(s.X, s.Y)
-		p.Arc(e.Radius, e.Radius, 0, e.Start*deg, e.End*deg)
-	case geom.Line:
-		p.MoveTo(e.A.X, e.A.Y)
-		p.LineTo(e.B.X, e.B.Y)
-	case geom.Contour:
-		if len(e.Vertices) == 0 {
-			return nil
-		}
-		p.MoveTo(e.Vertices[0].P.X, e.Vertices[0].P.Y)
-		for i := range e.Segments() {
-			a, q, bulge := e.Segment(i)
-			if bulge == 0 {
-				p.LineTo(q.X, q.Y)
-				continue
-			}
-			arc := geom.BulgeArc(a, q, bulge)
-			if bulge > 0 {
-				p.Arc(arc.Radius, arc.Radius, 0, arc.Start*deg, arc.End*deg)
-			} else {
-				p.Arc(arc.Radius, arc.Radius, 0, arc.End*deg, arc.Start*deg)
-			}
-		}
-		if e.Closed {
-			p.Close()
-		}
-	default:
-		return nil
+// pageShapes strokes each shape on a page with the context's current
+// stroke, moved by off and clipped to clip when it is set.
+type pageShapes struct {
+	ctx  *canvas.Context
+	off  geom.Vec2
+	clip *geom.Box2
+}
+
+// draw strokes p, given in drawing coordinates.
+func (s pageShapes) draw(p *canvas.Path) error {
+	if s.clip != nil {
+		p = clipPath(p, *s.clip)
 	}
-	return p
+	s.ctx.DrawPath(s.off.X, s.off.Y, p)
+	return nil
+}
+
+const deg = 180 / math.Pi
+
+// Circle strokes a circle.
+func (s pageShapes) Circle(_ string, e geom.Circle) error {
+	return s.draw(canvas.Circle(e.Radius).Translate(e.Center.X, e.Center.Y))
+}
+
+// Arc strokes an arc.
+func (s pageShapes) Arc(_ string, e geom.Arc) error {
+	p := &canvas.Path{}
+	st := e.Point(e.Start)
+	p.MoveTo(st.X, st.Y)
+	p.Arc(e.Radius, e.Radius, 0, e.Start*deg, e.End*deg)
+	return s.draw(p)
+}
+
+// Line strokes a line.
+func (s pageShapes) Line(_ string, e geom.Line) error {
+	p := &canvas.Path{}
+	p.MoveTo(e.A.X, e.A.Y)
+	p.LineTo(e.B.X, e.B.Y)
+	return s.draw(p)
+}
+
+// Contour strokes a contour of lines and bulge arcs.
+func (s pageShapes) Contour(_ string, e geom.Contour) error {
+	p := &canvas.Path{}
+	p.MoveTo(e.Vertices[0].P.X, e.Vertices[0].P.Y)
+	for i := range e.Segments() {
+		a, q, bulge := e.Segment(i)
+		if bulge == 0 {
+			p.LineTo(q.X, q.Y)
+			continue
+		}
+		arc := geom.BulgeArc(a, q, bulge)
+		if bulge > 0 {
+			p.Arc(arc.Radius, arc.Radius, 0, arc.Start*deg, arc.End*deg)
+		} else {
+			p.Arc(arc.Radius, arc.Radius, 0, arc.End*deg, arc.Start*deg)
+		}
+	}
+	if e.Closed {
+		p.Close()
+	}
+	return s.draw(p)
 }
 
 // drawScaleBar draws the filled ScaleBarMM bar with end ticks and its

@@ -34,10 +34,10 @@ func WriteSTL(w io.Writer, m *geom.Mesh, opt STLOptions) error {
 		h = DefaultSTLHeader
 	}
 	if len(h) > 80 || strings.HasPrefix(h, "solid") {
-		return fmt.Errorf("cam: STL header %q must be at most 80 bytes and not start with \"solid\"", h)
+		return fmt.Errorf("STL header %q must be at most 80 bytes and not start with \"solid\"", h)
 	}
 	if uint64(len(m.Faces)) > math.MaxUint32 {
-		return fmt.Errorf("cam: %d faces exceed the STL facet count", len(m.Faces))
+		return fmt.Errorf("%d faces exceed the STL facet count", len(m.Faces))
 	}
 	bw := bufio.NewWriterSize(w, 1<<16)
 	var head [84]byte

@@ -68,14 +68,14 @@ func SVGFrame(d geom.Drawing, opt SVGOptions) geom.Box2 {
 // outlined first. It returns an error for an entity it cannot draw, an
 // empty frame, or a failed write.
 func WriteSVG(w io.Writer, d geom.Drawing, opt SVGOptions) error {
-	d, err := walk.ExpandText(d)
+	d, err := walk.Prepare(d)
 	if err != nil {
 		return err
 	}
 	f := SVGFrame(d, opt)
 	size := f.Size()
 	if !(size.X > 0) || !(size.Y > 0) {
-		return fmt.Errorf("cam: SVG frame %v is empty", f)
+		return fmt.Errorf("SVG frame %v is empty", f)
 	}
 	sw := &svgWriter{w: bufio.NewWriter(w), frame: f}
 	sw.printf("<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n")
@@ -88,15 +88,10 @@ func WriteSVG(w io.Writer, d geom.Drawing, opt SVGOptions) error {
 		sw.printf("<title>%s</title>\n", html.EscapeString(opt.Title))
 	}
 	for _, l := range d.Layers {
-		if !walk.ValidLayerName(l.Name) {
-			return fmt.Errorf("cam: layer name %q: use A–Z, 0–9 and _", l.Name)
-		}
 		sw.printf("<g id=\"%s\" fill=\"none\" stroke=\"%s\" stroke-width=\"%s\">\n",
 			l.Name, layerStroke(l.Name), svgNum(HairlineMM))
-		for _, e := range l.Entities {
-			if err := sw.entity(e); err != nil {
-				return err
-			}
+		if err := walk.Layer(l, sw); err != nil {
+			return err
 		}
 		sw.printf("</g>\n")
 	}
@@ -140,43 +135,42 @@ func (sw *svgWriter) arcTo(q geom.Vec2, r, span float64, ccw bool) string {
 	return fmt.Sprintf("A %s %s 0 %d %d %s", svgNum(r), svgNum(r), large, sweep, sw.pt(q))
 }
 
-func (sw *svgWriter) entity(e geom.Entity) error {
-	switch e := e.(type) {
-	case geom.Circle:
-		if !(e.Radius > 0) {
-			return fmt.Errorf("cam: circle of radius %g mm", e.Radius)
+// Circle draws a circle.
+func (sw *svgWriter) Circle(_ string, e geom.Circle) error {
+	c := sw.pt(e.Center)
+	x, y, _ := strings.Cut(c, " ")
+	sw.printf("<circle cx=\"%s\" cy=\"%s\" r=\"%s\"/>\n", x, y, svgNum(e.Radius))
+	return nil
+}
+
+// Arc draws an arc as a path.
+func (sw *svgWriter) Arc(_ string, e geom.Arc) error {
+	sw.printf("<path d=\"M %s %s\"/>\n", sw.pt(e.Point(e.Start)), sw.arcTo(e.Point(e.End), e.Radius, e.End-e.Start, true))
+	return nil
+}
+
+// Line draws a line as a path.
+func (sw *svgWriter) Line(_ string, e geom.Line) error {
+	sw.printf("<path d=\"M %s L %s\"/>\n", sw.pt(e.A), sw.pt(e.B))
+	return nil
+}
+
+// Contour draws a contour as one path of lines and arcs.
+func (sw *svgWriter) Contour(_ string, e geom.Contour) error {
+	var b strings.Builder
+	b.WriteString("M " + sw.pt(e.Vertices[0].P))
+	for i := range e.Segments() {
+		p, q, bulge := e.Segment(i)
+		if bulge == 0 {
+			b.WriteString(" L " + sw.pt(q))
+			continue
 		}
-		c := sw.pt(e.Center)
-		x, y, _ := strings.Cut(c, " ")
-		sw.printf("<circle cx=\"%s\" cy=\"%s\" r=\"%s\"/>\n", x, y, svgNum(e.Radius))
-	case geom.Arc:
-		if !(e.Radius > 0) {
-			return fmt.Errorf("cam: arc of radius %g mm", e.Radius)
-		}
-		sw.printf("<path d=\"M %s %s\"/>\n", sw.pt(e.Point(e.Start)), sw.arcTo(e.Point(e.End), e.Radius, e.End-e.Start, true))
-	case geom.Line:
-		sw.printf("<path d=\"M %s L %s\"/>\n", sw.pt(e.A), sw.pt(e.B))
-	case geom.Contour:
-		if len(e.Vertices) < 2 {
-			return fmt.Errorf("cam: polyline of %d vertices", len(e.Vertices))
-		}
-		var b strings.Builder
-		b.WriteString("M " + sw.pt(e.Vertices[0].P))
-		for i := range e.Segments() {
-			p, q, bulge := e.Segment(i)
-			if bulge == 0 {
-				b.WriteString(" L " + sw.pt(q))
-				continue
-			}
-			a := geom.BulgeArc(p, q, bulge)
-			b.WriteString(" " + sw.arcTo(q, a.Radius, a.End-a.Start, bulge > 0))
-		}
-		if e.Closed {
-			b.WriteString(" Z")
-		}
-		sw.printf("<path d=\"%s\"/>\n", b.String())
-	default:
-		return fmt.Errorf("cam: SVG cannot hold a %T", e)
+		a := geom.BulgeArc(p, q, bulge)
+		b.WriteString(" " + sw.arcTo(q, a.Radius, a.End-a.Start, bulge > 0))
 	}
+	if e.Closed {
+		b.WriteString(" Z")
+	}
+	sw.printf("<path d=\"%s\"/>\n", b.String())
 	return nil
 }

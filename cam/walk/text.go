@@ -7,37 +7,21 @@ package walk
 import (
 	"fmt"
 	"math"
-	"sync"
 
 	"github.com/tdewolff/canvas"
-	"golang.org/x/image/font/gofont/goregular"
 
 	"coilwright/cam/geom"
+	"coilwright/cam/internal/font"
 )
 
 // TextTolerance is the largest distance in mm between a letter's curve and
 // the chords that replace it.
 const TextTolerance = 0.01
 
-// markFont loads the embedded font once.
-var markFont = sync.OnceValues(func() (*canvas.FontFamily, error) {
-	f := canvas.NewFontFamily("Go")
-	if err := f.LoadFont(goregular.TTF, 0, canvas.FontRegular); err != nil {
-		return nil, fmt.Errorf("cam: loading the embedded font: %w", err)
-	}
-	return f, nil
-})
-
-// DocumentFont returns the embedded Go Regular family that templates and
-// other PDF documents set their text in, so every machine renders and
-// embeds the same font. The family is loaded once and shared; callers must
-// not change it.
-func DocumentFont() (*canvas.FontFamily, error) { return markFont() }
-
 // textPath returns the outline of t as a canvas path in drawing
 // coordinates (mm, y up).
 func textPath(t geom.Text) (*canvas.Path, error) {
-	fam, err := markFont()
+	fam, err := font.Family()
 	if err != nil {
 		return nil, err
 	}
@@ -45,12 +29,12 @@ func textPath(t geom.Text) (*canvas.Path, error) {
 	probe := fam.Face(100)
 	capH := probe.Metrics().CapHeight
 	if !(capH > 0) || !(t.Height > 0) {
-		return nil, fmt.Errorf("cam: text %q has no usable height", t.Value)
+		return nil, fmt.Errorf("text %q has no usable height", t.Value)
 	}
 	face := fam.Face(100 * t.Height / capH)
 	p, width, err := face.ToPath(t.Value)
 	if err != nil {
-		return nil, fmt.Errorf("cam: outlining %q: %w", t.Value, err)
+		return nil, fmt.Errorf("outlining %q: %w", t.Value, err)
 	}
 	dx := 0.0
 	switch t.Align {

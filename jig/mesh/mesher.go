@@ -114,7 +114,7 @@ type MeshOptions struct {
 }
 
 // ErrUnbounded is returned by Mesh for a solid whose bounds are not finite.
-var ErrUnbounded = errors.New("jig: solid has infinite bounds")
+var ErrUnbounded = errors.New("solid has infinite bounds")
 
 // maxGridPoints caps the grid size a mesh may ask for.
 const maxGridPoints = 1 << 33
@@ -127,7 +127,7 @@ func Mesh(s sdf.SDF3, opt MeshOptions) (*geom.Mesh, error) {
 		tol = DefaultTolerance
 	}
 	if !(tol > 0) || math.IsInf(tol, 0) {
-		return nil, fmt.Errorf("jig: mesh tolerance %g mm must be above 0", tol)
+		return nil, fmt.Errorf("mesh tolerance %g mm must be above 0", tol)
 	}
 	cell := opt.Cell
 	switch {
@@ -137,7 +137,7 @@ func Mesh(s sdf.SDF3, opt MeshOptions) (*geom.Mesh, error) {
 		cell = cellPerTolerance * tol
 	}
 	if !(cell > 0) || math.IsInf(cell, 0) {
-		return nil, fmt.Errorf("jig: mesh cell %g mm must be above 0", cell)
+		return nil, fmt.Errorf("mesh cell %g mm must be above 0", cell)
 	}
 	b := s.Bounds()
 	for _, v := range []float64{b.Min.X, b.Min.Y, b.Min.Z, b.Max.X, b.Max.Y, b.Max.Z} {
@@ -147,7 +147,7 @@ func Mesh(s sdf.SDF3, opt MeshOptions) (*geom.Mesh, error) {
 	}
 	g := newGrid(b, cell)
 	if float64(g.np[0])*float64(g.np[1])*float64(g.np[2]) > maxGridPoints {
-		return nil, fmt.Errorf("jig: a %.3g mm cell over a %.0f×%.0f×%.0f mm solid needs too many grid points; raise the tolerance",
+		return nil, fmt.Errorf("a %.3g mm cell over a %.0f×%.0f×%.0f mm solid needs too many grid points; raise the tolerance",
 			cell, b.Size().X, b.Size().Y, b.Size().Z)
 	}
 	workers := opt.Workers
