@@ -106,7 +106,7 @@ func TestDowelFitsSmallestTurn(t *testing.T) {
 			if cl.Dowel.DiameterMM > room+1e-6 {
 				t.Errorf("rod %.1f mm does not pass %.3f mm inside with clearance", cl.Dowel.DiameterMM, inner)
 			}
-			for _, next := range DowelDiametersMM {
+			for _, next := range DowelDiametersMM() {
 				if next > cl.Dowel.DiameterMM && next <= room {
 					t.Errorf("a %.1f mm rod fits too; chose %.1f mm", next, cl.Dowel.DiameterMM)
 				}

@@ -50,7 +50,7 @@ func (d *DowelSpec) validateFit(c *checker, s *Spec) {
 	}
 	inner := 2*smallestTurnRadius(coil) - s.Wire.DiameterMM
 	if d.DiameterMM == nil {
-		smallest := DowelDiametersMM[0]
+		smallest := DowelDiametersMM()[0]
 		if inner-2*d.ClearanceMM >= smallest-1e-9 {
 			return
 		}

@@ -141,7 +141,7 @@ func TestConstantAngleNeedsACone(t *testing.T) {
 
 func FuzzParseSpec(f *testing.F) {
 	f.Add([]byte(base))
-	f.Add(templates.Reference)
+	f.Add(templates.Reference())
 	for _, n := range templates.Demos() {
 		b, _ := templates.Demo(n)
 		f.Add(b)

@@ -137,7 +137,7 @@ type layout struct {
 // fails when a single block is taller than a page.
 func (d Document) Pages() ([]Page, error) {
 	if d.Page.Width == 0 {
-		d.Page = PageA4
+		d.Page = PageA4()
 	}
 	fam, err := font.Family()
 	if err != nil {

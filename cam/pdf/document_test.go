@@ -93,7 +93,7 @@ func TestDocumentHeadingKeptWithText(t *testing.T) {
 }
 
 func TestDocumentFigureAndBreaks(t *testing.T) {
-	doc := Document{Page: PageLetter, TrailingPages: 2, Blocks: []Block{
+	doc := Document{Page: PageLetter(), TrailingPages: 2, Blocks: []Block{
 		Heading{Text: "First", Level: 1},
 		PageBreak{},
 		PageBreak{}, // a second break on a fresh page adds nothing

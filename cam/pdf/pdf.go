@@ -37,16 +37,22 @@ type PageSize struct {
 
 // The paper sizes documents are printed on.
 var (
-	// PageA4 is ISO 216 A4, 210 × 297 mm.
-	PageA4 = PageSize{Name: "A4", Width: 210, Height: 297}
-	// PageLetter is US Letter, 8.5 × 11 in (215.9 × 279.4 mm).
-	PageLetter = PageSize{Name: "Letter", Width: 215.9, Height: 279.4}
+	// pageA4 is ISO 216 A4, 210 × 297 mm.
+	pageA4 = PageSize{Name: "A4", Width: 210, Height: 297}
+	// pageLetter is US Letter, 8.5 × 11 in (215.9 × 279.4 mm).
+	pageLetter = PageSize{Name: "Letter", Width: 215.9, Height: 279.4}
 )
+
+// PageA4 returns ISO 216 A4, 210 × 297 mm.
+func PageA4() PageSize { return pageA4 }
+
+// PageLetter returns US Letter, 8.5 × 11 in (215.9 × 279.4 mm).
+func PageLetter() PageSize { return pageLetter }
 
 // PageSizeByName returns the paper size called name ("A4" or "Letter",
 // any case).
 func PageSizeByName(name string) (PageSize, error) {
-	for _, p := range []PageSize{PageA4, PageLetter} {
+	for _, p := range []PageSize{pageA4, pageLetter} {
 		if strings.EqualFold(p.Name, name) {
 			return p, nil
 		}

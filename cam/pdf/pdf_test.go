@@ -42,8 +42,8 @@ func templateDoc(t *testing.T, page PageSize, opt PDFOptions) []byte {
 }
 
 func TestWritePDFDeterministic(t *testing.T) {
-	a := templateDoc(t, PageA4, PDFOptions{Title: "T"})
-	b := templateDoc(t, PageA4, PDFOptions{Title: "T"})
+	a := templateDoc(t, PageA4(), PDFOptions{Title: "T"})
+	b := templateDoc(t, PageA4(), PDFOptions{Title: "T"})
 	if !bytes.Equal(a, b) {
 		t.Error("two renders of the same pages differ")
 	}
@@ -51,11 +51,11 @@ func TestWritePDFDeterministic(t *testing.T) {
 		t.Error("a creation date was written without one being asked for")
 	}
 	when := time.Date(2024, 5, 6, 7, 8, 9, 0, time.UTC)
-	c := templateDoc(t, PageA4, PDFOptions{Created: when})
+	c := templateDoc(t, PageA4(), PDFOptions{Created: when})
 	if !bytes.Contains(c, []byte("/CreationDate(D:20240506070809Z)")) {
 		t.Error("creation date not written")
 	}
-	if !bytes.Equal(c, templateDoc(t, PageA4, PDFOptions{Created: when})) {
+	if !bytes.Equal(c, templateDoc(t, PageA4(), PDFOptions{Created: when})) {
 		t.Error("two dated renders differ")
 	}
 }
@@ -93,8 +93,8 @@ func TestPDFExternal(t *testing.T) {
 	}{
 		// The 250 mm disc (plus margins) needs 2 × 2 tiles on A4 and on
 		// Letter, after the plate's own page.
-		{PageA4, 5, "595.276 x 841.89 pts (A4)"},
-		{PageLetter, 5, "612 x 792 pts (letter)"},
+		{PageA4(), 5, "595.276 x 841.89 pts (A4)"},
+		{PageLetter(), 5, "612 x 792 pts (letter)"},
 	} {
 		t.Run(tc.page.Name, func(t *testing.T) {
 			path := checktool.TempFile(t, "t.pdf", templateDoc(t, tc.page, PDFOptions{Title: "Test", Created: time.Unix(0, 0)}))
@@ -145,15 +145,15 @@ func readPGM(t *testing.T, b []byte) (w, h int, pix []byte) {
 
 func TestTemplateScaleBar(t *testing.T) {
 	pdftoppm := checktool.Need(t, "pdftoppm")
-	path := checktool.TempFile(t, "t.pdf", templateDoc(t, PageA4, PDFOptions{}))
+	path := checktool.TempFile(t, "t.pdf", templateDoc(t, PageA4(), PDFOptions{}))
 	// Render page 1 at 254 dpi (10 px per mm) in a band round the bar.
 	const dpmm = 10
 	o := ScaleBarOrigin()
-	top := int((PageA4.Height - o.Y - scaleBarHeight - 1) * dpmm)
+	top := int((PageA4().Height - o.Y - scaleBarHeight - 1) * dpmm)
 	band := int((scaleBarHeight + 2) * dpmm)
 	base := strings.TrimSuffix(path, ".pdf")
 	cmd := exec.Command(pdftoppm, "-r", "254", "-gray", "-f", "1", "-l", "1", "-singlefile",
-		"-x", "0", "-y", strconv.Itoa(top), "-W", strconv.Itoa(int(PageA4.Width*dpmm)), "-H", strconv.Itoa(band), path, base)
+		"-x", "0", "-y", strconv.Itoa(top), "-W", strconv.Itoa(int(PageA4().Width*dpmm)), "-H", strconv.Itoa(band), path, base)
 	if out, err := cmd.CombinedOutput(); err != nil {
 		t.Fatalf("pdftoppm: %v\n%s", err, out)
 	}
@@ -197,7 +197,7 @@ func TestPDFFontTimestampPinned(t *testing.T) {
 	// The embedded font's head.modified must equal head.created, and its
 	// checksums must hold: the whole font sums to 0xB1B0AFBA (OpenType
 	// specification, head table, checkSumAdjustment).
-	b := templateDoc(t, PageA4, PDFOptions{})
+	b := templateDoc(t, PageA4(), PDFOptions{})
 	m := regexp.MustCompile(`/FontFile2 (\d+) 0 R`).FindSubmatch(b)
 	if m == nil {
 		t.Fatal("no embedded TrueType font")

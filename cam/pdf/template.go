@@ -64,7 +64,7 @@ func ScaleBarOrigin() geom.Vec2 {
 // embedded Go Regular font.
 func TemplatePages(parts []TemplatePart, opt TemplateOptions) ([]Page, error) {
 	if opt.Page.Width == 0 {
-		opt.Page = PageA4
+		opt.Page = PageA4()
 	}
 	fam, err := font.Family()
 	if err != nil {

@@ -23,9 +23,9 @@ type PreviewOptions struct {
 	ViewFrom geom.Vec3 // direction from the mesh towards the eye; zero for DefaultViewFrom
 }
 
-// DefaultViewFrom looks down on the mesh from the front right, so an
+// DefaultViewFrom returns the view that looks down on the mesh from the front right, so an
 // upright part shows its side and its top.
-var DefaultViewFrom = geom.Vec3{X: 0.9, Y: -1.5, Z: 0.9}
+func DefaultViewFrom() geom.Vec3 { return geom.Vec3{X: 0.9, Y: -1.5, Z: 0.9} }
 
 // Preview colours.
 var (
@@ -42,7 +42,7 @@ func WritePreview(w io.Writer, m *geom.Mesh, opt PreviewOptions) error {
 	}
 	view := opt.ViewFrom
 	if view == (geom.Vec3{}) {
-		view = DefaultViewFrom
+		view = DefaultViewFrom()
 	}
 	img := renderMesh(m, size, view.Normalize())
 	return (&png.Encoder{CompressionLevel: png.BestCompression}).Encode(w, img)

@@ -57,6 +57,8 @@ not make, unless --force is given.`,
 	cmd.Flags().BoolVar(&o.force, "force", false, "write into a folder that holds files coilwright did not make")
 	cmd.Flags().StringVar(&o.demo, "demo", "", "build an embedded demo spec: "+strings.Join(templates.Demos(), ", "))
 	cmd.Flags().BoolVar(&o.json, "json", false, "print the manifest as JSON instead of a summary")
+	cmd.RegisterFlagCompletionFunc("demo", completeDemos)
+	cmd.ValidArgsFunction = completeSpecFile
 	return cmd
 }
 

@@ -68,6 +68,7 @@ flag or separate with commas) are averaged by a least-squares fit.`,
 	f.StringVarP(&o.out, "out", "o", defaultCalibrationFile, "calibration file to write")
 	f.BoolVar(&o.force, "force", false, "replace the calibration file if it exists")
 	f.BoolVar(&o.json, "json", false, "print the fit as JSON")
+	cmd.RegisterFlagCompletionFunc("material", completeMaterials)
 	return cmd
 }
 

@@ -40,6 +40,8 @@ lists every problem with its key and line and exits with status 2.`,
 	}
 	cmd.Flags().BoolVar(&o.json, "json", false, "print the design report as JSON (as in design.json)")
 	cmd.Flags().StringVar(&o.demo, "demo", "", "check an embedded demo spec instead of a file")
+	cmd.RegisterFlagCompletionFunc("demo", completeDemos)
+	cmd.ValidArgsFunction = completeSpecFile
 	return cmd
 }
 

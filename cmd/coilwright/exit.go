@@ -54,8 +54,6 @@ func report(err error, stderr io.Writer) int {
 	case errors.As(err, &ue), errors.As(err, &ie), errors.As(err, &se), errors.As(err, &ses),
 		errors.Is(err, cam.ErrForeignFiles), errors.Is(err, cam.ErrExists):
 		return exitBadUse
-	case strings.HasPrefix(err.Error(), "unknown command"): // cobra's own, for a mistyped subcommand
-		return exitBadUse
 	}
 	return exitFailure
 }

@@ -56,7 +56,8 @@ checked against a standard: calibrate from a test coil before a batch.`,
 		Example: `  coilwright materials
   coilwright materials brass-c26000-half-hard
   coilwright materials --json | jq '.[].id'`,
-		Args: maxArgs(1, "one material id"),
+		Args:              maxArgs(1, "one material id"),
+		ValidArgsFunction: completeMaterialArg,
 		RunE: func(cmd *cobra.Command, args []string) error {
 			id := ""
 			if len(args) == 1 {

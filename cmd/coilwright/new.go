@@ -65,7 +65,7 @@ sized for that band and --shape, ready to edit and build.`,
 // still printed, with its problems on stderr, as a start to edit.
 func runNew(w, stderr io.Writer, o newOptions, sized bool) error {
 	if !sized {
-		_, err := w.Write(templates.Reference)
+		_, err := w.Write(templates.Reference())
 		return err
 	}
 	if o.frequencyMHz < parts.MinFrequencyMHz || o.frequencyMHz > parts.MaxFrequencyMHz {

@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"io/fs"
 	"os"
+	"strings"
 	"time"
 
 	"coilwright/kit"
@@ -20,6 +21,9 @@ func loadSpec(path, demo string) (*kit.Source, error) {
 	case demo != "" && path != "":
 		return nil, usageError{errors.New("give a spec file or --demo, not both")}
 	case demo != "":
+		if !strings.HasSuffix(demo, ".toml") {
+			demo += ".toml"
+		}
 		b, ok := templates.Demo(demo)
 		if !ok {
 			return nil, usageError{fmt.Errorf("no embedded demo %q; demos: %v", demo, templates.Demos())}
