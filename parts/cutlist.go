@@ -123,10 +123,6 @@ type CoaxCut struct {
 	Jack string
 }
 
-// FeedHoleClearanceMM is added to what passes through the feed hole
-// (CoaxType.FeedHoleMM). Common practice (no published source).
-const FeedHoleClearanceMM = 0.1
-
 // SleeveCut is the heat-shrink sleeve for one kit: 2:1 sleeving whose
 // supplied bore slides over the cable and whose recovered bore grips it.
 type SleeveCut struct {

@@ -122,7 +122,7 @@ func TestDowelFitsSmallestTurn(t *testing.T) {
 func TestDowelTooWideIsASpecError(t *testing.T) {
 	b, _ := templates.Demo("demo-5g8-cone.toml")
 	text := strings.Replace(string(b), `material = "ptfe"`, "material = \"ptfe\"\ndiameter_mm = 10.0", 1)
-	_, err := ParseSpec([]byte(text))
+	_, err := designSpec([]byte(text))
 	var se *SpecError
 	if !errors.As(err, &se) || se.Key != "dowel.diameter_mm" || se.Line == 0 {
 		t.Fatalf("error %v, want a dowel.diameter_mm SpecError with its line", err)

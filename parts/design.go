@@ -84,6 +84,9 @@ func NewDesign(s *Spec) (*Design, error) {
 	if s == nil {
 		return nil, fmt.Errorf("nil spec")
 	}
+	if err := checkFit(s); err != nil {
+		return nil, err
+	}
 	coil, err := coilFromSpec(s)
 	if err != nil {
 		return nil, err
@@ -102,9 +105,14 @@ func NewDesign(s *Spec) (*Design, error) {
 	}
 	d.Warnings = d.warnings(cl)
 	if d.Wire, err = newWireDesign(s); err != nil {
-		return nil, err
+		return nil, &SpecError{Key: "wire.material", Line: s.Line("wire.material"), Value: fmt.Sprintf("%q", s.Wire.Material),
+			Problem: "no former can wind this coil: " + err.Error(), Fix: "choose a softer temper or a thicker wire, or a smaller pitch angle"}
 	}
 	if d.Former, err = compensateCoil(coil, d.Wire.Model); err != nil {
+		if s.Wire.CalibrationData() != nil {
+			return nil, &SpecError{Key: "wire.calibration", Line: s.Line("wire.calibration"), Value: fmt.Sprintf("%q", s.Wire.Calibration),
+				Problem: "with the calibrated yield no former can wind this coil: " + err.Error(), Fix: "check the calibration, or choose a softer temper or a thicker wire"}
+		}
 		return nil, &SpecError{Key: "wire.material", Line: s.Line("wire.material"), Value: fmt.Sprintf("%q", s.Wire.Material),
 			Problem: "no former can wind this coil: " + err.Error(), Fix: "choose a softer temper or a thicker wire, or a smaller pitch angle"}
 	}

@@ -41,13 +41,13 @@ const LaserHalogenWarning = "WARNING: laser cutting was asked for a halogenated 
 func newPatterns(d *Design) (*Patterns, []Warning, error) {
 	s := d.Spec
 	rs := &s.Reflector
-	mat, ok := sheetMaterial(rs.Material)
+	mat, ok := SheetMaterialByID(rs.Material)
 	if !ok {
-		return nil, nil, fmt.Errorf("parts: unknown reflector material %q", rs.Material)
+		return nil, nil, fmt.Errorf("unknown reflector material %q", rs.Material)
 	}
-	wmat, ok := sheetMaterial(s.Wedge.Material)
+	wmat, ok := SheetMaterialByID(s.Wedge.Material)
 	if !ok {
-		return nil, nil, fmt.Errorf("parts: unknown wedge material %q", s.Wedge.Material)
+		return nil, nil, fmt.Errorf("unknown wedge material %q", s.Wedge.Material)
 	}
 	p := &Patterns{Material: mat, WedgeMaterial: wmat, Method: s.Cutting.Method, Kerf: s.Cutting.Kerf()}
 	var warns []Warning
@@ -95,7 +95,7 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 		WireDiameter: s.Wire.DiameterMM,
 		Thickness:    s.Wedge.ThicknessMM,
 		Wavelength:   d.Wavelength,
-		Taper:        s.Wedge.taper(p.WedgeLoadOhm),
+		Taper:        wedgeTaper(&s.Wedge, p.WedgeLoadOhm),
 	})
 	if err != nil {
 		return nil, nil, err
@@ -255,4 +255,13 @@ func reflectorReport(p *Patterns, rs *ReflectorSpec, size, lambda float64) *Refl
 		rr.DiameterMM = &size
 	}
 	return rr
+}
+
+// wedgeTaper returns the wedge's impedance profile to load resistance zl.
+func wedgeTaper(w *WedgeSpec, zl float64) Taper {
+	t := Taper{Kind: TaperExponential, Z0: WedgeFeedOhm, ZL: zl}
+	if w.Taper == "klopfenstein" {
+		t.Kind, t.GammaMax = TaperKlopfenstein, w.Ripple
+	}
+	return t
 }

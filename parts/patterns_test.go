@@ -87,7 +87,7 @@ func TestDefaultStripThickness(t *testing.T) {
 		src := strings.NewReplacer("frequency_mhz = 5800.0", "frequency_mhz = 24000.0",
 			"base_diameter_mm = 17.5\ntop_diameter_mm = 12.5", "base_circumference_lambda = 1.1\ntop_circumference_lambda = 1.0",
 			"diameter_mm = 1.6", "diameter_mm = 0.2").Replace(base)
-		s, err := ParseSpec([]byte(src))
+		s, err := designSpec([]byte(src))
 		if err != nil {
 			t.Fatal(err)
 		}
@@ -121,7 +121,7 @@ func TestDowelFitErrors(t *testing.T) {
 		{"no stock rod fits at all", at24("0.8", ""), "dowel.clearance_mm", "dowel.diameter_mm plus twice clearance_mm at most 2.98 mm"},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
-			_, err := ParseSpec([]byte(tc.src))
+			_, err := designSpec([]byte(tc.src))
 			var errs SpecErrors
 			if !errors.As(err, &errs) {
 				t.Fatalf("want SpecErrors, got %v", err)

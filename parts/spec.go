@@ -106,12 +106,7 @@ func (s *Spec) Validate() error {
 	s.Cutting.validate(c, s)
 	s.Former.validate(c, s)
 	if len(c.errs) == 0 {
-		s.Coil.validateFit(c, s)
-		s.Dowel.validateFit(c, s)
 		s.Cutting.validateFit(c, s)
-	}
-	if len(c.errs) == 0 {
-		s.Wire.validateWinding(c, s)
 	}
 	return c.result()
 }

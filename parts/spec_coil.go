@@ -96,27 +96,6 @@ func (cs *CoilSpec) validate(c *checker, s *Spec) {
 	}
 }
 
-// validateFit checks the rules that need the whole coil worked out: the
-// wire must fit between neighbouring turns and a constant-angle cone must
-// exist. It runs only on a spec whose fields are each valid.
-func (cs *CoilSpec) validateFit(c *checker, s *Spec) {
-	coil, err := coilFromSpec(s)
-	if err != nil {
-		c.fail("coil.pitch_angle_deg", num(deref(cs.PitchAngleDeg)), err.Error(), "raise the pitch angle, add turns, or bring the two end sizes closer")
-		return
-	}
-	gap := coil.MinSpacing() - s.Wire.DiameterMM
-	if gap < MinTurnGapMM {
-		key, val := "coil.spacing_mm", deref(cs.SpacingMM)
-		if cs.SpacingMM == nil {
-			key, val = "coil.pitch_angle_deg", deref(cs.PitchAngleDeg)
-		}
-		c.fail(key, num(val), fmt.Sprintf("leaves %.2f mm between turns of %s mm wire (smallest spacing %.2f mm); at least %s mm is needed so turns do not touch",
-			gap, num(s.Wire.DiameterMM), coil.MinSpacing(), num(MinTurnGapMM)),
-			fmt.Sprintf("make the spacing at least %.2f mm or use thinner wire", s.Wire.DiameterMM+MinTurnGapMM))
-	}
-}
-
 func deref(p *float64) float64 {
 	if p == nil {
 		return 0

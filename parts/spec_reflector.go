@@ -48,8 +48,8 @@ var SheetMaterials = []SheetMaterial{
 	{ID: "tinplate", Name: "tinplate (tinned steel)"},
 }
 
-// sheetMaterial returns the material with the given id.
-func sheetMaterial(id string) (SheetMaterial, bool) {
+// SheetMaterialByID returns the material with the given id.
+func SheetMaterialByID(id string) (SheetMaterial, bool) {
 	for _, m := range SheetMaterials {
 		if m.ID == id {
 			return m, true

@@ -85,7 +85,6 @@ func TestBadSpecs(t *testing.T) {
 		{"negative turns", `turns = 5.0`, `turns = -3.0`, "coil.turns", 7, "between 1 and 50"},
 		{"zero frequency", `frequency_mhz = 5800.0`, `frequency_mhz = 0.0`, "frequency_mhz", 2, "between 100 and 30000"},
 		{"diameter and circumference", `base_diameter_mm = 17.5`, "base_diameter_mm = 17.5\nbase_circumference_lambda = 1.0", "coil.base_circumference_lambda", 10, "one or the other"},
-		{"wire thicker than spacing", `pitch_angle_deg = 13.0`, `spacing_mm = 1.5`, "coil.spacing_mm", 11, "do not touch"},
 		{"unknown shape", `shape = "conical"`, `shape = "barrel"`, "coil.shape", 6, `"cylindrical", "conical"`},
 		{"top size on a cylinder", `shape = "conical"`, `shape = "cylindrical"`, "coil.top_diameter_mm", 10, "only"},
 		{"zero quantity", `quantity = 2`, `quantity = 0`, "quantity", 3, "between 1 and"},
@@ -126,16 +125,6 @@ func TestSpecErrorFormat(t *testing.T) {
 	e := &SpecError{Key: "coil.turns", Line: 12, Value: "0", Problem: "must be at least 1", Fix: "give the number of turns"}
 	if got, want := e.Error(), "coil.turns = 0 (line 12): must be at least 1; fix: give the number of turns"; got != want {
 		t.Errorf("got %q\nwant %q", got, want)
-	}
-}
-
-func TestConstantAngleNeedsACone(t *testing.T) {
-	src := strings.Replace(base, `pitch_angle_deg = 13.0`, "pitch_angle_deg = 2.0\npitch_mode = \"constant_angle\"", 1)
-	src = strings.Replace(src, "turns = 5.0", "turns = 1.0", 1)
-	src = strings.Replace(src, "top_diameter_mm = 12.5", "top_diameter_mm = 40.0", 1)
-	_, err := ParseSpec([]byte(src))
-	if err == nil || !strings.Contains(err.Error(), "no cone fits") {
-		t.Fatalf("want a no-cone error, got %v", err)
 	}
 }
 

@@ -92,12 +92,3 @@ func stripFix(z0, d, t float64) string {
 	}
 	return fix
 }
-
-// taper returns the wedge's impedance profile to load resistance zl.
-func (w *WedgeSpec) taper(zl float64) Taper {
-	t := Taper{Kind: TaperExponential, Z0: WedgeFeedOhm, ZL: zl}
-	if w.Taper == "klopfenstein" {
-		t.Kind, t.GammaMax = TaperKlopfenstein, w.Ripple
-	}
-	return t
-}

@@ -41,11 +41,11 @@ const (
 	ModelHardening        = "hardening"
 )
 
-// calibrationDiameterSlack is the relative difference between the spec's
+// CalibrationDiameterSlack is the relative difference between the spec's
 // wire and a calibration's test wire beyond which the design warns.
 // Common practice (no published source): wire of another gauge is another
 // draw, with its own temper.
-const calibrationDiameterSlack = 0.02
+const CalibrationDiameterSlack = 0.02
 
 func (w *WireSpec) validate(c *checker, s *Spec) {
 	if w.Material == "" {
@@ -70,38 +70,14 @@ func (w *WireSpec) validate(c *checker, s *Spec) {
 	}
 }
 
-// validateWinding checks, once the rest of the spec is valid, that a former
-// can be compensated for the coil: a stiff wire on a steep helix would need
-// a former bent tighter than any helix with the coil's spacing can be.
-func (w *WireSpec) validateWinding(c *checker, s *Spec) {
-	if err := checkWinding(s); err != nil {
-		c.fail("wire.material", strconv.Quote(w.Material), "no former can wind this coil: "+err.Error(),
-			"choose a softer temper or a thicker wire, or a smaller pitch angle")
-	}
-}
-
-// checkWinding builds the coil and the wire's springback model and
-// compensates the coil's ends.
-func checkWinding(s *Spec) error {
-	coil, err := coilFromSpec(s)
-	if err != nil {
-		return nil // reported by the coil's own checks
-	}
-	w, err := newWireDesign(s)
-	if err != nil {
-		return err
-	}
-	_, err = compensateCoil(coil, w.Model)
-	return err
-}
-
 // Hardening reports whether the spec asks for the hardening springback model.
 func (w *WireSpec) Hardening() bool { return w.SpringbackModel == ModelHardening }
 
 // AttachCalibration gives the spec the calibration read from the file its
 // wire.calibration key names; NewDesign then uses the calibrated yield. It
 // returns a *SpecError when the calibration is for another material or was
-// fitted with the other springback model. It mutates s.
+// fitted with the other springback model; whether a former can then wind
+// the coil is checked by the design. It mutates s.
 func (s *Spec) AttachCalibration(cal wire.Calibration) error {
 	w := &s.Wire
 	fail := func(problem, fix string) error {
@@ -119,13 +95,7 @@ func (s *Spec) AttachCalibration(cal wire.Calibration) error {
 		return fail(fmt.Sprintf("calibration was fitted with springback_model = %q, the spec asks for %q", model, w.SpringbackModel),
 			fmt.Sprintf("set springback_model = %q, or calibrate again with the spec's model", model))
 	}
-	prev := w.calibration
 	w.calibration = &cal
-	if err := checkWinding(s); err != nil {
-		w.calibration = prev
-		return fail("with the calibrated yield no former can wind this coil: "+err.Error(),
-			"check the calibration, or choose a softer temper or a thicker wire")
-	}
 	return nil
 }
 

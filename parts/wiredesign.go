@@ -186,7 +186,7 @@ func (d *Design) springbackTurns() ([]Warning, error) {
 		add("springback-model", "%s has no hardening law in the library: springback is modelled as perfectly plastic", m.ID)
 	}
 	if cal := w.Calibration; cal != nil {
-		if math.Abs(cal.WireDiameter-w.Diameter) > calibrationDiameterSlack*w.Diameter {
+		if math.Abs(cal.WireDiameter-w.Diameter) > CalibrationDiameterSlack*w.Diameter {
 			add("calibration-diameter", "calibration was made on %s mm wire, the spec winds %s mm: another gauge is another draw; calibrate this wire",
 				num(cal.WireDiameter), num(w.Diameter))
 		}

@@ -348,9 +348,9 @@ func TestNoFormerCanWind(t *testing.T) {
 		t.Run(tc.name, func(t *testing.T) {
 			var f float64
 			fmt.Sscan(tc.freq, &f)
-			_, err := ParseSpec([]byte(specText(f, tc.coil, tc.wire)))
-			var ses SpecErrors
-			if !errors.As(err, &ses) || ses[0].Key != "wire.material" || ses[0].Line == 0 || !strings.Contains(ses[0].Problem, "no former") {
+			_, err := designSpec([]byte(specText(f, tc.coil, tc.wire)))
+			var se *SpecError
+			if !errors.As(err, &se) || se.Key != "wire.material" || se.Line == 0 || !strings.Contains(se.Problem, "no former") {
 				t.Errorf("err = %v, want a wire.material problem", err)
 			}
 		})
