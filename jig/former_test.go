@@ -21,6 +21,7 @@ import (
 	"coilwright/cam/stl"
 	"coilwright/jig/mesh"
 	"coilwright/parts"
+	"coilwright/parts/spec"
 	"coilwright/templates"
 )
 
@@ -31,14 +32,14 @@ func demoFormer(t testing.TB, name string) (*parts.Design, *Former) {
 	if !ok {
 		t.Fatalf("no demo %s", name)
 	}
-	s, err := parts.ParseSpec(b)
+	s, err := spec.ParseSpec(b)
 	if err != nil {
 		t.Fatal(err)
 	}
 	return designFormer(t, s)
 }
 
-func designFormer(t testing.TB, s *parts.Spec) (*parts.Design, *Former) {
+func designFormer(t testing.TB, s *spec.Spec) (*parts.Design, *Former) {
 	t.Helper()
 	d, err := parts.NewDesign(s)
 	if err != nil {
@@ -55,10 +56,10 @@ func designFormer(t testing.TB, s *parts.Spec) (*parts.Design, *Former) {
 // (either way up), 1–20 turns, 0.5–3 mm wire, 5–12 GHz so that the formers
 // stay a hand's length. Draws the spec rules or the former plan reject are
 // redrawn.
-func randomSpec(rng *rand.Rand) *parts.Spec {
+func randomSpec(rng *rand.Rand) *spec.Spec {
 	for {
 		f := 5000 + rng.Float64()*7000
-		s := &parts.Spec{Kit: "Random Test Kit", FrequencyMHz: f}
+		s := &spec.Spec{Kit: "Random Test Kit", FrequencyMHz: f}
 		s.Coil.Turns = 1 + math.Round(rng.Float64()*19*4)/4
 		s.Coil.Hand = [2]string{"RHCP", "LHCP"}[rng.IntN(2)]
 		base := 0.8 + rng.Float64()*0.5
@@ -70,7 +71,7 @@ func randomSpec(rng *rand.Rand) *parts.Spec {
 		}
 		pitch := 11 + rng.Float64()*5
 		s.Coil.PitchAngleDeg = &pitch
-		s.Wire = parts.WireSpec{Material: "copper-annealed", DiameterMM: 0.5 + rng.Float64()*2.5}
+		s.Wire = spec.WireSpec{Material: "copper-annealed", DiameterMM: 0.5 + rng.Float64()*2.5}
 		if rng.IntN(4) == 0 {
 			s.Former.Drive = "bore"
 			bore := 2 + rng.Float64()*2
@@ -286,22 +287,22 @@ func printAzimuthParam(f *Former, theta float64) float64 {
 func TestGroovePitch(t *testing.T) {
 	const pitchTol = 0.02 // mm
 	spacing := 26.5
-	cyl := &parts.Spec{Kit: "Pitch Test", FrequencyMHz: 2440,
-		Coil: parts.CoilSpec{Shape: "cylindrical", Turns: 4, Hand: "LHCP", SpacingMM: &spacing},
-		Wire: parts.WireSpec{Material: "copper-annealed", DiameterMM: 2}}
+	cyl := &spec.Spec{Kit: "Pitch Test", FrequencyMHz: 2440,
+		Coil: spec.CoilSpec{Shape: "cylindrical", Turns: 4, Hand: "LHCP", SpacingMM: &spacing},
+		Wire: spec.WireSpec{Material: "copper-annealed", DiameterMM: 2}}
 	base := 1.0
 	cyl.Coil.BaseCircumferenceLambda = &base
 	if err := cyl.Validate(); err != nil {
 		t.Fatal(err)
 	}
 	demo, _ := templates.Demo(templates.DefaultDemo)
-	cone, err := parts.ParseSpec(demo)
+	cone, err := spec.ParseSpec(demo)
 	if err != nil {
 		t.Fatal(err)
 	}
 	for _, c := range []struct {
 		name string
-		s    *parts.Spec
+		s    *spec.Spec
 	}{{"cylinder with spacing 26.5 mm", cyl}, {"demo cone", cone}} {
 		t.Run(c.name, func(t *testing.T) {
 			d, f := designFormer(t, c.s)
@@ -361,10 +362,10 @@ func TestGrooveHand(t *testing.T) {
 	} {
 		t.Run(c.name, func(t *testing.T) {
 			pitch := 13.0
-			s := &parts.Spec{Kit: "Hand Test", FrequencyMHz: 5800,
-				Coil: parts.CoilSpec{Shape: "conical", Turns: 3, Hand: c.hand, PitchAngleDeg: &pitch,
+			s := &spec.Spec{Kit: "Hand Test", FrequencyMHz: 5800,
+				Coil: spec.CoilSpec{Shape: "conical", Turns: 3, Hand: c.hand, PitchAngleDeg: &pitch,
 					BaseCircumferenceLambda: &c.base, TopCircumferenceLambda: &c.top},
-				Wire: parts.WireSpec{Material: "copper-annealed", DiameterMM: 1}}
+				Wire: spec.WireSpec{Material: "copper-annealed", DiameterMM: 1}}
 			if err := s.Validate(); err != nil {
 				t.Fatal(err)
 			}

@@ -5,6 +5,7 @@ import (
 
 	"coilwright/jig"
 	"coilwright/parts"
+	"coilwright/parts/spec"
 )
 
 // planFormer plans the former for d, adds the former-size warning to the
@@ -18,7 +19,7 @@ func planFormer(d *parts.Design) (jig.FormerPlan, error) {
 	if len(pl.Problems) == 0 {
 		return pl, nil
 	}
-	errs := make(parts.SpecErrors, len(pl.Problems))
+	errs := make(spec.SpecErrors, len(pl.Problems))
 	for i, p := range pl.Problems {
 		errs[i] = fitError(d.Spec, pl, p)
 	}
@@ -27,9 +28,9 @@ func planFormer(d *parts.Design) (jig.FormerPlan, error) {
 
 // fitError turns one fit problem into a spec error on the key a maker
 // would change, with a fix.
-func fitError(s *parts.Spec, pl jig.FormerPlan, p jig.FitProblem) *parts.SpecError {
+func fitError(s *spec.Spec, pl jig.FormerPlan, p jig.FitProblem) *spec.SpecError {
 	f := &s.Former
-	e := &parts.SpecError{}
+	e := &spec.SpecError{}
 	switch p.Kind {
 	case jig.FitGrooveSpacing:
 		e.Key, e.Value = "coil.spacing_mm", deref(s.Coil.SpacingMM)
@@ -84,7 +85,7 @@ func deref(v *float64) string {
 }
 
 // formerSizeWarning says that the former will not be printed.
-func formerSizeWarning(s *parts.Spec, pl jig.FormerPlan) parts.Warning {
+func formerSizeWarning(s *spec.Spec, pl jig.FormerPlan) parts.Warning {
 	f := &s.Former
 	return parts.Warning{Code: "former-size", Message: fmt.Sprintf(
 		"the winding former would be %.0f mm tall and %.0f mm across, more than the print volume of %s mm tall by %s mm across ([former] print_height_mm, print_width_mm): no former files are written; raise those limits if your printer takes it, or wind on a turned or segmented former to the diameters in the per-turn table",

@@ -5,7 +5,7 @@ import (
 	"strings"
 	"testing"
 
-	"coilwright/parts"
+	"coilwright/parts/spec"
 )
 
 // base is a valid 5.8 GHz conical spec the fit tests change one key of.
@@ -28,7 +28,7 @@ diameter_mm = 1.6
 
 // newKit parses src and plans its kit.
 func newKit(src string) (*Kit, error) {
-	s, err := parts.ParseSpec([]byte(src))
+	s, err := spec.ParseSpec([]byte(src))
 	if err != nil {
 		return nil, err
 	}
@@ -58,7 +58,7 @@ func TestFormerFitErrors(t *testing.T) {
 				t.Fatal("the test's change does not apply")
 			}
 			_, err := newKit(src)
-			var ses parts.SpecErrors
+			var ses spec.SpecErrors
 			if !errors.As(err, &ses) {
 				t.Fatalf("got %v, want spec errors", err)
 			}

@@ -10,6 +10,7 @@ import (
 	"coilwright/cam/pdf"
 	"coilwright/jig"
 	"coilwright/parts"
+	"coilwright/parts/spec"
 )
 
 // Source is a validated spec with where it came from and the bytes it was
@@ -17,7 +18,7 @@ import (
 type Source struct {
 	Name  string // file path, or "demo:NAME" for an embedded demo
 	Bytes []byte
-	Spec  *parts.Spec // parsed and validated, calibration attached
+	Spec  *spec.Spec // parsed and validated, calibration attached
 }
 
 // SHA256 returns the hex SHA-256 of the spec's bytes.

@@ -5,7 +5,7 @@ import (
 	"io"
 	"testing"
 
-	"coilwright/parts"
+	"coilwright/parts/spec"
 	"coilwright/templates"
 )
 
@@ -16,7 +16,7 @@ func demoKit(t testing.TB, name string, opt Options) *Kit {
 	if !ok {
 		t.Fatalf("no demo %s", name)
 	}
-	s, err := parts.ParseSpec(b)
+	s, err := spec.ParseSpec(b)
 	if err != nil {
 		t.Fatal(err)
 	}

@@ -8,6 +8,7 @@ import (
 	"testing"
 
 	"coilwright/parts"
+	"coilwright/parts/spec"
 )
 
 // randomSpecText draws a spec across the ranges makers use: either shape
@@ -58,7 +59,7 @@ func TestCheckPassesThenFormerBuilds(t *testing.T) {
 	accepted := 0
 	for i := range draws {
 		src := randomSpecText(rng)
-		s, err := parts.ParseSpec([]byte(src))
+		s, err := spec.ParseSpec([]byte(src))
 		if err != nil {
 			continue
 		}

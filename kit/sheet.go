@@ -13,6 +13,7 @@ import (
 	"coilwright/cam/cut"
 	"coilwright/cam/pdf"
 	"coilwright/parts"
+	"coilwright/parts/spec"
 	"coilwright/templates"
 )
 
@@ -145,7 +146,7 @@ func newBatchPlan(d *parts.Design, cl *parts.CutList, cps []cutPart) (*batchPlan
 		plan, err := cut.PlanStock(pieces, st.rod)
 		if errors.Is(err, cut.ErrPieceTooLong) {
 			need := math.Ceil((st.piece+st.rod.Kerf+st.rod.EndTrim)/10) * 10
-			return nil, &parts.SpecError{Key: st.key, Line: s.Line(st.key), Value: strconv.FormatFloat(st.rod.Length, 'g', -1, 64),
+			return nil, &spec.SpecError{Key: st.key, Line: s.Line(st.key), Value: strconv.FormatFloat(st.rod.Length, 'g', -1, 64),
 				Problem: fmt.Sprintf("is too short for one %s of %.1f mm with %s mm kerf and %s mm end trim", st.item, st.piece,
 					strconv.FormatFloat(st.rod.Kerf, 'g', -1, 64), strconv.FormatFloat(st.rod.EndTrim, 'g', -1, 64)),
 				Fix: fmt.Sprintf("set %s = %.0f or more", st.key[strings.LastIndex(st.key, ".")+1:], need)}

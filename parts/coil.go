@@ -6,6 +6,7 @@ import (
 	"math"
 
 	"coilwright/cam/geom"
+	"coilwright/parts/spec"
 )
 
 // Hand is the winding sense of a helix: +1 right-hand (RHCP), −1 left-hand
@@ -159,7 +160,7 @@ func (c Coil) MeanRadius() float64 {
 var errNoCone = errors.New("no cone fits")
 
 // coilFromSpec works out the centreline from a validated spec.
-func coilFromSpec(s *Spec) (Coil, error) {
+func coilFromSpec(s *spec.Spec) (Coil, error) {
 	cs := &s.Coil
 	lambda := s.Wavelength()
 	radius := func(d, cl *float64) float64 {
@@ -180,7 +181,7 @@ func coilFromSpec(s *Spec) (Coil, error) {
 	if cs.FirstTurnHeightMM != nil {
 		c.Z0 = *cs.FirstTurnHeightMM
 	} else {
-		c.Z0 = DefaultFirstTurnHeight(lambda, s.Wire.DiameterMM)
+		c.Z0 = spec.DefaultFirstTurnHeight(lambda, s.Wire.DiameterMM)
 	}
 	if cs.PitchMode == "constant_angle" && c.StartRadius != c.EndRadius {
 		c.Mode = ConstantAngle

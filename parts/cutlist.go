@@ -22,6 +22,8 @@ import (
 	"fmt"
 	"math"
 	"slices"
+
+	"coilwright/parts/spec"
 )
 
 // Allowances and fits of the cut list, in mm. Common practice (no published
@@ -108,7 +110,7 @@ type DowelCut struct {
 // lengths at the reflector end.
 type CoaxCut struct {
 	Spec         string // spec type name
-	Cable        CoaxType
+	Cable        spec.CoaxType
 	FinishedMM   float64 // connector to the reflector's back face (coax.length_mm)
 	ThroughMM    float64 // through the reflector, back face to top face
 	ProudMM      float64 // dielectric above the top face

@@ -3,6 +3,8 @@ package parts
 import (
 	"fmt"
 	"math"
+
+	"coilwright/parts/spec"
 )
 
 // minDowelClearanceMM is the least default clearance: on a coil too small
@@ -18,10 +20,10 @@ const minDowelClearanceMM = 0.25
 // inside the smallest turn (closing the default clearance down when that
 // makes room; it mutates s.Dowel.ClearanceMM then). Problems come back as
 // SpecErrors.
-func checkFit(s *Spec) error {
-	var errs SpecErrors
+func checkFit(s *spec.Spec) error {
+	var errs spec.SpecErrors
 	fail := func(key, value, problem, fix string) {
-		errs = append(errs, &SpecError{Key: key, Line: s.Line(key), Value: value, Problem: problem, Fix: fix})
+		errs = append(errs, &spec.SpecError{Key: key, Line: s.Line(key), Value: value, Problem: problem, Fix: fix})
 	}
 	cs := &s.Coil
 	coil, err := coilFromSpec(s)
@@ -30,14 +32,14 @@ func checkFit(s *Spec) error {
 		return errs
 	}
 	gap := coil.MinSpacing() - s.Wire.DiameterMM
-	if gap < MinTurnGapMM {
+	if gap < spec.MinTurnGapMM {
 		key, val := "coil.spacing_mm", optional(cs.SpacingMM)
 		if cs.SpacingMM == nil {
 			key, val = "coil.pitch_angle_deg", optional(cs.PitchAngleDeg)
 		}
 		fail(key, num(val), fmt.Sprintf("leaves %.2f mm between turns of %s mm wire (smallest spacing %.2f mm); at least %s mm is needed so turns do not touch",
-			gap, num(s.Wire.DiameterMM), coil.MinSpacing(), num(MinTurnGapMM)),
-			fmt.Sprintf("make the spacing at least %.2f mm or use thinner wire", s.Wire.DiameterMM+MinTurnGapMM))
+			gap, num(s.Wire.DiameterMM), coil.MinSpacing(), num(spec.MinTurnGapMM)),
+			fmt.Sprintf("make the spacing at least %.2f mm or use thinner wire", s.Wire.DiameterMM+spec.MinTurnGapMM))
 	}
 	d := &s.Dowel
 	inner := 2*smallestTurnRadius(coil) - s.Wire.DiameterMM
@@ -61,7 +63,7 @@ func checkFit(s *Spec) error {
 	default:
 		if room := inner - 2*d.ClearanceMM; *d.DiameterMM > room+1e-9 {
 			fix := fmt.Sprintf("use a rod of at most %.1f mm, or omit diameter_mm to choose one", room)
-			if room < MinDowelMM {
+			if room < spec.MinDowelMM {
 				fix = fmt.Sprintf("reduce clearance_mm: the rod plus twice the clearance must stay within %.2f mm", inner)
 			}
 			fail("dowel.diameter_mm", num(*d.DiameterMM), fmt.Sprintf("does not pass inside the smallest turn (%.2f mm inside) with %s mm clearance all round", inner, num(d.ClearanceMM)), fix)

@@ -4,12 +4,14 @@ import (
 	"errors"
 	"strings"
 	"testing"
+
+	"coilwright/parts/spec"
 )
 
 // designSpec parses src and works out its design, returning the spec as
 // the design left it (defaults the fit checks close down included).
-func designSpec(src []byte) (*Spec, error) {
-	s, err := ParseSpec(src)
+func designSpec(src []byte) (*spec.Spec, error) {
+	s, err := spec.ParseSpec(src)
 	if err != nil {
 		return nil, err
 	}
@@ -22,7 +24,7 @@ func designSpec(src []byte) (*Spec, error) {
 func TestWireThickerThanSpacing(t *testing.T) {
 	// 1.6 mm wire at 1.5 mm spacing: the turns overlap.
 	_, err := designSpec([]byte(strings.Replace(base, `pitch_angle_deg = 13.0`, `spacing_mm = 1.5`, 1)))
-	var se *SpecError
+	var se *spec.SpecError
 	if !errors.As(err, &se) || se.Key != "coil.spacing_mm" || se.Line != 11 || !strings.Contains(se.Problem, "do not touch") {
 		t.Fatalf("got %v, want a coil.spacing_mm error on line 11 saying the turns touch", err)
 	}

@@ -22,6 +22,7 @@ import (
 	"math"
 	"strings"
 
+	"coilwright/parts/spec"
 	"coilwright/parts/wire"
 )
 
@@ -76,7 +77,7 @@ type WireDesign struct {
 }
 
 // newWireDesign builds the wire and its springback model from a validated spec.
-func newWireDesign(s *Spec) (WireDesign, error) {
+func newWireDesign(s *spec.Spec) (WireDesign, error) {
 	m, err := wire.LookupMaterial(s.Wire.Material)
 	if err != nil {
 		return WireDesign{}, err
@@ -186,7 +187,7 @@ func (d *Design) springbackTurns() ([]Warning, error) {
 		add("springback-model", "%s has no hardening law in the library: springback is modelled as perfectly plastic", m.ID)
 	}
 	if cal := w.Calibration; cal != nil {
-		if math.Abs(cal.WireDiameter-w.Diameter) > CalibrationDiameterSlack*w.Diameter {
+		if math.Abs(cal.WireDiameter-w.Diameter) > spec.CalibrationDiameterSlack*w.Diameter {
 			add("calibration-diameter", "calibration was made on %s mm wire, the spec winds %s mm: another gauge is another draw; calibrate this wire",
 				num(cal.WireDiameter), num(w.Diameter))
 		}

@@ -9,6 +9,7 @@ import (
 	"strings"
 	"testing"
 
+	"coilwright/parts/spec"
 	"coilwright/parts/wire"
 )
 
@@ -198,10 +199,10 @@ calibration = ""`, "wire.calibration", "calibration file"},
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
-			_, err := ParseSpec([]byte(specText(5800, cylinder5800, tc.wire)))
-			var se *SpecError
+			_, err := spec.ParseSpec([]byte(specText(5800, cylinder5800, tc.wire)))
+			var se *spec.SpecError
 			found := false
-			var ses SpecErrors
+			var ses spec.SpecErrors
 			if errors.As(err, &ses) {
 				for _, e := range ses {
 					if e.Key == tc.key {
@@ -229,7 +230,7 @@ calibration = "batch.toml"`)
 		t.Fatal(err)
 	}
 	t.Run("calibrated yield drives the former", func(t *testing.T) {
-		s, err := ParseSpec([]byte(text))
+		s, err := spec.ParseSpec([]byte(text))
 		if err != nil {
 			t.Fatal(err)
 		}
@@ -266,18 +267,18 @@ calibration = "batch.toml"`)
 	}
 	for _, tc := range mismatch {
 		t.Run(tc.name, func(t *testing.T) {
-			s, _ := ParseSpec([]byte(text))
+			s, _ := spec.ParseSpec([]byte(text))
 			c := cal
 			tc.edit(&c)
 			err := s.AttachCalibration(c)
-			var se *SpecError
+			var se *spec.SpecError
 			if !errors.As(err, &se) || se.Key != "wire.calibration" || se.Line == 0 || !strings.Contains(se.Problem, tc.want) {
 				t.Errorf("err = %v, want a wire.calibration problem mentioning %q", err, tc.want)
 			}
 		})
 	}
 	t.Run("other gauge warns", func(t *testing.T) {
-		s, _ := ParseSpec([]byte(strings.Replace(text, "diameter_mm = 1.6", "diameter_mm = 2.0", 1)))
+		s, _ := spec.ParseSpec([]byte(strings.Replace(text, "diameter_mm = 1.6", "diameter_mm = 2.0", 1)))
 		if err := s.AttachCalibration(cal); err != nil {
 			t.Fatal(err)
 		}
@@ -349,7 +350,7 @@ func TestNoFormerCanWind(t *testing.T) {
 			var f float64
 			fmt.Sscan(tc.freq, &f)
 			_, err := designSpec([]byte(specText(f, tc.coil, tc.wire)))
-			var se *SpecError
+			var se *spec.SpecError
 			if !errors.As(err, &se) || se.Key != "wire.material" || se.Line == 0 || !strings.Contains(se.Problem, "no former") {
 				t.Errorf("err = %v, want a wire.material problem", err)
 			}

@@ -12,7 +12,7 @@ import (
 	"github.com/spf13/cobra"
 
 	"coilwright/cam"
-	"coilwright/parts"
+	"coilwright/parts/spec"
 	"coilwright/parts/wire"
 )
 
@@ -34,7 +34,7 @@ type calibrateOptions struct {
 const defaultCalibrationFile = "wire-calibration.toml"
 
 func newCalibrateCmd() *cobra.Command {
-	o := calibrateOptions{model: parts.ModelPerfectlyPlastic}
+	o := calibrateOptions{model: spec.ModelPerfectlyPlastic}
 	cmd := &cobra.Command{
 		Use:   "calibrate --material ID --wire-mm D --former-mm F --measured-mm M[,M...]",
 		Short: "Fit the wire's effective yield from a measured test coil",
@@ -98,8 +98,8 @@ func runCalibrate(w io.Writer, o calibrateOptions) error {
 		return usageError{errors.New("calibrate needs at least one --measured-mm value")}
 	case !(o.spacingMM >= 0):
 		return usageError{fmt.Errorf("--spacing-mm %g must be zero (close-wound) or positive", o.spacingMM)}
-	case o.model != parts.ModelPerfectlyPlastic && o.model != parts.ModelHardening:
-		return usageError{fmt.Errorf("--model %q: use %q or %q", o.model, parts.ModelPerfectlyPlastic, parts.ModelHardening)}
+	case o.model != spec.ModelPerfectlyPlastic && o.model != spec.ModelHardening:
+		return usageError{fmt.Errorf("--model %q: use %q or %q", o.model, spec.ModelPerfectlyPlastic, spec.ModelHardening)}
 	}
 	if dir := filepath.Dir(o.out); !isDir(dir) {
 		return usageError{fmt.Errorf("-o %s: folder %s does not exist; create it or choose another path", o.out, dir)}
@@ -119,7 +119,7 @@ func runCalibrate(w io.Writer, o calibrateOptions) error {
 		}
 		pts[i] = wire.CalibrationPoint{FormerDiameter: o.formerMM, RelaxedDiameter: v}
 	}
-	cal, err := wire.Calibrate(m, o.wireMM, spacing, o.model == parts.ModelHardening, pts)
+	cal, err := wire.Calibrate(m, o.wireMM, spacing, o.model == spec.ModelHardening, pts)
 	if err != nil {
 		return inputError{err: err}
 	}

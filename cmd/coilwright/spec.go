@@ -9,7 +9,7 @@ import (
 	"time"
 
 	"coilwright/kit"
-	"coilwright/parts"
+	"coilwright/parts/spec"
 	"coilwright/templates"
 )
 
@@ -39,7 +39,7 @@ func loadSpec(path, demo string) (*kit.Source, error) {
 		}
 		l.Name, l.Bytes = path, b
 	}
-	s, err := parts.ParseSpec(l.Bytes)
+	s, err := spec.ParseSpec(l.Bytes)
 	if err != nil {
 		return nil, inputError{l.Name, err}
 	}
@@ -55,8 +55,8 @@ func loadSpec(path, demo string) (*kit.Source, error) {
 // inputError naming the spec.
 func newKit(l *kit.Source, created time.Time) (*kit.Kit, error) {
 	k, err := kit.New(*l, kit.Options{Version: Version, Created: created})
-	var se *parts.SpecError
-	var ses parts.SpecErrors
+	var se *spec.SpecError
+	var ses spec.SpecErrors
 	if errors.As(err, &se) || errors.As(err, &ses) {
 		return nil, inputError{l.Name, err}
 	}

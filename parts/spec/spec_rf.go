@@ -1,4 +1,4 @@
-package parts
+package spec
 
 // RFSpec is the [rf] table: the transmitter feeding the antenna, used only
 // for the EIRP figure in the report.

@@ -1,4 +1,4 @@
-package parts
+package spec
 
 // FeedHoleClearanceMM is added to what passes through the feed hole
 // (CoaxType.FeedHoleMM). Common practice (no published source).

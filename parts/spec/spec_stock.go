@@ -1,4 +1,4 @@
-package parts
+package spec
 
 // StockSpec is the [stock] table: the rod stock a batch is cut from and
 // the cuts' losses. The build sheet prints on [cutting] paper, like the

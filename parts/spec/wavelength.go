@@ -1,4 +1,4 @@
-package parts
+package spec
 
 // SpeedOfLight is c in m/s, exact by definition of the metre.
 // Source: SI Brochure, 9th ed., BIPM 2019, §2.3.1.

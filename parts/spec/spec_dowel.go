@@ -1,4 +1,4 @@
-package parts
+package spec
 
 // DowelSpec is the [dowel] table: the rod that supports the coil.
 type DowelSpec struct {

@@ -1,8 +1,7 @@
-package parts
+package spec
 
 import (
 	"errors"
-	"io/fs"
 	"strings"
 	"testing"
 
@@ -25,22 +24,6 @@ func mustParse(t *testing.T, b []byte) *Spec {
 		t.Fatalf("ParseSpec: %v", err)
 	}
 	return s
-}
-
-func TestShippedSpecsParse(t *testing.T) {
-	names, _ := fs.Glob(templates.FS, "*.toml")
-	if len(names) < 3 {
-		t.Fatalf("found %d shipped specs, want the reference and two demos", len(names))
-	}
-	for _, n := range names {
-		t.Run(n, func(t *testing.T) {
-			b, _ := fs.ReadFile(templates.FS, n)
-			s := mustParse(t, b)
-			if _, err := NewDesign(s); err != nil {
-				t.Fatal(err)
-			}
-		})
-	}
 }
 
 // base is a valid spec the bad-input cases edit; line numbers in the cases
@@ -126,27 +109,4 @@ func TestSpecErrorFormat(t *testing.T) {
 	if got, want := e.Error(), "coil.turns = 0 (line 12): must be at least 1; fix: give the number of turns"; got != want {
 		t.Errorf("got %q\nwant %q", got, want)
 	}
-}
-
-func FuzzParseSpec(f *testing.F) {
-	f.Add([]byte(base))
-	f.Add(templates.Reference())
-	for _, n := range templates.Demos() {
-		b, _ := templates.Demo(n)
-		f.Add(b)
-	}
-	f.Add([]byte("kit = 1\n[coil]\nturns = 1e400"))
-	f.Add([]byte("[coil.x]\n[[wire]]"))
-	f.Fuzz(func(t *testing.T, data []byte) {
-		s, err := ParseSpec(data)
-		if err != nil {
-			if err.Error() == "" {
-				t.Fatal("empty error message")
-			}
-			return
-		}
-		if _, err := NewDesign(s); err != nil {
-			t.Fatalf("valid spec but no design: %v", err)
-		}
-	})
 }
