@@ -9,6 +9,7 @@ import (
 
 	"github.com/spf13/cobra"
 
+	"coilwright/kit"
 	"coilwright/parts/spec"
 	"coilwright/templates"
 )
@@ -96,9 +97,20 @@ func runNew(w, stderr io.Writer, o newOptions, sized bool) error {
 	if err := starterTmpl.Execute(&buf, st); err != nil {
 		return err
 	}
-	if _, err := spec.ParseSpec(buf.Bytes()); err != nil {
+	if err := checkStarter(buf.Bytes()); err != nil {
 		fmt.Fprintf(stderr, "coilwright: the starter spec does not pass check yet; edit it first:\n%v\n", err)
 	}
 	_, err := w.Write(buf.Bytes())
+	return err
+}
+
+// checkStarter runs a starter spec through what check runs: parsing, the
+// design and the planning of every part.
+func checkStarter(b []byte) error {
+	s, err := spec.ParseSpec(b)
+	if err != nil {
+		return err
+	}
+	_, err = kit.New(kit.Source{Name: "starter", Bytes: b, Spec: s}, kit.Options{})
 	return err
 }

@@ -43,20 +43,17 @@ package mesh
 //  6. With MeshOptions.Simplify the welded mesh is then decimated by edge
 //     collapses that keep it a closed manifold of the same topology and keep
 //     the true distance at the points they sample within a share of the
-//     tolerance (decimate.go). On the demo formers at 0.05 mm this leaves
-//     one triangle in 7 (5.8 GHz) and one in 17 (2.4 GHz), with centroids
-//     outside the lettering no farther off (0.025 mm against 0.028 mm) and,
-//     sampled 28 times per face, no point farther off than in the plain
-//     mesh (0.043 and 0.048 mm).
+//     tolerance (decimate.go). How many triangles it leaves on the demo
+//     formers is reported by the former benchmarks in jig, and how far the
+//     result lies from the surface by the former's accuracy test.
 //
 // Blocks are merged in index order, so the output is the same on any number
 // of cores. Accuracy: vertices lie within 1e-4 cell of the surface (feature
 // vertices within 0.01 cell, by Newton projection); face centroids carry the
 // chord error s²/(8R) of curved parts, which the cell size from MeshOptions
 // keeps within the tolerance for radii down to MinRadius. Features thinner
-// than about two cells (fine lettering) can exceed it: at the 0.05 mm
-// default the 5.8 GHz demo former measures 0.003 mm at vertices, 0.028 mm at
-// face centroids, and 0.075 mm at centroids in its engraved lettering.
+// than about two cells (fine lettering) can exceed it; the former's
+// accuracy test in jig reports the demo former's figures.
 
 import (
 	"errors"
@@ -90,10 +87,9 @@ const (
 // simplifyShare is the part of the tolerance that simplification may use at
 // the points it samples (centroids and new edge midpoints). The rest is
 // room for the error between samples where a large face spans a feature,
-// and keeps circle fits to the groove's mesh within 0.01 mm: at half the
-// tolerance the demo's groove pitch measured 0.027 mm off, at a quarter
-// within 0.02 mm, and densely sampled faces no farther off the surface than
-// the plain mesh's. Measured (no published source).
+// and keeps circle fits to the groove's mesh close enough for the former's
+// pitch test, which half the tolerance did not. Chosen by trial (no
+// published source).
 const simplifyShare = 0.25
 
 // rootTol is the distance, as a fraction of the cell, at which an edge
