@@ -45,7 +45,7 @@ func WritePreview(w io.Writer, m *geom.Mesh, opt PreviewOptions) error {
 		view = DefaultViewFrom()
 	}
 	img := renderMesh(m, size, view.Normalize())
-	return (&png.Encoder{CompressionLevel: png.BestCompression}).Encode(w, img)
+	return (&png.Encoder{CompressionLevel: png.BestSpeed}).Encode(w, img)
 }
 
 // renderMesh rasterises m into a size × size picture seen from direction d.
