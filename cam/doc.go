@@ -1,5 +1,6 @@
-// Package cam turns geometry into bytes and files: mesh and drawing
-// writers, kerf offsets, nesting, stock planning, and the staged, atomic
-// output folder every build writes through. It knows nothing of the design
-// spec.
+// Package cam is the staged, atomic output folder every build writes
+// through, and its manifest. Each output format has its own writer package
+// below it (dxf, svg, pdf, stl, threemf, preview), drawings are walked
+// for them by walk, and cut plans kerf offsets, nests and rod cuts. None
+// of them knows the design spec.
 package cam

@@ -45,7 +45,7 @@ const (
 func glyphStrokes(r rune) ([][2]geom.Vec2, error) {
 	lines, ok := glyphs[r]
 	if !ok {
-		return nil, fmt.Errorf("jig: flange lettering has no glyph for %q", r)
+		return nil, fmt.Errorf("flange lettering has no glyph for %q", r)
 	}
 	var seg [][2]geom.Vec2
 	for _, l := range lines {

@@ -27,6 +27,7 @@ import (
 	"math"
 
 	"coilwright/cam/geom"
+	"coilwright/jig/mesh"
 	"coilwright/jig/sdf"
 )
 
@@ -108,22 +109,22 @@ func (f *Former) Centreline(phi float64) geom.Vec3 {
 // lost between samples, then simplifies the mesh within the tolerance
 // (MeshOptions.Simplify).
 func (f *Former) Mesh(tol float64) (*geom.Mesh, error) {
-	return Mesh(f.Solid, f.MeshOptions(tol, true))
+	return mesh.Mesh(f.Solid, f.MeshOptions(tol, true))
 }
 
 // MeshOptions returns the options Mesh uses at tolerance tol in mm (0 for
 // DefaultTolerance), with or without simplification.
-func (f *Former) MeshOptions(tol float64, simplify bool) MeshOptions {
+func (f *Former) MeshOptions(tol float64, simplify bool) mesh.MeshOptions {
 	if tol == 0 {
-		tol = DefaultTolerance
+		tol = mesh.DefaultTolerance
 	}
-	cell := min(math.Sqrt(4*tol*f.minRadius), maxCellPerTolerance*tol, f.minWall/2, f.minRadius)
-	return MeshOptions{Tolerance: tol, Cell: cell, Simplify: simplify}
+	cell := min(math.Sqrt(4*tol*f.minRadius), mesh.MaxCellPerTolerance*tol, f.minWall/2, f.minRadius)
+	return mesh.MeshOptions{Tolerance: tol, Cell: cell, Simplify: simplify}
 }
 
 // formerError reports a size that cannot make a former.
 func formerError(format string, args ...any) error {
-	return fmt.Errorf("jig: former: "+format, args...)
+	return fmt.Errorf(format, args...)
 }
 
 // NewFormer builds the former for path with the sizes in p.
@@ -152,22 +153,10 @@ func NewFormer(path WirePath, p FormerParams) (*Former, error) {
 	if err != nil {
 		return nil, err
 	}
-	// Heights of the groove's extreme points, coil frame.
-	zLo := path.Z(0) - p.LeadIn*0.1*slope(path.Z, 0) - a*math.Sqrt2
-	zHi := path.Z(span) + p.RunOut*0.1*slope(path.Z, span) + a*math.Sqrt2
-	const land = 1.0 // flange face clear of the groove. Common practice (no published source).
-
 	// Core profile samples from the flange end to the free end.
 	prof := coreProfile(path, coreR)
-	var flangeFace, freeEnd float64 // coil z of the flange's inner face and the core's free end
-	if !f.Flipped {
-		flangeFace = math.Min(0, zLo-land)
-		freeEnd = zHi + p.EndMargin
-	} else {
-		flangeFace = zHi + land
-		freeEnd = zLo - p.EndMargin
-	}
-	rWide := math.Max(coreR(0), coreR(span))
+	e := envelope(path, p)
+	flangeFace, freeEnd, rWide := e.flangeFace, e.freeEnd, e.rWide
 	core, err := revolveCore(prof, flangeFace-up*1, freeEnd, p.Chamfer)
 	if err != nil {
 		return nil, err
@@ -180,10 +169,7 @@ func NewFormer(path WirePath, p FormerParams) (*Former, error) {
 	if err != nil {
 		return nil, err
 	}
-	driveR := p.BoreDiameter / 2
-	if p.Drive == HexSocket {
-		driveR = p.HexAcrossFlats / math.Sqrt(3)
-	}
+	driveR := p.driveRadius()
 	lock, err := lockHole(path, p, a, up, driveR)
 	if err != nil {
 		return nil, err
@@ -198,14 +184,14 @@ func NewFormer(path WirePath, p FormerParams) (*Former, error) {
 	}
 
 	// Into print coordinates: flange outer face on z = 0.
-	outer := flangeFace - up*p.FlangeThickness
+	outer := e.outer
 	move := sdf.Translation(geom.Vec3{Z: -outer})
 	f.shift = -outer
 	if f.Flipped {
 		move = sdf.RotationX(math.Pi).Then(sdf.Translation(geom.Vec3{Z: outer}))
 		f.shift = outer
 	}
-	f.Height = math.Abs(freeEnd - outer)
+	f.Height = e.height
 	printed := sdf.Move(body, move)
 
 	cuts := []sdf.Cut{}
@@ -253,10 +239,25 @@ func slope(z func(float64) float64, phi float64) float64 {
 // a tenth of the end slope while its radius rises quadratically until the
 // whole section has left the core.
 func grooveSweep(path WirePath, p FormerParams, a, up float64) (sdf.SDF3, error) {
+	prof, err := grooveSection(a, up, p.RoundGroove)
+	if err != nil {
+		return nil, err
+	}
+	s, err := sdf.NewHelixSweep(grooveHelix(path, p, a), prof)
+	if err != nil {
+		return nil, formerError("groove: %w", err)
+	}
+	return s, nil
+}
+
+// grooveHelix returns the path of the groove's centre: half the clearance
+// outside the wire centreline, continued before the start and past the end
+// at a tenth of the end slopes while rising out of the core.
+func grooveHelix(path WirePath, p FormerParams, a float64) sdf.Helix {
 	span := path.Span()
 	rise := p.GrooveDepth + 1.5*a
 	s0, s1 := slope(path.Z, 0), slope(path.Z, span)
-	h := sdf.Helix{
+	return sdf.Helix{
 		Radius: func(phi float64) float64 {
 			switch {
 			case phi < 0:
@@ -281,15 +282,6 @@ func grooveSweep(path WirePath, p FormerParams, a, up float64) (sdf.SDF3, error)
 		Start: -p.LeadIn,
 		End:   span + p.RunOut,
 	}
-	prof, err := grooveSection(a, up, p.RoundGroove)
-	if err != nil {
-		return nil, err
-	}
-	s, err := sdf.NewHelixSweep(h, prof)
-	if err != nil {
-		return nil, formerError("groove: %w", err)
-	}
-	return s, nil
 }
 
 // grooveSection returns the groove's section in the plane normal to the
@@ -512,12 +504,7 @@ func lettering(p FormerParams, rIn, rOut, top float64) ([][]sdf.SDF3, error) {
 	// clear of the vice flats.
 	const arc = 5 * math.Pi / 6
 	rt := (rIn + rOut) / 2
-	th := min(p.TextHeight, rOut-rIn-0.8)
-	for _, label := range p.Labels {
-		if n := float64(len([]rune(label))); n > 0 {
-			th = min(th, arc*rt*glyphHeight/(n*glyphAdvance-(glyphAdvance-glyphWidth)))
-		}
-	}
+	th := letterHeight(p, rIn, rOut)
 	if th < minTextHeight {
 		return nil, formerError("the flange leaves room for %.1f mm letters; at least %g mm is needed (widen flange_margin_mm)", th, minTextHeight)
 	}
@@ -567,4 +554,19 @@ func lettering(p FormerParams, rIn, rOut, top float64) ([][]sdf.SDF3, error) {
 		}
 	}
 	return out, nil
+}
+
+// letterHeight returns the letter height in mm that fits both labels on
+// the flange ring between radii rIn and rOut: at most TextHeight, 0.8 mm
+// inside the ring, and each label within an arc of 150°.
+func letterHeight(p FormerParams, rIn, rOut float64) float64 {
+	const arc = 5 * math.Pi / 6
+	rt := (rIn + rOut) / 2
+	th := min(p.TextHeight, rOut-rIn-0.8)
+	for _, label := range p.Labels {
+		if n := float64(len([]rune(label))); n > 0 {
+			th = min(th, arc*rt*glyphHeight/(n*glyphAdvance-(glyphAdvance-glyphWidth)))
+		}
+	}
+	return th
 }

@@ -14,9 +14,14 @@ import (
 	"strconv"
 	"testing"
 
-	"coilwright/cam"
+	"gonum.org/v1/gonum/mat"
+
+	"coilwright/cam/checktool"
 	"coilwright/cam/geom"
+	"coilwright/cam/stl"
+	"coilwright/jig/mesh"
 	"coilwright/parts"
+	"coilwright/parts/spec"
 	"coilwright/templates"
 )
 
@@ -27,14 +32,14 @@ func demoFormer(t testing.TB, name string) (*parts.Design, *Former) {
 	if !ok {
 		t.Fatalf("no demo %s", name)
 	}
-	s, err := parts.ParseSpec(b)
+	s, err := spec.ParseSpec(b)
 	if err != nil {
 		t.Fatal(err)
 	}
 	return designFormer(t, s)
 }
 
-func designFormer(t testing.TB, s *parts.Spec) (*parts.Design, *Former) {
+func designFormer(t testing.TB, s *spec.Spec) (*parts.Design, *Former) {
 	t.Helper()
 	d, err := parts.NewDesign(s)
 	if err != nil {
@@ -49,11 +54,12 @@ func designFormer(t testing.TB, s *parts.Spec) (*parts.Design, *Former) {
 
 // randomSpec draws a former spec: either hand, cylindrical or conical
 // (either way up), 1–20 turns, 0.5–3 mm wire, 5–12 GHz so that the formers
-// stay a hand's length. Draws the spec rules reject are redrawn.
-func randomSpec(rng *rand.Rand) *parts.Spec {
+// stay a hand's length. Draws the spec rules or the former plan reject are
+// redrawn.
+func randomSpec(rng *rand.Rand) *spec.Spec {
 	for {
 		f := 5000 + rng.Float64()*7000
-		s := &parts.Spec{Kit: "Random Test Kit", FrequencyMHz: f}
+		s := &spec.Spec{Kit: "Random Test Kit", FrequencyMHz: f}
 		s.Coil.Turns = 1 + math.Round(rng.Float64()*19*4)/4
 		s.Coil.Hand = [2]string{"RHCP", "LHCP"}[rng.IntN(2)]
 		base := 0.8 + rng.Float64()*0.5
@@ -65,7 +71,7 @@ func randomSpec(rng *rand.Rand) *parts.Spec {
 		}
 		pitch := 11 + rng.Float64()*5
 		s.Coil.PitchAngleDeg = &pitch
-		s.Wire = parts.WireSpec{Material: "copper-annealed", DiameterMM: 0.5 + rng.Float64()*2.5}
+		s.Wire = spec.WireSpec{Material: "copper-annealed", DiameterMM: 0.5 + rng.Float64()*2.5}
 		if rng.IntN(4) == 0 {
 			s.Former.Drive = "bore"
 			bore := 2 + rng.Float64()*2
@@ -74,7 +80,10 @@ func randomSpec(rng *rand.Rand) *parts.Spec {
 		if rng.IntN(4) == 0 {
 			s.Former.GrooveProfile = "round"
 		}
-		if s.Validate() == nil {
+		if s.Validate() != nil {
+			continue
+		}
+		if d, err := parts.NewDesign(s); err == nil && len(Plan(d).Problems) == 0 {
 			return s
 		}
 	}
@@ -99,7 +108,7 @@ func TestRandomFormers(t *testing.T) {
 			if err != nil {
 				t.Fatal(err)
 			}
-			rep, err := CheckMesh(m, CheckOptions{Genus: f.Genus, SDF: f.Solid})
+			rep, err := mesh.CheckMesh(m, mesh.CheckOptions{Genus: f.Genus, SDF: f.Solid})
 			if err != nil {
 				t.Fatalf("%v\n%+v", err, rep)
 			}
@@ -124,7 +133,7 @@ func TestDemoFormerAccuracy(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	rep, err := CheckMesh(m, CheckOptions{Genus: f.Genus, SDF: f.Solid})
+	rep, err := mesh.CheckMesh(m, mesh.CheckOptions{Genus: f.Genus, SDF: f.Solid})
 	if err != nil {
 		t.Fatalf("%v\n%+v", err, rep)
 	}
@@ -157,13 +166,7 @@ func TestDemoFormerAccuracy(t *testing.T) {
 // TestDemoFormerAdmesh writes the demo former as STL and reads admesh's
 // report: no repairs of any kind and one part.
 func TestDemoFormerAdmesh(t *testing.T) {
-	bin, err := exec.LookPath("admesh")
-	if err != nil {
-		if os.Getenv("COILWRIGHT_REQUIRE_TOOLS") == "1" {
-			t.Fatal("admesh is required (Debian package admesh)")
-		}
-		t.Skip("admesh not installed (Debian package admesh)")
-	}
+	bin := checktool.Need(t, "admesh")
 	d, f := demoFormer(t, templates.DefaultDemo)
 	m, err := f.Mesh(d.Spec.Former.ToleranceMM)
 	if err != nil {
@@ -171,7 +174,7 @@ func TestDemoFormerAdmesh(t *testing.T) {
 	}
 	path := filepath.Join(t.TempDir(), "former.stl")
 	var buf bytes.Buffer
-	if err := cam.WriteSTL(&buf, m, cam.STLOptions{}); err != nil {
+	if err := stl.WriteSTL(&buf, m, stl.STLOptions{}); err != nil {
 		t.Fatal(err)
 	}
 	if err := os.WriteFile(path, buf.Bytes(), 0o644); err != nil {
@@ -257,11 +260,15 @@ func grooveCentre(pts []geom.Vec2, rho0, z0, a float64) (float64, int) {
 			r[i] += row[i] * rhs
 		}
 	}
-	x, ok := solve3(m, r)
-	if !ok || n < 3 {
+	if n < 3 {
 		return math.NaN(), n
 	}
-	return -x[1] / 2, n
+	var x mat.VecDense
+	lhs := mat.NewDense(3, 3, []float64{m[0][0], m[0][1], m[0][2], m[1][0], m[1][1], m[1][2], m[2][0], m[2][1], m[2][2]})
+	if err := x.SolveVec(lhs, mat.NewVecDense(3, r[:])); err != nil {
+		return math.NaN(), n
+	}
+	return -x.AtVec(1) / 2, n
 }
 
 // printAzimuthParam returns the coil angle φ (within the first turn) whose
@@ -280,22 +287,22 @@ func printAzimuthParam(f *Former, theta float64) float64 {
 func TestGroovePitch(t *testing.T) {
 	const pitchTol = 0.02 // mm
 	spacing := 26.5
-	cyl := &parts.Spec{Kit: "Pitch Test", FrequencyMHz: 2440,
-		Coil: parts.CoilSpec{Shape: "cylindrical", Turns: 4, Hand: "LHCP", SpacingMM: &spacing},
-		Wire: parts.WireSpec{Material: "copper-annealed", DiameterMM: 2}}
+	cyl := &spec.Spec{Kit: "Pitch Test", FrequencyMHz: 2440,
+		Coil: spec.CoilSpec{Shape: "cylindrical", Turns: 4, Hand: "LHCP", SpacingMM: &spacing},
+		Wire: spec.WireSpec{Material: "copper-annealed", DiameterMM: 2}}
 	base := 1.0
 	cyl.Coil.BaseCircumferenceLambda = &base
 	if err := cyl.Validate(); err != nil {
 		t.Fatal(err)
 	}
 	demo, _ := templates.Demo(templates.DefaultDemo)
-	cone, err := parts.ParseSpec(demo)
+	cone, err := spec.ParseSpec(demo)
 	if err != nil {
 		t.Fatal(err)
 	}
 	for _, c := range []struct {
 		name string
-		s    *parts.Spec
+		s    *spec.Spec
 	}{{"cylinder with spacing 26.5 mm", cyl}, {"demo cone", cone}} {
 		t.Run(c.name, func(t *testing.T) {
 			d, f := designFormer(t, c.s)
@@ -355,10 +362,10 @@ func TestGrooveHand(t *testing.T) {
 	} {
 		t.Run(c.name, func(t *testing.T) {
 			pitch := 13.0
-			s := &parts.Spec{Kit: "Hand Test", FrequencyMHz: 5800,
-				Coil: parts.CoilSpec{Shape: "conical", Turns: 3, Hand: c.hand, PitchAngleDeg: &pitch,
+			s := &spec.Spec{Kit: "Hand Test", FrequencyMHz: 5800,
+				Coil: spec.CoilSpec{Shape: "conical", Turns: 3, Hand: c.hand, PitchAngleDeg: &pitch,
 					BaseCircumferenceLambda: &c.base, TopCircumferenceLambda: &c.top},
-				Wire: parts.WireSpec{Material: "copper-annealed", DiameterMM: 1}}
+				Wire: spec.WireSpec{Material: "copper-annealed", DiameterMM: 1}}
 			if err := s.Validate(); err != nil {
 				t.Fatal(err)
 			}
@@ -399,11 +406,11 @@ func TestGrooveHand(t *testing.T) {
 func TestFormerMeshDeterministic(t *testing.T) {
 	_, f := demoFormer(t, templates.DefaultDemo)
 	const cell = 0.5 // coarse, to keep the test quick
-	a, err := Mesh(f.Solid, MeshOptions{Cell: cell, Workers: 1})
+	a, err := mesh.Mesh(f.Solid, mesh.MeshOptions{Cell: cell, Workers: 1})
 	if err != nil {
 		t.Fatal(err)
 	}
-	b, err := Mesh(f.Solid, MeshOptions{Cell: cell, Workers: 2})
+	b, err := mesh.Mesh(f.Solid, mesh.MeshOptions{Cell: cell, Workers: 2})
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -437,7 +444,7 @@ func BenchmarkDemoFormer(b *testing.B) {
 				b.ReportAllocs()
 				var faces int
 				for b.Loop() {
-					m, err := Mesh(f.Solid, opt)
+					m, err := mesh.Mesh(f.Solid, opt)
 					if err != nil {
 						b.Fatal(err)
 					}
@@ -450,17 +457,17 @@ func BenchmarkDemoFormer(b *testing.B) {
 	}
 }
 
-// TestFormerEnvelope holds the design's estimate of the former's height,
-// which decides whether the former fits the print volume, to the height of
-// the solid the former model builds, on the demos and on random specs.
+// TestFormerEnvelope holds the plan's size of the former, which decides
+// whether the former fits the print volume, to the height and width of the
+// solid the former model builds, on the demos and on random specs.
 func TestFormerEnvelope(t *testing.T) {
 	const tol = 1e-6 // mm: both follow the same construction
 	check := func(t *testing.T, d *parts.Design, f *Former) {
-		if got, want := d.FormerEnvelope().HeightMM, f.Height; math.Abs(got-want) > tol {
+		if got, want := Plan(d).HeightMM, f.Height; math.Abs(got-want) > tol {
 			t.Errorf("envelope height %.6f mm, former %.6f mm", got, want)
 		}
 		b := f.Solid.Bounds()
-		if got, want := d.FormerEnvelope().DiameterMM, b.Max.X-b.Min.X; got < want-tol {
+		if got, want := Plan(d).DiameterMM, b.Max.X-b.Min.X; got < want-tol {
 			t.Errorf("envelope diameter %.4f mm is less than the solid's width %.4f mm", got, want)
 		}
 	}

@@ -9,6 +9,8 @@ package parts
 import (
 	"fmt"
 	"strings"
+
+	"coilwright/parts/spec"
 )
 
 // HazardID names one caution of the build sheet.
@@ -154,7 +156,7 @@ func designRows(d *Design, cl *CutList) []SheetRow {
 	return rows
 }
 
-func tools(s *Spec) []string {
+func tools(s *spec.Spec) []string {
 	return []string{
 		"The printed winding former for this kit (check its hand mark reads " + s.Coil.Hand + ")",
 		"Safety glasses; nitrile gloves; fume extractor or a fan drawing fumes away",
@@ -169,7 +171,7 @@ func tools(s *Spec) []string {
 	}
 }
 
-func materials(s *Spec, cl *CutList) []SheetRow {
+func materials(s *spec.Spec, cl *CutList) []SheetRow {
 	rows := []SheetRow{
 		{"Wire blank", fmt.Sprintf("%s, Ø%s mm, %s", cl.Wire.Material, num(cl.Wire.DiameterMM), mm(cl.Wire.LengthMM))},
 		{"Support rod", fmt.Sprintf("%s, Ø%s mm, %s", cl.Dowel.Material, num(cl.Dowel.DiameterMM), mm(cl.Dowel.LengthMM))},

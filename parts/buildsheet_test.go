@@ -6,6 +6,7 @@ import (
 	"strings"
 	"testing"
 
+	"coilwright/parts/wire"
 	"coilwright/templates"
 )
 
@@ -134,9 +135,9 @@ func TestHandWordsFollowTheCoil(t *testing.T) {
 func TestMaterialCautionsReachStepOne(t *testing.T) {
 	d := demoDesign(t, templates.DefaultDemo, nil)
 	cl := mustCutList(t, d)
-	d.Wire.Material.Cautions = []Caution{CautionStripEnamel}
+	d.Wire.Material.Cautions = []wire.Caution{wire.CautionStripEnamel}
 	b := NewBuildSheet(d, cl, strings.Repeat("0", 64))
-	if !strings.Contains(strings.Join(b.Steps[0].Text, " "), CautionStripEnamel.Text()) {
+	if !strings.Contains(strings.Join(b.Steps[0].Text, " "), wire.CautionStripEnamel.Text()) {
 		t.Errorf("step 1 lacks the wire's caution: %q", b.Steps[0].Text)
 	}
 }

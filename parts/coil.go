@@ -6,6 +6,7 @@ import (
 	"math"
 
 	"coilwright/cam/geom"
+	"coilwright/parts/spec"
 )
 
 // Hand is the winding sense of a helix: +1 right-hand (RHCP), −1 left-hand
@@ -159,7 +160,7 @@ func (c Coil) MeanRadius() float64 {
 var errNoCone = errors.New("no cone fits")
 
 // coilFromSpec works out the centreline from a validated spec.
-func coilFromSpec(s *Spec) (Coil, error) {
+func coilFromSpec(s *spec.Spec) (Coil, error) {
 	cs := &s.Coil
 	lambda := s.Wavelength()
 	radius := func(d, cl *float64) float64 {
@@ -180,7 +181,7 @@ func coilFromSpec(s *Spec) (Coil, error) {
 	if cs.FirstTurnHeightMM != nil {
 		c.Z0 = *cs.FirstTurnHeightMM
 	} else {
-		c.Z0 = DefaultFirstTurnHeight(lambda, s.Wire.DiameterMM)
+		c.Z0 = spec.DefaultFirstTurnHeight(lambda, s.Wire.DiameterMM)
 	}
 	if cs.PitchMode == "constant_angle" && c.StartRadius != c.EndRadius {
 		c.Mode = ConstantAngle
@@ -199,13 +200,4 @@ func coilFromSpec(s *Spec) (Coil, error) {
 		c.Spacing = 2 * math.Pi * (c.StartRadius + c.EndRadius) / 2 * math.Tan(*cs.PitchAngleDeg*math.Pi/180)
 	}
 	return c, nil
-}
-
-// DefaultFirstTurnHeight returns the default height in mm of the wire
-// centre above the reflector at the feed end: the underside of the wire
-// 0.02 λ above the reflector, rounded to 0.1 mm. Common practice (no
-// published source): the first quarter turn sits low over the reflector so
-// the matching strip can bring the feed impedance down to 50 Ω.
-func DefaultFirstTurnHeight(lambda, wireMM float64) float64 {
-	return math.Round((0.02*lambda+wireMM/2)*10) / 10
 }

@@ -4,6 +4,8 @@ import (
 	"math"
 	"testing"
 
+	"coilwright/parts/spec"
+
 	"gonum.org/v1/gonum/integrate/quad"
 )
 
@@ -113,7 +115,7 @@ func TestHand(t *testing.T) {
 func TestPitchAngleCylinder(t *testing.T) {
 	// Source: Kraus, Antennas, 2nd ed., §7-2: tan α = S/C; for Cλ = 1 and
 	// α = 12.5°, Sλ = tan 12.5° = 0.2217 [calc].
-	lambda := Wavelength(2440)
+	lambda := spec.Wavelength(2440)
 	r := lambda / (2 * math.Pi)
 	c := Coil{StartRadius: r, EndRadius: r, Turns: 6, Spacing: 0.2217 * lambda}
 	if a := c.PitchAngleAt(1) * 180 / math.Pi; math.Abs(a-12.5) > 0.01 {
@@ -142,7 +144,7 @@ func TestDefaultFirstTurnHeight(t *testing.T) {
 	// Common practice (no published source): the wire's underside 0.02 λ
 	// above the reflector, rounded to 0.1 mm. At 5.8 GHz (λ = 51.688 mm)
 	// with 1.6 mm wire: 1.034 + 0.8 = 1.834 → 1.8 mm [calc].
-	if z := DefaultFirstTurnHeight(Wavelength(5800), 1.6); math.Abs(z-1.8) > 1e-12 {
+	if z := spec.DefaultFirstTurnHeight(spec.Wavelength(5800), 1.6); math.Abs(z-1.8) > 1e-12 {
 		t.Errorf("first turn height %g mm, want 1.8", z)
 	}
 }

@@ -22,6 +22,8 @@ import (
 	"fmt"
 	"math"
 	"slices"
+
+	"coilwright/parts/spec"
 )
 
 // Allowances and fits of the cut list, in mm. Common practice (no published
@@ -51,14 +53,18 @@ const (
 	HeavyRodMM = 20.0
 )
 
-// DowelDiametersMM are the support-rod diameters commonly stocked in
+// dowelDiametersMM are the support-rod diameters commonly stocked in
 // PTFE, nylon, glass-fibre and wood, in mm, ascending. Common practice (no
 // published source).
-var DowelDiametersMM = []float64{3, 4, 5, 6, 8, 10, 12, 15, 16, 20, 25, 30, 35, 40, 50, 60, 80, 100}
+var dowelDiametersMM = []float64{3, 4, 5, 6, 8, 10, 12, 15, 16, 20, 25, 30, 35, 40, 50, 60, 80, 100}
 
-// SleeveDiametersMM are the supplied diameters of 2:1 heat-shrink sleeving
+// DowelDiametersMM returns the support-rod diameters commonly stocked, in
+// mm, smallest first, as a fresh slice.
+func DowelDiametersMM() []float64 { return slices.Clone(dowelDiametersMM) }
+
+// sleeveDiametersMM are the supplied diameters of 2:1 heat-shrink sleeving
 // (1/16 to 1 in), in mm, ascending. Common practice (no published source).
-var SleeveDiametersMM = []float64{1.6, 2.4, 3.2, 4.8, 6.4, 9.5, 12.7, 19.1, 25.4}
+var sleeveDiametersMM = []float64{1.6, 2.4, 3.2, 4.8, 6.4, 9.5, 12.7, 19.1, 25.4}
 
 // CutList is one kit's pieces, consumables and hardware. Lengths are mm.
 // It is a plain value built by NewCutList.
@@ -93,7 +99,7 @@ type DowelCut struct {
 	LengthMM       float64
 	ClearanceMM    float64 // radial gap asked for
 	InnerTurnMM    float64 // inside diameter of the smallest relaxed turn
-	Automatic      bool    // diameter chosen from DowelDiametersMM
+	Automatic      bool    // diameter chosen from DowelDiametersMM()
 	SlotWidthMM    float64 // slot across the foot for a centre feed's lead, else 0
 	SlotDepthMM    float64
 	AbsorbsWater   bool   // wood: takes up water and detunes the coil
@@ -104,7 +110,7 @@ type DowelCut struct {
 // lengths at the reflector end.
 type CoaxCut struct {
 	Spec         string // spec type name
-	Cable        CoaxType
+	Cable        spec.CoaxType
 	FinishedMM   float64 // connector to the reflector's back face (coax.length_mm)
 	ThroughMM    float64 // through the reflector, back face to top face
 	ProudMM      float64 // dielectric above the top face
@@ -118,10 +124,6 @@ type CoaxCut struct {
 	// plug at each end, and the strip lengths are zero.
 	Jack string
 }
-
-// FeedHoleClearanceMM is added to what passes through the feed hole
-// (CoaxType.FeedHoleMM). Common practice (no published source).
-const FeedHoleClearanceMM = 0.1
 
 // SleeveCut is the heat-shrink sleeve for one kit: 2:1 sleeving whose
 // supplied bore slides over the cable and whose recovered bore grips it.
@@ -150,7 +152,7 @@ type HardwareItem struct {
 func NewCutList(d *Design) (*CutList, error) {
 	s := d.Spec
 	if s == nil {
-		return nil, fmt.Errorf("parts: design without a spec")
+		return nil, fmt.Errorf("design without a spec")
 	}
 	wd := s.Wire.DiameterMM
 	cable := s.Coax.Cable()
@@ -221,11 +223,11 @@ func dowelCut(d *Design) (DowelCut, error) {
 		dc.DiameterMM = *s.Dowel.DiameterMM // Spec.Validate checked that it fits
 	} else {
 		// i counts the stock sizes below room, so size i−1 is the largest that fits.
-		i, _ := slices.BinarySearch(DowelDiametersMM, room+1e-9)
+		i, _ := slices.BinarySearch(dowelDiametersMM, room+1e-9)
 		if i == 0 { // ParseSpec refuses such a spec (DowelSpec.validateFit)
-			return DowelCut{}, fmt.Errorf("parts: no stock rod fits %.2f mm inside the smallest turn: the spec was not validated", inner)
+			return DowelCut{}, fmt.Errorf("no stock rod fits %.2f mm inside the smallest turn: the spec was not validated", inner)
 		}
-		dc.DiameterMM = DowelDiametersMM[i-1]
+		dc.DiameterMM = dowelDiametersMM[i-1]
 		dc.Automatic = true
 	}
 	dc.LengthMM = d.Coil.Z0 + d.AxialLength + wd/2 + DowelOverhangMM
@@ -249,12 +251,12 @@ func dowelCut(d *Design) (DowelCut, error) {
 // fillet) and whose recovered bore is at most 0.8 times it (it must grip).
 // Common practice (no published source).
 func sleeveFor(outer float64) (SleeveCut, error) {
-	for _, dia := range SleeveDiametersMM {
+	for _, dia := range sleeveDiametersMM {
 		if dia >= 1.2*outer && dia/2 <= 0.8*outer {
 			return SleeveCut{SuppliedMM: dia, RecoveredMM: dia / 2, LengthMM: SleeveLengthMM}, nil
 		}
 	}
-	return SleeveCut{}, fmt.Errorf("parts: no 2:1 heat-shrink size fits a %.2f mm cable", outer)
+	return SleeveCut{}, fmt.Errorf("no 2:1 heat-shrink size fits a %.2f mm cable", outer)
 }
 
 // solderEstimate adds up the fillets of the kit's three joints and turns
@@ -293,9 +295,9 @@ func epoxyEstimate(d *Design, dw DowelCut) Consumable {
 		Basis: fmt.Sprintf("%d beads from rod to wire and a fillet round the rod's foot, plus half again for mixing waste", beads)}
 }
 
-// ScrewLengthsMM are the stocked lengths of M3 screws, mm. Common practice
+// screwLengthsMM are the stocked lengths of M3 screws, mm. Common practice
 // (no published source; ISO 4762 and ISO 7045 list these lengths).
-var ScrewLengthsMM = []float64{6, 8, 10, 12, 16, 20, 25, 30}
+var screwLengthsMM = []float64{6, 8, 10, 12, 16, 20, 25, 30}
 
 func hardware(d *Design, cl *CutList) []HardwareItem {
 	s := d.Spec
@@ -305,8 +307,8 @@ func hardware(d *Design, cl *CutList) []HardwareItem {
 		Note: "or a cable with the connector fitted; strip the connector end to the connector maker's dimensions"})
 	if cl.Dowel.DiameterMM >= 6 {
 		want := s.Reflector.ThicknessMM + 2*3.0 // two thread diameters into the rod
-		i, _ := slices.BinarySearch(ScrewLengthsMM, want)
-		length := ScrewLengthsMM[min(i, len(ScrewLengthsMM)-1)]
+		i, _ := slices.BinarySearch(screwLengthsMM, want)
+		length := screwLengthsMM[min(i, len(screwLengthsMM)-1)]
 		hw = append(hw, HardwareItem{Item: fmt.Sprintf("M3 × %s mm screw, nylon or stainless, with washer", num(length)), Count: 1,
 			Note: "from behind the reflector into a 2.5 mm pilot hole in the rod's foot"})
 	}

@@ -8,6 +8,7 @@ import (
 
 	"gonum.org/v1/gonum/integrate/quad"
 
+	"coilwright/parts/spec"
 	"coilwright/templates"
 )
 
@@ -106,7 +107,7 @@ func TestDowelFitsSmallestTurn(t *testing.T) {
 			if cl.Dowel.DiameterMM > room+1e-6 {
 				t.Errorf("rod %.1f mm does not pass %.3f mm inside with clearance", cl.Dowel.DiameterMM, inner)
 			}
-			for _, next := range DowelDiametersMM {
+			for _, next := range DowelDiametersMM() {
 				if next > cl.Dowel.DiameterMM && next <= room {
 					t.Errorf("a %.1f mm rod fits too; chose %.1f mm", next, cl.Dowel.DiameterMM)
 				}
@@ -122,8 +123,8 @@ func TestDowelFitsSmallestTurn(t *testing.T) {
 func TestDowelTooWideIsASpecError(t *testing.T) {
 	b, _ := templates.Demo("demo-5g8-cone.toml")
 	text := strings.Replace(string(b), `material = "ptfe"`, "material = \"ptfe\"\ndiameter_mm = 10.0", 1)
-	_, err := ParseSpec([]byte(text))
-	var se *SpecError
+	_, err := designSpec([]byte(text))
+	var se *spec.SpecError
 	if !errors.As(err, &se) || se.Key != "dowel.diameter_mm" || se.Line == 0 {
 		t.Fatalf("error %v, want a dowel.diameter_mm SpecError with its line", err)
 	}
@@ -134,7 +135,7 @@ func TestCoaxTypesAreFiftyOhm(t *testing.T) {
 	// εr = 2.03–2.1 (from memory). Semi-rigid data within 3 % of 50 Ω;
 	// RG-316's stranded centre is given over the strands, which reads
 	// low, so it is held to 10 %.
-	for name, c := range CoaxTypes {
+	for name, c := range spec.CoaxTypes {
 		t.Run(name, func(t *testing.T) {
 			z := 60 / math.Sqrt(2.07) * math.Log(c.Dielectric/c.Centre)
 			tol := 0.03

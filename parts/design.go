@@ -3,13 +3,15 @@ package parts
 import (
 	"fmt"
 	"math"
+
+	"coilwright/parts/spec"
 )
 
 // Design is everything worked out from one validated spec: the wavelength,
 // the coil path, the per-turn table, the electrical estimates and the
 // warnings. It is built once by NewDesign and not mutated afterwards.
 type Design struct {
-	Spec        *Spec
+	Spec        *spec.Spec
 	Wavelength  float64 // free-space wavelength at the centre frequency, mm
 	Coil        Coil    // the relaxed wire centreline the maker is aiming for
 	Turns       []Turn  // one row per started turn, from the feed end
@@ -80,9 +82,12 @@ const (
 
 // NewDesign works out the design from a validated spec. It fails only when
 // the spec was not validated or is inconsistent.
-func NewDesign(s *Spec) (*Design, error) {
+func NewDesign(s *spec.Spec) (*Design, error) {
 	if s == nil {
-		return nil, fmt.Errorf("parts: nil spec")
+		return nil, fmt.Errorf("nil spec")
+	}
+	if err := checkFit(s); err != nil {
+		return nil, err
 	}
 	coil, err := coilFromSpec(s)
 	if err != nil {
@@ -102,10 +107,15 @@ func NewDesign(s *Spec) (*Design, error) {
 	}
 	d.Warnings = d.warnings(cl)
 	if d.Wire, err = newWireDesign(s); err != nil {
-		return nil, err
+		return nil, &spec.SpecError{Key: "wire.material", Line: s.Line("wire.material"), Value: fmt.Sprintf("%q", s.Wire.Material),
+			Problem: "no former can wind this coil: " + err.Error(), Fix: "choose a softer temper or a thicker wire, or a smaller pitch angle"}
 	}
 	if d.Former, err = compensateCoil(coil, d.Wire.Model); err != nil {
-		return nil, &SpecError{Key: "wire.material", Line: s.Line("wire.material"), Value: fmt.Sprintf("%q", s.Wire.Material),
+		if s.Wire.CalibrationData() != nil {
+			return nil, &spec.SpecError{Key: "wire.calibration", Line: s.Line("wire.calibration"), Value: fmt.Sprintf("%q", s.Wire.Calibration),
+				Problem: "with the calibrated yield no former can wind this coil: " + err.Error(), Fix: "check the calibration, or choose a softer temper or a thicker wire"}
+		}
+		return nil, &spec.SpecError{Key: "wire.material", Line: s.Line("wire.material"), Value: fmt.Sprintf("%q", s.Wire.Material),
 			Problem: "no former can wind this coil: " + err.Error(), Fix: "choose a softer temper or a thicker wire, or a smaller pitch angle"}
 	}
 	sw, err := d.springbackTurns()
@@ -113,7 +123,6 @@ func NewDesign(s *Spec) (*Design, error) {
 		return nil, err
 	}
 	d.Warnings = append(d.Warnings, sw...)
-	d.Warnings = append(d.Warnings, d.formerSizeWarning()...)
 	p, warns, err := newPatterns(d)
 	if err != nil {
 		return nil, err

@@ -27,8 +27,6 @@ func TestWarnings(t *testing.T) {
 		{"small reflector", "[wire]", "[reflector]\ndiameter_mm = 20.0\n[wire]", "reflector-size"},
 		{"EIRP", "[wire]", "[rf]\ntx_power_dbm = 20.0\n[wire]", "eirp"},
 		{"conical", "", "", "conical"},
-		{"former taller than the printer", "[wire]", "[former]\nprint_height_mm = 40.0\n[wire]", "former-size"},
-		{"former wider than the printer", "[wire]", "[former]\nprint_width_mm = 30.0\n[wire]", "former-size"},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			d, err := NewDesign(mustParse(t, []byte(strings.Replace(base, tc.old, tc.new, 1))))

@@ -14,6 +14,8 @@ package parts
 import (
 	"fmt"
 	"math"
+
+	"coilwright/parts/spec"
 )
 
 // hjZ01 is the Hammerstad–Jensen air-line impedance for width-to-height
@@ -22,7 +24,7 @@ import (
 // computer-aided design", IEEE MTT-S Digest 1980, pp. 407–409.
 func hjZ01(u float64) float64 {
 	f := 6 + (2*math.Pi-6)*math.Exp(-math.Pow(30.666/u, 0.7528))
-	return FreeSpaceImpedance / (2 * math.Pi) * math.Log(f/u+math.Sqrt(1+(2/u)*(2/u)))
+	return spec.FreeSpaceImpedance / (2 * math.Pi) * math.Log(f/u+math.Sqrt(1+(2/u)*(2/u)))
 }
 
 // hjThicknessDelta is the Hammerstad–Jensen width correction Δu1 for a
@@ -56,7 +58,7 @@ func AirStripImpedance(w, h, t float64) float64 {
 func WheelerImpedance(u, er float64) float64 {
 	a := (14 + 8/er) / 11 * (4 / u)
 	b := math.Sqrt(a*a + math.Pi*math.Pi*(1+1/er)/2)
-	return FreeSpaceImpedance / (2 * math.Pi * math.Sqrt(2*(1+er))) * math.Log(1+4/u*(a+b))
+	return spec.FreeSpaceImpedance / (2 * math.Pi * math.Sqrt(2*(1+er))) * math.Log(1+4/u*(a+b))
 }
 
 // KrausWideStripImpedance returns Kraus's wide-strip estimate in ohms,

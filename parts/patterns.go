@@ -7,6 +7,8 @@ package parts
 import (
 	"fmt"
 	"math"
+
+	"coilwright/parts/spec"
 )
 
 // Patterns is the design's flat parts and how they are to be cut. It is
@@ -20,7 +22,7 @@ type Patterns struct {
 	// resistance on the first turn's circumference.
 	WedgeLoadOhm float64
 	// Material and WedgeMaterial are the sheet materials of the two parts.
-	Material, WedgeMaterial SheetMaterial
+	Material, WedgeMaterial spec.SheetMaterial
 	// Method is the cutting method ("mill", "shear", "pcb-fab", "laser").
 	Method string
 	// Kerf is the width in mm the tool removes.
@@ -41,13 +43,13 @@ const LaserHalogenWarning = "WARNING: laser cutting was asked for a halogenated 
 func newPatterns(d *Design) (*Patterns, []Warning, error) {
 	s := d.Spec
 	rs := &s.Reflector
-	mat, ok := sheetMaterial(rs.Material)
+	mat, ok := spec.SheetMaterialByID(rs.Material)
 	if !ok {
-		return nil, nil, fmt.Errorf("parts: unknown reflector material %q", rs.Material)
+		return nil, nil, fmt.Errorf("unknown reflector material %q", rs.Material)
 	}
-	wmat, ok := sheetMaterial(s.Wedge.Material)
+	wmat, ok := spec.SheetMaterialByID(s.Wedge.Material)
 	if !ok {
-		return nil, nil, fmt.Errorf("parts: unknown wedge material %q", s.Wedge.Material)
+		return nil, nil, fmt.Errorf("unknown wedge material %q", s.Wedge.Material)
 	}
 	p := &Patterns{Material: mat, WedgeMaterial: wmat, Method: s.Cutting.Method, Kerf: s.Cutting.Kerf()}
 	var warns []Warning
@@ -95,7 +97,7 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 		WireDiameter: s.Wire.DiameterMM,
 		Thickness:    s.Wedge.ThicknessMM,
 		Wavelength:   d.Wavelength,
-		Taper:        s.Wedge.taper(p.WedgeLoadOhm),
+		Taper:        wedgeTaper(&s.Wedge, p.WedgeLoadOhm),
 	})
 	if err != nil {
 		return nil, nil, err
@@ -109,7 +111,7 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 
 // label returns the cutting label for a part of material m, setting
 // LaserHalogen when a laser was asked for a halogenated laminate.
-func (p *Patterns) label(m SheetMaterial) string {
+func (p *Patterns) label(m spec.SheetMaterial) string {
 	switch {
 	case m.Halogenated && p.Method == "laser":
 		p.LaserHalogen = true
@@ -222,7 +224,7 @@ func (d *Design) patternReports(r *Report) {
 	w := p.Wedge
 	wr := &WedgeReport{
 		Material: s.Wedge.Material, ThicknessMM: s.Wedge.ThicknessMM, Taper: s.Wedge.Taper, SpanDeg: s.Wedge.SpanDeg,
-		FeedOhm: WedgeFeedOhm, LoadOhm: p.WedgeLoadOhm, LengthMM: w.Length, FeedWidthMM: w.FeedWidth, EndWidthMM: w.EndWidth,
+		FeedOhm: spec.WedgeFeedOhm, LoadOhm: p.WedgeLoadOhm, LengthMM: w.Length, FeedWidthMM: w.FeedWidth, EndWidthMM: w.EndWidth,
 		ElectricalLengthRad: w.ElectricalLength, Reflection: w.Reflection, VSWR: VSWR(w.Reflection),
 		Method: "Hammerstad–Jensen air microstrip; small-reflection mismatch", Note: WedgeNote, Widths: w.Stations,
 		Cutting: CutReport{Method: p.Method, KerfMM: p.Kerf, Label: p.WedgeLabel},
@@ -232,13 +234,13 @@ func (d *Design) patternReports(r *Report) {
 	}
 	if s.Wedge.Taper == "klopfenstein" {
 		wr.Ripple = s.Wedge.Ripple
-		wr.KlopfensteinA = KlopfensteinA(WedgeFeedOhm, p.WedgeLoadOhm, s.Wedge.Ripple)
+		wr.KlopfensteinA = KlopfensteinA(spec.WedgeFeedOhm, p.WedgeLoadOhm, s.Wedge.Ripple)
 	}
 	r.Wedge = wr
 }
 
 // reflectorReport describes the plate of p for design.json.
-func reflectorReport(p *Patterns, rs *ReflectorSpec, size, lambda float64) *ReflectorReport {
+func reflectorReport(p *Patterns, rs *spec.ReflectorSpec, size, lambda float64) *ReflectorReport {
 	in := p.Reflector.Input
 	rr := &ReflectorReport{
 		Shape: rs.Shape, ThicknessMM: rs.ThicknessMM, Material: rs.Material, Connector: rs.Connector,
@@ -255,4 +257,13 @@ func reflectorReport(p *Patterns, rs *ReflectorSpec, size, lambda float64) *Refl
 		rr.DiameterMM = &size
 	}
 	return rr
+}
+
+// wedgeTaper returns the wedge's impedance profile to load resistance zl.
+func wedgeTaper(w *spec.WedgeSpec, zl float64) Taper {
+	t := Taper{Kind: TaperExponential, Z0: spec.WedgeFeedOhm, ZL: zl}
+	if w.Taper == "klopfenstein" {
+		t.Kind, t.GammaMax = TaperKlopfenstein, w.Ripple
+	}
+	return t
 }

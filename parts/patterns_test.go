@@ -7,6 +7,8 @@ import (
 	"math"
 	"strings"
 	"testing"
+
+	"coilwright/parts/spec"
 )
 
 func TestCutSpecErrors(t *testing.T) {
@@ -36,8 +38,8 @@ func TestCutSpecErrors(t *testing.T) {
 		{"unknown connector", "[reflector]\nconnector = \"bnc\"", "reflector.connector", 18, `"coax"`},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
-			_, err := ParseSpec([]byte(base + "\n" + tc.table + "\n"))
-			var errs SpecErrors
+			_, err := spec.ParseSpec([]byte(base + "\n" + tc.table + "\n"))
+			var errs spec.SpecErrors
 			if !errors.As(err, &errs) {
 				t.Fatalf("want SpecErrors, got %v", err)
 			}
@@ -56,38 +58,20 @@ func TestDefaultSheetHoldsTheReflector(t *testing.T) {
 	// 200 mm default height grows to the next 10 mm, 270 mm; the 300 mm
 	// default width already holds it.
 	s := mustParse(t, []byte(base+"\n[reflector]\ndiameter_mm = 250.0\n"))
-	if s.Cutting.SheetWidthMM != DefaultSheetWidthMM || s.Cutting.SheetHeightMM != 270 {
+	if s.Cutting.SheetWidthMM != spec.DefaultSheetWidthMM || s.Cutting.SheetHeightMM != 270 {
 		t.Errorf("sheet %g × %g mm, want 300 × 270", s.Cutting.SheetWidthMM, s.Cutting.SheetHeightMM)
 	}
 }
 
 func TestDefaultStripThickness(t *testing.T) {
-	// Common practice (no published source): 0.3 mm shim by default, in
-	// 0.05 mm steps, with at least 0.1 mm of air under it.
 	const tol = 1e-12
-	for _, tc := range []struct {
-		name       string
-		room, want float64
-	}{
-		{"plenty of room", 1.0, 0.3},
-		{"just room for 0.3 mm", 0.4, 0.3},
-		{"room for 0.15 mm", 0.25, 0.15},
-		{"room for 0.1 mm", 0.2, 0.1},
-		{"no room keeps the thinnest", 0.1, 0.05},
-	} {
-		t.Run(tc.name, func(t *testing.T) {
-			if got := defaultStripThickness(tc.room); math.Abs(got-tc.want) > tol {
-				t.Errorf("defaultStripThickness(%g) = %g mm, want %g", tc.room, got, tc.want)
-			}
-		})
-	}
 	t.Run("a 24 GHz spec without a strip thickness parses", func(t *testing.T) {
 		// λ = 12.491 mm at 24 GHz: the default first turn puts the 0.2 mm
 		// wire's underside 0.2 mm up, room for a 0.1 mm strip only.
 		src := strings.NewReplacer("frequency_mhz = 5800.0", "frequency_mhz = 24000.0",
 			"base_diameter_mm = 17.5\ntop_diameter_mm = 12.5", "base_circumference_lambda = 1.1\ntop_circumference_lambda = 1.0",
 			"diameter_mm = 1.6", "diameter_mm = 0.2").Replace(base)
-		s, err := ParseSpec([]byte(src))
+		s, err := designSpec([]byte(src))
 		if err != nil {
 			t.Fatal(err)
 		}
@@ -121,8 +105,8 @@ func TestDowelFitErrors(t *testing.T) {
 		{"no stock rod fits at all", at24("0.8", ""), "dowel.clearance_mm", "dowel.diameter_mm plus twice clearance_mm at most 2.98 mm"},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
-			_, err := ParseSpec([]byte(tc.src))
-			var errs SpecErrors
+			_, err := designSpec([]byte(tc.src))
+			var errs spec.SpecErrors
 			if !errors.As(err, &errs) {
 				t.Fatalf("want SpecErrors, got %v", err)
 			}
@@ -151,7 +135,7 @@ func TestPatternsFromDemo(t *testing.T) {
 		t.Errorf("feed hole Ø %g mm", in.Feed.Diameter)
 	}
 	w := p.Wedge
-	if first := w.Stations[0]; math.Abs(first.Ohm-WedgeFeedOhm) > 1e-6 {
+	if first := w.Stations[0]; math.Abs(first.Ohm-spec.WedgeFeedOhm) > 1e-6 {
 		t.Errorf("feed station %.6f Ω, want 50", first.Ohm)
 	}
 	if last := w.Stations[len(w.Stations)-1]; !last.Clamped && math.Abs(last.Ohm-p.WedgeLoadOhm) > 1e-6 {

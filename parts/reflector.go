@@ -12,6 +12,7 @@ import (
 	"math"
 
 	"coilwright/cam/geom"
+	"coilwright/parts/spec"
 )
 
 // ReflectorShape is the plate's outline.
@@ -90,7 +91,7 @@ func DefaultFeedHole(k FeedKind) FeedHole {
 		return FeedHole{Kind: k, Diameter: 6.5, Flat: 6.0}
 	default:
 		// The hole for 0.141 in semi-rigid, the spec's default cable.
-		return FeedHole{Kind: FeedCoax, Diameter: CoaxTypes["semi-rigid-141"].FeedHoleMM()}
+		return FeedHole{Kind: FeedCoax, Diameter: spec.CoaxTypes["semi-rigid-141"].FeedHoleMM()}
 	}
 }
 

@@ -21,6 +21,9 @@ import (
 	"fmt"
 	"math"
 	"strings"
+
+	"coilwright/parts/spec"
+	"coilwright/parts/wire"
 )
 
 // Inspection tolerance of the relaxed centreline diameter. Common practice
@@ -60,7 +63,7 @@ func InspectionTolerance(d float64) float64 {
 type WireDesign struct {
 	// Material is the library row, its flow stress scaled to the calibrated
 	// effective yield when a calibration is attached.
-	Material Material
+	Material wire.Material
 	// LibraryYield is the library's yield for the material, MPa.
 	LibraryYield float64
 	// Diameter is the bare wire diameter, mm.
@@ -68,14 +71,14 @@ type WireDesign struct {
 	// Hardening reports whether the model uses the material's hardening law.
 	Hardening bool
 	// Calibration is the attached calibration, or nil.
-	Calibration *Calibration
+	Calibration *wire.Calibration
 	// Model is the springback model of the wire.
-	Model *Springback
+	Model *wire.Springback
 }
 
 // newWireDesign builds the wire and its springback model from a validated spec.
-func newWireDesign(s *Spec) (WireDesign, error) {
-	m, err := LookupMaterial(s.Wire.Material)
+func newWireDesign(s *spec.Spec) (WireDesign, error) {
+	m, err := wire.LookupMaterial(s.Wire.Material)
 	if err != nil {
 		return WireDesign{}, err
 	}
@@ -86,7 +89,7 @@ func newWireDesign(s *Spec) (WireDesign, error) {
 		}
 	}
 	w.Material = m
-	w.Model, err = NewWireSpringback(m, w.Diameter, w.Hardening)
+	w.Model, err = wire.NewWireSpringback(m, w.Diameter, w.Hardening)
 	return w, err
 }
 
@@ -95,7 +98,7 @@ func newWireDesign(s *Spec) (WireDesign, error) {
 // heights held. A constant-angle former's spacing depends on its own radii,
 // so its ends are compensated again at the spacing the former has there
 // until the radii settle.
-func compensateCoil(target Coil, model *Springback) (Coil, error) {
+func compensateCoil(target Coil, model *wire.Springback) (Coil, error) {
 	f := target
 	s0, s1 := target.SpacingAt(0), target.SpacingAt(target.Span())
 	for range formerIterations {
@@ -180,11 +183,11 @@ func (d *Design) springbackTurns() ([]Warning, error) {
 	for _, c := range m.Cautions {
 		add("wire-"+string(c), "%s: %s", m.ID, c.Text())
 	}
-	if w.Hardening && m.Hardening.Kind == HardeningNone {
+	if w.Hardening && m.Hardening.Kind == wire.HardeningNone {
 		add("springback-model", "%s has no hardening law in the library: springback is modelled as perfectly plastic", m.ID)
 	}
 	if cal := w.Calibration; cal != nil {
-		if math.Abs(cal.WireDiameter-w.Diameter) > calibrationDiameterSlack*w.Diameter {
+		if math.Abs(cal.WireDiameter-w.Diameter) > spec.CalibrationDiameterSlack*w.Diameter {
 			add("calibration-diameter", "calibration was made on %s mm wire, the spec winds %s mm: another gauge is another draw; calibrate this wire",
 				num(cal.WireDiameter), num(w.Diameter))
 		}
@@ -204,7 +207,7 @@ func (d *Design) yieldSpread() (float64, error) {
 	mid := (t.StartPhi + t.EndPhi) / 2
 	var dia [2]float64
 	for i, f := range []float64{1 - yieldScatter, 1 + yieldScatter} {
-		s, err := NewSpringback(d.Wire.Model.Section(), d.Wire.Model.Law().Scaled(f), 0)
+		s, err := wire.NewSpringback(d.Wire.Model.Section(), d.Wire.Model.Law().Scaled(f), 0)
 		if err != nil {
 			return 0, err
 		}

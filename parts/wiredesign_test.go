@@ -8,6 +8,9 @@ import (
 	"slices"
 	"strings"
 	"testing"
+
+	"coilwright/parts/spec"
+	"coilwright/parts/wire"
 )
 
 // specText returns a complete spec with the given [coil] body and [wire]
@@ -196,10 +199,10 @@ calibration = ""`, "wire.calibration", "calibration file"},
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
-			_, err := ParseSpec([]byte(specText(5800, cylinder5800, tc.wire)))
-			var se *SpecError
+			_, err := spec.ParseSpec([]byte(specText(5800, cylinder5800, tc.wire)))
+			var se *spec.SpecError
 			found := false
-			var ses SpecErrors
+			var ses spec.SpecErrors
 			if errors.As(err, &ses) {
 				for _, e := range ses {
 					if e.Key == tc.key {
@@ -221,13 +224,13 @@ func TestAttachCalibration(t *testing.T) {
 	text := specText(5800, cylinder5800, `material = "brass-c26000-half-hard"
 diameter_mm = 1.6
 calibration = "batch.toml"`)
-	m, _ := LookupMaterial("brass-c26000-half-hard")
-	cal, err := Calibrate(m, 1.6, 1.6, false, []CalibrationPoint{{FormerDiameter: 16.6, RelaxedDiameter: 18.2}})
+	m, _ := wire.LookupMaterial("brass-c26000-half-hard")
+	cal, err := wire.Calibrate(m, 1.6, 1.6, false, []wire.CalibrationPoint{{FormerDiameter: 16.6, RelaxedDiameter: 18.2}})
 	if err != nil {
 		t.Fatal(err)
 	}
 	t.Run("calibrated yield drives the former", func(t *testing.T) {
-		s, err := ParseSpec([]byte(text))
+		s, err := spec.ParseSpec([]byte(text))
 		if err != nil {
 			t.Fatal(err)
 		}
@@ -256,26 +259,26 @@ calibration = "batch.toml"`)
 	})
 	mismatch := []struct {
 		name string
-		edit func(*Calibration)
+		edit func(*wire.Calibration)
 		want string
 	}{
-		{"other material", func(c *Calibration) { c.Material = "copper-annealed" }, "is for material"},
-		{"other model", func(c *Calibration) { c.Hardening = true }, "springback_model"},
+		{"other material", func(c *wire.Calibration) { c.Material = "copper-annealed" }, "is for material"},
+		{"other model", func(c *wire.Calibration) { c.Hardening = true }, "springback_model"},
 	}
 	for _, tc := range mismatch {
 		t.Run(tc.name, func(t *testing.T) {
-			s, _ := ParseSpec([]byte(text))
+			s, _ := spec.ParseSpec([]byte(text))
 			c := cal
 			tc.edit(&c)
 			err := s.AttachCalibration(c)
-			var se *SpecError
+			var se *spec.SpecError
 			if !errors.As(err, &se) || se.Key != "wire.calibration" || se.Line == 0 || !strings.Contains(se.Problem, tc.want) {
 				t.Errorf("err = %v, want a wire.calibration problem mentioning %q", err, tc.want)
 			}
 		})
 	}
 	t.Run("other gauge warns", func(t *testing.T) {
-		s, _ := ParseSpec([]byte(strings.Replace(text, "diameter_mm = 1.6", "diameter_mm = 2.0", 1)))
+		s, _ := spec.ParseSpec([]byte(strings.Replace(text, "diameter_mm = 1.6", "diameter_mm = 2.0", 1)))
 		if err := s.AttachCalibration(cal); err != nil {
 			t.Fatal(err)
 		}
@@ -346,11 +349,13 @@ func TestNoFormerCanWind(t *testing.T) {
 		t.Run(tc.name, func(t *testing.T) {
 			var f float64
 			fmt.Sscan(tc.freq, &f)
-			_, err := ParseSpec([]byte(specText(f, tc.coil, tc.wire)))
-			var ses SpecErrors
-			if !errors.As(err, &ses) || ses[0].Key != "wire.material" || ses[0].Line == 0 || !strings.Contains(ses[0].Problem, "no former") {
+			_, err := designSpec([]byte(specText(f, tc.coil, tc.wire)))
+			var se *spec.SpecError
+			if !errors.As(err, &se) || se.Key != "wire.material" || se.Line == 0 || !strings.Contains(se.Problem, "no former") {
 				t.Errorf("err = %v, want a wire.material problem", err)
 			}
 		})
 	}
 }
+
+func relErr(got, want float64) float64 { return math.Abs(got-want) / math.Abs(want) }

@@ -16,11 +16,11 @@ var FS fs.FS = files
 // DefaultDemo is the demo spec that `build` uses when given no spec.
 const DefaultDemo = "demo-5g8-cone.toml"
 
-// Reference is the fully commented reference spec; callers must not modify
-// it.
-//
 //go:embed reference.toml
-var Reference []byte
+var reference []byte
+
+// Reference returns the fully commented reference spec, a fresh copy.
+func Reference() []byte { return append([]byte(nil), reference...) }
 
 // Demo returns the named embedded demo spec, or false when there is none.
 func Demo(name string) ([]byte, bool) {

@@ -2,19 +2,17 @@ package main
 
 import (
 	"encoding/json"
-	"errors"
 	"fmt"
 	"io"
 	"os"
 	"path/filepath"
 	"strings"
-	"time"
 	"unicode"
 
 	"github.com/spf13/cobra"
 
 	"coilwright/cam"
-	"coilwright/parts"
+	"coilwright/cam/pdf"
 	"coilwright/templates"
 )
 
@@ -25,47 +23,6 @@ type buildOptions struct {
 	demo     string
 	json     bool
 	progress io.Writer // step names go here as they start; nil for none
-}
-
-// buildContext is what every output step sees: the loaded spec and design,
-// the staged output folder to add files to, and the creation time PDFs
-// record (from SOURCE_DATE_EPOCH; zero when it is unset, and left out).
-type buildContext struct {
-	spec    *loadedSpec
-	out     *cam.Output
-	created time.Time
-
-	parts    []cutPart // the flat parts, worked out once by cutParts
-	partsErr error
-	partsSet bool
-}
-
-// cutParts returns the flat parts with their kerf offsets and nests,
-// working them out on first use: the report, the pattern files and the
-// build sheet all need them.
-func (ctx *buildContext) cutParts() ([]cutPart, error) {
-	if !ctx.partsSet {
-		ctx.parts, ctx.partsErr = cutParts(ctx.spec.Design)
-		ctx.partsSet = true
-	}
-	return ctx.parts, ctx.partsErr
-}
-
-// outputStep writes one group of outputs. Each step lives in its own
-// out_*.go file.
-type outputStep struct {
-	name  string
-	write func(*buildContext) error
-}
-
-// buildSteps lists the output steps in the order they run.
-func buildSteps() []outputStep {
-	return []outputStep{
-		{"design report", writeDesign},
-		{"cut list and build sheet", writeSheet},
-		{"cut patterns", writePatterns},
-		{"winding former", writeFormer},
-	}
 }
 
 func newBuildCmd() *cobra.Command {
@@ -100,6 +57,8 @@ not make, unless --force is given.`,
 	cmd.Flags().BoolVar(&o.force, "force", false, "write into a folder that holds files coilwright did not make")
 	cmd.Flags().StringVar(&o.demo, "demo", "", "build an embedded demo spec: "+strings.Join(templates.Demos(), ", "))
 	cmd.Flags().BoolVar(&o.json, "json", false, "print the manifest as JSON instead of a summary")
+	cmd.RegisterFlagCompletionFunc("demo", completeDemos)
+	cmd.ValidArgsFunction = completeSpecFile
 	return cmd
 }
 
@@ -108,7 +67,7 @@ func runBuild(w io.Writer, path string, o buildOptions) error {
 	if err != nil {
 		return err
 	}
-	created, err := cam.SourceDateEpoch(os.Getenv("SOURCE_DATE_EPOCH"))
+	created, err := pdf.SourceDateEpoch(os.Getenv("SOURCE_DATE_EPOCH"))
 	if err != nil {
 		return usageError{err}
 	}
@@ -119,23 +78,21 @@ func runBuild(w io.Writer, path string, o buildOptions) error {
 	if fi, err := os.Stat(dir); err == nil && !fi.IsDir() {
 		return usageError{fmt.Errorf("-o %s: is a file, not a folder; choose a new or empty folder", dir)}
 	}
+	k, err := newKit(l, created)
+	if err != nil {
+		return err
+	}
 	out, err := cam.NewOutput(dir, o.force)
 	if err != nil {
 		return err
 	}
-	ctx := &buildContext{spec: l, out: out, created: created}
-	for _, s := range buildSteps() {
-		if o.progress != nil {
-			fmt.Fprintf(o.progress, "coilwright: %s…\n", s.name)
-		}
-		if err := s.write(ctx); err != nil {
-			out.Abort()
-			var se *parts.SpecError
-			if errors.As(err, &se) {
-				return inputError{l.Name, err} // a spec key to fix, named like check's
-			}
-			return fmt.Errorf("%s: %w", s.name, err)
-		}
+	var progress func(string)
+	if o.progress != nil {
+		progress = func(step string) { fmt.Fprintf(o.progress, "coilwright: %s…\n", step) }
+	}
+	if err := k.Write(out, progress); err != nil {
+		out.Abort()
+		return err
 	}
 	m := cam.Manifest{Tool: "coilwright", Version: Version, Spec: l.Name, SpecSHA256: l.SHA256()}
 	files := out.Files()

@@ -177,3 +177,21 @@ func TestWireBlankLongerThanTheRod(t *testing.T) {
 		t.Errorf("exit %d, stderr %q", code, errs)
 	}
 }
+
+// TestCheckJSONIsDesignJSON requires check --json to print exactly the
+// design.json that build writes for the same spec.
+func TestCheckJSONIsDesignJSON(t *testing.T) {
+	dir := t.TempDir()
+	buildDemo(t, "demo-2g4-cylinder.toml", dir)
+	var stdout, stderr bytes.Buffer
+	if code := run([]string{"check", "--json", "--demo", "demo-2g4-cylinder.toml"}, &stdout, &stderr); code != 0 {
+		t.Fatalf("check: exit %d: %s", code, stderr.String())
+	}
+	want, err := os.ReadFile(filepath.Join(dir, "design.json"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !bytes.Equal(stdout.Bytes(), want) {
+		t.Errorf("check --json differs from design.json:\n%s", stdout.String())
+	}
+}

@@ -12,7 +12,8 @@ import (
 	"github.com/spf13/cobra"
 
 	"coilwright/cam"
-	"coilwright/parts"
+	"coilwright/parts/spec"
+	"coilwright/parts/wire"
 )
 
 // calibrateOptions are the flags of `coilwright calibrate`.
@@ -33,7 +34,7 @@ type calibrateOptions struct {
 const defaultCalibrationFile = "wire-calibration.toml"
 
 func newCalibrateCmd() *cobra.Command {
-	o := calibrateOptions{model: parts.ModelPerfectlyPlastic}
+	o := calibrateOptions{model: spec.ModelPerfectlyPlastic}
 	cmd := &cobra.Command{
 		Use:   "calibrate --material ID --wire-mm D --former-mm F --measured-mm M[,M...]",
 		Short: "Fit the wire's effective yield from a measured test coil",
@@ -67,6 +68,7 @@ flag or separate with commas) are averaged by a least-squares fit.`,
 	f.StringVarP(&o.out, "out", "o", defaultCalibrationFile, "calibration file to write")
 	f.BoolVar(&o.force, "force", false, "replace the calibration file if it exists")
 	f.BoolVar(&o.json, "json", false, "print the fit as JSON")
+	cmd.RegisterFlagCompletionFunc("material", completeMaterials)
 	return cmd
 }
 
@@ -79,7 +81,7 @@ func isDir(path string) bool {
 // calibrationJSON is the fit as `calibrate --json` prints it.
 type calibrationJSON struct {
 	File string `json:"file"`
-	parts.Calibration
+	wire.Calibration
 	Factor   float64  `json:"factor"`
 	Warnings []string `json:"warnings"`
 }
@@ -96,13 +98,13 @@ func runCalibrate(w io.Writer, o calibrateOptions) error {
 		return usageError{errors.New("calibrate needs at least one --measured-mm value")}
 	case !(o.spacingMM >= 0):
 		return usageError{fmt.Errorf("--spacing-mm %g must be zero (close-wound) or positive", o.spacingMM)}
-	case o.model != parts.ModelPerfectlyPlastic && o.model != parts.ModelHardening:
-		return usageError{fmt.Errorf("--model %q: use %q or %q", o.model, parts.ModelPerfectlyPlastic, parts.ModelHardening)}
+	case o.model != spec.ModelPerfectlyPlastic && o.model != spec.ModelHardening:
+		return usageError{fmt.Errorf("--model %q: use %q or %q", o.model, spec.ModelPerfectlyPlastic, spec.ModelHardening)}
 	}
 	if dir := filepath.Dir(o.out); !isDir(dir) {
 		return usageError{fmt.Errorf("-o %s: folder %s does not exist; create it or choose another path", o.out, dir)}
 	}
-	m, err := parts.LookupMaterial(o.material)
+	m, err := wire.LookupMaterial(o.material)
 	if err != nil {
 		return usageError{err}
 	}
@@ -110,18 +112,18 @@ func runCalibrate(w io.Writer, o calibrateOptions) error {
 	if spacing == 0 {
 		spacing = o.wireMM
 	}
-	pts := make([]parts.CalibrationPoint, len(o.measured))
+	pts := make([]wire.CalibrationPoint, len(o.measured))
 	for i, v := range o.measured {
 		if o.outside {
 			v -= o.wireMM
 		}
-		pts[i] = parts.CalibrationPoint{FormerDiameter: o.formerMM, RelaxedDiameter: v}
+		pts[i] = wire.CalibrationPoint{FormerDiameter: o.formerMM, RelaxedDiameter: v}
 	}
-	cal, err := parts.Calibrate(m, o.wireMM, spacing, o.model == parts.ModelHardening, pts)
+	cal, err := wire.Calibrate(m, o.wireMM, spacing, o.model == spec.ModelHardening, pts)
 	if err != nil {
 		return inputError{err: err}
 	}
-	data, err := parts.MarshalCalibration(cal)
+	data, err := wire.MarshalCalibration(cal)
 	if err != nil {
 		return err
 	}

@@ -9,18 +9,18 @@ import (
 	"strings"
 	"testing"
 
-	"coilwright/parts"
+	"coilwright/parts/wire"
 )
 
 func TestCalibrateCommand(t *testing.T) {
 	dir := t.TempDir()
-	m, err := parts.LookupMaterial("brass-c26000-half-hard")
+	m, err := wire.LookupMaterial("brass-c26000-half-hard")
 	if err != nil {
 		t.Fatal(err)
 	}
 	// The model's own prediction for a close-wound test coil (spacing one
 	// wire diameter) on a 16.6 mm former.
-	s, err := parts.NewWireSpringback(m, 1.6, false)
+	s, err := wire.NewWireSpringback(m, 1.6, false)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -53,7 +53,7 @@ func TestCalibrateCommand(t *testing.T) {
 		if err != nil {
 			t.Fatal(err)
 		}
-		c, err := parts.ParseCalibration(b)
+		c, err := wire.ParseCalibration(b)
 		if err != nil {
 			t.Fatal(err)
 		}

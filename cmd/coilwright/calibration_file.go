@@ -7,13 +7,14 @@ import (
 	"path/filepath"
 	"strconv"
 
-	"coilwright/parts"
+	"coilwright/parts/spec"
+	"coilwright/parts/wire"
 )
 
 // attachCalibration reads the calibration file a spec's wire.calibration key
 // names (relative to the spec's folder, or to the working folder for an
 // embedded demo) and attaches it to the spec.
-func attachCalibration(specPath string, s *parts.Spec) error {
+func attachCalibration(specPath string, s *spec.Spec) error {
 	name := s.Wire.Calibration
 	if name == "" {
 		return nil
@@ -24,14 +25,14 @@ func attachCalibration(specPath string, s *parts.Spec) error {
 	}
 	b, err := os.ReadFile(path)
 	if errors.Is(err, fs.ErrNotExist) {
-		return &parts.SpecError{Key: "wire.calibration", Line: s.Line("wire.calibration"), Value: strconv.Quote(name),
+		return &spec.SpecError{Key: "wire.calibration", Line: s.Line("wire.calibration"), Value: strconv.Quote(name),
 			Problem: "calibration file not found at " + path + " (the name is relative to the spec's folder)",
 			Fix:     "write one with `coilwright calibrate ... -o " + path + "`, or remove wire.calibration from the spec"}
 	}
 	if err != nil {
 		return inputError{path, err}
 	}
-	cal, err := parts.ParseCalibration(b)
+	cal, err := wire.ParseCalibration(b)
 	if err != nil {
 		return inputError{path, err}
 	}

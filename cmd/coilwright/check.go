@@ -1,10 +1,10 @@
 package main
 
 import (
-	"encoding/json"
 	"fmt"
 	"io"
 	"text/tabwriter"
+	"time"
 
 	"github.com/spf13/cobra"
 )
@@ -40,6 +40,8 @@ lists every problem with its key and line and exits with status 2.`,
 	}
 	cmd.Flags().BoolVar(&o.json, "json", false, "print the design report as JSON (as in design.json)")
 	cmd.Flags().StringVar(&o.demo, "demo", "", "check an embedded demo spec instead of a file")
+	cmd.RegisterFlagCompletionFunc("demo", completeDemos)
+	cmd.ValidArgsFunction = completeSpecFile
 	return cmd
 }
 
@@ -48,12 +50,14 @@ func runCheck(w io.Writer, path string, o checkOptions) error {
 	if err != nil {
 		return err
 	}
-	r := l.Design.Report()
-	if o.json {
-		enc := json.NewEncoder(w)
-		enc.SetIndent("", "  ")
-		return enc.Encode(r)
+	k, err := newKit(l, time.Time{})
+	if err != nil {
+		return err
 	}
+	if o.json {
+		return k.WriteReportJSON(w)
+	}
+	r := k.Report
 	fmt.Fprintf(w, "%s: ok — %s\n", l.Name, r.Kit)
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
 	fmt.Fprintf(tw, "frequency\t%.1f MHz (λ %.3f mm)\n", r.FrequencyMHz, r.WavelengthMM)

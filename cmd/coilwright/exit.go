@@ -9,7 +9,7 @@ import (
 	"github.com/spf13/cobra"
 
 	"coilwright/cam"
-	"coilwright/parts"
+	"coilwright/parts/spec"
 )
 
 // Exit codes.
@@ -48,13 +48,11 @@ func report(err error, stderr io.Writer) int {
 	fmt.Fprintln(stderr, "coilwright:", err)
 	var ue usageError
 	var ie inputError
-	var se *parts.SpecError
-	var ses parts.SpecErrors
+	var se *spec.SpecError
+	var ses spec.SpecErrors
 	switch {
 	case errors.As(err, &ue), errors.As(err, &ie), errors.As(err, &se), errors.As(err, &ses),
 		errors.Is(err, cam.ErrForeignFiles), errors.Is(err, cam.ErrExists):
-		return exitBadUse
-	case strings.HasPrefix(err.Error(), "unknown command"): // cobra's own, for a mistyped subcommand
 		return exitBadUse
 	}
 	return exitFailure

@@ -9,7 +9,7 @@ import (
 
 	"github.com/spf13/cobra"
 
-	"coilwright/parts"
+	"coilwright/parts/wire"
 )
 
 // materialsOptions are the flags of `coilwright materials`.
@@ -56,7 +56,8 @@ checked against a standard: calibrate from a test coil before a batch.`,
 		Example: `  coilwright materials
   coilwright materials brass-c26000-half-hard
   coilwright materials --json | jq '.[].id'`,
-		Args: maxArgs(1, "one material id"),
+		Args:              maxArgs(1, "one material id"),
+		ValidArgsFunction: completeMaterialArg,
 		RunE: func(cmd *cobra.Command, args []string) error {
 			id := ""
 			if len(args) == 1 {
@@ -70,13 +71,13 @@ checked against a standard: calibrate from a test coil before a batch.`,
 }
 
 func runMaterials(w io.Writer, id string, o materialsOptions) error {
-	rows := parts.Materials()
+	rows := wire.Materials()
 	if id != "" {
-		m, err := parts.LookupMaterial(id)
+		m, err := wire.LookupMaterial(id)
 		if err != nil {
 			return usageError{err}
 		}
-		rows = []parts.Material{m}
+		rows = []wire.Material{m}
 	}
 	if o.json {
 		out := make([]materialJSON, len(rows))
@@ -104,7 +105,7 @@ func runMaterials(w io.Writer, id string, o materialsOptions) error {
 }
 
 // printMaterial prints one library row in full.
-func printMaterial(w io.Writer, m parts.Material) error {
+func printMaterial(w io.Writer, m wire.Material) error {
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
 	fmt.Fprintf(tw, "id\t%s\n", m.ID)
 	fmt.Fprintf(tw, "name\t%s\n", m.Name)
@@ -125,18 +126,18 @@ func printMaterial(w io.Writer, m parts.Material) error {
 }
 
 // hardeningText describes a hardening law in a few characters.
-func hardeningText(h parts.Hardening) string {
+func hardeningText(h wire.Hardening) string {
 	switch h.Kind {
-	case parts.HardeningPowerLaw:
+	case wire.HardeningPowerLaw:
 		return fmt.Sprintf("K %.0f MPa, n %.2f", h.K, h.N)
-	case parts.HardeningLinear:
+	case wire.HardeningLinear:
 		return fmt.Sprintf("Et %.0f MPa", h.TangentModulus)
 	}
 	return "–"
 }
 
 // cautionIDs joins a material's caution ids, or "–".
-func cautionIDs(m parts.Material) string {
+func cautionIDs(m wire.Material) string {
 	if len(m.Cautions) == 0 {
 		return "–"
 	}
@@ -148,7 +149,7 @@ func cautionIDs(m parts.Material) string {
 }
 
 // toMaterialJSON converts a library row for --json.
-func toMaterialJSON(m parts.Material) materialJSON {
+func toMaterialJSON(m wire.Material) materialJSON {
 	j := materialJSON{
 		ID: m.ID, Name: m.Name, YoungsModulusGPa: m.YoungsModulus / 1000, YieldMPa: m.Yield, YieldBasis: m.YieldBasis,
 		TensileMinMPa: m.TensileMin, TensileMaxMPa: m.TensileMax, Elongation: m.Elongation,
@@ -159,9 +160,9 @@ func toMaterialJSON(m parts.Material) materialJSON {
 	}
 	h := m.Hardening
 	switch h.Kind {
-	case parts.HardeningPowerLaw:
+	case wire.HardeningPowerLaw:
 		j.Hardening = &hardeningJSON{Law: "power", KMPa: &h.K, N: &h.N}
-	case parts.HardeningLinear:
+	case wire.HardeningLinear:
 		j.Hardening = &hardeningJSON{Law: "linear", TangentModulusMPa: &h.TangentModulus}
 	}
 	return j

@@ -6,7 +6,7 @@ import (
 	"strings"
 	"testing"
 
-	"coilwright/parts"
+	"coilwright/parts/wire"
 )
 
 // runCLI runs one command line in-process and returns its exit code,
@@ -24,7 +24,7 @@ func TestMaterialsCommand(t *testing.T) {
 		if code != exitOK {
 			t.Fatalf("exit %d", code)
 		}
-		for _, id := range parts.MaterialIDs() {
+		for _, id := range wire.MaterialIDs() {
 			if !strings.Contains(out, id) {
 				t.Errorf("table lacks %s", id)
 			}
@@ -39,7 +39,7 @@ func TestMaterialsCommand(t *testing.T) {
 		if err := json.Unmarshal([]byte(out), &rows); err != nil {
 			t.Fatal(err)
 		}
-		lib := parts.Materials()
+		lib := wire.Materials()
 		if len(rows) != len(lib) {
 			t.Fatalf("%d rows, library has %d", len(rows), len(lib))
 		}

@@ -9,7 +9,8 @@ import (
 
 	"github.com/spf13/cobra"
 
-	"coilwright/parts"
+	"coilwright/kit"
+	"coilwright/parts/spec"
 	"coilwright/templates"
 )
 
@@ -65,17 +66,17 @@ sized for that band and --shape, ready to edit and build.`,
 // still printed, with its problems on stderr, as a start to edit.
 func runNew(w, stderr io.Writer, o newOptions, sized bool) error {
 	if !sized {
-		_, err := w.Write(templates.Reference)
+		_, err := w.Write(templates.Reference())
 		return err
 	}
-	if o.frequencyMHz < parts.MinFrequencyMHz || o.frequencyMHz > parts.MaxFrequencyMHz {
-		return usageError{fmt.Errorf("--frequency-mhz %g is outside %g–%g MHz", o.frequencyMHz, parts.MinFrequencyMHz, parts.MaxFrequencyMHz)}
+	if o.frequencyMHz < spec.MinFrequencyMHz || o.frequencyMHz > spec.MaxFrequencyMHz {
+		return usageError{fmt.Errorf("--frequency-mhz %g is outside %g–%g MHz", o.frequencyMHz, spec.MinFrequencyMHz, spec.MaxFrequencyMHz)}
 	}
 	if o.shape != "cylindrical" && o.shape != "conical" {
 		return usageError{fmt.Errorf(`--shape %q: use "cylindrical" or "conical"`, o.shape)}
 	}
-	if o.turns != 0 && !(o.turns >= parts.MinTurns && o.turns <= parts.MaxTurns) {
-		return usageError{fmt.Errorf("--turns %g: must be between %g and %g (fractions allowed), e.g. --turns 6", o.turns, parts.MinTurns, parts.MaxTurns)}
+	if o.turns != 0 && !(o.turns >= spec.MinTurns && o.turns <= spec.MaxTurns) {
+		return usageError{fmt.Errorf("--turns %g: must be between %g and %g (fractions allowed), e.g. --turns 6", o.turns, spec.MinTurns, spec.MaxTurns)}
 	}
 	st := starter{Kit: o.kit, FrequencyMHz: o.frequencyMHz, Shape: o.shape, Turns: o.turns}
 	if st.Kit == "" {
@@ -90,15 +91,26 @@ func runNew(w, stderr io.Writer, o newOptions, sized bool) error {
 	// Wire about 0.02 λ, inside the 0.006–0.05 λ the Kraus formulas assume
 	// (from memory), rounded to a stock 0.1 mm and clamped to
 	// the spec's range.
-	lambda := parts.Wavelength(o.frequencyMHz)
-	st.WireMM = math.Min(math.Max(math.Round(0.02*lambda*10)/10, parts.MinWireMM), parts.MaxWireMM)
+	lambda := spec.Wavelength(o.frequencyMHz)
+	st.WireMM = math.Min(math.Max(math.Round(0.02*lambda*10)/10, spec.MinWireMM), spec.MaxWireMM)
 	var buf bytes.Buffer
 	if err := starterTmpl.Execute(&buf, st); err != nil {
 		return err
 	}
-	if _, err := parts.ParseSpec(buf.Bytes()); err != nil {
+	if err := checkStarter(buf.Bytes()); err != nil {
 		fmt.Fprintf(stderr, "coilwright: the starter spec does not pass check yet; edit it first:\n%v\n", err)
 	}
 	_, err := w.Write(buf.Bytes())
+	return err
+}
+
+// checkStarter runs a starter spec through what check runs: parsing, the
+// design and the planning of every part.
+func checkStarter(b []byte) error {
+	s, err := spec.ParseSpec(b)
+	if err != nil {
+		return err
+	}
+	_, err = kit.New(kit.Source{Name: "starter", Bytes: b, Spec: s}, kit.Options{})
 	return err
 }

@@ -10,7 +10,8 @@ import (
 	"path/filepath"
 	"testing"
 
-	"coilwright/cam"
+	"coilwright/cam/stl"
+	"coilwright/cam/threemf"
 	"coilwright/templates"
 )
 
@@ -39,7 +40,7 @@ func TestBuildWritesFormer(t *testing.T) {
 			t.Errorf("%s differs between two builds", name)
 		}
 	}
-	m, _, err := cam.ReadSTL(bytes.NewReader(runs[0]["former.stl"]))
+	m, _, err := stl.ReadSTL(bytes.NewReader(runs[0]["former.stl"]))
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -60,7 +61,7 @@ func TestBuildWritesFormer(t *testing.T) {
 	}
 	found := false
 	for _, f := range zr.File {
-		if f.Name != cam.ThreeMFModelPath {
+		if f.Name != threemf.ThreeMFModelPath {
 			continue
 		}
 		r, err := f.Open()

@@ -12,6 +12,7 @@ import (
 	"strings"
 	"testing"
 
+	"coilwright/cam/checktool"
 	"coilwright/parts"
 	"coilwright/templates"
 )
@@ -78,11 +79,11 @@ for f in sys.argv[1:]:
 `
 
 func TestPatternFilesExternal(t *testing.T) {
-	py := needEzdxf(t)
-	rsvg := needTool(t, "rsvg-convert")
-	pdfinfo := needTool(t, "pdfinfo")
-	qpdf := needTool(t, "qpdf")
-	pdftotext := needTool(t, "pdftotext")
+	py := checktool.NeedPython(t, "ezdxf")
+	rsvg := checktool.Need(t, "rsvg-convert")
+	pdfinfo := checktool.Need(t, "pdfinfo")
+	qpdf := checktool.Need(t, "qpdf")
+	pdftotext := checktool.Need(t, "pdftotext")
 	dir := t.TempDir()
 	buildDemo(t, "demo-5g8-cone.toml", dir)
 	r := readReport(t, dir)
@@ -181,7 +182,7 @@ func TestLaserGuardLabelsFiles(t *testing.T) {
 }
 
 func TestR2000Option(t *testing.T) {
-	py := needEzdxf(t)
+	py := checktool.NeedPython(t, "ezdxf")
 	b, _ := templates.Demo("demo-5g8-cone.toml")
 	spec := filepath.Join(t.TempDir(), "r2000.toml")
 	if err := os.WriteFile(spec, append(b, []byte("\n[cutting]\ndxf = \"R2000\"\n")...), 0o644); err != nil {

@@ -14,7 +14,9 @@ import (
 	"strings"
 	"testing"
 
+	"coilwright/cam/checktool"
 	"coilwright/parts"
+	"coilwright/parts/spec"
 	"coilwright/templates"
 )
 
@@ -22,7 +24,7 @@ var update = flag.Bool("update", false, "rewrite the golden files in testdata/go
 
 func runTool(t *testing.T, name string, args ...string) string {
 	t.Helper()
-	out, err := exec.Command(needTool(t, name), args...).CombinedOutput()
+	out, err := exec.Command(checktool.Need(t, name), args...).CombinedOutput()
 	if err != nil {
 		t.Fatalf("%s %v: %v\n%s", name, args, err, out)
 	}
@@ -231,7 +233,7 @@ func TestWireBlankMatchesDesignJSON(t *testing.T) {
 			if err := json.Unmarshal(b, &dj); err != nil {
 				t.Fatal(err)
 			}
-			spec, err := parts.ParseSpec([]byte(demoText(t, demo)))
+			spec, err := spec.ParseSpec([]byte(demoText(t, demo)))
 			if err != nil {
 				t.Fatal(err)
 			}
@@ -264,9 +266,9 @@ func TestWireBlankMatchesDesignJSON(t *testing.T) {
 func TestBatchPlanFromCSV(t *testing.T) {
 	for _, q := range []int{2, 6, 17} {
 		t.Run(strconv.Itoa(q)+" kits", func(t *testing.T) {
-			spec := strings.Replace(demoText(t, templates.DefaultDemo), "quantity = 6", "quantity = "+strconv.Itoa(q), 1)
-			dir := buildSpec(t, spec)
-			s, _ := parts.ParseSpec([]byte(spec))
+			src := strings.Replace(demoText(t, templates.DefaultDemo), "quantity = 6", "quantity = "+strconv.Itoa(q), 1)
+			dir := buildSpec(t, src)
+			s, _ := spec.ParseSpec([]byte(src))
 			usable := map[string]float64{
 				"wire blank":  s.Stock.WireRodMM - s.Stock.EndTrimMM,
 				"support rod": s.Stock.DowelRodMM - s.Stock.EndTrimMM,

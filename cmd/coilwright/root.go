@@ -18,6 +18,16 @@ func Main() int { return run(os.Args[1:], os.Stdout, os.Stderr) }
 func run(args []string, stdout, stderr io.Writer) int {
 	root := newRootCmd(stdout, stderr)
 	root.SetArgs(args)
+	// An unknown subcommand is found before anything runs: Find reports
+	// it, so it is a usage error by where it arose, not by its wording.
+	// Shell completion requests are cobra's own hidden command.
+	root.InitDefaultHelpCmd()
+	root.InitDefaultCompletionCmd(args...)
+	if len(args) == 0 || (args[0] != cobra.ShellCompRequestCmd && args[0] != cobra.ShellCompNoDescRequestCmd) {
+		if _, _, err := root.Find(args); err != nil {
+			return report(usageError{err}, stderr)
+		}
+	}
 	return report(root.Execute(), stderr)
 }
 

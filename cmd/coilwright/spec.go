@@ -1,39 +1,29 @@
 package main
 
 import (
-	"crypto/sha256"
-	"encoding/hex"
 	"errors"
 	"fmt"
 	"io/fs"
 	"os"
+	"strings"
+	"time"
 
-	"coilwright/parts"
+	"coilwright/kit"
+	"coilwright/parts/spec"
 	"coilwright/templates"
 )
 
-// loadedSpec is a validated spec with its origin and the bytes it came from.
-type loadedSpec struct {
-	Name   string // file path, or "demo:NAME" for an embedded demo
-	Bytes  []byte
-	Spec   *parts.Spec
-	Design *parts.Design
-}
-
-// SHA256 returns the hex SHA-256 of the spec's bytes.
-func (l *loadedSpec) SHA256() string {
-	h := sha256.Sum256(l.Bytes)
-	return hex.EncodeToString(h[:])
-}
-
 // loadSpec reads and validates a spec from path, or the named embedded demo
 // when demo is set. Problems in the spec come back as inputError.
-func loadSpec(path, demo string) (*loadedSpec, error) {
-	var l loadedSpec
+func loadSpec(path, demo string) (*kit.Source, error) {
+	var l kit.Source
 	switch {
 	case demo != "" && path != "":
 		return nil, usageError{errors.New("give a spec file or --demo, not both")}
 	case demo != "":
+		if !strings.HasSuffix(demo, ".toml") {
+			demo += ".toml"
+		}
 		b, ok := templates.Demo(demo)
 		if !ok {
 			return nil, usageError{fmt.Errorf("no embedded demo %q; demos: %v", demo, templates.Demos())}
@@ -49,17 +39,26 @@ func loadSpec(path, demo string) (*loadedSpec, error) {
 		}
 		l.Name, l.Bytes = path, b
 	}
-	s, err := parts.ParseSpec(l.Bytes)
+	s, err := spec.ParseSpec(l.Bytes)
 	if err != nil {
 		return nil, inputError{l.Name, err}
 	}
 	if err := attachCalibration(path, s); err != nil {
 		return nil, inputError{l.Name, err}
 	}
-	d, err := parts.NewDesign(s)
-	if err != nil {
+	l.Spec = s
+	return &l, nil
+}
+
+// newKit plans the build of a loaded spec. Problems in the spec, found
+// only once the design and its parts are worked out, come back as
+// inputError naming the spec.
+func newKit(l *kit.Source, created time.Time) (*kit.Kit, error) {
+	k, err := kit.New(*l, kit.Options{Version: Version, Created: created})
+	var se *spec.SpecError
+	var ses spec.SpecErrors
+	if errors.As(err, &se) || errors.As(err, &ses) {
 		return nil, inputError{l.Name, err}
 	}
-	l.Spec, l.Design = s, d
-	return &l, nil
+	return k, err
 }

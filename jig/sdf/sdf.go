@@ -52,7 +52,7 @@ type ArgError struct {
 
 // Error formats the argument error as "shape: arg = value: rule".
 func (e *ArgError) Error() string {
-	return fmt.Sprintf("sdf: %s: %s = %g: %s", e.Shape, e.Arg, e.Value, e.Rule)
+	return fmt.Sprintf("%s: %s = %g: %s", e.Shape, e.Arg, e.Value, e.Rule)
 }
 
 // positive returns an *ArgError unless v is a finite number above zero.

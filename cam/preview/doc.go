@@ -1,0 +1,2 @@
+// Package preview renders a shaded PNG picture of a mesh.
+package preview

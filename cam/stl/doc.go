@@ -1,0 +1,2 @@
+// Package stl writes and reads binary STL meshes, in mm.
+package stl

@@ -1,0 +1,3 @@
+// Package threemf writes a mesh as a 3MF package (core specification,
+// millimetre units).
+package threemf

@@ -1,0 +1,213 @@
+package jig
+
+import (
+	"errors"
+	"fmt"
+	"math"
+
+	"coilwright/cam/geom"
+	"coilwright/parts"
+)
+
+// Former fit limits in mm. The wall and land minima are three 0.4 mm
+// perimeters. Common practice (no published source).
+const (
+	MinWallMM       = 1.2 // least wall left by the groove, holes and drive cut
+	MinGrooveLandMM = 0.8 // least land between neighbouring grooves
+)
+
+// FitKind names the size of a former that does not fit.
+type FitKind int
+
+// The fit problems Plan finds.
+const (
+	FitGrooveSpacing FitKind = iota // turns closer than the groove and its land need
+	FitGrooveRadius                 // groove too large for the former's smallest radius
+	FitDriveWall                    // drive cut leaves too thin a wall under the groove
+	FitLockHole                     // wire-lock hole shallower than half a wire diameter
+	FitHexDepth                     // hex socket with its roof deeper than the former allows
+	FitLettering                    // flange too narrow for legible letters
+	FitGrooveSweep                  // groove section wider than the winding leaves room for, lead-in and run-out included
+)
+
+// FitProblem is one size the former cannot be made with: which size, what
+// it needs and what the design leaves, in mm.
+type FitProblem struct {
+	Kind      FitKind
+	Needed    float64 // mm the former needs
+	Available float64 // mm the design leaves
+	Groove    float64 // groove width in mm, for the groove problems
+}
+
+// Error describes the problem in the former's own terms.
+func (p FitProblem) Error() string {
+	switch p.Kind {
+	case FitGrooveSpacing:
+		return fmt.Sprintf("the former's %.2f mm groove needs turns at least %.2f mm apart; the smallest spacing is %.2f mm", p.Groove, p.Needed, p.Available)
+	case FitGrooveRadius:
+		return fmt.Sprintf("the former's %.2f mm groove needs a radius of %.2f mm; the smallest is %.2f mm", p.Groove, p.Needed, p.Available)
+	case FitDriveWall:
+		return fmt.Sprintf("the drive cut leaves a %.2f mm wall under the groove; at least %.2f mm is needed", p.Available, p.Needed)
+	case FitLockHole:
+		return fmt.Sprintf("%.2f mm of wire-lock hole fits above the drive cut; at least %.2f mm is needed", p.Available, p.Needed)
+	case FitHexDepth:
+		return fmt.Sprintf("the hex socket with its roof and wall needs %.1f mm of the %.1f mm former", p.Needed, p.Available)
+	case FitGrooveSweep:
+		return fmt.Sprintf("the groove's section reaches %.2f mm from its centre; the winding, with its lead-in and run-out, leaves %.2f mm", p.Needed, p.Available)
+	case FitLettering:
+		return fmt.Sprintf("the flange leaves room for %.1f mm letters; at least %.1f mm is needed", p.Available, p.Needed)
+	}
+	return fmt.Sprintf("former size %d: needs %.2f mm, has %.2f mm", p.Kind, p.Needed, p.Available)
+}
+
+// FormerPlan is the former planned for a design: the path its groove
+// carries, its sizes, its envelope and the fit problems that stop it being
+// made. It is the one place the former's sizes are worked out; the design
+// report, check and build all read it.
+type FormerPlan struct {
+	Path       parts.Coil   // the springback-compensated wire centreline
+	Params     FormerParams // sizes, with the drive chosen
+	HeightMM   float64      // overall height along the axis
+	DiameterMM float64      // flange diameter
+	// FitsPrinter reports whether the former fits the spec's print volume
+	// ([former] print_height_mm, print_width_mm); one that does not is not
+	// meshed.
+	FitsPrinter bool
+	// DriveChanged reports that the default hex socket did not fit and a
+	// through-bore as wide as the walls allow was planned instead.
+	DriveChanged bool
+	Problems     []FitProblem // empty when the former can be made
+}
+
+// Plan sizes the former for d from its [former] table: the groove must fit
+// between turns with a land and stay clear of the axis, the drive cut must
+// leave a wall under the groove and room for the wire-lock hole, the hex
+// socket must fit the height and the lettering the flange. When the spec
+// does not name a drive and the default hex socket does not fit, the plan
+// falls back to a through-bore as wide as the walls allow.
+func Plan(d *parts.Design) FormerPlan {
+	s := d.Spec
+	f := &s.Former
+	deg := math.Pi / 180
+	wire := s.Wire.DiameterMM
+	p := FormerParams{
+		Hand:            int(d.Former.Hand),
+		Wire:            wire,
+		Clearance:       f.ClearanceMM,
+		GrooveDepth:     f.GrooveDepthRatio * wire,
+		RoundGroove:     f.GrooveProfile == "round",
+		LeadIn:          f.LeadInDeg * deg,
+		RunOut:          f.RunOutDeg * deg,
+		LockDepth:       f.LockHoleDepthMM,
+		NotchWidth:      f.StopNotchMM,
+		FlangeMargin:    f.FlangeMarginMM,
+		FlangeThickness: f.FlangeThicknessMM,
+		FlatDepth:       f.FlatDepthMM,
+		Chamfer:         f.ChamferMM,
+		Fillet:          f.FilletMM,
+		HexAcrossFlats:  f.HexAcrossFlatsMM,
+		HexDepth:        f.HexDepthMM,
+		BoreDiameter:    f.BoreDiameterMM,
+		EngraveDepth:    f.EngraveDepthMM,
+		TextHeight:      f.TextHeightMM,
+		EndMargin:       f.EndMarginMM,
+		MinWall:         MinWallMM,
+		Labels:          [2]string{d.Former.Hand.String(), FrequencyLabel(s.FrequencyMHz)},
+	}
+	if f.Drive == "bore" {
+		p.Drive = ThroughBore
+	}
+	path := d.Former
+	pl := FormerPlan{Path: path, Params: p}
+	a := (wire + p.Clearance) / 2
+	e := envelope(path, p)
+	pl.HeightMM, pl.DiameterMM = e.height, 2*e.flangeRadius
+	pl.FitsPrinter = pl.HeightMM <= f.PrintHeightMM && pl.DiameterMM <= f.PrintWidthMM
+
+	// The teardrop's mouth spans a(1 + √2) along the axis; the swept
+	// groove needs 3.5 groove radii of spacing and of radius to tell
+	// neighbouring turns apart.
+	needS := math.Max(a*(1+math.Sqrt2)+MinGrooveLandMM, 3.5*a)
+	if sp := path.MinSpacing(); sp < needS {
+		pl.Problems = append(pl.Problems, FitProblem{Kind: FitGrooveSpacing, Needed: needS, Available: sp, Groove: 2 * a})
+	}
+	rmin := math.Min(path.StartRadius, path.EndRadius)
+	if 3.5*a > rmin {
+		pl.Problems = append(pl.Problems, FitProblem{Kind: FitGrooveRadius, Needed: 3.5 * a, Available: rmin, Groove: 2 * a})
+		return pl
+	}
+	// Room for the drive: a wall under the groove everywhere and a
+	// wire-lock hole of at least one wire diameter at the start.
+	room := math.Min(e.floor-MinWallMM, e.startBottom-MinWallMM-wire)
+	if p.Drive == HexSocket && s.Line("former.drive") == 0 && p.driveRadius() > room {
+		pl.Params.Drive, pl.DriveChanged = ThroughBore, true
+		if s.Line("former.bore_diameter_mm") == 0 {
+			// Half a millimetre inside the limit, on a 0.1 mm step.
+			pl.Params.BoreDiameter = math.Max(1, math.Min(p.BoreDiameter, math.Floor(20*(room-0.5))/10))
+		}
+		p = pl.Params
+	}
+	driveR := p.driveRadius()
+	if wall := e.floor - driveR; wall < MinWallMM {
+		pl.Problems = append(pl.Problems, FitProblem{Kind: FitDriveWall, Needed: MinWallMM, Available: wall})
+		return pl
+	}
+	// The wire-lock hole stops a wall short of the drive cut; it must still
+	// take half a wire diameter of wire.
+	if avail := math.Min(p.LockDepth, e.startBottom-driveR-MinWallMM); avail < wire/2 {
+		pl.Problems = append(pl.Problems, FitProblem{Kind: FitLockHole, Needed: wire / 2, Available: avail})
+	}
+	if p.Drive == HexSocket && p.HexDepth+driveR > e.height-MinWallMM {
+		pl.Problems = append(pl.Problems, FitProblem{Kind: FitHexDepth, Needed: p.HexDepth + driveR + MinWallMM, Available: e.height})
+	}
+	if len(pl.Problems) == 0 {
+		if _, err := grooveSweep(path, p, a, 1); err != nil {
+			pl.Problems = append(pl.Problems, grooveSweepProblem(path, p, a))
+		}
+	}
+	if th := letterHeight(p, e.rWide+p.Fillet, e.flangeRadius-p.Chamfer); th < minTextHeight {
+		pl.Problems = append(pl.Problems, FitProblem{Kind: FitLettering, Needed: minTextHeight, Available: th})
+	}
+	return pl
+}
+
+// Former builds the planned former. It refuses a plan with fit problems,
+// returning them joined.
+func (pl FormerPlan) Former() (*Former, error) {
+	if len(pl.Problems) > 0 {
+		errs := make([]error, len(pl.Problems))
+		for i, p := range pl.Problems {
+			errs[i] = p
+		}
+		return nil, errors.Join(errs...)
+	}
+	return NewFormer(pl.Path, pl.Params)
+}
+
+// grooveSweepProblem measures why the groove cannot be swept: how far its
+// section reaches from its centre, against half the least rise over one
+// turn of the groove (lead-in and run-out included) or half its least
+// radius, sampled every degree.
+func grooveSweepProblem(path WirePath, p FormerParams, a float64) FitProblem {
+	h := grooveHelix(path, p, a)
+	const step = math.Pi / 180
+	turn := int(math.Round(2 * math.Pi / step))
+	var zs []float64
+	rmin := math.Inf(1)
+	for phi := h.Start; phi <= h.End; phi += step {
+		zs = append(zs, h.Z(phi))
+		rmin = math.Min(rmin, h.Radius(phi))
+	}
+	rise := math.Inf(1)
+	for i := 0; i+turn < len(zs); i++ {
+		rise = math.Min(rise, zs[i+turn]-zs[i])
+	}
+	extent := 0.0
+	if prof, err := grooveSection(a, 1, p.RoundGroove); err == nil {
+		b := prof.Bounds()
+		for _, c := range []geom.Vec2{b.Min, b.Max, {X: b.Min.X, Y: b.Max.Y}, {X: b.Max.X, Y: b.Min.Y}} {
+			extent = math.Max(extent, c.Len())
+		}
+	}
+	return FitProblem{Kind: FitGrooveSweep, Needed: extent, Available: math.Min(rise, rmin) / 2, Groove: 2 * a}
+}

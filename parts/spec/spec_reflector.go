@@ -1,0 +1,142 @@
+package spec
+
+import (
+	"fmt"
+	"math"
+)
+
+// ReflectorSpec is the [reflector] table: the ground plane behind the coil.
+// With neither diameter_mm nor side_mm the size is chosen automatically.
+type ReflectorSpec struct {
+	Shape          string   `toml:"shape"`            // "disc" or "square"
+	DiameterMM     *float64 `toml:"diameter_mm"`      // disc diameter
+	SideMM         *float64 `toml:"side_mm"`          // square side
+	ThicknessMM    float64  `toml:"thickness_mm"`     // sheet thickness, default 1.6 mm
+	Material       string   `toml:"material"`         // sheet material id, default "fr4"
+	CornerRadiusMM float64  `toml:"corner_radius_mm"` // square corners, default 0
+	Connector      string   `toml:"connector"`        // "coax", "sma-flange" or "sma-bulkhead"
+	FeedHoleMM     *float64 `toml:"feed_hole_mm"`     // feed hole diameter, default from the coax or connector
+	MountingHoles  int      `toml:"mounting_holes"`   // count, default 0
+	MountingHoleMM float64  `toml:"mounting_hole_mm"` // diameter, default 3.2 mm
+	// MountingCircleMM is the pitch circle of the mounting holes; default
+	// the plate's inscribed circle less 12 mm.
+	MountingCircleMM *float64 `toml:"mounting_circle_mm"`
+	MountingAngleDeg float64  `toml:"mounting_angle_deg"` // first hole's angle, default 45°
+}
+
+// AutoReflectorLambda is the automatic reflector size in wavelengths (disc
+// diameter or square side). Builders use 0.75–1.2 λ (from memory).
+const AutoReflectorLambda = 1.0
+
+// SheetMaterial is a plate or strip material the cutting outputs know.
+type SheetMaterial struct {
+	ID   string
+	Name string
+	// Halogenated marks laminates whose resin carries halogen flame
+	// retardants: cutting them by laser releases toxic fumes.
+	Halogenated bool
+}
+
+// SheetMaterials lists the reflector and wedge materials.
+// Source: Barontini et al., Ind. Eng. Chem. Res. 44, 2005 (brominated
+// epoxy in FR-4 laminates).
+var SheetMaterials = []SheetMaterial{
+	{ID: "fr4", Name: "FR-4 copper-clad glass-epoxy laminate", Halogenated: true},
+	{ID: "aluminium", Name: "aluminium sheet"},
+	{ID: "brass", Name: "brass sheet"},
+	{ID: "copper", Name: "copper sheet"},
+	{ID: "tinplate", Name: "tinplate (tinned steel)"},
+}
+
+// SheetMaterialByID returns the material with the given id.
+func SheetMaterialByID(id string) (SheetMaterial, bool) {
+	for _, m := range SheetMaterials {
+		if m.ID == id {
+			return m, true
+		}
+	}
+	return SheetMaterial{}, false
+}
+
+func sheetMaterialIDs() []string {
+	ids := make([]string, len(SheetMaterials))
+	for i, m := range SheetMaterials {
+		ids[i] = m.ID
+	}
+	return ids
+}
+
+// Mounting-hole defaults. Common practice (no published source): M3
+// clearance holes about 6 mm in from the edge.
+const (
+	DefaultMountingHoleMM   = 3.2
+	mountingInsetMM         = 6.0
+	DefaultMountingAngleDeg = 45.0
+)
+
+func (r *ReflectorSpec) validate(c *checker, s *Spec) {
+	c.oneOf("reflector.shape", &r.Shape, "disc", "disc", "square")
+	if r.Shape == "disc" && r.SideMM != nil {
+		c.fail("reflector.side_mm", num(*r.SideMM), `applies only to shape = "square"`, "use diameter_mm for a disc")
+	}
+	if r.Shape == "square" && r.DiameterMM != nil {
+		c.fail("reflector.diameter_mm", num(*r.DiameterMM), `applies only to shape = "disc"`, "use side_mm for a square")
+	}
+	for _, kv := range []struct {
+		key string
+		v   *float64
+	}{{"reflector.diameter_mm", r.DiameterMM}, {"reflector.side_mm", r.SideMM}} {
+		if kv.v != nil {
+			c.within(kv.key, *kv.v, 5, 2000, "mm")
+		}
+	}
+	c.orDefault("reflector.thickness_mm", &r.ThicknessMM, 1.6)
+	c.within("reflector.thickness_mm", r.ThicknessMM, 0.05, 10, "mm")
+
+	c.oneOf("reflector.material", &r.Material, "fr4", sheetMaterialIDs()...)
+	c.oneOf("reflector.connector", &r.Connector, "coax", "coax", "sma-flange", "sma-bulkhead")
+	size := r.SizeMM(s.Wavelength())
+	if r.CornerRadiusMM != 0 {
+		if r.Shape != "square" {
+			c.fail("reflector.corner_radius_mm", num(r.CornerRadiusMM), `applies only to shape = "square"`, "delete it for a disc")
+		} else if !(r.CornerRadiusMM > 0 && r.CornerRadiusMM < size/2) {
+			c.fail("reflector.corner_radius_mm", num(r.CornerRadiusMM), fmt.Sprintf("must be above 0 and below half the side (%s mm)", num(size/2)), "give a smaller radius")
+		}
+	}
+	if r.FeedHoleMM != nil {
+		c.within("reflector.feed_hole_mm", *r.FeedHoleMM, 0.5, 30, "mm")
+	}
+	if r.MountingHoles < 0 || r.MountingHoles > 12 {
+		c.fail("reflector.mounting_holes", fmt.Sprint(r.MountingHoles), "must be between 0 and 12", "give the number of mounting holes")
+	}
+	c.orDefault("reflector.mounting_hole_mm", &r.MountingHoleMM, DefaultMountingHoleMM)
+	c.within("reflector.mounting_hole_mm", r.MountingHoleMM, 1, 20, "mm")
+	if r.MountingCircleMM != nil {
+		c.within("reflector.mounting_circle_mm", *r.MountingCircleMM, 2, 2000, "mm")
+	}
+	c.orDefault("reflector.mounting_angle_deg", &r.MountingAngleDeg, DefaultMountingAngleDeg)
+	if math.IsNaN(r.MountingAngleDeg) || !c.within("reflector.mounting_angle_deg", r.MountingAngleDeg, -360, 360, "degrees") {
+		return
+	}
+}
+
+// SizeMM returns the reflector's diameter (disc) or side (square) in mm,
+// choosing AutoReflectorLambda wavelengths when the spec gives none.
+func (r *ReflectorSpec) SizeMM(lambda float64) float64 {
+	switch {
+	case r.DiameterMM != nil:
+		return *r.DiameterMM
+	case r.SideMM != nil:
+		return *r.SideMM
+	}
+	return AutoReflectorLambda * lambda
+}
+
+// MountingCircle returns the mounting holes' pitch-circle diameter in mm
+// for a plate of the given size.
+func (r *ReflectorSpec) MountingCircle(size float64) float64 {
+	if r.MountingCircleMM != nil {
+		return *r.MountingCircleMM
+	}
+	return size - 2*mountingInsetMM
+}
