@@ -1,0 +1,174 @@
+package cam
+
+import (
+	"crypto/sha256"
+	"encoding/hex"
+	"encoding/json"
+	"errors"
+	"fmt"
+	"maps"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+)
+
+var errInjected = errors.New("injected failure")
+
+// folderSet returns the outputs of dir as name → content after checking
+// that manifest.json lists exactly the visible files, each byte for byte.
+func folderSet(t *testing.T, dir string) map[string]string {
+	t.Helper()
+	b, err := os.ReadFile(filepath.Join(dir, ManifestName))
+	if err != nil {
+		t.Fatalf("no manifest: %v", err)
+	}
+	var m Manifest
+	if err := json.Unmarshal(b, &m); err != nil {
+		t.Fatal(err)
+	}
+	set := map[string]string{}
+	for _, f := range m.Files {
+		c, err := os.ReadFile(filepath.Join(dir, f.Name))
+		if err != nil {
+			t.Fatalf("manifest lists %s: %v", f.Name, err)
+		}
+		sum := sha256.Sum256(c)
+		if hex.EncodeToString(sum[:]) != f.SHA256 || int64(len(c)) != f.Size {
+			t.Fatalf("%s does not match the manifest", f.Name)
+		}
+		set[f.Name] = string(c)
+	}
+	for _, n := range listDir(t, dir) {
+		if _, ok := set[n]; !ok && n != ManifestName && !strings.HasPrefix(n, ".") {
+			t.Fatalf("%s is in the folder but not in the manifest", n)
+		}
+	}
+	return set
+}
+
+func commitSet(t *testing.T, o *Output, set map[string]string) error {
+	t.Helper()
+	for name, content := range set {
+		if err := o.Add(name, writeString(content)); err != nil {
+			t.Fatal(err)
+		}
+	}
+	return o.Commit(Manifest{Tool: "coilwright"})
+}
+
+func TestCommitSurvivesFailureAtEveryStep(t *testing.T) {
+	oldSet := map[string]string{"a.txt": "old a", "b.txt": "old b", "gone.txt": "old gone"}
+	newSet := map[string]string{"a.txt": "new a", "b.txt": "new b", "c.txt": "new c"}
+
+	// Count the steps of one commit and of its recovery.
+	var steps []string
+	record := func(s string) error { steps = append(steps, s); return nil }
+	dir := t.TempDir()
+	o, _ := NewOutput(dir, false)
+	commitSet(t, o, oldSet)
+	o, _ = NewOutput(dir, false)
+	o.failAt = record
+	if err := commitSet(t, o, newSet); err != nil {
+		t.Fatal(err)
+	}
+	if len(steps) < 10 {
+		t.Fatalf("only %d commit steps seen: %v", len(steps), steps)
+	}
+
+	failAtN := func(n int) func(string) error {
+		i := 0
+		return func(string) error {
+			i++
+			if i == n {
+				return errInjected
+			}
+			return nil
+		}
+	}
+	for n := 1; n <= len(steps); n++ {
+		t.Run(fmt.Sprintf("fail at %s", steps[n-1]), func(t *testing.T) {
+			dir := t.TempDir()
+			o, _ := NewOutput(dir, false)
+			commitSet(t, o, oldSet)
+			o, _ = NewOutput(dir, false)
+			o.failAt = failAtN(n)
+			if err := commitSet(t, o, newSet); !errors.Is(err, errInjected) {
+				t.Fatalf("commit: %v", err)
+			}
+			_, err := os.Lstat(filepath.Join(dir, commitRecordName))
+			decided := err == nil
+			if !decided && !maps.Equal(folderSet(t, dir), oldSet) {
+				t.Fatalf("undecided commit changed the folder: %v", folderSet(t, dir))
+			}
+			// The next run first fails during its own recovery at each
+			// step, then recovers for good.
+			for m := 1; decided; m++ {
+				o, err := newOutput(dir, false, failAtN(m))
+				if err == nil {
+					o.Abort()
+					break
+				}
+				if !errors.Is(err, errInjected) {
+					t.Fatalf("recovery: %v", err)
+				}
+			}
+			o, err = NewOutput(dir, false)
+			if err != nil {
+				t.Fatalf("next build: %v", err)
+			}
+			o.Abort()
+			want := oldSet
+			if decided {
+				want = newSet
+			}
+			if got := folderSet(t, dir); !maps.Equal(got, want) {
+				t.Fatalf("after recovery the folder holds %v, want %v", got, want)
+			}
+			for _, n := range listDir(t, dir) {
+				if strings.HasPrefix(n, ".") {
+					t.Errorf("%s left behind", n)
+				}
+			}
+		})
+	}
+}
+
+func TestCommitRefusingATargetLeavesTheOldSet(t *testing.T) {
+	// A folder where one output's name is taken by a folder: the commit
+	// fails, and must not have replaced any other output first.
+	dir := t.TempDir()
+	o, _ := NewOutput(dir, false)
+	commitSet(t, o, map[string]string{"a.txt": "old a"})
+	os.MkdirAll(filepath.Join(dir, "b.txt", "x"), 0o755)
+	o, err := NewOutput(dir, true)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if err := commitSet(t, o, map[string]string{"a.txt": "new a", "b.txt": "new b"}); err == nil {
+		t.Fatal("replacing a folder with a file was not refused")
+	}
+	if b, _ := os.ReadFile(filepath.Join(dir, "a.txt")); string(b) != "old a" {
+		t.Errorf("a.txt = %q after a failed commit, want the previous build's", b)
+	}
+}
+
+func TestTamperedCommitRecordIsRefused(t *testing.T) {
+	for _, rec := range []string{
+		`not json`,
+		`{"tool":"coilwright","files":[{"temp":".x.tmp-1-0","name":"..","sha256":""},{"temp":".m.tmp-1-0","name":"manifest.json","sha256":""}]}`,
+		`{"tool":"coilwright","files":[{"temp":"../../x","name":"a","sha256":""},{"temp":".m.tmp-1-0","name":"manifest.json","sha256":""}]}`,
+		`{"tool":"coilwright","files":[{"temp":".m.tmp-1-0","name":"manifest.json","sha256":""}],"remove":[".."]}`,
+	} {
+		dir := t.TempDir()
+		os.WriteFile(filepath.Join(dir, commitRecordName), []byte(rec), 0o644)
+		_, err := NewOutput(dir, true)
+		var ce *CommitRecordError
+		if !errors.As(err, &ce) {
+			t.Errorf("record %s: got %v, want a CommitRecordError", rec, err)
+		}
+		if _, err := os.Stat(filepath.Dir(dir)); err != nil {
+			t.Fatal(err)
+		}
+	}
+}
