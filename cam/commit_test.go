@@ -172,3 +172,60 @@ func TestTamperedCommitRecordIsRefused(t *testing.T) {
 		}
 	}
 }
+
+func TestStaleTemporaryFilesAreRemoved(t *testing.T) {
+	// A build killed while writing leaves its temporary files; the next
+	// build, with or without force, removes them and keeps anything else.
+	for _, force := range []bool{false, true} {
+		dir := t.TempDir()
+		o, _ := NewOutput(dir, false)
+		commitSet(t, o, map[string]string{"a.txt": "a"})
+		o, _ = NewOutput(dir, false)
+		o.Add("former.stl", writeString("half"))
+		o.lock.release() // killed: no Abort
+		stale := []string{".former.stl.tmp-4242-0", ".manifest.json.tmp-17-3", "..coilwright-commit.json.tmp-9-0"}
+		for _, n := range stale {
+			os.WriteFile(filepath.Join(dir, n), []byte("x"), 0o644)
+		}
+		os.Mkdir(filepath.Join(dir, ".keep.tmp-1-1"), 0o755) // a folder: not the tool's
+		o, err := NewOutput(dir, force)
+		if !force {
+			var fe *ForeignFilesError
+			if !errors.As(err, &fe) || len(fe.Names) != 1 || fe.Names[0] != ".keep.tmp-1-1" {
+				t.Fatalf("want only the folder named as foreign, got %v", err)
+			}
+			os.Remove(filepath.Join(dir, ".keep.tmp-1-1"))
+			if o, err = NewOutput(dir, false); err != nil {
+				t.Fatalf("stale temporary files block the folder: %v", err)
+			}
+		} else if err != nil {
+			t.Fatal(err)
+		}
+		o.Abort()
+		for _, n := range listDir(t, dir) {
+			if staleTemp.MatchString(n) && n != ".keep.tmp-1-1" {
+				t.Errorf("force=%v: %s left behind", force, n)
+			}
+		}
+	}
+}
+
+func TestInterruptRemovesTemporaryFiles(t *testing.T) {
+	parent := t.TempDir()
+	dir := filepath.Join(parent, "new", "kit")
+	o, err := NewOutput(dir, false)
+	if err != nil {
+		t.Fatal(err)
+	}
+	o.Add("a.txt", writeString("a"))
+	o.Interrupt()
+	if err := o.Add("b.txt", writeString("b")); !errors.Is(err, ErrInterrupted) {
+		t.Errorf("Add after Interrupt: %v", err)
+	}
+	if err := o.Commit(Manifest{Tool: "coilwright"}); !errors.Is(err, ErrInterrupted) {
+		t.Errorf("Commit after Interrupt: %v", err)
+	}
+	if got := listDir(t, parent); len(got) != 0 {
+		t.Errorf("interrupted first build left %v", got)
+	}
+}

@@ -25,6 +25,7 @@ type buildOptions struct {
 	demo     string
 	json     bool
 	progress io.Writer // step names go here as they start; nil for none
+	stderr   io.Writer // where an interrupted build says so
 }
 
 // buildContext is what every output step sees: the loaded spec and design,
@@ -93,6 +94,7 @@ not make, unless --force is given.`,
 				o.demo = templates.DefaultDemo
 			}
 			o.progress = terminal(cmd.ErrOrStderr())
+			o.stderr = cmd.ErrOrStderr()
 			return runBuild(cmd.OutOrStdout(), path, o)
 		},
 	}
@@ -122,6 +124,9 @@ func runBuild(w io.Writer, path string, o buildOptions) error {
 	out, err := cam.NewOutput(dir, o.force)
 	if err != nil {
 		return err
+	}
+	if o.stderr != nil {
+		defer interruptOnSignal(out, o.stderr)()
 	}
 	ctx := &buildContext{spec: l, out: out, created: created}
 	for _, s := range buildSteps() {
