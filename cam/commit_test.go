@@ -229,3 +229,50 @@ func TestInterruptRemovesTemporaryFiles(t *testing.T) {
 		t.Errorf("interrupted first build left %v", got)
 	}
 }
+
+func TestSecondBuildIntoAFolderIsRefused(t *testing.T) {
+	dir := t.TempDir()
+	first, err := NewOutput(dir, false)
+	if err != nil {
+		t.Fatal(err)
+	}
+	first.Add("a.txt", writeString("first"))
+	_, err = NewOutput(dir, false)
+	var be *BusyError
+	if !errors.As(err, &be) || !errors.Is(err, ErrBusy) || !strings.Contains(err.Error(), "another coilwright build") {
+		t.Fatalf("second build while the first runs: %v, want a BusyError", err)
+	}
+	if err := first.Commit(Manifest{Tool: "coilwright"}); err != nil {
+		t.Fatal(err)
+	}
+	second, err := NewOutput(dir, false)
+	if err != nil {
+		t.Fatalf("build after the first finished: %v", err)
+	}
+	second.Abort()
+	if _, err := NewOutput(dir, false); err != nil {
+		t.Fatalf("Abort kept the lock: %v", err)
+	}
+}
+
+func TestFailedFirstBuildRemovesItsFolder(t *testing.T) {
+	parent := t.TempDir()
+	os.Mkdir(filepath.Join(parent, "out"), 0o755)
+	dir := filepath.Join(parent, "out", "kit", "v1")
+	o, err := NewOutput(dir, false)
+	if err != nil {
+		t.Fatal(err)
+	}
+	o.Add("a.txt", writeString("a"))
+	o.Abort()
+	if got := listDir(t, filepath.Join(parent, "out")); len(got) != 0 {
+		t.Errorf("a failed first build left %v in out/", got)
+	}
+	// A folder that existed before stays.
+	dir = filepath.Join(parent, "out")
+	o, _ = NewOutput(dir, false)
+	o.Abort()
+	if _, err := os.Stat(dir); err != nil {
+		t.Errorf("Abort removed a folder it did not create: %v", err)
+	}
+}

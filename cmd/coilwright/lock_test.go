@@ -1,0 +1,32 @@
+package main
+
+import (
+	"bytes"
+	"path/filepath"
+	"strings"
+	"testing"
+)
+
+func TestConcurrentBuildsIntoOneFolder(t *testing.T) {
+	// One build runs in a subprocess; a second into the same folder, while
+	// it runs, is refused with a clear message; the first completes.
+	dir := filepath.Join(t.TempDir(), "kit")
+	c := coilwrightCmd("build", "-o", dir)
+	var firstErr bytes.Buffer
+	c.Stderr = &firstErr
+	if err := c.Start(); err != nil {
+		t.Fatal(err)
+	}
+	waitForTemp(t, dir)
+	var stdout, stderr bytes.Buffer
+	code := run([]string{"build", "-o", dir}, &stdout, &stderr)
+	if code != exitFailure || !strings.Contains(stderr.String(), "being written by another coilwright build") {
+		t.Errorf("second build: exit %d, stderr %q", code, stderr.String())
+	}
+	if err := c.Wait(); err != nil {
+		t.Fatalf("first build: %v: %s", err, firstErr.String())
+	}
+	if code := run([]string{"build", "-o", dir}, &stdout, &stderr); code != exitOK {
+		t.Errorf("rebuild after the first finished: exit %d: %s", code, stderr.String())
+	}
+}
