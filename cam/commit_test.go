@@ -276,3 +276,37 @@ func TestFailedFirstBuildRemovesItsFolder(t *testing.T) {
 		t.Errorf("Abort removed a folder it did not create: %v", err)
 	}
 }
+
+func TestTamperedManifestNamesAreIgnored(t *testing.T) {
+	parent := t.TempDir()
+	dir := filepath.Join(parent, "kit")
+	os.Mkdir(dir, 0o755)
+	os.WriteFile(filepath.Join(parent, "keep.txt"), []byte("keep"), 0o644)
+	bad := []string{"..", ".", "../keep.txt", "sub/a", ".hidden", "a\x1b[2J", ""}
+	var files []ManifestFile
+	for _, n := range bad {
+		files = append(files, ManifestFile{Name: n})
+	}
+	files = append(files, ManifestFile{Name: "design.md"})
+	b, _ := json.Marshal(Manifest{Tool: "coilwright", Files: files})
+	os.WriteFile(filepath.Join(dir, ManifestName), b, 0o644)
+	os.WriteFile(filepath.Join(dir, "design.md"), []byte("old"), 0o644)
+
+	o, err := NewOutput(dir, false)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got := o.Ignored(); len(got) != len(bad) {
+		t.Errorf("ignored %q, want %q", got, bad)
+	}
+	o.Add("report.md", writeString("new"))
+	if err := o.Commit(Manifest{Tool: "coilwright"}); err != nil {
+		t.Fatalf("commit over a tampered manifest: %v", err)
+	}
+	if b, err := os.ReadFile(filepath.Join(parent, "keep.txt")); err != nil || string(b) != "keep" {
+		t.Errorf("a file outside the folder was touched: %v", err)
+	}
+	if got := listDir(t, dir); len(got) != 2 || got[1] != "report.md" {
+		t.Errorf("folder holds %v, want the manifest and report.md", got)
+	}
+}

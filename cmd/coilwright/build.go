@@ -127,6 +127,10 @@ func runBuild(w io.Writer, path string, o buildOptions) error {
 	}
 	if o.stderr != nil {
 		defer interruptOnSignal(out, o.stderr)()
+		if ig := out.Ignored(); len(ig) > 0 {
+			fmt.Fprintf(o.stderr, "coilwright: %s: ignored %d entries of the previous manifest that are not output names (%s)\n",
+				dir, len(ig), clipList(ig))
+		}
 	}
 	ctx := &buildContext{spec: l, out: out, created: created}
 	for _, s := range buildSteps() {
