@@ -288,11 +288,7 @@ func ParseCalibration(data []byte) (Calibration, error) {
 	var c Calibration
 	dec := toml.NewDecoder(bytes.NewReader(data)).DisallowUnknownFields()
 	if err := dec.Decode(&c); err != nil {
-		var sm *toml.StrictMissingError
-		if errors.As(err, &sm) {
-			return Calibration{}, fmt.Errorf("calibration: %s", sm.String())
-		}
-		return Calibration{}, fmt.Errorf("calibration: %w", err)
+		return Calibration{}, calibrationDecodeError(err)
 	}
 	if err := c.validate(); err != nil {
 		return Calibration{}, err

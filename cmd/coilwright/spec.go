@@ -5,8 +5,6 @@ import (
 	"encoding/hex"
 	"errors"
 	"fmt"
-	"io/fs"
-	"os"
 
 	"coilwright/parts"
 	"coilwright/templates"
@@ -40,8 +38,8 @@ func loadSpec(path, demo string) (*loadedSpec, error) {
 		}
 		l.Name, l.Bytes = "demo:"+demo, b
 	default:
-		b, err := os.ReadFile(path)
-		if errors.Is(err, fs.ErrNotExist) {
+		b, err := readInputFile(path)
+		if errors.Is(err, errNotFound) {
 			return nil, inputError{path, errors.New("no such file; write one with `coilwright new > spec.toml`")}
 		}
 		if err != nil {
