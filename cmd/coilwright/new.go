@@ -68,7 +68,7 @@ func runNew(w, stderr io.Writer, o newOptions, sized bool) error {
 		_, err := w.Write(templates.Reference)
 		return err
 	}
-	if o.frequencyMHz < parts.MinFrequencyMHz || o.frequencyMHz > parts.MaxFrequencyMHz {
+	if !(o.frequencyMHz >= parts.MinFrequencyMHz && o.frequencyMHz <= parts.MaxFrequencyMHz) { // NaN fails too
 		return usageError{fmt.Errorf("--frequency-mhz %g is outside %g–%g MHz", o.frequencyMHz, parts.MinFrequencyMHz, parts.MaxFrequencyMHz)}
 	}
 	if o.shape != "cylindrical" && o.shape != "conical" {
