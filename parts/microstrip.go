@@ -86,7 +86,7 @@ func StripWidthRatio(z, tn float64) (float64, error) {
 	if zl, zh := imp(minStripRatio), imp(maxStripRatio); z > zl || z < zh || math.IsNaN(z) {
 		return 0, fmt.Errorf("strip impedance %.4g Ω is outside the reachable range %.4g–%.4g Ω", z, zh, zl)
 	}
-	for hi-lo > ratioRelTol {
+	for steps := 0; hi-lo > ratioRelTol && steps < bracketMaxSteps; steps++ {
 		mid := (lo + hi) / 2
 		if imp(math.Exp(mid)) > z {
 			lo = mid
