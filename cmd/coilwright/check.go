@@ -48,6 +48,9 @@ func runCheck(w io.Writer, path string, o checkOptions) error {
 	if err != nil {
 		return err
 	}
+	if err := planBuild(l); err != nil {
+		return inputError{l.Name, err}
+	}
 	r := l.Design.Report()
 	if o.json {
 		enc := json.NewEncoder(w)
