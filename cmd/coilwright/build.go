@@ -146,7 +146,7 @@ func runBuild(w io.Writer, path string, o buildOptions) error {
 			return fmt.Errorf("%s: %w", s.name, err)
 		}
 	}
-	m := cam.Manifest{Tool: "coilwright", Version: Version, Spec: l.Name, SpecSHA256: l.SHA256()}
+	m := cam.Manifest{Tool: "coilwright", Version: Version, Spec: l.BaseName(), SpecSHA256: l.SHA256()}
 	files := out.Files()
 	if err := out.Commit(m); err != nil {
 		return err

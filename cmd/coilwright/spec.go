@@ -5,6 +5,8 @@ import (
 	"encoding/hex"
 	"errors"
 	"fmt"
+	"path/filepath"
+	"strings"
 
 	"coilwright/parts"
 	"coilwright/templates"
@@ -22,6 +24,16 @@ type loadedSpec struct {
 func (l *loadedSpec) SHA256() string {
 	h := sha256.Sum256(l.Bytes)
 	return hex.EncodeToString(h[:])
+}
+
+// BaseName returns the spec's file name without its folder, or
+// "demo:NAME", as the manifest records it: the same file gives the same
+// manifest however its path was typed.
+func (l *loadedSpec) BaseName() string {
+	if strings.HasPrefix(l.Name, "demo:") {
+		return l.Name
+	}
+	return filepath.Base(l.Name)
 }
 
 // loadSpec reads and validates a spec from path, or the named embedded demo
