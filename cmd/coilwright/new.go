@@ -5,7 +5,9 @@ import (
 	"fmt"
 	"io"
 	"math"
+	"strings"
 	"text/template"
+	"unicode"
 
 	"github.com/spf13/cobra"
 
@@ -70,6 +72,9 @@ func runNew(w, stderr io.Writer, o newOptions, sized bool) error {
 	}
 	if !(o.frequencyMHz >= parts.MinFrequencyMHz && o.frequencyMHz <= parts.MaxFrequencyMHz) { // NaN fails too
 		return usageError{fmt.Errorf("--frequency-mhz %g is outside %g–%g MHz", o.frequencyMHz, parts.MinFrequencyMHz, parts.MaxFrequencyMHz)}
+	}
+	if strings.IndexFunc(o.kit, unicode.IsControl) >= 0 {
+		return usageError{fmt.Errorf("--kit %s: holds a control character; give printable text", clipQuote(o.kit))}
 	}
 	if o.shape != "cylindrical" && o.shape != "conical" {
 		return usageError{fmt.Errorf(`--shape %q: use "cylindrical" or "conical"`, o.shape)}
