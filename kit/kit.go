@@ -5,6 +5,8 @@ import (
 	"encoding/hex"
 	"fmt"
 	"io"
+	"path/filepath"
+	"strings"
 	"time"
 
 	"coilwright/cam/pdf"
@@ -25,6 +27,16 @@ type Source struct {
 func (s Source) SHA256() string {
 	h := sha256.Sum256(s.Bytes)
 	return hex.EncodeToString(h[:])
+}
+
+// BaseName returns the spec's file name without its folder, or
+// "demo:NAME", as the manifest records it: the same file gives the same
+// manifest however its path was typed.
+func (s Source) BaseName() string {
+	if strings.HasPrefix(s.Name, "demo:") {
+		return s.Name
+	}
+	return filepath.Base(s.Name)
 }
 
 // Options are what a build records besides the spec. The zero value
@@ -101,6 +113,9 @@ func Steps() []Step {
 		{"winding former", (*Kit).writeFormer},
 	}
 }
+
+// Write adds the step's files to s.
+func (st Step) Write(k *Kit, s Sink) error { return st.write(k, s) }
 
 // Write adds every output file to s, step by step, calling progress (when
 // not nil) with each step's name as it starts. An error names its step.
