@@ -8,7 +8,6 @@ package parts
 
 import (
 	"fmt"
-	"strings"
 
 	"coilwright/parts/spec"
 )
@@ -145,7 +144,7 @@ func designRows(d *Design, cl *CutList) []SheetRow {
 		{"Coil height", fmt.Sprintf("%s from the first turn to the top (%s to the top of the wire)", mm(d.AxialLength), mm(d.Coil.Z0+d.AxialLength+s.Wire.DiameterMM/2))},
 		{"Wire", fmt.Sprintf("%s, Ø%s mm; winding %s, blank %s", s.Wire.Material, num(s.Wire.DiameterMM), mm(cl.Wire.ArcMM), mm(cl.Wire.LengthMM))},
 		{"Reflector", fmt.Sprintf("%s, %s across, %s mm thick", s.Reflector.Shape, mm(s.Reflector.SizeMM(d.Wavelength)), num(s.Reflector.ThicknessMM))},
-		{"Support rod", fmt.Sprintf("%s, Ø%s mm × %s", cl.Dowel.Material, num(cl.Dowel.DiameterMM), mm(cl.Dowel.LengthMM))},
+		{"Support rod", fmt.Sprintf("%s × %s", sectionWords(cl.Dowel), mm(cl.Dowel.LengthMM))},
 		{"Feed cable", fmt.Sprintf("%s, %s to the reflector", cl.Coax.Cable.Name, mm(cl.Coax.FinishedMM))},
 		{"Gain (estimate)", fmt.Sprintf("%.1f dBic, %s", d.Estimates.Gain.Value, d.Estimates.Gain.Formula)},
 		{"Half-power beamwidth (estimate)", fmt.Sprintf("%.0f°", d.Estimates.HPBW.Value)},
@@ -174,7 +173,7 @@ func tools(s *spec.Spec) []string {
 func materials(s *spec.Spec, cl *CutList) []SheetRow {
 	rows := []SheetRow{
 		{"Wire blank", fmt.Sprintf("%s, Ø%s mm, %s", cl.Wire.Material, num(cl.Wire.DiameterMM), mm(cl.Wire.LengthMM))},
-		{"Support rod", fmt.Sprintf("%s, Ø%s mm, %s", cl.Dowel.Material, num(cl.Dowel.DiameterMM), mm(cl.Dowel.LengthMM))},
+		{"Support rod", fmt.Sprintf("%s, %s", sectionWords(cl.Dowel), mm(cl.Dowel.LengthMM))},
 		{"Feed cable", fmt.Sprintf("%s, cut %s", cl.Coax.Cable.Name, mm(cl.Coax.CutMM))},
 		{"Heat-shrink", fmt.Sprintf("2:1 sleeve Ø%s mm (shrinks to Ø%s mm), %s", num(cl.Sleeve.SuppliedMM), num(cl.Sleeve.RecoveredMM), mm(cl.Sleeve.LengthMM))},
 		{"Reflector", fmt.Sprintf("%s sheet, %s mm thick, cut from the template", s.Reflector.Shape, num(s.Reflector.ThicknessMM))},
@@ -272,14 +271,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 	if w.FeedLeadMM < 2*w.DiameterMM {
 		lead = fmt.Sprintf("The wire's start sits only %s above the coax's dielectric, too little to bend a lead: leave the start straight; the centre conductor is soldered to its side in step 11.", mm(w.FeedLeadMM))
 	}
-	rodHole := ""
-	screw := "Lower the rod through the open top of the coil and epoxy its foot to the reflector's centre."
-	for _, h := range cl.Hardware {
-		if strings.HasPrefix(h.Item, "M3") {
-			rodHole = " Drill a 3.2 mm hole at the centre cross for the rod's screw."
-			screw = fmt.Sprintf("Drill a 2.5 mm pilot hole 8 mm deep in the centre of the rod's foot. Lower the rod through the open top of the coil onto the reflector's centre hole and fix it from behind with the %s.", h.Item)
-		}
-	}
+	rodHole, screw := rodMountSteps(cl)
 	wireNotes := ""
 	for _, c := range d.Wire.Material.Cautions {
 		wireNotes += " This wire: " + c.Text() + "."

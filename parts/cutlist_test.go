@@ -107,10 +107,16 @@ func TestDowelFitsSmallestTurn(t *testing.T) {
 			if cl.Dowel.DiameterMM > room+1e-6 {
 				t.Errorf("rod %.1f mm does not pass %.3f mm inside with clearance", cl.Dowel.DiameterMM, inner)
 			}
-			for _, next := range DowelDiametersMM() {
-				if next > cl.Dowel.DiameterMM && next <= room {
-					t.Errorf("a %.1f mm rod fits too; chose %.1f mm", next, cl.Dowel.DiameterMM)
+			// The thinnest stocked size that carries the coil: no thinner
+			// stock size is both stiff enough and fits.
+			stiff := math.Max(DowelDiametersMM()[0], cl.Dowel.LengthMM/MaxRodSlenderness)
+			for _, thinner := range DowelDiametersMM() {
+				if thinner < cl.Dowel.DiameterMM && thinner >= stiff {
+					t.Errorf("a %.1f mm rod carries the coil too; chose %.1f mm", thinner, cl.Dowel.DiameterMM)
 				}
+			}
+			if cl.Dowel.DiameterMM < stiff && !cl.Dowel.Rod.Slender {
+				t.Errorf("rod %.1f mm thinner than %.1f mm without the slender flag", cl.Dowel.DiameterMM, stiff)
 			}
 			top := d.Coil.Z0 + d.AxialLength + d.Spec.Wire.DiameterMM/2
 			if cl.Dowel.LengthMM < top {
