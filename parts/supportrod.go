@@ -78,10 +78,10 @@ func LookupRodMaterial(id string) (RodMaterial, error) {
 // (DOMAIN §9): an upper-bound style estimate, not a published formula; the
 // field is weakest on the axis, so the true shift is smaller.
 type RodLoading struct {
-	FillRatio      float64 // F, 0–1
-	Permittivity   float64 // εr of the rod
-	EffectivePerm  float64 // εeff
-	ShiftFraction  float64 // estimated relative lowering of the design frequency
+	FillRatio       float64 // F, 0–1
+	Permittivity    float64 // εr of the rod
+	EffectivePerm   float64 // εeff
+	ShiftFraction   float64 // estimated relative lowering of the design frequency
 	HelixDiameterMM float64 // D used, the smallest centreline diameter, mm
 }
 
