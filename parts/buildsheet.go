@@ -230,9 +230,9 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 	// feed end) and its stop notch at the end; the flange is at the feed end
 	// unless the coil widens away from the feed, when the former is printed
 	// the other way up.
-	startEnd := TrimPerEndMM + w.LockTailMM + w.FeedLeadMM
-	marks := fmt.Sprintf("Mark the blank at %s from one end (mark A: the start of the winding; the end before it is the lock end, which goes into the former's lock hole and is later cut down to the feed lead) and again %s further on (mark B: the end of the winding, at the stop notch). The %s beyond mark B is trim.",
-		mm(startEnd), mm(w.ArcMM), mm(TrimPerEndMM))
+	marks := fmt.Sprintf("Mark the blank at %s from one end (mark A: the start of the winding; the end before it is the lock end, which goes into the former's lock hole and is later cut down to the feed lead) and at %s from the same end, %s further on: the length of the former's groove from the lock hole to the stop notch (mark B: the end of the winding, at the stop notch). The %s beyond mark B is trim.",
+		mm(w.MarkAMM), mm(w.MarkBMM), mm(w.ArcMM), mm(TrimPerEndMM))
+	unwind := (d.Former.Turns - d.Coil.Turns) * 360
 	lockAt, windTo := "at the flange end of the former, the coil's feed end", "towards the free end of the former"
 	if d.Former.EndRadius > d.Former.StartRadius {
 		lockAt, windTo = "at the free end of the former, away from the flange: this coil widens away from its feed, so the former is printed feed end up", "towards the flange"
@@ -288,13 +288,13 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 		}},
 		{Title: "Wind under tension", Text: []string{
 			"Lay the wire into the groove turn by turn, pulling it tight with steady tension so it seats at the bottom of the groove all the way round. Do not let it ride up on the groove wall.",
-			fmt.Sprintf("Wind all %s turns %s until mark B reaches the stop notch at the end of the groove.", num(d.Coil.Turns), windTo),
+			fmt.Sprintf("Wind the %.2f turns of the groove %s until mark B reaches the stop notch at its end.", d.Former.Turns, windTo),
 		}},
 		{Title: "Hold and overbend", Text: []string{
 			"Hold the wire at mark B for about ten seconds, then press every turn once more into its groove with a thumb, a little tighter than it lies, to set the bend.",
 		}},
 		{Title: "Release", Text: []string{
-			"Let go of the end at mark B slowly and let the coil open up on the former: it springs out to its relaxed size. Free the lock end and twist the coil off along the groove.",
+			fmt.Sprintf("Let go of the end at mark B slowly and let the coil open up on the former: it springs out to its relaxed size and, keeping its length, unwinds by about %.0f° to %s turns. Free the lock end and twist the coil off along the groove.", unwind, num(d.Coil.Turns)),
 		}},
 		{Title: "Measure each turn against the inspection table", Text: []string{
 			"Measure every turn across its middle, over the outside of the wire, and write the reading in the inspection table at the end of this sheet.",

@@ -80,11 +80,14 @@ type CutList struct {
 }
 
 // WireBlank is the straight wire cut for one coil: LengthMM = ArcMM +
-// LockTailMM + FeedLeadMM + TrimMM.
+// LockTailMM + FeedLeadMM + TrimMM. Marks A and B bound the winding: A at
+// the mouth of the former's lock hole, B at its stop notch.
 type WireBlank struct {
 	Material   string
 	DiameterMM float64
-	ArcMM      float64 // centreline arc length of the winding (design.json wire_length_mm)
+	ArcMM      float64 // the former's groove from lock hole to stop notch, the winding's length (= design.json wire_length_mm, the wire keeping its length on release)
+	MarkAMM    float64 // mark A from the lock end: trim, lock tail and feed lead
+	MarkBMM    float64 // mark B from the lock end: MarkAMM + ArcMM
 	LockTailMM float64 // locked in the former's lock hole at the start of the groove (the feed end)
 	FeedLeadMM float64 // drop from the wire centre at the start to the top of the dielectric stub
 	TrimMM     float64 // squared off both ends after release
@@ -180,10 +183,12 @@ func NewCutList(d *Design) (*CutList, error) {
 	cl.Coax = cx
 
 	// Wire blank.
-	w := WireBlank{Material: s.Wire.Material, DiameterMM: wd, ArcMM: d.WireLength,
+	w := WireBlank{Material: s.Wire.Material, DiameterMM: wd, ArcMM: d.Former.Length(),
 		LockTailMM: math.Max(MinLockTailMM, LockTailWires*wd),
 		FeedLeadMM: drop, TrimMM: 2 * TrimPerEndMM}
 	w.LengthMM = w.ArcMM + w.LockTailMM + w.FeedLeadMM + w.TrimMM
+	w.MarkAMM = TrimPerEndMM + w.LockTailMM + w.FeedLeadMM
+	w.MarkBMM = w.MarkAMM + w.ArcMM
 	cl.Wire = w
 
 	dw, err := dowelCut(d)
