@@ -93,3 +93,76 @@ func TestWireLengthMatchesGroove(t *testing.T) {
 		}
 	})
 }
+
+// lockHoleDepth measures, on the former's solid, how far the wire-lock hole
+// reaches inward from the wire centreline at the start of the groove: the
+// first point, in 0.01 mm steps along the radius, inside the solid (a
+// negative distance).
+func lockHoleDepth(t *testing.T, k *Kit) float64 {
+	t.Helper()
+	f, err := k.Former.Former()
+	if err != nil {
+		t.Fatal(err)
+	}
+	c := f.Centreline(0)
+	r := math.Hypot(c.X, c.Y)
+	in := c.Scale(-1 / r)
+	in.Z = 0
+	const step = 0.01
+	for s := step; s < r; s += step {
+		if f.Solid.Eval(c.Add(in.Scale(s))) < 0 {
+			return s - step
+		}
+	}
+	return r
+}
+
+func TestLockHoleTakesTheTail(t *testing.T) {
+	// A 10–15 mm lock tail against a 3 mm (5.8 GHz) or 5 mm (2.4 GHz)
+	// hole is the failure this guards. The hole, measured on the former
+	// from the wire centreline, must take the whole lock end.
+	for _, demo := range []string{"demo-5g8-cone.toml", "demo-2g4-cylinder.toml"} {
+		t.Run(demo, func(t *testing.T) {
+			k := demoKit(t, demo, Options{})
+			depth := lockHoleDepth(t, k)
+			tail := k.cutList.Wire.LockTailMM
+			t.Logf("hole %.2f mm from the wire centre, lock end %.2f mm", depth, tail)
+			if depth < tail {
+				t.Errorf("hole %.2f mm deep, lock end %.2f mm", depth, tail)
+			}
+		})
+	}
+	t.Run("random specs", func(t *testing.T) {
+		rng := rand.New(rand.NewPCG(11, 2026))
+		checked := 0
+		for i := 0; i < 300 && checked < 30; i++ {
+			s, err := spec.ParseSpec([]byte(randomSpecText(rng)))
+			if err != nil {
+				continue
+			}
+			d, err := parts.NewDesign(s)
+			if err != nil {
+				continue
+			}
+			pl, err := planFormer(d)
+			if err != nil {
+				continue
+			}
+			cl, err := parts.NewCutList(d)
+			if err != nil {
+				t.Fatal(err)
+			}
+			cl.FitLockTail(pl.LockHoleMM)
+			if len(cl.Warnings) > 0 && cl.Warnings[len(cl.Warnings)-1].Code == "lock-hole-short" {
+				continue // warned: the feed lead is longer than the hole
+			}
+			checked++
+			if depth := lockHoleDepth(t, &Kit{Design: d, Former: pl}); depth < cl.Wire.LockTailMM {
+				t.Errorf("hole %.2f mm deep, lock end %.2f mm", depth, cl.Wire.LockTailMM)
+			}
+		}
+		if checked < 15 {
+			t.Errorf("only %d random specs checked", checked)
+		}
+	})
+}

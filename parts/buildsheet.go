@@ -283,7 +283,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 			marks,
 		}, Cautions: pick(all, HazardEyes)},
 		{Title: "Lock its end in the former", Text: []string{
-			"Push the lock end into the lock hole at the start of the groove, " + lockAt + ", until mark A sits at the mouth of the hole.",
+			fmt.Sprintf("Bend the lock end at a right angle at mark A, so that its %s stands straight out from the blank. Push it into the lock hole at the start of the groove, %s, until the bend at mark A sits at the mouth of the hole and the blank lies along the groove.", mm(w.LockTailMM), lockAt),
 			"Check the hand mark on the former: this coil is " + d.Coil.Hand.String() + ", " + handWords(d.Coil.Hand) + ".",
 		}},
 		{Title: "Wind under tension", Text: []string{

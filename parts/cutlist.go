@@ -152,6 +152,25 @@ type HardwareItem struct {
 	Note  string
 }
 
+// FitLockTail sets the lock end, the wire beyond mark A that is bent at a
+// right angle and pushed into the former's lock hole, to the hole's depth
+// holeMM below the groove bottom, or to the feed lead if that is longer
+// (with a warning), and works out the blank and marks again: the lock end
+// is later cut down to the feed lead, so it needs no trim of its own.
+func (cl *CutList) FitLockTail(holeMM float64) {
+	w := &cl.Wire
+	w.LockTailMM = holeMM
+	if w.FeedLeadMM > holeMM {
+		w.LockTailMM = w.FeedLeadMM
+		cl.Warnings = append(cl.Warnings, Warning{Code: "lock-hole-short",
+			Message: fmt.Sprintf("the former's lock hole is %.1f mm deep but the feed lead is cut %.1f mm from the lock end: deepen former.lock_hole_depth_mm or use a thinner drive", holeMM, w.FeedLeadMM)})
+	}
+	w.TrimMM = TrimPerEndMM
+	w.LengthMM = w.LockTailMM + w.ArcMM + w.TrimMM
+	w.MarkAMM = w.LockTailMM
+	w.MarkBMM = w.MarkAMM + w.ArcMM
+}
+
 // NewCutList works out the cut list of one kit from a design.
 func NewCutList(d *Design) (*CutList, error) {
 	s := d.Spec
