@@ -394,7 +394,7 @@ func (cl *CutList) Rows() []CutRow {
 	w, dw, cx, sl := cl.Wire, cl.Dowel, cl.Coax, cl.Sleeve
 	rows := []CutRow{
 		{Item: "wire blank", Material: w.Material, Size: fmt.Sprintf("Ø%s mm", num(w.DiameterMM)), Count: 1, LengthMM: w.LengthMM,
-			Note: fmt.Sprintf("winding %.1f + lock tail %.1f + feed lead %.1f + trim %.1f mm", w.ArcMM, w.LockTailMM, w.FeedLeadMM, w.TrimMM)},
+			Note: blankNote(w)},
 		{Item: "support rod", Material: dw.Material, Size: rodSize(dw), Count: 1, LengthMM: dw.LengthMM,
 			Note: rodNote(dw)},
 		{Item: "feed cable", Material: cx.Cable.Name, Size: fmt.Sprintf("Ø%s mm", num(cx.Cable.Outer)), Count: 1, LengthMM: cx.CutMM,
@@ -408,6 +408,15 @@ func (cl *CutList) Rows() []CutRow {
 		rows = append(rows, CutRow{Item: "hardware", Material: h.Item, Count: h.Count, Note: h.Note})
 	}
 	return rows
+}
+
+// blankNote sums the wire blank: with the lock end fitted to the former's
+// hole (FitLockTail) the feed lead is cut from the lock end.
+func blankNote(w WireBlank) string {
+	if math.Abs(w.LengthMM-(w.LockTailMM+w.ArcMM+w.TrimMM)) < 1e-9 {
+		return fmt.Sprintf("lock end %.1f (bent into the lock hole, later cut to the %.1f mm feed lead) + winding %.1f + trim %.1f mm", w.LockTailMM, w.FeedLeadMM, w.ArcMM, w.TrimMM)
+	}
+	return fmt.Sprintf("winding %.1f + lock tail %.1f + feed lead %.1f + trim %.1f mm", w.ArcMM, w.LockTailMM, w.FeedLeadMM, w.TrimMM)
 }
 
 func coaxNote(cx CoaxCut) string {
