@@ -79,6 +79,7 @@ func New(src Source, opt Options) (*Kit, error) {
 	if k.cutList, err = parts.NewCutList(d); err != nil {
 		return nil, err
 	}
+	k.cutList.FitLockTail(k.Former.LockHoleMM)
 	if src.Spec.Quantity > 1 {
 		if k.batch, err = newBatchPlan(d, k.cutList, k.parts); err != nil {
 			return nil, err

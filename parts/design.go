@@ -53,7 +53,7 @@ type Turn struct {
 type EIRPFigure struct {
 	TxPowerDBm   float64
 	FeederLossDB float64
-	GainDBi      float64
+	GainDBic     float64
 	EIRPDBm      float64
 	EIRPmW       float64
 }
@@ -103,7 +103,7 @@ func NewDesign(s *spec.Spec) (*Design, error) {
 	if s.RF.TxPowerDBm != nil {
 		g := d.Estimates.Gain.Value
 		e := EIRP(*s.RF.TxPowerDBm, s.RF.FeederLossDB, g)
-		d.EIRP = &EIRPFigure{TxPowerDBm: *s.RF.TxPowerDBm, FeederLossDB: s.RF.FeederLossDB, GainDBi: g, EIRPDBm: e, EIRPmW: DBmToMilliwatt(e)}
+		d.EIRP = &EIRPFigure{TxPowerDBm: *s.RF.TxPowerDBm, FeederLossDB: s.RF.FeederLossDB, GainDBic: g, EIRPDBm: e, EIRPmW: DBmToMilliwatt(e)}
 	}
 	d.Warnings = d.warnings(cl)
 	if d.Wire, err = newWireDesign(s); err != nil {
