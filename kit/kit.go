@@ -112,6 +112,8 @@ func Steps() []Step {
 		{"cut list and build sheet", (*Kit).writeSheet},
 		{"cut patterns", (*Kit).writePatterns},
 		{"winding former", (*Kit).writeFormer},
+		{"plots", (*Kit).writePlots},
+		{"report page", (*Kit).writeHTML},
 	}
 }
 
@@ -121,6 +123,8 @@ func (st Step) Write(k *Kit, s Sink) error { return st.write(k, s) }
 // Write adds every output file to s, step by step, calling progress (when
 // not nil) with each step's name as it starts. An error names its step.
 func (k *Kit) Write(s Sink, progress func(step string)) error {
+	// The report page lists and embeds what the steps before it wrote.
+	s = &recorder{next: s}
 	for _, st := range Steps() {
 		if progress != nil {
 			progress(st.Name)
