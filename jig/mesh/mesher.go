@@ -7,7 +7,9 @@ package mesh
 //     A block whose centre lies farther from the surface than its half
 //     diagonal cannot hold a sign change (the distance is 1-Lipschitz) and is
 //     skipped; so is each of its eight sub-blocks of 4³ cells by the same
-//     test, and the rest are sampled at every grid point. Blocks are handed to
+//     test, and so is each region of 2³ cells in the rest by the value at
+//     its centre, a grid point; the points the remaining regions use are
+//     sampled. Blocks are handed to
 //     all cores through an atomic counter and each writes only its own slot
 //     of a pre-indexed result slice.
 //  2. In each cell with corners of both signs (a zero value counts as
