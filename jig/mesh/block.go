@@ -53,8 +53,9 @@ type blockWorker struct {
 	g    *grid
 	s    sdf.SDF3
 	vals []float64
-	done []bool  // whether vals holds the point's value
-	vert []int32 // local vertex per block edge slot, −1 when unset
+	done []bool      // whether vals holds the point's value
+	vert []int32     // local vertex per block edge slot, −1 when unset
+	norm []geom.Vec3 // unit normal per local vertex, zero until needed
 	p    *patch
 }
 
@@ -135,6 +136,7 @@ func (w *blockWorker) run(i int) *patch {
 		w.vert[j] = -1
 	}
 	w.p = &patch{}
+	w.norm = w.norm[:0]
 	for z := range blockCells {
 		for y := range blockCells {
 			for x := range blockCells {
@@ -355,6 +357,6 @@ func (w *blockWorker) vertex(i0, j0, k0, x, y, z, e int, v *[8]float64) int32 {
 	w.vert[slot] = idx
 	w.p.keys = append(w.p.keys, g.edgeKey(gi, gj, gk, a))
 	w.p.pos = append(w.p.pos, pa.Add(d.Scale(t)))
-	w.p.norm = append(w.p.norm, geom.Vec3{})
+	w.norm = append(w.norm, geom.Vec3{})
 	return idx
 }
