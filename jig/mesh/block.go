@@ -5,6 +5,7 @@ package mesh
 
 import (
 	"math"
+	"slices"
 
 	"coilwright/cam/geom"
 	"coilwright/jig/sdf"
@@ -135,7 +136,12 @@ func (w *blockWorker) run(i int) *patch {
 	for j := range w.vert {
 		w.vert[j] = -1
 	}
-	w.p = &patch{}
+	// The patch is built in the worker's scratch and copied out at its
+	// exact size, so blocks waiting to be merged hold no spare capacity.
+	if w.p == nil {
+		w.p = &patch{}
+	}
+	w.p.keys, w.p.pos, w.p.tris = w.p.keys[:0], w.p.pos[:0], w.p.tris[:0]
 	w.norm = w.norm[:0]
 	for z := range blockCells {
 		for y := range blockCells {
@@ -149,7 +155,7 @@ func (w *blockWorker) run(i int) *patch {
 	if len(w.p.tris) == 0 {
 		return nil
 	}
-	return w.p
+	return &patch{keys: slices.Clone(w.p.keys), pos: slices.Clone(w.p.pos), tris: slices.Clone(w.p.tris)}
 }
 
 // regionCells is the edge of a culling region in cells (its centre is then a
