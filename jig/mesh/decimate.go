@@ -375,7 +375,7 @@ func (d *decimator) cost(r, k uint32) (float64, bool) {
 	}
 	p := d.pos[k]
 	e := d.pos[r].Sub(p)
-	return math.Max(d.q[r].eval(p)+d.q[k].eval(p), 0) + lengthWeight*e.Dot(e), true
+	return max(d.q[r].eval(p)+d.q[k].eval(p), 0) + lengthWeight*e.Dot(e), true
 }
 
 // option is a vertex r may be moved onto and the cost of that move.
@@ -476,7 +476,10 @@ func (d *worker) nextEpoch() uint32 {
 func (d *decimator) liveFaces(v uint32) []int32 {
 	fs := d.vfaces[v]
 	n := 0
-	for _, f := range fs {
+	for n < len(fs) && !d.dead[fs[n]] {
+		n++ // nothing to move before the first dead face
+	}
+	for _, f := range fs[n:] {
 		if !d.dead[f] {
 			fs[n] = f
 			n++
