@@ -1,6 +1,7 @@
 package field
 
 import (
+	"fmt"
 	"math"
 
 	"coilwright/cam/geom"
@@ -210,4 +211,19 @@ func (c *chain) coil(co parts.Coil, phi0, a float64, link bool) {
 		}
 		c.add(name, co.Point(phi0+span*float64(j)/float64(n)), a)
 	}
+}
+
+// Assumptions returns what the model leaves out or simplifies, one
+// sentence each, for every report of its results.
+func (st *Structure) Assumptions() []string {
+	out := []string{
+		"Thin-wire moment method (reduced kernel, triangle basis, delta-gap source at the lead's base on the reflector).",
+		"No dielectrics: the former, any support rod and the coax's jacket are left out; they lower the frequency of best match and gain.",
+		"No current on the outside of the coax and no connector: a real feed without a choke or balun can differ.",
+		"The matching strip is a round wire of equivalent radius w/4 along its centreline (Butler 1982); strips as wide as their height above the plate are only roughly modelled.",
+	}
+	if st.Reflector == IdealGround {
+		return append(out, "Reflector: an ideal infinite ground plane (image theory): no back lobe and no edge effects.")
+	}
+	return append(out, fmt.Sprintf("Reflector: the plate as a wire grid of %.2f mm spacing with equal-area wire radius (Ludwig 1987); holes and corner radii ignored.", st.PlateSpacing))
 }
