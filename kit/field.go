@@ -1,9 +1,7 @@
 package kit
 
 import (
-	"crypto/sha256"
 	"encoding/csv"
-	"encoding/json"
 	"fmt"
 	"io"
 	"strconv"
@@ -20,27 +18,29 @@ func solveField(d *parts.Design) (*parts.Design, error) {
 	if !d.Spec.Solver.On() {
 		return d, nil
 	}
-	key, err := json.Marshal(d.Spec)
+	opt := field.OptionsFromSpec(d.Spec)
+	st, err := field.Build(d, opt)
 	if err != nil {
 		return nil, err
 	}
-	sum := sha256.Sum256(key)
-	if r := fieldMemo.get(sum); r != nil {
+	key := st.Key(opt)
+	if r := fieldMemo.get(key); r != nil {
 		return d.WithField(r), nil
 	}
-	r, err := field.Sweep(d, field.OptionsFromSpec(d.Spec))
+	r, err := st.Sweep(opt)
 	if err != nil {
 		return nil, err
 	}
-	fieldMemo.put(sum, r)
+	fieldMemo.put(key, r)
 	return d.WithField(r), nil
 }
 
-// fieldMemo keeps the last few field solutions of this process by the
-// SHA-256 of the spec's fields (everything the solution depends on), so a
-// process that builds the same design again (check then build, tests)
-// does not solve it again. The solution is a pure function of those
-// fields, so the output is the same either way.
+// fieldMemo keeps the last few field solutions of this process by
+// field.Structure.Key (a digest of everything a solution depends on), so a
+// process that builds the same antenna again (check then build, tests,
+// specs differing only in cutting or former keys) does not solve it
+// again. The solution is a pure function of that key, so the output is the
+// same either way.
 var fieldMemo = &memo{}
 
 // memoSize is how many solutions fieldMemo keeps.
