@@ -31,6 +31,12 @@ type Report struct {
 	Reflector               *ReflectorReport `json:"reflector,omitempty"`
 	Wedge                   *WedgeReport     `json:"wedge,omitempty"`
 	Warnings                []Warning        `json:"warnings"`
+	// QuotedGainDBic is the gain the report leads with (the field
+	// solution's realised gain in dBic when it ran, else the textbook
+	// estimate) and QuotedGainSource says which.
+	QuotedGainDBic    float64        `json:"quoted_gain_dbic"`
+	QuotedGainSource string         `json:"quoted_gain_source"`
+	Field            *FieldSolution `json:"field,omitempty"`
 }
 
 // TurnReport is one row of the per-turn table in the report.
@@ -127,5 +133,7 @@ func (d *Design) Report() Report {
 		f := d.EIRP
 		r.EIRP = &EIRPReport{TxPowerDBm: f.TxPowerDBm, FeederLossDB: f.FeederLossDB, GainDBic: f.GainDBic, EIRPDBm: f.EIRPDBm, EIRPmW: f.EIRPmW, Caution: EIRPCaution}
 	}
+	r.QuotedGainDBic, r.QuotedGainSource = d.QuotedGain()
+	r.Field = d.Field
 	return r
 }

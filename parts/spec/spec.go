@@ -34,6 +34,7 @@ type Spec struct {
 	Wedge     WedgeSpec     `toml:"wedge"`
 	Cutting   CuttingSpec   `toml:"cutting"`
 	Former    FormerSpec    `toml:"former"`
+	Solver    SolverSpec    `toml:"solver"`
 
 	pos positions // where each key was written; empty for a Spec built in code
 }
@@ -112,6 +113,7 @@ func (s *Spec) Validate() error {
 	s.Wedge.validate(c, s)
 	s.Cutting.validate(c, s)
 	s.Former.validate(c, s)
+	s.Solver.validate(c, s)
 	if len(c.errs) == 0 {
 		s.Cutting.validateFit(c, s)
 	}
