@@ -56,7 +56,7 @@ func (st *Structure) Sweep(opt Options) (*Result, error) {
 			patternPoint(&pts[i], sols[i], rhcp, back)
 		}
 	})
-	if err := checkFinite(pts, d.Spec.FrequencyMHz); err != nil {
+	if err := checkFinite(pts); err != nil {
 		return nil, st.specError(err)
 	}
 	r.Points, r.Centre = pts[:len(freqs)], pts[len(freqs)]
@@ -76,7 +76,7 @@ func (st *Structure) Sweep(opt Options) (*Result, error) {
 }
 
 // checkFinite refuses a point with a NaN or infinite figure.
-func checkFinite(pts []Point, _ float64) error {
+func checkFinite(pts []Point) error {
 	for _, p := range pts {
 		for _, v := range []float64{p.ResistanceOhm, p.ReactanceOhm, p.GammaMag, p.AxisRHCPDBic, p.AxisLHCPDBic, p.Efficiency,
 			p.PeakRHCPDBic, p.PeakLHCPDBic, p.RealisedDBic, p.HPBWDeg[0], p.HPBWDeg[1], p.FrontToBackDB} {
