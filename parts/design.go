@@ -28,6 +28,9 @@ type Design struct {
 	Wire WireDesign
 	// Patterns is the reflector plate and the matching wedge.
 	Patterns *Patterns
+	// InspectionBasis explains the per-turn inspection tolerances when a
+	// tolerance analysis derived them; empty for the fixed rule.
+	InspectionBasis string
 }
 
 // Turn is one row of the per-turn table, evaluated at the turn's middle

@@ -31,6 +31,8 @@ type Report struct {
 	Reflector               *ReflectorReport `json:"reflector,omitempty"`
 	Wedge                   *WedgeReport     `json:"wedge,omitempty"`
 	Warnings                []Warning        `json:"warnings"`
+	// Tolerance is the batch tolerance analysis; nil when it did not run.
+	Tolerance *ToleranceReport `json:"tolerance,omitempty"`
 }
 
 // TurnReport is one row of the per-turn table in the report.

@@ -55,15 +55,17 @@ type ToleranceFigures struct {
 
 // ToleranceDistribution summarises one figure over the buildable kits.
 type ToleranceDistribution struct {
-	Name string  `json:"name"`
-	Unit string  `json:"unit"`
-	Mean float64 `json:"mean"`
-	SD   float64 `json:"sd"`
-	P5   float64 `json:"p5"`
-	P50  float64 `json:"p50"`
-	P95  float64 `json:"p95"`
-	Min  float64 `json:"min"`
-	Max  float64 `json:"max"`
+	Name string `json:"name"`
+	Unit string `json:"unit"`
+	// Nominal is the nominal design's value.
+	Nominal float64 `json:"nominal"`
+	Mean    float64 `json:"mean"`
+	SD      float64 `json:"sd"`
+	P5      float64 `json:"p5"`
+	P50     float64 `json:"p50"`
+	P95     float64 `json:"p95"`
+	Min     float64 `json:"min"`
+	Max     float64 `json:"max"`
 	// Values are the kits' values in sample order (buildable kits only),
 	// for histograms.
 	Values []float64 `json:"-"`

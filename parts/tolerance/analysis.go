@@ -85,11 +85,11 @@ func Run(d *parts.Design, ev Evaluator, opt Options) (*parts.ToleranceReport, er
 		}
 	}
 	rep.Share = float64(met) / float64(n)
-	rep.Figures = distributions(kits)
+	rep.Figures = distributions(kits, nominal.fig)
 	if rep.Sensitivities, err = sensitivities(d, ev, band, ins, nominal.fig); err != nil {
 		return nil, err
 	}
-	rep.Inspection = inspection(d, kits, rep.Sensitivities, ins, d.Spec.Tolerance.InspectionShare)
+	rep.Inspection = inspection(d, kits, rep.Sensitivities, d.Spec.Tolerance.InspectionShare)
 	return rep, nil
 }
 
@@ -174,7 +174,7 @@ func parallelFor(n int, f func(i int)) {
 }
 
 // distributions summarises the buildable kits' figures.
-func distributions(kits []parts.ToleranceKit) []parts.ToleranceDistribution {
+func distributions(kits []parts.ToleranceKit, nominal parts.ToleranceFigures) []parts.ToleranceDistribution {
 	type fig struct {
 		name, unit string
 		get        func(parts.ToleranceFigures) float64
@@ -196,6 +196,7 @@ func distributions(kits []parts.ToleranceKit) []parts.ToleranceDistribution {
 			}
 		}
 		out[i] = summarise(f.name, f.unit, v)
+		out[i].Nominal = f.get(nominal)
 	}
 	return out
 }

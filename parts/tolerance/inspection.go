@@ -20,13 +20,16 @@ const (
 	weightSpan       = 3.0
 	minAcceptedShare = 0.05
 	minAccepted      = 10
+	// bandRoundMM is what the band is rounded down to: the build sheet
+	// prints hundredths.
+	bandRoundMM = 0.01
 )
 
 // inspection derives the ± band on each turn's released diameter within
 // which the share of accepted simulated kits meeting the target is at
 // least share: the widest such band, or the band with the best share when
 // none reaches it.
-func inspection(d *parts.Design, kits []parts.ToleranceKit, sens []parts.ToleranceSensitivity, ins []input, share float64) parts.ToleranceInspection {
+func inspection(d *parts.Design, kits []parts.ToleranceKit, sens []parts.ToleranceSensitivity, share float64) parts.ToleranceInspection {
 	n := len(d.Turns)
 	w := bandWeights(n, sens)
 	out := parts.ToleranceInspection{Share: share, ToleranceMM: make([]float64, n)}
@@ -68,7 +71,7 @@ func inspection(d *parts.Design, kits []parts.ToleranceKit, sens []parts.Toleran
 	}
 	out.Reached, out.Achieved, out.Accepted = found, math.Max(bestShare, 0), bestAcc
 	for i := range out.ToleranceMM {
-		out.ToleranceMM[i] = best * w[i]
+		out.ToleranceMM[i] = math.Max(bandRoundMM, math.Floor(best*w[i]/bandRoundMM)*bandRoundMM)
 	}
 	out.Note = inspectionNote(out, d)
 	return out
