@@ -1,0 +1,175 @@
+package field
+
+import (
+	"math"
+	"math/cmplx"
+
+	"coilwright/parts/em"
+)
+
+// Caps that keep every figure finite (and JSON-encodable): a perfect match
+// has an infinite return loss, a linear field an infinite axial ratio.
+const (
+	MaxVSWR         = 999.0
+	MaxReturnLossDB = 99.0
+	MaxAxialRatioDB = 60.0
+	// MinGainDBic stands for a null (zero gain).
+	MinGainDBic = -99.0
+)
+
+// Point is the field solution at one frequency.
+type Point struct {
+	FrequencyMHz float64    `json:"frequency_mhz"`
+	Impedance    complex128 `json:"-"`
+	// ResistanceOhm and ReactanceOhm are Z_in at the feed.
+	ResistanceOhm float64 `json:"resistance_ohm"`
+	ReactanceOhm  float64 `json:"reactance_ohm"`
+	// Reflection is Γ against the feed cable's impedance.
+	Reflection   complex128 `json:"-"`
+	GammaMag     float64    `json:"gamma_mag"`
+	VSWR         float64    `json:"vswr"`
+	ReturnLossDB float64    `json:"return_loss_db"`
+	// AxisRHCPDBic and AxisLHCPDBic are the circular gains along +z.
+	AxisRHCPDBic float64 `json:"axis_rhcp_dbic"`
+	AxisLHCPDBic float64 `json:"axis_lhcp_dbic"`
+	// AxialRatioDB is the axial ratio along +z.
+	AxialRatioDB float64 `json:"axial_ratio_db"`
+	// Efficiency is the radiation efficiency (conductor loss), 0..1.
+	Efficiency float64 `json:"efficiency"`
+	// The rest are zero with Options.AxisOnly.
+	// PeakRHCPDBic and PeakLHCPDBic are each component's greatest gain;
+	// PeakThetaDeg is the angle from the axis of the co-polar peak.
+	PeakRHCPDBic float64 `json:"peak_rhcp_dbic"`
+	PeakLHCPDBic float64 `json:"peak_lhcp_dbic"`
+	PeakThetaDeg float64 `json:"peak_theta_deg"`
+	// RealisedDBic is the co-polar peak gain times (1 − |Γ|²): what a
+	// matched receiver on the cable sees.
+	RealisedDBic float64 `json:"realised_dbic"`
+	// HPBWDeg is the co-polar half-power beamwidth in the planes φ = 0 and
+	// φ = 90°; 0 where the gain does not fall to half within the cut.
+	HPBWDeg [2]float64 `json:"hpbw_deg"`
+	// FrontToBackDB is the total gain along +z over that along −z (plate
+	// model); 0 over the ideal ground, which has no back.
+	FrontToBackDB float64 `json:"front_to_back_db"`
+}
+
+// AxisCoPolarDBic returns the on-axis gain of the coil's own hand (RHCP
+// when rhcp is set).
+func (p Point) AxisCoPolarDBic(rhcp bool) float64 {
+	if rhcp {
+		return p.AxisRHCPDBic
+	}
+	return p.AxisLHCPDBic
+}
+
+// dBic returns 10·log10(g), MinGainDBic for a null.
+func dBic(g float64) float64 {
+	if !(g > 0) {
+		return MinGainDBic
+	}
+	return math.Max(MinGainDBic, em.DB(g))
+}
+
+// axialRatioDB returns 20·log10 AR, capped at MaxAxialRatioDB.
+func axialRatioDB(f em.FarField) float64 {
+	ar := f.AxialRatio()
+	if math.IsInf(ar, 0) || math.IsNaN(ar) {
+		return MaxAxialRatioDB
+	}
+	return math.Min(MaxAxialRatioDB, 20*math.Log10(ar))
+}
+
+// networkPoint fills the network and on-axis figures from a solution.
+func networkPoint(s *em.Solution, z0 float64) Point {
+	g := em.Reflection(s.Impedance, complex(z0, 0))
+	p := Point{
+		FrequencyMHz: s.Frequency / 1e6, Impedance: s.Impedance,
+		ResistanceOhm: real(s.Impedance), ReactanceOhm: imag(s.Impedance),
+		Reflection: g, GammaMag: cmplx.Abs(g),
+		VSWR:         math.Min(MaxVSWR, em.VSWR(g)),
+		ReturnLossDB: math.Min(MaxReturnLossDB, em.ReturnLoss(g)),
+		AxisRHCPDBic: dBic(s.Gain(em.Direction{}, em.RightHand)),
+		AxisLHCPDBic: dBic(s.Gain(em.Direction{}, em.LeftHand)),
+		AxialRatioDB: axialRatioDB(s.Field(em.Direction{})),
+		Efficiency:   s.Efficiency(),
+	}
+	return p
+}
+
+// patternPoint adds the pattern figures: peaks, realised gain,
+// beamwidths and front-to-back ratio.
+func patternPoint(p *Point, s *em.Solution, rhcp, back bool) {
+	co, cross := em.RightHand, em.LeftHand
+	if !rhcp {
+		co, cross = cross, co
+	}
+	dCo, gCo := peak(s, co, back)
+	_, gCross := peak(s, cross, back)
+	if rhcp {
+		p.PeakRHCPDBic, p.PeakLHCPDBic = dBic(gCo), dBic(gCross)
+	} else {
+		p.PeakRHCPDBic, p.PeakLHCPDBic = dBic(gCross), dBic(gCo)
+	}
+	p.PeakThetaDeg = dCo.Theta * 180 / math.Pi
+	p.RealisedDBic = dBic(gCo * em.Mismatch(p.Reflection))
+	for i, phi := range []float64{0, math.Pi / 2} {
+		if w, ok := s.Beamwidth(co, phi); ok {
+			p.HPBWDeg[i] = w * 180 / math.Pi
+		}
+	}
+	if back {
+		front := s.Gain(em.Direction{}, em.Total)
+		rear := s.Gain(em.Direction{Theta: math.Pi}, em.Total)
+		switch {
+		case rear > 0:
+			p.FrontToBackDB = em.DB(front / rear)
+		default:
+			p.FrontToBackDB = MaxReturnLossDB
+		}
+	}
+}
+
+// Peak-search grid. Common practice (no published source): a coarse grid
+// finds the main lobe of an antenna of a few wavelengths; the compass
+// search then refines it to peakTol.
+const (
+	peakGridTheta = 5 * math.Pi / 180
+	peakGridPhi   = 15 * math.Pi / 180
+	peakTol       = 0.05 * math.Pi / 180
+)
+
+// peak returns the direction and linear gain of component c's maximum over
+// the upper hemisphere (the whole sphere when back is set): a coarse grid,
+// then a shrinking compass search.
+func peak(s *em.Solution, c em.Component, back bool) (em.Direction, float64) {
+	thMax := math.Pi / 2
+	if back {
+		thMax = math.Pi
+	}
+	nt := int(math.Round(thMax/peakGridTheta)) + 1
+	np := int(math.Round(2 * math.Pi / peakGridPhi))
+	best, g := em.Direction{}, s.Gain(em.Direction{}, c)
+	for i := 1; i < nt; i++ {
+		for j := range np {
+			d := em.Direction{Theta: float64(i) * peakGridTheta, Phi: float64(j) * peakGridPhi}
+			if v := s.Gain(d, c); v > g {
+				best, g = d, v
+			}
+		}
+	}
+	for h := peakGridTheta / 2; h > peakTol; h /= 2 {
+		for moved := true; moved; {
+			moved = false
+			for _, n := range []em.Direction{{Theta: best.Theta + h, Phi: best.Phi}, {Theta: best.Theta - h, Phi: best.Phi},
+				{Theta: best.Theta, Phi: best.Phi + 3*h}, {Theta: best.Theta, Phi: best.Phi - 3*h}} {
+				if n.Theta < 0 || n.Theta > thMax {
+					continue
+				}
+				if v := s.Gain(n, c); v > g {
+					best, g, moved = n, v, true
+				}
+			}
+		}
+	}
+	return best, g
+}
