@@ -1,13 +1,17 @@
 package kit
 
 import (
+	"crypto/sha256"
 	"encoding/csv"
+	"encoding/json"
 	"fmt"
 	"io"
 	"strconv"
+	"sync"
 
 	"coilwright/cam/plot"
 	"coilwright/parts"
+	"coilwright/parts/field"
 	"coilwright/parts/tolerance"
 )
 
@@ -20,19 +24,74 @@ func (k *Kit) analyseTolerance() error {
 	if !d.Spec.Tolerance.On() {
 		return nil
 	}
-	ev, err := tolerance.NewSolverEvaluator(d)
+	key, err := json.Marshal(struct {
+		Spec        any
+		Calibration any
+	}{d.Spec, d.Wire.Calibration})
 	if err != nil {
 		return err
 	}
-	rep, err := tolerance.Run(d, ev, tolerance.Options{})
-	if err != nil {
-		return err
+	sum := sha256.Sum256(key)
+	rep := toleranceMemo.get(sum)
+	if rep == nil {
+		full, err := field.Sweep(d, field.Options{AxisOnly: true})
+		if err != nil {
+			return err
+		}
+		ev, err := tolerance.NewSolverEvaluator(d, full)
+		if err != nil {
+			return err
+		}
+		if rep, err = tolerance.Run(d, ev, tolerance.Options{}); err != nil {
+			return err
+		}
+		toleranceMemo.put(sum, rep)
 	}
-	if err := d.UseInspectionTolerances(rep.Inspection.ToleranceMM, rep.Inspection.Note); err != nil {
-		return err
+	if rep.Inspection.Reached {
+		if err := d.UseInspectionTolerances(rep.Inspection.ToleranceMM, rep.Inspection.Note); err != nil {
+			return err
+		}
 	}
 	k.tolerance = rep
 	return nil
+}
+
+// toleranceMemo keeps the last few tolerance analyses of this process by
+// the SHA-256 of the spec's fields and the wire's calibration (everything
+// the analysis depends on: it is a pure function of them, seed included), so a process that builds the
+// same design again (check then build, tests) does not run it again.
+// The reports are shared and never modified.
+var toleranceMemo = &reportMemo{}
+
+// reportMemoSize is how many analyses toleranceMemo keeps.
+const reportMemoSize = 8
+
+// reportMemo is a small most-recent cache of tolerance reports.
+type reportMemo struct {
+	mu   sync.Mutex
+	keys [][32]byte
+	vals []*parts.ToleranceReport
+}
+
+func (m *reportMemo) get(k [32]byte) *parts.ToleranceReport {
+	m.mu.Lock()
+	defer m.mu.Unlock()
+	for i, key := range m.keys {
+		if key == k {
+			return m.vals[i]
+		}
+	}
+	return nil
+}
+
+func (m *reportMemo) put(k [32]byte, v *parts.ToleranceReport) {
+	m.mu.Lock()
+	defer m.mu.Unlock()
+	if len(m.keys) == reportMemoSize {
+		m.keys, m.vals = m.keys[1:], m.vals[1:]
+	}
+	m.keys = append(m.keys, k)
+	m.vals = append(m.vals, v)
 }
 
 // Tolerance returns the batch tolerance analysis, or nil when it did not
@@ -57,6 +116,11 @@ func (k *Kit) writeTolerance(s Sink) error {
 	return nil
 }
 
+// histogramBins guides the histograms' bar count: a batch of a hundred
+// or more shows its shape at about fifteen bars. Common practice (no
+// published source).
+const histogramBins = 15
+
 // toleranceChart is one histogram and its file name.
 type toleranceChart struct {
 	file string
@@ -75,6 +139,9 @@ func toleranceHistograms(rep *parts.ToleranceReport) []toleranceChart {
 		var markers []plot.Marker
 		switch f.Name {
 		case "matched-band centre":
+			if !rep.Nominal.MatchInside {
+				continue // on the sweep's edge: only a bound
+			}
 			file = "tolerance-centre.svg"
 			markers = []plot.Marker{{Value: rep.BandLowMHz, Label: "band low"}, {Value: rep.BandHighMHz, Label: "band high"}, {Value: f.Nominal, Label: "nominal"}}
 		case "worst VSWR in band":
@@ -87,7 +154,7 @@ func toleranceHistograms(rep *parts.ToleranceReport) []toleranceChart {
 			continue
 		}
 		out = append(out, toleranceChart{file: file, hist: plot.Histogram{
-			Title: "Batch spread: " + f.Name, Note: note, Label: f.Name, Unit: f.Unit, Values: f.Values, Markers: markers}})
+			Title: "Batch spread: " + f.Name, Note: note, Label: f.Name, Unit: f.Unit, Values: f.Values, Markers: markers, Bins: histogramBins}})
 	}
 	return out
 }

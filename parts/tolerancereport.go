@@ -25,7 +25,7 @@ type ToleranceReport struct {
 	// Inputs lists the spreads simulated, with their sources.
 	Inputs []ToleranceInput `json:"inputs"`
 	// Sensitivities ranks the inputs by their share of the variance of the
-	// matched-band centre, largest first.
+	// worst VSWR in the band, largest first.
 	Sensitivities []ToleranceSensitivity `json:"sensitivities"`
 	// Inspection is the derived ± tolerance per turn.
 	Inspection ToleranceInspection `json:"inspection"`
@@ -40,6 +40,9 @@ type ToleranceReport struct {
 type ToleranceFigures struct {
 	// CentreMHz is the frequency of best match (lowest VSWR).
 	CentreMHz float64 `json:"centre_mhz"`
+	// MatchInside reports whether the best match lies inside the swept
+	// range; on its edge, CentreMHz is only a bound.
+	MatchInside bool `json:"match_inside_sweep"`
 	// MinVSWR is the VSWR there.
 	MinVSWR float64 `json:"min_vswr"`
 	// EdgeVSWR is the larger VSWR of the two band edges.
@@ -89,11 +92,16 @@ type ToleranceSensitivity struct {
 	// CentreMHz is the move of the matched-band centre for a +3σ change
 	// (the input's ± limit); negative when it tunes down.
 	CentreMHz float64 `json:"centre_shift_mhz"`
-	// EdgeVSWR is the change of the band-edge VSWR for a +3σ change.
-	EdgeVSWR float64 `json:"edge_vswr_change"`
-	// Share is the input's share of the linearised variance of the
-	// matched-band centre, 0–1.
+	// EdgeVSWR and WorstVSWR are the changes of the band-edge VSWR and
+	// of the worst VSWR in the band for a +3σ change.
+	EdgeVSWR  float64 `json:"edge_vswr_change"`
+	WorstVSWR float64 `json:"worst_vswr_change"`
+	// Share is the input's share of the linearised variance of the worst
+	// VSWR in the band (what decides a kit's pass), 0–1; the ranking.
 	Share float64 `json:"variance_share"`
+	// CentreShare is its share of the linearised variance of the
+	// matched-band centre, 0–1.
+	CentreShare float64 `json:"centre_variance_share"`
 	// Words says it for a builder.
 	Words string `json:"words"`
 }
@@ -132,6 +140,11 @@ type ToleranceModel struct {
 	CentreErrorMHz float64 `json:"centre_error_mhz"`
 	EdgeVSWRError  float64 `json:"edge_vswr_error"`
 	GainErrorDB    float64 `json:"gain_error_db"`
+	// The Corrected errors are the same after the loop model is
+	// corrected to the full model: interpolation only.
+	CorrectedCentreErrorMHz float64 `json:"corrected_centre_error_mhz"`
+	CorrectedEdgeVSWRError  float64 `json:"corrected_edge_vswr_error"`
+	CorrectedGainErrorDB    float64 `json:"corrected_gain_error_db"`
 }
 
 // ToleranceKit is one simulated kit: its sampled inputs (in the order of

@@ -9,7 +9,7 @@ import "fmt"
 // its output within ±3σ of its limits). Keys left out take the defaults
 // below; the yield scatter and the wire tolerance depend on the wire.
 type ToleranceSpec struct {
-	Enabled *bool  `toml:"enabled"` // run the analysis, default true
+	Enabled *bool  `toml:"enabled"` // run the analysis; default true for a batch (quantity > 1)
 	Samples int    `toml:"samples"` // kits to simulate, default DefaultToleranceSamples
 	Seed    *int64 `toml:"seed"`    // random seed, default 1
 
@@ -61,8 +61,9 @@ func DefaultWireDiameterTolMM(d float64) float64 {
 	return wireTolFraction * d
 }
 
-// On reports whether the analysis runs.
-func (t *ToleranceSpec) On() bool { return t.Enabled == nil || *t.Enabled }
+// On reports whether the analysis runs (filled by validation: by default
+// for a batch, quantity > 1).
+func (t *ToleranceSpec) On() bool { return t.Enabled != nil && *t.Enabled }
 
 // SeedValue returns the random seed.
 func (t *ToleranceSpec) SeedValue() uint64 {
@@ -81,7 +82,13 @@ func (t *ToleranceSpec) WireTolMM(d float64) float64 {
 	return DefaultWireDiameterTolMM(d)
 }
 
-func (t *ToleranceSpec) validate(c *checker, _ *Spec) {
+func (t *ToleranceSpec) validate(c *checker, s *Spec) {
+	if t.Enabled == nil {
+		// A batch asks how many of its kits will meet the band; for one
+		// kit the analysis (a few seconds) runs on request.
+		on := s.Quantity > 1
+		t.Enabled = &on
+	}
 	if !c.has("tolerance.samples") && t.Samples == 0 {
 		t.Samples = DefaultToleranceSamples
 	}

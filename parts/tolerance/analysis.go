@@ -85,12 +85,20 @@ func Run(d *parts.Design, ev Evaluator, opt Options) (*parts.ToleranceReport, er
 		}
 	}
 	rep.Share = float64(met) / float64(n)
+	if m, ok := ev.(describer); ok {
+		rep.Model = m.Describe(band)
+	}
 	rep.Figures = distributions(kits, nominal.fig)
 	if rep.Sensitivities, err = sensitivities(d, ev, band, ins, nominal.fig); err != nil {
 		return nil, err
 	}
 	rep.Inspection = inspection(d, kits, rep.Sensitivities, d.Spec.Tolerance.InspectionShare)
 	return rep, nil
+}
+
+// describer is an Evaluator that can state its model and accuracy.
+type describer interface {
+	Describe(b Band) parts.ToleranceModel
 }
 
 // bandOf returns the band and target a kit must meet: the spec's band

@@ -8,9 +8,8 @@ import (
 )
 
 // Inspection band search. The band on turn i is k·w_i mm, with weights w_i
-// inversely proportional to the turn's effect on the matched-band centre
-// (normalised to an RMS of 1) so every turn's band moves the centre
-// alike, held within a factor weightSpan of each other so an insensitive
+// inversely proportional to the turn's effect on the worst VSWR in the
+// band (normalised to an RMS of 1) so every turn's band moves it alike, held within a factor weightSpan of each other so an insensitive
 // turn does not get an unusable band; k steps by bandStepMM. A band must
 // accept at least minAcceptedShare of the simulated kits (and minAccepted
 // kits) for its pass share to count. Common practice (no published
@@ -92,14 +91,14 @@ func accepted(d *parts.Design, kit parts.ToleranceKit, w []float64, k float64) b
 }
 
 // bandWeights returns each turn's band weight from the turn-diameter
-// sensitivities: inverse to the effect, RMS-normalised, held within
+// effects on the worst VSWR: inverse to the effect, RMS-normalised, held within
 // weightSpan of the smallest. Turns without a sensitivity weigh 1.
 func bandWeights(n int, sens []parts.ToleranceSensitivity) []float64 {
 	g := make([]float64, n)
 	for _, s := range sens {
 		var t int
 		if _, err := fmt.Sscanf(s.Name, "turn %d diameter", &t); err == nil && t >= 1 && t <= n {
-			g[t-1] = math.Abs(s.CentreMHz)
+			g[t-1] = math.Abs(s.WorstVSWR)
 		}
 	}
 	w := make([]float64, n)
@@ -136,7 +135,7 @@ func bandWeights(n int, sens []parts.ToleranceSensitivity) []float64 {
 // inspectionNote explains the derived tolerances for the build sheet.
 func inspectionNote(in parts.ToleranceInspection, d *parts.Design) string {
 	if !in.Reached {
-		return fmt.Sprintf("The tolerances come from the batch tolerance analysis. No diameter band reaches %.0f %% of inspected kits meeting the VSWR target: the other spreads (strip, height, spacing) limit it; these bands give the best share, %.0f %%.",
+		return fmt.Sprintf("No diameter band makes %.0f %% of the inspected kits meet the VSWR target (the best reaches %.0f %%): the nominal design or the other spreads (strip, height, spacing) limit the batch, so the turns keep the fixed tolerance.",
 			100*in.Share, 100*in.Achieved)
 	}
 	return fmt.Sprintf("The tolerances come from the batch tolerance analysis: of the simulated kits whose turns all lie within them, %.0f %% meet the VSWR target across the band (at least %.0f %% asked).",

@@ -86,6 +86,7 @@ func figures(r Response, b Band) (parts.ToleranceFigures, error) {
 			out.WorstVSWR = math.Max(out.WorstVSWR, v)
 		}
 	}
+	out.MatchInside = out.CentreMHz > lo && out.CentreMHz < hi
 	out.EdgeVSWR = math.Max(vswr(b.LowMHz), vswr(b.HighMHz))
 	out.WorstVSWR = math.Max(out.WorstVSWR, out.EdgeVSWR)
 	out.GainDBic = linear(r.FrequencyMHz, r.GainDBic, b.CentreMHz)

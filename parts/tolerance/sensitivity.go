@@ -11,10 +11,10 @@ import (
 
 // sensitivities returns the inputs' effects by one-at-a-time central
 // differences of ±1σ about the nominal design, scaled to the ± limit
-// (3σ), ranked by their share of the linearised variance of the
-// matched-band centre (the squared 1σ effect over the sum of them: the
-// first-order variance of a sum of independent effects). Inputs with no
-// spread are left out.
+// (3σ), ranked by their share of the linearised variance of the worst
+// VSWR in the band, which decides whether a kit passes (the squared 1σ
+// effect over the sum of them: the first-order variance of a sum of
+// independent effects). Inputs with no spread are left out.
 func sensitivities(d *parts.Design, ev Evaluator, band Band, ins []input, nominal parts.ToleranceFigures) ([]parts.ToleranceSensitivity, error) {
 	var idx []int
 	for i, in := range ins {
@@ -47,35 +47,48 @@ func sensitivities(d *parts.Design, ev Evaluator, band Band, ins []input, nomina
 		}
 	}
 	out := make([]parts.ToleranceSensitivity, len(idx))
-	total := 0.0
+	total, totalC := 0.0, 0.0
 	for j, i := range idx {
 		dc := (res[j].up.CentreMHz - res[j].down.CentreMHz) / 2
 		de := (res[j].up.EdgeVSWR - res[j].down.EdgeVSWR) / 2
+		dw := (res[j].up.WorstVSWR - res[j].down.WorstVSWR) / 2
 		out[j] = parts.ToleranceSensitivity{Name: ins[i].info.Name,
-			CentreMHz: limitSigmas * dc, EdgeVSWR: limitSigmas * de, Share: dc * dc}
-		total += dc * dc
+			CentreMHz: limitSigmas * dc, EdgeVSWR: limitSigmas * de, WorstVSWR: limitSigmas * dw, Share: dw * dw, CentreShare: dc * dc}
+		total += dw * dw
+		totalC += dc * dc
 	}
+	inside := nominal.MatchInside
 	for j, i := range idx {
 		if total > 0 {
 			out[j].Share /= total
 		}
-		out[j].Words = words(ins[i].info, out[j])
+		if totalC > 0 {
+			out[j].CentreShare /= totalC
+		}
+		out[j].Words = words(ins[i].info, out[j], inside)
 	}
 	slices.SortStableFunc(out, func(a, b parts.ToleranceSensitivity) int { return cmp.Compare(b.Share, a.Share) })
 	return out, nil
 }
 
 // words says an input's effect for a builder: "turn 1 diameter: +0.20 mm
-// moves the matched band 40 MHz down; band-edge VSWR +0.15".
-func words(in parts.ToleranceInput, s parts.ToleranceSensitivity) string {
-	dir := "up"
-	if s.CentreMHz < 0 {
-		dir = "down"
-	}
-	amount := fmt.Sprintf("+%.2f mm", in.Limit)
+// moves the matched band 40 MHz down and the worst VSWR in the band by
+// +0.15 (30 % of its spread)". The band's move is left out when the
+// nominal design's best match lies at the edge of the swept range, where
+// it cannot be read.
+func words(in parts.ToleranceInput, s parts.ToleranceSensitivity, centreInside bool) string {
+	amount := fmt.Sprintf("%+.2f mm", in.Limit)
 	if in.Unit == "%" {
-		amount = fmt.Sprintf("+%.0f %%", in.Limit)
+		amount = fmt.Sprintf("%+.0f %%", in.Limit)
 	}
-	return fmt.Sprintf("%s: %s moves the matched band %.0f MHz %s; band-edge VSWR %+.2f (%.0f %% of the spread of the band centre)",
-		in.Name, amount, math.Abs(s.CentreMHz), dir, s.EdgeVSWR, 100*s.Share)
+	move := ""
+	if centreInside {
+		dir := "up"
+		if s.CentreMHz < 0 {
+			dir = "down"
+		}
+		move = fmt.Sprintf(" moves the matched band %.0f MHz %s and", math.Abs(s.CentreMHz), dir)
+	}
+	return fmt.Sprintf("%s: %s%s changes the worst VSWR in the band by %+.2f (%.0f %% of its spread)",
+		in.Name, amount, move, s.WorstVSWR, 100*s.Share)
 }
