@@ -34,7 +34,7 @@ func (k *Kit) analyseTolerance() error {
 	sum := sha256.Sum256(key)
 	rep := toleranceMemo.get(sum)
 	if rep == nil {
-		full, err := field.Sweep(d, field.Options{AxisOnly: true})
+		full, err := fullSolution(d)
 		if err != nil {
 			return err
 		}
@@ -54,6 +54,18 @@ func (k *Kit) analyseTolerance() error {
 	}
 	k.tolerance = rep
 	return nil
+}
+
+// fullSolution returns the full model's solution of the nominal design
+// that the loop model is corrected to, or nil when the spec turns the
+// solver off.
+func fullSolution(d *parts.Design) (*field.Result, error) {
+	if !d.Spec.Solver.On() {
+		return nil, nil
+	}
+	opt := field.OptionsFromSpec(d.Spec)
+	opt.AxisOnly = true
+	return field.Sweep(d, opt)
 }
 
 // toleranceMemo keeps the last few tolerance analyses of this process by

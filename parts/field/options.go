@@ -133,3 +133,20 @@ func (o Options) topMHz(s *spec.Spec) float64 {
 	}
 	return top
 }
+
+// OptionsFromSpec returns the options the spec's [solver] table asks for.
+// The spec must be validated.
+func OptionsFromSpec(s *spec.Spec) Options {
+	x := &s.Solver
+	o := Options{Points: x.Points, SegmentsPerWavelength: x.SegmentsPerWavelength}
+	if x.ReflectorModel == "ideal" {
+		o.Reflector = IdealGround
+	}
+	if x.SweepLowMHz != nil {
+		o.LowMHz = *x.SweepLowMHz
+	}
+	if x.SweepHighMHz != nil {
+		o.HighMHz = *x.SweepHighMHz
+	}
+	return o
+}

@@ -99,12 +99,12 @@ func networkPoint(s *em.Solution, z0 float64) Point {
 // patternPoint adds the pattern figures: peaks, realised gain,
 // beamwidths and front-to-back ratio.
 func patternPoint(p *Point, s *em.Solution, rhcp, back bool) {
-	co, cross := em.RightHand, em.LeftHand
-	if !rhcp {
-		co, cross = cross, co
+	pat := newPattern(s, rhcp)
+	thMax := math.Pi / 2
+	if back {
+		thMax = math.Pi
 	}
-	dCo, gCo := peak(s, co, back)
-	_, gCross := peak(s, cross, back)
+	dCo, gCo, gCross := pat.peaks(thMax)
 	if rhcp {
 		p.PeakRHCPDBic, p.PeakLHCPDBic = dBic(gCo), dBic(gCross)
 	} else {
@@ -113,7 +113,7 @@ func patternPoint(p *Point, s *em.Solution, rhcp, back bool) {
 	p.PeakThetaDeg = dCo.Theta * 180 / math.Pi
 	p.RealisedDBic = dBic(gCo * em.Mismatch(p.Reflection))
 	for i, phi := range []float64{0, math.Pi / 2} {
-		if w, ok := s.Beamwidth(co, phi); ok {
+		if w, ok := pat.beamwidth(phi, thMax); ok {
 			p.HPBWDeg[i] = w * 180 / math.Pi
 		}
 	}
@@ -122,54 +122,9 @@ func patternPoint(p *Point, s *em.Solution, rhcp, back bool) {
 		rear := s.Gain(em.Direction{Theta: math.Pi}, em.Total)
 		switch {
 		case rear > 0:
-			p.FrontToBackDB = em.DB(front / rear)
+			p.FrontToBackDB = math.Min(MaxReturnLossDB, em.DB(front/rear))
 		default:
 			p.FrontToBackDB = MaxReturnLossDB
 		}
 	}
-}
-
-// Peak-search grid. Common practice (no published source): a coarse grid
-// finds the main lobe of an antenna of a few wavelengths; the compass
-// search then refines it to peakTol.
-const (
-	peakGridTheta = 5 * math.Pi / 180
-	peakGridPhi   = 15 * math.Pi / 180
-	peakTol       = 0.05 * math.Pi / 180
-)
-
-// peak returns the direction and linear gain of component c's maximum over
-// the upper hemisphere (the whole sphere when back is set): a coarse grid,
-// then a shrinking compass search.
-func peak(s *em.Solution, c em.Component, back bool) (em.Direction, float64) {
-	thMax := math.Pi / 2
-	if back {
-		thMax = math.Pi
-	}
-	nt := int(math.Round(thMax/peakGridTheta)) + 1
-	np := int(math.Round(2 * math.Pi / peakGridPhi))
-	best, g := em.Direction{}, s.Gain(em.Direction{}, c)
-	for i := 1; i < nt; i++ {
-		for j := range np {
-			d := em.Direction{Theta: float64(i) * peakGridTheta, Phi: float64(j) * peakGridPhi}
-			if v := s.Gain(d, c); v > g {
-				best, g = d, v
-			}
-		}
-	}
-	for h := peakGridTheta / 2; h > peakTol; h /= 2 {
-		for moved := true; moved; {
-			moved = false
-			for _, n := range []em.Direction{{Theta: best.Theta + h, Phi: best.Phi}, {Theta: best.Theta - h, Phi: best.Phi},
-				{Theta: best.Theta, Phi: best.Phi + 3*h}, {Theta: best.Theta, Phi: best.Phi - 3*h}} {
-				if n.Theta < 0 || n.Theta > thMax {
-					continue
-				}
-				if v := s.Gain(n, c); v > g {
-					best, g, moved = n, v, true
-				}
-			}
-		}
-	}
-	return best, g
 }

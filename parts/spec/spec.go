@@ -33,6 +33,7 @@ type Spec struct {
 	Wedge     WedgeSpec     `toml:"wedge"`
 	Cutting   CuttingSpec   `toml:"cutting"`
 	Former    FormerSpec    `toml:"former"`
+	Solver    SolverSpec    `toml:"solver"`
 	Tolerance ToleranceSpec `toml:"tolerance"`
 
 	pos positions // where each key was written; empty for a Spec built in code
@@ -106,6 +107,7 @@ func (s *Spec) Validate() error {
 	s.Wedge.validate(c, s)
 	s.Cutting.validate(c, s)
 	s.Former.validate(c, s)
+	s.Solver.validate(c, s)
 	s.Tolerance.validate(c, s)
 	if len(c.errs) == 0 {
 		s.Cutting.validateFit(c, s)
