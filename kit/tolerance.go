@@ -34,9 +34,11 @@ func (k *Kit) analyseTolerance() error {
 	sum := sha256.Sum256(key)
 	rep := toleranceMemo.get(sum)
 	if rep == nil {
-		full, err := fullSolution(d)
-		if err != nil {
-			return err
+		var full *field.Result
+		if d.Spec.Solver.On() {
+			if full, err = fullSolution(d); err != nil {
+				return err
+			}
 		}
 		ev, err := tolerance.NewSolverEvaluator(d, full)
 		if err != nil {
@@ -56,13 +58,10 @@ func (k *Kit) analyseTolerance() error {
 	return nil
 }
 
-// fullSolution returns the full model's solution of the nominal design
-// that the loop model is corrected to, or nil when the spec turns the
-// solver off.
+// fullSolution returns the full model's solution of the nominal design,
+// which the loop model is corrected to: the spec's [solver] sweep, on the
+// axis only.
 func fullSolution(d *parts.Design) (*field.Result, error) {
-	if !d.Spec.Solver.On() {
-		return nil, nil
-	}
 	opt := field.OptionsFromSpec(d.Spec)
 	opt.AxisOnly = true
 	return field.Sweep(d, opt)
