@@ -26,6 +26,7 @@ func BenchmarkBatch(b *testing.B) {
 			}
 			b.ReportAllocs()
 			var share float64
+			cpu0 := processCPUSeconds()
 			for b.Loop() {
 				rep, err := Run(d, ev, Options{Samples: c.samples})
 				if err != nil {
@@ -34,6 +35,7 @@ func BenchmarkBatch(b *testing.B) {
 				share = rep.Share
 			}
 			b.ReportMetric(100*share, "%meet")
+			b.ReportMetric((processCPUSeconds()-cpu0)/float64(b.N), "cpu-s/op")
 		})
 	}
 }
