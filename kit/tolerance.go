@@ -12,6 +12,7 @@ import (
 	"coilwright/cam/plot"
 	"coilwright/parts"
 	"coilwright/parts/field"
+	"coilwright/parts/spec"
 	"coilwright/parts/tolerance"
 )
 
@@ -24,10 +25,15 @@ func (k *Kit) analyseTolerance() error {
 	if !d.Spec.Tolerance.On() {
 		return nil
 	}
+	// The kit's name, the batch size, the transmitter and the stock rods
+	// do not change the antenna: builds that differ only there share one
+	// analysis.
+	s := *d.Spec
+	s.Kit, s.Quantity, s.RF, s.Stock = "", 0, spec.RFSpec{}, spec.StockSpec{}
 	key, err := json.Marshal(struct {
 		Spec        any
 		Calibration any
-	}{d.Spec, d.Wire.Calibration})
+	}{s, d.Wire.Calibration})
 	if err != nil {
 		return err
 	}
@@ -68,8 +74,8 @@ func fullSolution(d *parts.Design) (*field.Result, error) {
 }
 
 // toleranceMemo keeps the last few tolerance analyses of this process by
-// the SHA-256 of the spec's fields and the wire's calibration (everything
-// the analysis depends on: it is a pure function of them, seed included), so a process that builds the
+// the SHA-256 of the spec's fields that shape the antenna and the wire's
+// calibration (the analysis is a pure function of them, seed included), so a process that builds the
 // same design again (check then build, tests) does not run it again.
 // The reports are shared and never modified.
 var toleranceMemo = &reportMemo{}
