@@ -20,7 +20,13 @@ var reportFuncs = template.FuncMap{
 	"g":     func(v float64) string { return fmt.Sprintf("%g", v) },
 	"deref": func(p *float64) float64 { return *p },
 	"pct":   func(v float64) float64 { return 100 * v },
-	"inc":   func(i int) int { return i + 1 },
+	"signed": func(v float64) string {
+		if v < 0 {
+			return fmt.Sprintf("− %.1f", -v)
+		}
+		return fmt.Sprintf("+ %.1f", v)
+	},
+	"inc": func(i int) int { return i + 1 },
 }
 
 // WriteReportJSON writes the design report as indented JSON: the content

@@ -60,6 +60,9 @@ func New(src Source, opt Options) (*Kit, error) {
 	if err != nil {
 		return nil, err
 	}
+	if d, err = solveField(d); err != nil {
+		return nil, err
+	}
 	k := &Kit{Source: src, Design: d, opt: opt}
 	if k.Former, err = planFormer(d); err != nil {
 		return nil, err
@@ -106,6 +109,7 @@ func Steps() []Step {
 		{"cut list and build sheet", (*Kit).writeSheet},
 		{"cut patterns", (*Kit).writePatterns},
 		{"winding former", (*Kit).writeFormer},
+		{"field solution", (*Kit).writeField},
 		{"tolerance analysis", (*Kit).writeTolerance},
 	}
 }

@@ -11,7 +11,6 @@ import (
 
 	"coilwright/cam/plot"
 	"coilwright/parts"
-	"coilwright/parts/field"
 	"coilwright/parts/spec"
 	"coilwright/parts/tolerance"
 )
@@ -40,12 +39,9 @@ func (k *Kit) analyseTolerance() error {
 	sum := sha256.Sum256(key)
 	rep := toleranceMemo.get(sum)
 	if rep == nil {
-		var full *field.Result
-		if d.Spec.Solver.On() {
-			if full, err = fullSolution(d); err != nil {
-				return err
-			}
-		}
+		// The loop model is corrected to the field solution the pipeline
+		// already has (nil when the spec turns the solver off).
+		full := d.Field
 		ev, err := tolerance.NewSolverEvaluator(d, full)
 		if err != nil {
 			return err
@@ -62,15 +58,6 @@ func (k *Kit) analyseTolerance() error {
 	}
 	k.tolerance = rep
 	return nil
-}
-
-// fullSolution returns the full model's solution of the nominal design,
-// which the loop model is corrected to: the spec's [solver] sweep, on the
-// axis only.
-func fullSolution(d *parts.Design) (*field.Result, error) {
-	opt := field.OptionsFromSpec(d.Spec)
-	opt.AxisOnly = true
-	return field.Sweep(d, opt)
 }
 
 // toleranceMemo keeps the last few tolerance analyses of this process by

@@ -149,7 +149,7 @@ func designRows(d *Design, cl *CutList) []SheetRow {
 		{"Reflector", fmt.Sprintf("%s, %s across, %s mm thick", s.Reflector.Shape, mm(s.Reflector.SizeMM(d.Wavelength)), num(s.Reflector.ThicknessMM))},
 		{"Support rod", fmt.Sprintf("%s, Ø%s mm × %s", cl.Dowel.Material, num(cl.Dowel.DiameterMM), mm(cl.Dowel.LengthMM))},
 		{"Feed cable", fmt.Sprintf("%s, %s to the reflector", cl.Coax.Cable.Name, mm(cl.Coax.FinishedMM))},
-		{"Gain (estimate)", fmt.Sprintf("%.1f dBi, %s", d.Estimates.Gain.Value, d.Estimates.Gain.Formula)},
+		d.gainRow(),
 		{"Half-power beamwidth (estimate)", fmt.Sprintf("%.0f°", d.Estimates.HPBW.Value)},
 	}
 	if d.EIRP != nil {
@@ -191,8 +191,8 @@ func materials(s *spec.Spec, cl *CutList) []SheetRow {
 }
 
 func cautions(d *Design) []Hazard {
-	gain := d.Estimates.Gain.Value
-	rf := fmt.Sprintf("This antenna concentrates power: its estimated gain is %.1f dBi, so EIRP (dBm) = transmitter power (dBm) − feeder loss (dB) + %.1f dB.", gain, gain)
+	gain, _ := d.QuotedGain()
+	rf := fmt.Sprintf("This antenna concentrates power: its "+d.gainWord()+" gain is %.1f dBi, so EIRP (dBm) = transmitter power (dBm) − feeder loss (dB) + %.1f dB.", gain, gain)
 	if e := d.EIRP; e != nil {
 		rf += fmt.Sprintf(" With %s dBm in and %s dB loss that is %.1f dBm (%.0f mW).", num(e.TxPowerDBm), num(e.FeederLossDB), e.EIRPDBm, e.EIRPmW)
 	}

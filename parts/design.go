@@ -28,6 +28,8 @@ type Design struct {
 	Wire WireDesign
 	// Patterns is the reflector plate and the matching wedge.
 	Patterns *Patterns
+	// Field is the field solution, nil unless it ran (see WithField).
+	Field *FieldSolution
 	// InspectionBasis explains the per-turn inspection tolerances when a
 	// tolerance analysis derived them; empty for the fixed rule.
 	InspectionBasis string
@@ -189,7 +191,7 @@ func (d *Design) warnings(meanCl float64) []Warning {
 		add("reflector-size", "reflector %.2f λ across is smaller than %.1f λ: expect a strong back lobe", r, MinReflectorLambda)
 	}
 	if d.EIRP != nil {
-		add("eirp", "EIRP %.1f dBm (%.0f mW) with this antenna: check the limit that applies where you transmit and under your licence", d.EIRP.EIRPDBm, d.EIRP.EIRPmW)
+		w = append(w, eirpWarning(d.EIRP))
 	}
 	return w
 }

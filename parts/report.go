@@ -31,6 +31,12 @@ type Report struct {
 	Reflector               *ReflectorReport `json:"reflector,omitempty"`
 	Wedge                   *WedgeReport     `json:"wedge,omitempty"`
 	Warnings                []Warning        `json:"warnings"`
+	// QuotedGainDBi is the gain the report leads with (the field
+	// solution's realised gain in dBic when it ran, else the textbook
+	// estimate) and QuotedGainSource says which.
+	QuotedGainDBi    float64        `json:"quoted_gain_dbi"`
+	QuotedGainSource string         `json:"quoted_gain_source"`
+	Field            *FieldSolution `json:"field,omitempty"`
 	// Tolerance is the batch tolerance analysis; nil when it did not run.
 	Tolerance *ToleranceReport `json:"tolerance,omitempty"`
 }
@@ -129,5 +135,7 @@ func (d *Design) Report() Report {
 		f := d.EIRP
 		r.EIRP = &EIRPReport{TxPowerDBm: f.TxPowerDBm, FeederLossDB: f.FeederLossDB, GainDBi: f.GainDBi, EIRPDBm: f.EIRPDBm, EIRPmW: f.EIRPmW, Caution: EIRPCaution}
 	}
+	r.QuotedGainDBi, r.QuotedGainSource = d.QuotedGain()
+	r.Field = d.Field
 	return r
 }

@@ -81,6 +81,7 @@ func runCheck(w io.Writer, path string, o checkOptions) error {
 		fmt.Fprintf(w, "%4d  %11.2f  %5.3f  %7.2f  %10.2f  %9.2f  %13.2f  %12.2f\n", t.Index, t.DiameterMM, t.CircumferenceLambda, t.PitchAngleDeg, t.SpacingMM,
 			t.FormerDiameterMM, t.SpringbackMM, t.ToleranceMM)
 	}
+	printField(w, r.Field)
 	if len(r.Warnings) > 0 {
 		fmt.Fprintln(w, "\nwarnings:")
 		for _, wr := range r.Warnings {

@@ -1,6 +1,7 @@
 package field
 
 import (
+	"fmt"
 	"math"
 
 	"coilwright/cam/geom"
@@ -41,6 +42,10 @@ type Structure struct {
 	MaxSegment float64
 	// TopMHz is the highest frequency the mesh was sized for.
 	TopMHz float64
+	// PinRadius is the feed pin's radius in the model (mm); CablePinRadius
+	// is the cable's centre-conductor radius when the pin had to be
+	// modelled thinner than it (zero otherwise).
+	PinRadius, CablePinRadius float64
 
 	design *parts.Design
 }
@@ -75,7 +80,20 @@ func Build(d *parts.Design, opt Options) (*Structure, error) {
 	b := &chain{maxLen: maxLen, minRadii: opt.MinSegmentRadii}
 	lead := d.FeedLead()
 	b.start(lead[0])
-	b.straight(PartPin, lead[1], s.Coax.Cable().Centre/2, true)
+	// The pin is the cable's centre conductor. Where it is shorter than
+	// the kernel allows for its radius (a first turn very low over the
+	// plate, a thick cable at a high frequency) it is modelled thinner, so
+	// that its one segment stays usable; Assumptions says so.
+	pin := lead[1].Sub(lead[0]).Len()
+	st.PinRadius = s.Coax.Cable().Centre / 2
+	if !(pin > 0) {
+		return nil, &spec.SpecError{Key: "coil.first_turn_height_mm", Line: s.Line("coil.first_turn_height_mm"), Value: num(d.Coil.Z0),
+			Problem: "the feed lead has no length above the reflector in the field model", Fix: "raise the first turn"}
+	}
+	if lim := pin / KernelMinSegmentRadii; st.PinRadius > lim {
+		st.CablePinRadius, st.PinRadius = st.PinRadius, lim
+	}
+	b.straight(PartPin, lead[1], st.PinRadius, true)
 	for _, p := range lead[2:] {
 		b.straight(PartLead, p, a, false)
 	}
@@ -210,4 +228,32 @@ func (c *chain) coil(co parts.Coil, phi0, a float64, link bool) {
 		}
 		c.add(name, co.Point(phi0+span*float64(j)/float64(n)), a)
 	}
+}
+
+// Assumptions returns what the model leaves out or simplifies, one
+// sentence each, for every report of its results.
+func (st *Structure) Assumptions() []string {
+	out := []string{
+		"Thin-wire moment method (reduced kernel, triangle basis, delta-gap source at the lead's base on the reflector).",
+		"No dielectrics: the former, any support rod and the coax's jacket are left out; they lower the frequency of best match and gain.",
+		"No current on the outside of the coax and no connector: a real feed without a choke or balun can differ.",
+		"The matching strip is a round wire of equivalent radius w/4 along its centreline (Butler 1982); strips as wide as their height above the plate are only roughly modelled.",
+	}
+	if st.CablePinRadius > 0 {
+		out = append(out, fmt.Sprintf("The feed pin is modelled %.3f mm in radius, thinner than the cable's %.3f mm centre conductor: at %.2f mm it is too short for the thin-wire kernel at full size.",
+			st.PinRadius, st.CablePinRadius, st.PinLength()))
+	}
+	if st.Reflector == IdealGround {
+		return append(out, "Reflector: an ideal infinite ground plane (image theory): no back lobe and no edge effects.")
+	}
+	return append(out, fmt.Sprintf("Reflector: the plate as a wire grid of %.2f mm spacing with equal-area wire radius (Ludwig 1987); holes and corner radii ignored.", st.PlateSpacing))
+}
+
+// PinLength returns the feed pin's length in the model, mm.
+func (st *Structure) PinLength() float64 {
+	p, _ := st.Pieces(PartPin)
+	if len(p) < 2 {
+		return 0
+	}
+	return p[1].Sub(p[0]).Len()
 }

@@ -27,7 +27,7 @@ func (st *Structure) specError(err error) error {
 	case errors.As(err, &ge):
 		part := st.partOf(ge)
 		switch {
-		case ge.Kind == em.ShortSegment && (part == PartPin || part == PartLead || part == PartLink):
+		case ge.Kind == em.ShortSegment && part == PartPin:
 			return mk("coil.first_turn_height_mm", num(st.design.Coil.Z0), fmt.Sprintf("the field model cannot segment the feed %s: %v", part, ge),
 				"raise the first turn so the lead is longer, or use a thinner wire or cable")
 		case ge.Kind == em.ShortSegment && part == PartStrip:

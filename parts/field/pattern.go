@@ -78,17 +78,26 @@ func (p *pattern) peaks(thMax float64) (em.Direction, float64, float64) {
 	return dc, gc, gx
 }
 
+// refineGain is the relative gain step the compass search must beat to
+// move: along the axis every φ is the same direction, and rounding alone
+// must not walk it round the pole.
+const refineGain = 1e-9
+
+// refineSteps bounds the moves at one step size.
+const refineSteps = 200
+
 // refine climbs from d by a shrinking compass search in θ and φ.
 func refine(g func(em.Direction) float64, d em.Direction, v, thMax float64) (em.Direction, float64) {
 	for h := peakGridTheta / 2; h > peakTol; h /= 2 {
-		for moved := true; moved; {
+		for moved, k := true, 0; moved && k < refineSteps; k++ {
 			moved = false
 			for _, n := range []em.Direction{{Theta: d.Theta + h, Phi: d.Phi}, {Theta: d.Theta - h, Phi: d.Phi},
 				{Theta: d.Theta, Phi: d.Phi + 4*h}, {Theta: d.Theta, Phi: d.Phi - 4*h}} {
 				if n.Theta < 0 || n.Theta > thMax {
 					continue
 				}
-				if w := g(n); w > v {
+				if w := g(n); w > v*(1+refineGain) {
+					n.Phi = math.Mod(n.Phi, 2*math.Pi)
 					d, v, moved = n, w, true
 				}
 			}

@@ -17,51 +17,6 @@ const (
 	MinGainDBic = -99.0
 )
 
-// Point is the field solution at one frequency.
-type Point struct {
-	FrequencyMHz float64    `json:"frequency_mhz"`
-	Impedance    complex128 `json:"-"`
-	// ResistanceOhm and ReactanceOhm are Z_in at the feed.
-	ResistanceOhm float64 `json:"resistance_ohm"`
-	ReactanceOhm  float64 `json:"reactance_ohm"`
-	// Reflection is Γ against the feed cable's impedance.
-	Reflection   complex128 `json:"-"`
-	GammaMag     float64    `json:"gamma_mag"`
-	VSWR         float64    `json:"vswr"`
-	ReturnLossDB float64    `json:"return_loss_db"`
-	// AxisRHCPDBic and AxisLHCPDBic are the circular gains along +z.
-	AxisRHCPDBic float64 `json:"axis_rhcp_dbic"`
-	AxisLHCPDBic float64 `json:"axis_lhcp_dbic"`
-	// AxialRatioDB is the axial ratio along +z.
-	AxialRatioDB float64 `json:"axial_ratio_db"`
-	// Efficiency is the radiation efficiency (conductor loss), 0..1.
-	Efficiency float64 `json:"efficiency"`
-	// The rest are zero with Options.AxisOnly.
-	// PeakRHCPDBic and PeakLHCPDBic are each component's greatest gain;
-	// PeakThetaDeg is the angle from the axis of the co-polar peak.
-	PeakRHCPDBic float64 `json:"peak_rhcp_dbic"`
-	PeakLHCPDBic float64 `json:"peak_lhcp_dbic"`
-	PeakThetaDeg float64 `json:"peak_theta_deg"`
-	// RealisedDBic is the co-polar peak gain times (1 − |Γ|²): what a
-	// matched receiver on the cable sees.
-	RealisedDBic float64 `json:"realised_dbic"`
-	// HPBWDeg is the co-polar half-power beamwidth in the planes φ = 0 and
-	// φ = 90°; 0 where the gain does not fall to half within the cut.
-	HPBWDeg [2]float64 `json:"hpbw_deg"`
-	// FrontToBackDB is the total gain along +z over that along −z (plate
-	// model); 0 over the ideal ground, which has no back.
-	FrontToBackDB float64 `json:"front_to_back_db"`
-}
-
-// AxisCoPolarDBic returns the on-axis gain of the coil's own hand (RHCP
-// when rhcp is set).
-func (p Point) AxisCoPolarDBic(rhcp bool) float64 {
-	if rhcp {
-		return p.AxisRHCPDBic
-	}
-	return p.AxisLHCPDBic
-}
-
 // dBic returns 10·log10(g), MinGainDBic for a null.
 func dBic(g float64) float64 {
 	if !(g > 0) {
@@ -85,7 +40,7 @@ func networkPoint(s *em.Solution, z0 float64) Point {
 	p := Point{
 		FrequencyMHz: s.Frequency / 1e6, Impedance: s.Impedance,
 		ResistanceOhm: real(s.Impedance), ReactanceOhm: imag(s.Impedance),
-		Reflection: g, GammaMag: cmplx.Abs(g),
+		Reflection: g, GammaMag: cmplx.Abs(g), GammaRe: real(g), GammaIm: imag(g),
 		VSWR:         math.Min(MaxVSWR, em.VSWR(g)),
 		ReturnLossDB: math.Min(MaxReturnLossDB, em.ReturnLoss(g)),
 		AxisRHCPDBic: dBic(s.Gain(em.Direction{}, em.RightHand)),

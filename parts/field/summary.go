@@ -6,20 +6,6 @@ import (
 	"coilwright/parts"
 )
 
-// Range is a frequency range in MHz where the VSWR stays at or below a
-// limit. Found is false when no sweep point meets the limit; OpenLow and
-// OpenHigh say the range runs off the sweep's edge (it may extend further).
-type Range struct {
-	Limit    float64 `json:"vswr_limit"`
-	Found    bool    `json:"found"`
-	LowMHz   float64 `json:"low_mhz"`
-	HighMHz  float64 `json:"high_mhz"`
-	OpenLow  bool    `json:"open_low"`
-	OpenHigh bool    `json:"open_high"`
-	// CoversBand is true when the range holds the whole band.
-	CoversBand bool `json:"covers_band"`
-}
-
 // Matched-band limits. Common practice (no published source): VSWR 2
 // (about 11 % of the power reflected) is the usual acceptance limit, 1.5
 // a good match.
@@ -27,45 +13,6 @@ const (
 	MatchedVSWR = 2.0
 	GoodVSWR    = 1.5
 )
-
-// BandFigures is the solution interpolated at one frequency.
-type BandFigures struct {
-	FrequencyMHz  float64 `json:"frequency_mhz"`
-	ResistanceOhm float64 `json:"resistance_ohm"`
-	ReactanceOhm  float64 `json:"reactance_ohm"`
-	VSWR          float64 `json:"vswr"`
-	// AxisDBic is the co-polar gain on axis; RealisedDBic the co-polar
-	// peak gain with mismatch (zero with Options.AxisOnly).
-	AxisDBic     float64 `json:"axis_dbic"`
-	RealisedDBic float64 `json:"realised_dbic"`
-	AxialRatioDB float64 `json:"axial_ratio_db"`
-}
-
-// Summary condenses the sweep for the report and check.
-type Summary struct {
-	// BandLowMHz and BandHighMHz are the spec's band (both the centre
-	// frequency when it gives none).
-	BandLowMHz  float64 `json:"band_low_mhz"`
-	BandHighMHz float64 `json:"band_high_mhz"`
-	Matched     Range   `json:"vswr_2"`
-	Good        Range   `json:"vswr_1_5"`
-	// Low, Centre and High are the figures at the band's edges and centre.
-	Low    BandFigures `json:"band_low"`
-	Centre BandFigures `json:"band_centre"`
-	High   BandFigures `json:"band_high"`
-	// Worst is the in-band point (band edges and sweep points inside the
-	// band) with the highest VSWR.
-	Worst BandFigures `json:"worst_in_band"`
-	// Textbook figures for comparison and the solver's differences from
-	// them at the centre frequency.
-	TextbookGainDBic  float64 `json:"textbook_gain_dbic"`
-	GainDifferenceDB  float64 `json:"gain_difference_db"`
-	TextbookHPBWDeg   float64 `json:"textbook_hpbw_deg"`
-	TextbookARDB      float64 `json:"textbook_axial_ratio_db"`
-	TextbookInputOhm  float64 `json:"textbook_input_ohm"`
-	ResistanceRatio   float64 `json:"resistance_ratio"` // solver R over the textbook R
-	LargeDisagreement bool    `json:"large_disagreement"`
-}
 
 // Disagreement thresholds between the solver and the textbook estimates.
 // Common practice (no published source): the closed forms are quoted to
@@ -110,14 +57,6 @@ func summarise(r *Result, d *parts.Design) Summary {
 	}
 	sm.LargeDisagreement = math.Abs(sm.GainDifferenceDB) > GainDisagreementDB || math.Abs(sm.ResistanceRatio-1) > ResistanceDisagrees
 	return sm
-}
-
-// PeakCoPolarDBic returns the peak gain of the coil's own hand.
-func (p Point) PeakCoPolarDBic(rhcp bool) float64 {
-	if rhcp {
-		return p.PeakRHCPDBic
-	}
-	return p.PeakLHCPDBic
 }
 
 func pointFigures(p Point, rhcp bool) BandFigures {

@@ -10,40 +10,6 @@ import (
 // CutStep is the angular step of the centre-frequency pattern cuts, 2°.
 const CutStep = 2 * math.Pi / 180
 
-// CutSample is one angle of a pattern cut, gains in dBic.
-type CutSample struct {
-	ThetaDeg float64 `json:"theta_deg"` // signed angle from +z in the cut plane
-	RHCPDBic float64 `json:"rhcp_dbic"`
-	LHCPDBic float64 `json:"lhcp_dbic"`
-}
-
-// Cut is a pattern cut in the plane through the axis at azimuth PhiDeg.
-type Cut struct {
-	PhiDeg  float64     `json:"phi_deg"`
-	Samples []CutSample `json:"samples"`
-}
-
-// Result is a design's field solution across the sweep.
-type Result struct {
-	// Reflector is the reflector model used ("plate" or "ideal").
-	Reflector string `json:"reflector_model"`
-	// Unknowns is the number of basis functions (the matrix order);
-	// Segments the number of wire segments.
-	Unknowns int `json:"unknowns"`
-	Segments int `json:"segments"`
-	// CableOhm is the impedance Γ is taken against.
-	CableOhm float64 `json:"cable_ohm"`
-	// RHCP is true for a right-hand coil: the co-polar component.
-	RHCP   bool    `json:"rhcp"`
-	Points []Point `json:"points"`
-	// Centre is the solution at the spec's centre frequency.
-	Centre Point `json:"centre"`
-	// Cuts are the centre-frequency cuts at φ = 0 and φ = 90° (none with
-	// Options.AxisOnly).
-	Cuts    []Cut   `json:"cuts,omitempty"`
-	Summary Summary `json:"summary"`
-}
-
 // CableOhm is the feed cable's characteristic impedance. Every cable type
 // the spec accepts is a 50 Ω line. Source: published cable data (RG-402,
 // RG-405, RG-316 are 50 Ω types).
@@ -81,7 +47,8 @@ func (st *Structure) Sweep(opt Options) (*Result, error) {
 	}
 	rhcp := d.Coil.Hand == parts.RightHand
 	back := st.Reflector == PlateModel
-	r := &Result{Reflector: st.Reflector.String(), Unknowns: m.Unknowns(), Segments: m.Segments(), CableOhm: CableOhm, RHCP: rhcp}
+	r := &Result{Reflector: st.Reflector.String(), Unknowns: m.Unknowns(), Segments: m.Segments(), CableOhm: CableOhm, RHCP: rhcp,
+		PlateSpacingMM: st.PlateSpacing, MaxSegmentMM: st.MaxSegment, Assumptions: st.Assumptions()}
 	pts := make([]Point, len(sols))
 	parallel(len(sols), func(i int) {
 		pts[i] = networkPoint(sols[i], CableOhm)

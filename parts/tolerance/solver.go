@@ -60,6 +60,7 @@ type SolverEvaluator struct {
 	full, loop *Response
 	corr       Response
 	unknowns   int
+	fullModel  string
 }
 
 // NewSolverEvaluator builds design d's geometry for the loop model. full,
@@ -147,6 +148,7 @@ func NewSolverEvaluator(d *parts.Design, full *field.Result) (*SolverEvaluator, 
 	if full != nil {
 		f := response(append(slices.Clone(full.Points), full.Centre), rhcp)
 		e.full = &f
+		e.fullModel = full.Reflector
 		for i, fr := range loop.FrequencyMHz {
 			j := slices.Index(f.FrequencyMHz, fr)
 			if j < 0 {
@@ -199,8 +201,8 @@ func (e *SolverEvaluator) Describe(b Band) parts.ToleranceModel {
 	m.FullCentreMHz, m.FullEdgeVSWR, m.FullGainDBic = full.CentreMHz, full.EdgeVSWR, full.GainDBic
 	m.CentreErrorMHz, m.EdgeVSWRError, m.GainErrorDB = loop.CentreMHz-full.CentreMHz, loop.EdgeVSWR-full.EdgeVSWR, loop.GainDBic-full.GainDBic
 	m.CorrectedCentreErrorMHz, m.CorrectedEdgeVSWRError, m.CorrectedGainErrorDB = corrected.CentreMHz-full.CentreMHz, corrected.EdgeVSWR-full.EdgeVSWR, corrected.GainDBic-full.GainDBic
-	m.Description += fmt.Sprintf("; corrected to the full model (plate, %d frequencies) on the nominal design. Uncorrected, the loop model is off by %+.0f MHz in the best match, %+.2f in band-edge VSWR and %+.2f dB in gain; corrected, by %+.0f MHz, %+.3f and %+.3f dB (interpolation only)",
-		len(e.full.FrequencyMHz), m.CentreErrorMHz, m.EdgeVSWRError, m.GainErrorDB, m.CorrectedCentreErrorMHz, m.CorrectedEdgeVSWRError, m.CorrectedGainErrorDB)
+	m.Description += fmt.Sprintf("; corrected to the full model (%s reflector, %d frequencies) on the nominal design. Uncorrected, the loop model is off by %+.0f MHz in the best match, %+.2f in band-edge VSWR and %+.2f dB in gain; corrected, by %+.0f MHz, %+.3f and %+.3f dB (interpolation only)",
+		e.fullModel, len(e.full.FrequencyMHz), m.CentreErrorMHz, m.EdgeVSWRError, m.GainErrorDB, m.CorrectedCentreErrorMHz, m.CorrectedEdgeVSWRError, m.CorrectedGainErrorDB)
 	return m
 }
 
