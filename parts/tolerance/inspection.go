@@ -3,6 +3,8 @@ package tolerance
 import (
 	"fmt"
 	"math"
+	"slices"
+	"strconv"
 
 	"coilwright/parts"
 )
@@ -138,6 +140,11 @@ func inspectionNote(in parts.ToleranceInspection, d *parts.Design) string {
 		return fmt.Sprintf("No diameter band makes %.0f %% of the inspected kits meet the VSWR target (the best reaches %.0f %%): the nominal design or the other spreads (strip, height, spacing) limit the batch, so the turns keep the fixed tolerance.",
 			100*in.Share, 100*in.Achieved)
 	}
-	return fmt.Sprintf("The tolerances come from the batch tolerance analysis: of the simulated kits whose turns all lie within them, %.0f %% meet the VSWR target across the band (at least %.0f %% asked).",
+	note := fmt.Sprintf("The tolerances come from the batch tolerance analysis: of the simulated kits whose turns all lie within them, %.0f %% meet the VSWR target across the band (at least %.0f %% asked).",
 		100*in.Achieved, 100*in.Share)
+	if slices.Min(in.ToleranceMM) < parts.InspectionFloorMM {
+		note += fmt.Sprintf(" Some bands are finer than the ±%s mm calipers read on a springy coil: measuring diameters cannot sort these kits; hold the spreads that matter most (see the ranking) instead.",
+			strconv.FormatFloat(parts.InspectionFloorMM, 'f', -1, 64))
+	}
+	return note
 }
