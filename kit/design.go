@@ -26,6 +26,7 @@ var reportFuncs = template.FuncMap{
 		}
 		return fmt.Sprintf("+ %.1f", v)
 	},
+	"inc": func(i int) int { return i + 1 },
 }
 
 // WriteReportJSON writes the design report as indented JSON: the content

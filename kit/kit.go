@@ -60,6 +60,9 @@ type Kit struct {
 	cutList   *parts.CutList
 	batch     *batchPlan // nil for one kit
 	templates []pdf.Page // the 1:1 template pages, laid out once
+
+	// tolerance is the batch tolerance analysis; nil when it did not run.
+	tolerance *parts.ToleranceReport
 }
 
 // New works out the design for src and plans every part of the build.
@@ -88,11 +91,15 @@ func New(src Source, opt Options) (*Kit, error) {
 			return nil, err
 		}
 	}
+	if err := k.analyseTolerance(); err != nil {
+		return nil, err
+	}
 	if k.templates, err = templatePages(d, k.parts); err != nil {
 		return nil, err
 	}
 	k.Report = d.Report()
 	k.addPanels(&k.Report)
+	k.Report.Tolerance = k.tolerance
 	return k, nil
 }
 
@@ -116,6 +123,7 @@ func Steps() []Step {
 		{"cut patterns", (*Kit).writePatterns},
 		{"winding former", (*Kit).writeFormer},
 		{"field solution", (*Kit).writeField},
+		{"tolerance analysis", (*Kit).writeTolerance},
 		{"plots", (*Kit).writePlots},
 		{"report page", (*Kit).writeHTML},
 	}

@@ -105,6 +105,8 @@ func NewBuildSheet(d *Design, cl *CutList, specSHA256 string) *BuildSheet {
 	b.InspectionNote = "Measure each turn across its middle with calipers over the outside of the wire, at two places 90° apart, and write the mean in the blank column. "
 	if s.Wire.InspectionToleranceMM != nil {
 		b.InspectionNote += fmt.Sprintf("The tolerance, ±%s mm, is set in the spec.", num(*s.Wire.InspectionToleranceMM))
+	} else if d.InspectionBasis != "" {
+		b.InspectionNote += d.InspectionBasis
 	} else {
 		b.InspectionNote += fmt.Sprintf("The tolerance is ±%s %% of the turn's diameter, at least %s mm: a turn 1 %% too large tunes about 1 %% low.", num(100*InspectionFraction), num(InspectionFloorMM))
 	}

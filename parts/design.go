@@ -30,6 +30,9 @@ type Design struct {
 	Patterns *Patterns
 	// Field is the field solution, nil unless it ran (see WithField).
 	Field *FieldSolution
+	// InspectionBasis explains the per-turn inspection tolerances when a
+	// tolerance analysis derived them; empty for the fixed rule.
+	InspectionBasis string
 }
 
 // Turn is one row of the per-turn table, evaluated at the turn's middle

@@ -1,5 +1,10 @@
 package parts
 
+import (
+	"fmt"
+	"math"
+)
+
 // InspectionRow is one turn of the inspection table: what the assembler
 // measures across the released coil at the turn's middle, with calipers
 // over the outside of the wire. Lengths are mm.
@@ -21,4 +26,27 @@ func (d *Design) InspectionTable() []InspectionRow {
 			HeightMM:    t.HeightMM}
 	}
 	return rows
+}
+
+// UseInspectionTolerances replaces the fixed-rule inspection tolerance of
+// each turn with tol (mm, one per turn from the feed end), explained by
+// basis, unless the spec sets the tolerance itself. It is called once,
+// before the design is read for reports; it mutates d.
+func (d *Design) UseInspectionTolerances(tol []float64, basis string) error {
+	if len(tol) != len(d.Turns) {
+		return fmt.Errorf("inspection tolerances: %d values for %d turns", len(tol), len(d.Turns))
+	}
+	for _, v := range tol {
+		if !(v > 0) || math.IsInf(v, 0) {
+			return fmt.Errorf("inspection tolerance %g mm must be positive", v)
+		}
+	}
+	if d.Spec.Wire.InspectionToleranceMM != nil {
+		return nil
+	}
+	for i := range d.Turns {
+		d.Turns[i].ToleranceMM = tol[i]
+	}
+	d.InspectionBasis = basis
+	return nil
 }

@@ -37,6 +37,8 @@ type Report struct {
 	QuotedGainDBic    float64        `json:"quoted_gain_dbic"`
 	QuotedGainSource string         `json:"quoted_gain_source"`
 	Field            *FieldSolution `json:"field,omitempty"`
+	// Tolerance is the batch tolerance analysis; nil when it did not run.
+	Tolerance *ToleranceReport `json:"tolerance,omitempty"`
 }
 
 // TurnReport is one row of the per-turn table in the report.

@@ -35,6 +35,7 @@ type Spec struct {
 	Cutting   CuttingSpec   `toml:"cutting"`
 	Former    FormerSpec    `toml:"former"`
 	Solver    SolverSpec    `toml:"solver"`
+	Tolerance ToleranceSpec `toml:"tolerance"`
 
 	pos positions // where each key was written; empty for a Spec built in code
 }
@@ -114,6 +115,7 @@ func (s *Spec) Validate() error {
 	s.Cutting.validate(c, s)
 	s.Former.validate(c, s)
 	s.Solver.validate(c, s)
+	s.Tolerance.validate(c, s)
 	if len(c.errs) == 0 {
 		s.Cutting.validateFit(c, s)
 	}
