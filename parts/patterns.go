@@ -30,6 +30,10 @@ type Patterns struct {
 	// ReflectorLabel and WedgeLabel say how each part's files are meant to
 	// be cut; every cut file and template of the part carries its label.
 	ReflectorLabel, WedgeLabel string
+	// Plate is every hole and footprint on the reflector, the rod's foot
+	// as fitted, and the collisions between them (kit refuses a spec with
+	// any).
+	Plate PlateLayout
 	// LaserHalogen is set when laser cutting was asked for a halogenated
 	// laminate: the files still come, with a warning on each.
 	LaserHalogen bool
@@ -59,37 +63,6 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 		warns = append(warns, Warning{Code: "laser-halogenated", Message: LaserHalogenWarning})
 	}
 
-	size := rs.SizeMM(d.Wavelength)
-	in := ReflectorInput{
-		Size:       size,
-		FeedRadius: d.Coil.StartRadius,
-		Label:      s.Kit,
-		Hand:       d.Coil.Hand.String(),
-		Mounting: MountingHoles{Count: rs.MountingHoles, Diameter: rs.MountingHoleMM,
-			PitchDiameter: rs.MountingCircle(size), Angle: rs.MountingAngleDeg * math.Pi / 180},
-	}
-	if rs.Shape == "square" {
-		in.Shape, in.CornerRadius = ReflectorSquare, rs.CornerRadiusMM
-	}
-	switch rs.Connector {
-	case "sma-flange":
-		in.Feed = FeedHole{Kind: FeedSMAFlange}
-	case "sma-bulkhead":
-		in.Feed = FeedHole{Kind: FeedSMABulkhead}
-	default:
-		in.Feed = FeedHole{Kind: FeedCoax, Diameter: s.Coax.Cable().FeedHoleMM()}
-	}
-	if rs.FeedHoleMM != nil {
-		in.Feed.Diameter = *rs.FeedHoleMM
-	}
-	refl, err := NewReflector(in)
-	if err != nil {
-		// A plate too small for its feed cut-out is reported, not fatal:
-		// the rest of the design stands, and no plate files are written.
-		warns = append(warns, Warning{Code: "reflector-fit", Message: err.Error() + "; no reflector files are written"})
-	}
-	p.Reflector = refl
-
 	p.WedgeLoadOhm = d.Turns[0].InputResistanceOhm
 	w, err := NewWedge(WedgeInput{
 		Path:         d.Coil.Point,
@@ -106,6 +79,38 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 	for _, m := range w.Warnings {
 		warns = append(warns, Warning{Code: "wedge-width", Message: m})
 	}
+
+	size := rs.SizeMM(d.Wavelength)
+	feed, cable := specFeedHole(s)
+	in := ReflectorInput{
+		Size:     size,
+		Label:    s.Kit,
+		Hand:     d.Coil.Hand.String(),
+		Feed:     feed,
+		Mounting: specMounting(s, size),
+	}
+	in.FeedRadius, in.FeedAngle = feedPlacement(d.Coil)
+	if rs.Shape == "square" {
+		in.Shape, in.CornerRadius = ReflectorSquare, rs.CornerRadiusMM
+	}
+	dc, err := dowelCut(d)
+	if err != nil {
+		return nil, nil, err
+	}
+	p.Plate = newPlateLayout(in, dc, w, d.Coil, cable)
+	if dc.OverFeed {
+		warns = append(warns, Warning{Code: "rod-over-feed", Message: fmt.Sprintf(
+			"the feed hole %.2f mm from the centre leaves no room at the plate's centre for the smallest stock rod (Ø%s mm) with a fillet and %s mm clearance: no rod is placed on the reflector; support the coil from outside (foam or low-loss spacers), or use a thinner cable or a smaller feed hole",
+			in.FeedRadius, num(dowelDiametersMM[0]), num(FootprintClearMM))})
+	}
+	in.ScrewHole, in.RodFoot, in.RodFootFillet = p.Plate.ScrewHoleMM, p.Plate.RodMM, p.Plate.FootMM
+	refl, err := NewReflector(in)
+	if err != nil {
+		// A plate too small for its feed cut-out is reported, not fatal:
+		// the rest of the design stands, and no plate files are written.
+		warns = append(warns, Warning{Code: "reflector-fit", Message: err.Error() + "; no reflector files are written"})
+	}
+	p.Reflector = refl
 	return p, warns, nil
 }
 
