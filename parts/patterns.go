@@ -27,9 +27,15 @@ type Patterns struct {
 	Method string
 	// Kerf is the width in mm the tool removes.
 	Kerf float64
+	// ToolPath is set when the cut files carry the tool-centre path on
+	// a TOOLPATH layer beside the true outline.
+	ToolPath bool
 	// ReflectorLabel and WedgeLabel say how each part's files are meant to
 	// be cut; every cut file and template of the part carries its label.
 	ReflectorLabel, WedgeLabel string
+	// ReflectorPaperLabel and WedgePaperLabel are the labels without the
+	// cut files' layer convention, for the paper templates.
+	ReflectorPaperLabel, WedgePaperLabel string
 	// Plate is every hole and footprint on the reflector, the rod's foot
 	// as fitted, and the collisions between them (kit refuses a spec with
 	// any).
@@ -55,10 +61,11 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 	if !ok {
 		return nil, nil, fmt.Errorf("unknown wedge material %q", s.Wedge.Material)
 	}
-	p := &Patterns{Material: mat, WedgeMaterial: wmat, Method: s.Cutting.Method, Kerf: s.Cutting.Kerf()}
+	p := &Patterns{Material: mat, WedgeMaterial: wmat, Method: s.Cutting.Method, Kerf: s.Cutting.Kerf(), ToolPath: s.Cutting.ToolPath}
 	var warns []Warning
-	p.ReflectorLabel = p.label(mat)
-	p.WedgeLabel = p.label(wmat)
+	p.ReflectorPaperLabel = p.label(mat)
+	p.WedgePaperLabel = p.label(wmat)
+	p.ReflectorLabel, p.WedgeLabel = p.fileLabel(p.ReflectorPaperLabel), p.fileLabel(p.WedgePaperLabel)
 	if p.LaserHalogen {
 		warns = append(warns, Warning{Code: "laser-halogenated", Message: LaserHalogenWarning})
 	}
@@ -122,9 +129,28 @@ func (p *Patterns) label(m spec.SheetMaterial) string {
 		p.LaserHalogen = true
 		return LaserHalogenWarning
 	case m.Halogenated:
-		return fmt.Sprintf("For milling or shearing: %s is a halogenated laminate, not for laser cutting. %s; kerf %.2f mm compensated.", m.Name, capitalise(methodName(p.Method)), p.Kerf)
+		return fmt.Sprintf("For milling or shearing: %s is a halogenated laminate, not for laser cutting. %s, kerf %.2f mm.", m.Name, capitalise(methodName(p.Method)), p.Kerf)
 	}
-	return fmt.Sprintf("%s: %s; kerf %.2f mm compensated.", capitalise(m.Name), methodName(p.Method), p.Kerf)
+	return fmt.Sprintf("%s: %s, kerf %.2f mm.", capitalise(m.Name), methodName(p.Method), p.Kerf)
+}
+
+// fileLabel adds the cut files' layer convention to a part's label (not
+// to the laser warning, which stands alone).
+func (p *Patterns) fileLabel(label string) string {
+	if label == LaserHalogenWarning {
+		return label
+	}
+	return label + " " + KerfConvention(p.Kerf, p.ToolPath)
+}
+
+// KerfConvention says in words what a cut file's layers carry: the CUT
+// layer is the true part outline, and with toolPath the TOOLPATH layer is
+// the tool-centre path offset by half the kerf.
+func KerfConvention(kerf float64, toolPath bool) string {
+	if !toolPath {
+		return fmt.Sprintf("CUT layer = true part outline, not offset for the kerf: set cutter compensation of %.2f mm (half the kerf) in your CAM.", kerf/2)
+	}
+	return fmt.Sprintf("CUT layer = true part outline; TOOLPATH layer = tool-centre path, offset %.2f mm (half the kerf) outside the part and inside its holes. Cut one of them, not both.", kerf/2)
 }
 
 // capitalise upper-cases the first ASCII letter of s.
