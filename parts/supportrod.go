@@ -267,7 +267,7 @@ func rodMountSteps(cl *CutList) (hole, fix string) {
 		plug = fmt.Sprintf("Epoxy %s of Ø%s mm solid rod into the tube's foot, flush with its end, and let it cure. ", mm(mt.PlugMM), num(dc.BoreMM))
 	}
 	if mt.Screw == "" {
-		return "", fmt.Sprintf("%sLower the %s (about %.0f g) through the open top of the coil and epoxy its foot to the reflector's centre with a fillet all round.", plug, sectionWords(dc), dc.Rod.MassG)
+		return "", fmt.Sprintf("%sLower the %s (about %.0f g) through the open top of the coil and epoxy its foot to the reflector's centre, in the inner circle marked there, with a fillet all round that stays inside the outer circle, clear of the feed hole.", plug, sectionWords(dc), dc.Rod.MassG)
 	}
 	item := mt.Screw + " screw"
 	for _, h := range cl.Hardware {
