@@ -76,6 +76,9 @@ func New(src Source, opt Options) (*Kit, error) {
 		return nil, err
 	}
 	k := &Kit{Source: src, Design: d, opt: opt}
+	if err := checkPlate(d); err != nil {
+		return nil, err
+	}
 	if k.Former, err = planFormer(d); err != nil {
 		return nil, err
 	}

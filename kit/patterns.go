@@ -23,9 +23,11 @@ type cutPart struct {
 	name    string // file stem: "reflector" or "wedge"
 	title   string
 	label   string
+	paper   string // the label on the paper templates
 	notes   []string
 	nominal geom.Drawing
-	cut     geom.Drawing
+	drawing geom.Drawing // as the cut files carry it: true outline, and the tool path on request
+	cut     geom.Drawing // compensated for the kerf: what the nests space
 	nest    cut.Nest
 	sheet   cut.Sheet
 }
@@ -39,14 +41,14 @@ func cutParts(d *parts.Design) ([]cutPart, error) {
 	var out []cutPart
 	if p.Reflector != nil {
 		rin := p.Reflector.Input
-		out = append(out, cutPart{name: "reflector", title: "Reflector", label: p.ReflectorLabel, nominal: p.Reflector.Drawing,
+		out = append(out, cutPart{name: "reflector", title: "Reflector", label: p.ReflectorLabel, paper: p.ReflectorPaperLabel, nominal: p.Reflector.Drawing,
 			notes: []string{
 				fmt.Sprintf("%s %s, %.2f mm thick; size %.2f mm. Feed hole (%s) %.2f mm from the centre at the 0° tick.",
 					p.Material.Name, s.Reflector.Shape, s.Reflector.ThicknessMM, rin.Size, s.Reflector.Connector, rin.FeedRadius),
-				"Cut on the black lines; blue lines are marks (centre cross, coil start tick and angle, kit name).",
+				"Cut on the black lines; blue lines are marks (centre cross, the support rod's place and the limit of its epoxy fillet, coil start tick and angle, kit name).",
 			}})
 	}
-	out = append(out, cutPart{name: "wedge", title: "Matching wedge", label: p.WedgeLabel, nominal: w.Drawing(),
+	out = append(out, cutPart{name: "wedge", title: "Matching wedge", label: p.WedgeLabel, paper: p.WedgePaperLabel, nominal: w.Drawing(),
 		notes: []string{
 			fmt.Sprintf("%s, %.2f mm thick; %.2f mm along the centreline, %.2f mm wide at the feed end (tick), %.2f mm at the far end.",
 				p.WedgeMaterial.Name, s.Wedge.ThicknessMM, w.Length, w.FeedWidth, w.EndWidth),
@@ -59,6 +61,9 @@ func cutParts(d *parts.Design) ([]cutPart, error) {
 			return nil, fmt.Errorf("%s: %w", out[i].name, err)
 		}
 		out[i].cut, out[i].sheet = c, sheet
+		if out[i].drawing, err = fileDrawing(out[i].nominal, p.Kerf, p.ToolPath); err != nil {
+			return nil, fmt.Errorf("%s: %w", out[i].name, err)
+		}
 		switch {
 		case out[i].name == "wedge":
 			out[i].nest, err = cut.NestPolygon(outerOutline(c), s.Quantity, sheet, cut.NestOptions{Interlock: true, Tolerance: nestTolerance})
@@ -108,29 +113,38 @@ func (k *Kit) addPanels(r *parts.Report) {
 	}
 }
 
-// writePatterns writes each part's DXF and SVG (kerf compensated), the
+// writePatterns writes each part's DXF and SVG (the true outline on CUT,
+// the tool-centre path on TOOLPATH on request, and a printed note saying
+// which), the
 // 1:1 paper templates, and, for a batch, each part's panel files.
 func (k *Kit) writePatterns(out Sink) error {
 	s := k.Design.Spec
+	p := k.Design.Patterns
 	version := dxf.DXFR12
 	if s.Cutting.DXF == "R2000" {
 		version = dxf.DXFR2000
 	}
 	for _, c := range k.parts {
+		layers := "Units: millimetres. Layer CUT: the true part outline (not offset for the kerf); layer MARK: marks, not cut through; layer NOTE: this note, not cut."
+		if p.ToolPath {
+			layers = "Units: millimetres. Layer CUT: the true part outline (not offset for the kerf); layer TOOLPATH: the tool-centre path, offset by half the kerf; layer MARK: marks, not cut through; layer NOTE: this note, not cut."
+		}
 		comments := []string{
 			fmt.Sprintf("coilwright %s: %s, %s", k.opt.Version, s.Kit, c.title),
-			"Units: millimetres. Layer CUT: cut paths; layer MARK: marks, not cut through.",
+			layers,
 			c.label,
 		}
-		if err := writeDrawing(out, c.name, c.cut, nil, version, comments); err != nil {
+		d, _ := withNote(c.drawing, c.drawing.Bounds(), p.Kerf, p.ToolPath)
+		if err := writeDrawing(out, c.name, d, nil, version, comments); err != nil {
 			return err
 		}
 		if s.Quantity > 1 {
-			frame := geom.Box2{Max: geom.Vec2{X: c.sheet.Width, Y: c.sheet.Height}}
+			sheet := geom.Box2{Max: geom.Vec2{X: c.sheet.Width, Y: c.sheet.Height}}
+			pd, frame := withNote(cut.PanelDrawing(c.drawing, c.nest), sheet, p.Kerf, p.ToolPath)
 			pc := append(comments,
-				fmt.Sprintf("Panel: sheet %g x %g mm, origin at its lower-left corner, margin %g mm, spacing %g mm.", c.sheet.Width, c.sheet.Height, c.sheet.Margin, c.sheet.Spacing),
+				fmt.Sprintf("Panel: sheet %g x %g mm, origin at its lower-left corner, margin %g mm, spacing %g mm; the note is printed below the sheet.", c.sheet.Width, c.sheet.Height, c.sheet.Margin, c.sheet.Spacing),
 				fmt.Sprintf("%d parts per sheet; %d sheets for %d parts; this panel holds %d.", c.nest.PerSheet, c.nest.Sheets, s.Quantity, len(c.nest.Placements)))
-			if err := writeDrawing(out, "panel-"+c.name, cut.PanelDrawing(c.cut, c.nest), &frame, version, pc); err != nil {
+			if err := writeDrawing(out, "panel-"+c.name, pd, &frame, version, pc); err != nil {
 				return err
 			}
 		}
@@ -148,6 +162,9 @@ func (k *Kit) creator() string {
 	return "coilwright " + k.opt.Version
 }
 
+// templateKerfNote says what the paper templates draw.
+const templateKerfNote = "This template is the true part outline, with no kerf allowance: cut on the waste side of the line."
+
 // templatePages lays out the 1:1 templates once: each part as designed (no
 // kerf) with its notes and label. templates.pdf holds them and the build
 // sheet ends with them.
@@ -155,7 +172,7 @@ func templatePages(d *parts.Design, cps []cutPart) ([]pdf.Page, error) {
 	s := d.Spec
 	tparts := make([]pdf.TemplatePart, len(cps))
 	for i, c := range cps {
-		tparts[i] = pdf.TemplatePart{Title: c.title, Notes: append(append([]string{}, c.notes...), c.label), Drawing: c.nominal}
+		tparts[i] = pdf.TemplatePart{Title: c.title, Notes: append(append([]string{}, c.notes...), c.paper, templateKerfNote), Drawing: c.nominal}
 	}
 	paper, err := pdf.PageSizeByName(s.Cutting.Paper)
 	if err != nil {

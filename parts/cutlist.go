@@ -96,14 +96,18 @@ type WireBlank struct {
 
 // DowelCut is the support rod for one coil.
 type DowelCut struct {
-	Material       string
-	DiameterMM     float64
-	LengthMM       float64
-	ClearanceMM    float64 // radial gap asked for
-	InnerTurnMM    float64 // inside diameter of the smallest relaxed turn
-	Automatic      bool    // diameter chosen by ChooseSupportRod
-	BoreMM         float64 // bore of a tube, 0 for a solid rod
-	Rod            SupportRod
+	Material    string
+	DiameterMM  float64
+	LengthMM    float64
+	ClearanceMM float64 // radial gap asked for
+	InnerTurnMM float64 // inside diameter of the smallest relaxed turn
+	Automatic   bool    // diameter chosen by ChooseSupportRod
+	BoreMM      float64 // bore of a tube, 0 for a solid rod
+	Rod         SupportRod
+	// OverFeed is set when no stock rod's foot clears the feed at the
+	// plate's centre (a small coil with a large feed hole): the rod is
+	// chosen for the coil alone, and the plate does not place it.
+	OverFeed       bool
 	SlotWidthMM    float64 // slot across the foot for a centre feed's lead, else 0
 	SlotDepthMM    float64
 	AbsorbsWater   bool   // wood: takes up water and detunes the coil
@@ -249,9 +253,21 @@ func dowelCut(d *Design) (DowelCut, error) {
 	if s.Dowel.DiameterMM != nil {
 		given = *s.Dowel.DiameterMM // checkFit checked that it fits
 	}
-	rod, err := ChooseSupportRod(s.Dowel.Material, inner-2*dc.ClearanceMM, dc.LengthMM, 2*smallestTurnRadius(d.Coil), given)
+	// The rod's foot, with the least fillet, must also clear the feed and
+	// mounting holes, and its screw's washer the parts on the back.
+	plate := specPlateFeatures(s, d.Coil)
+	room := inner - 2*dc.ClearanceMM
+	if pr := rodPlateRoomMM(plate); pr >= dowelDiametersMM[0]-1e-9 || given > 0 {
+		room = math.Min(room, pr)
+	} else {
+		dc.OverFeed = true
+	}
+	rod, err := ChooseSupportRod(s.Dowel.Material, room, dc.LengthMM, 2*smallestTurnRadius(d.Coil), given)
 	if err != nil {
 		return DowelCut{}, err
+	}
+	if w := 2 * roomAbout(plate, FaceThrough, FaceBack); washerODMM(rod.Mount.Screw) > w {
+		rod.Mount = mountFor(rod, w)
 	}
 	dc.Rod, dc.DiameterMM, dc.BoreMM, dc.Automatic = rod, rod.OuterMM, rod.BoreMM, given == 0
 	switch s.Dowel.Material {

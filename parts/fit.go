@@ -69,10 +69,31 @@ func checkFit(s *spec.Spec) error {
 			fail("dowel.diameter_mm", num(*d.DiameterMM), fmt.Sprintf("does not pass inside the smallest turn (%.2f mm inside) with %s mm clearance all round", inner, num(d.ClearanceMM)), fix)
 		}
 	}
+	if len(errs) == 0 {
+		checkRodFoot(s, coil, fail)
+	}
 	if len(errs) > 0 {
 		return errs
 	}
 	return nil
+}
+
+// checkRodFoot checks that the rod's foot, with the least epoxy fillet
+// (MinRodFilletLegMM), clears the feed and mounting holes by
+// FootprintClearMM when the spec gives the rod. A default rod that cannot
+// clear them is left out of the plate with the "rod-over-feed" warning.
+func checkRodFoot(s *spec.Spec, coil Coil, fail func(key, value, problem, fix string)) {
+	room := rodPlateRoomMM(specPlateFeatures(s, coil))
+	d := &s.Dowel
+	what := fmt.Sprintf("its foot with a %s mm epoxy fillet must stay %s mm clear of the feed and mounting holes, which leaves room for a rod of at most %.2f mm", num(MinRodFilletLegMM), num(FootprintClearMM), room)
+	switch {
+	case d.DiameterMM != nil && *d.DiameterMM > room+1e-9:
+		fix := fmt.Sprintf("use a rod of at most %.1f mm, or omit diameter_mm to choose one", math.Floor(room*10)/10)
+		if room < spec.MinDowelMM {
+			fix = "use a smaller feed hole or connector, or support the coil from outside"
+		}
+		fail("dowel.diameter_mm", num(*d.DiameterMM), "is too thick for the plate's centre: "+what, fix)
+	}
 }
 
 // optional returns the value of an optional spec number, or 0 when it is

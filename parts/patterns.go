@@ -27,9 +27,19 @@ type Patterns struct {
 	Method string
 	// Kerf is the width in mm the tool removes.
 	Kerf float64
+	// ToolPath is set when the cut files carry the tool-centre path on
+	// a TOOLPATH layer beside the true outline.
+	ToolPath bool
 	// ReflectorLabel and WedgeLabel say how each part's files are meant to
 	// be cut; every cut file and template of the part carries its label.
 	ReflectorLabel, WedgeLabel string
+	// ReflectorPaperLabel and WedgePaperLabel are the labels without the
+	// cut files' layer convention, for the paper templates.
+	ReflectorPaperLabel, WedgePaperLabel string
+	// Plate is every hole and footprint on the reflector, the rod's foot
+	// as fitted, and the collisions between them (kit refuses a spec with
+	// any).
+	Plate PlateLayout
 	// LaserHalogen is set when laser cutting was asked for a halogenated
 	// laminate: the files still come, with a warning on each.
 	LaserHalogen bool
@@ -51,44 +61,14 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 	if !ok {
 		return nil, nil, fmt.Errorf("unknown wedge material %q", s.Wedge.Material)
 	}
-	p := &Patterns{Material: mat, WedgeMaterial: wmat, Method: s.Cutting.Method, Kerf: s.Cutting.Kerf()}
+	p := &Patterns{Material: mat, WedgeMaterial: wmat, Method: s.Cutting.Method, Kerf: s.Cutting.Kerf(), ToolPath: s.Cutting.ToolPath}
 	var warns []Warning
-	p.ReflectorLabel = p.label(mat)
-	p.WedgeLabel = p.label(wmat)
+	p.ReflectorPaperLabel = p.label(mat)
+	p.WedgePaperLabel = p.label(wmat)
+	p.ReflectorLabel, p.WedgeLabel = p.fileLabel(p.ReflectorPaperLabel), p.fileLabel(p.WedgePaperLabel)
 	if p.LaserHalogen {
 		warns = append(warns, Warning{Code: "laser-halogenated", Message: LaserHalogenWarning})
 	}
-
-	size := rs.SizeMM(d.Wavelength)
-	in := ReflectorInput{
-		Size:       size,
-		FeedRadius: d.Coil.StartRadius,
-		Label:      s.Kit,
-		Hand:       d.Coil.Hand.String(),
-		Mounting: MountingHoles{Count: rs.MountingHoles, Diameter: rs.MountingHoleMM,
-			PitchDiameter: rs.MountingCircle(size), Angle: rs.MountingAngleDeg * math.Pi / 180},
-	}
-	if rs.Shape == "square" {
-		in.Shape, in.CornerRadius = ReflectorSquare, rs.CornerRadiusMM
-	}
-	switch rs.Connector {
-	case "sma-flange":
-		in.Feed = FeedHole{Kind: FeedSMAFlange}
-	case "sma-bulkhead":
-		in.Feed = FeedHole{Kind: FeedSMABulkhead}
-	default:
-		in.Feed = FeedHole{Kind: FeedCoax, Diameter: s.Coax.Cable().FeedHoleMM()}
-	}
-	if rs.FeedHoleMM != nil {
-		in.Feed.Diameter = *rs.FeedHoleMM
-	}
-	refl, err := NewReflector(in)
-	if err != nil {
-		// A plate too small for its feed cut-out is reported, not fatal:
-		// the rest of the design stands, and no plate files are written.
-		warns = append(warns, Warning{Code: "reflector-fit", Message: err.Error() + "; no reflector files are written"})
-	}
-	p.Reflector = refl
 
 	p.WedgeLoadOhm = d.Turns[0].InputResistanceOhm
 	w, err := NewWedge(WedgeInput{
@@ -106,6 +86,38 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 	for _, m := range w.Warnings {
 		warns = append(warns, Warning{Code: "wedge-width", Message: m})
 	}
+
+	size := rs.SizeMM(d.Wavelength)
+	feed, cable := specFeedHole(s)
+	in := ReflectorInput{
+		Size:     size,
+		Label:    s.Kit,
+		Hand:     d.Coil.Hand.String(),
+		Feed:     feed,
+		Mounting: specMounting(s, size),
+	}
+	in.FeedRadius, in.FeedAngle = feedPlacement(d.Coil)
+	if rs.Shape == "square" {
+		in.Shape, in.CornerRadius = ReflectorSquare, rs.CornerRadiusMM
+	}
+	dc, err := dowelCut(d)
+	if err != nil {
+		return nil, nil, err
+	}
+	p.Plate = newPlateLayout(in, dc, w, d.Coil, cable)
+	if dc.OverFeed {
+		warns = append(warns, Warning{Code: "rod-over-feed", Message: fmt.Sprintf(
+			"the feed hole %.2f mm from the centre leaves no room at the plate's centre for the smallest stock rod (Ø%s mm) with a fillet and %s mm clearance: no rod is placed on the reflector; support the coil from outside (foam or low-loss spacers), or use a thinner cable or a smaller feed hole",
+			in.FeedRadius, num(dowelDiametersMM[0]), num(FootprintClearMM))})
+	}
+	in.ScrewHole, in.RodFoot, in.RodFootFillet = p.Plate.ScrewHoleMM, p.Plate.RodMM, p.Plate.FootMM
+	refl, err := NewReflector(in)
+	if err != nil {
+		// A plate too small for its feed cut-out is reported, not fatal:
+		// the rest of the design stands, and no plate files are written.
+		warns = append(warns, Warning{Code: "reflector-fit", Message: err.Error() + "; no reflector files are written"})
+	}
+	p.Reflector = refl
 	return p, warns, nil
 }
 
@@ -117,9 +129,28 @@ func (p *Patterns) label(m spec.SheetMaterial) string {
 		p.LaserHalogen = true
 		return LaserHalogenWarning
 	case m.Halogenated:
-		return fmt.Sprintf("For milling or shearing: %s is a halogenated laminate, not for laser cutting. %s; kerf %.2f mm compensated.", m.Name, capitalise(methodName(p.Method)), p.Kerf)
+		return fmt.Sprintf("For milling or shearing: %s is a halogenated laminate, not for laser cutting. %s, kerf %.2f mm.", m.Name, capitalise(methodName(p.Method)), p.Kerf)
 	}
-	return fmt.Sprintf("%s: %s; kerf %.2f mm compensated.", capitalise(m.Name), methodName(p.Method), p.Kerf)
+	return fmt.Sprintf("%s: %s, kerf %.2f mm.", capitalise(m.Name), methodName(p.Method), p.Kerf)
+}
+
+// fileLabel adds the cut files' layer convention to a part's label (not
+// to the laser warning, which stands alone).
+func (p *Patterns) fileLabel(label string) string {
+	if label == LaserHalogenWarning {
+		return label
+	}
+	return label + " " + KerfConvention(p.Kerf, p.ToolPath)
+}
+
+// KerfConvention says in words what a cut file's layers carry: the CUT
+// layer is the true part outline, and with toolPath the TOOLPATH layer is
+// the tool-centre path offset by half the kerf.
+func KerfConvention(kerf float64, toolPath bool) string {
+	if !toolPath {
+		return fmt.Sprintf("CUT layer = true part outline, not offset for the kerf: set cutter compensation of %.2f mm (half the kerf) in your CAM.", kerf/2)
+	}
+	return fmt.Sprintf("CUT layer = true part outline; TOOLPATH layer = tool-centre path, offset %.2f mm (half the kerf) outside the part and inside its holes. Cut one of them, not both.", kerf/2)
 }
 
 // capitalise upper-cases the first ASCII letter of s.

@@ -144,6 +144,13 @@ type ReflectorInput struct {
 	FeedRadius, FeedAngle float64
 	Feed                  FeedHole
 	Mounting              MountingHoles
+	// ScrewHole is the diameter of the support rod screw's clearance hole
+	// at the centre, cut with the other holes; 0 for none.
+	ScrewHole float64
+	// RodFoot and RodFootFillet are the support rod's outside diameter and
+	// the limit of its epoxy fillet, drawn as circles about the centre on
+	// the mark layer; 0 for none.
+	RodFoot, RodFootFillet float64
 	// Label is the kit name written on the mark layer; Hand is a short tag
 	// written after it (for example "RHCP"). Both may be empty.
 	Label, Hand string
@@ -180,6 +187,14 @@ func NewReflector(in ReflectorInput) (*Reflector, error) {
 	feed := polar(in.FeedRadius, in.FeedAngle)
 	if r := in.FeedRadius + in.Feed.extent(); r > inscribed-edgeClearance {
 		return nil, fmt.Errorf("reflector: the feed cut-out reaches %.2f mm from the centre, past the %.2f mm the plate allows; enlarge the plate", r, inscribed-edgeClearance)
+	}
+	if in.ScrewHole < 0 || in.RodFoot < 0 || in.RodFootFillet < 0 {
+		return nil, fmt.Errorf("reflector: screw hole %g mm, rod %g mm and fillet %g mm must not be negative", in.ScrewHole, in.RodFoot, in.RodFootFillet)
+	}
+	if in.ScrewHole > 0 {
+		if web := feed.Len() - in.Feed.extent() - in.ScrewHole/2; web < edgeClearance {
+			return nil, fmt.Errorf("reflector: the %.2f mm screw hole at the centre leaves %.2f mm of web to the feed cut-out; at least %g mm is needed", in.ScrewHole, web, edgeClearance)
+		}
 	}
 	m := in.Mounting
 	if m.Count < 0 {
@@ -242,6 +257,15 @@ func (r *Reflector) draw() {
 	for i := range in.Mounting.Count {
 		a := in.Mounting.Angle + 2*math.Pi*float64(i)/float64(in.Mounting.Count)
 		d.Add(LayerCut, geom.Circle{Center: polar(in.Mounting.PitchDiameter/2, a), Radius: in.Mounting.Diameter / 2})
+	}
+	if in.ScrewHole > 0 {
+		d.Add(LayerCut, geom.Circle{Radius: in.ScrewHole / 2})
+	}
+	// The rod's place and how far its epoxy fillet may spread.
+	for _, dia := range []float64{in.RodFoot, in.RodFootFillet} {
+		if dia > 0 {
+			d.Add(LayerMark, geom.Circle{Radius: dia / 2})
+		}
 	}
 
 	// Marks scale with the plate; Common practice (no published source).

@@ -200,14 +200,15 @@ func ChooseSupportRod(material string, room, length, helix, given float64) (Supp
 	r.Loading = EstimateRodLoading(r.OuterMM, r.BoreMM, helix, m.Permittivity)
 	area := math.Pi / 4 * (r.OuterMM*r.OuterMM - r.BoreMM*r.BoreMM) // mm²
 	r.MassG = m.DensityGcm3 * area * length / 1000
-	r.Mount = mountFor(r)
+	r.Mount = mountFor(r, math.Inf(1))
 	return r, nil
 }
 
 // mountFor sizes the rod's foot fixing to its mass: an epoxy fillet for a
 // light or thin rod, else the smallest screw that holds the mass and
-// threads into the solid section (a tube's plug).
-func mountFor(r SupportRod) RodMount {
+// threads into the solid section (a tube's plug) and whose washer, of
+// outside diameter at most maxWasherMM, fits the plate's centre.
+func mountFor(r SupportRod, maxWasherMM float64) RodMount {
 	solid := r.OuterMM
 	mt := RodMount{MassG: r.MassG}
 	if r.Tube() {
@@ -216,7 +217,7 @@ func mountFor(r SupportRod) RodMount {
 	}
 	screws := rodScrews()
 	for _, sc := range screws {
-		if r.MassG <= sc.maxMassG && solid >= sc.minSolidMM {
+		if r.MassG <= sc.maxMassG && solid >= sc.minSolidMM && washerODMM(sc.name) <= maxWasherMM {
 			mt.Screw, mt.ClearMM, mt.PilotMM = sc.name, sc.clearMM, sc.pilotM
 			mt.Basis = fmt.Sprintf("%s screw: holds up to %.0f g of rod and threads into %s mm of solid section or more", sc.name, sc.maxMassG, num(sc.minSolidMM))
 			return mt
@@ -266,7 +267,7 @@ func rodMountSteps(cl *CutList) (hole, fix string) {
 		plug = fmt.Sprintf("Epoxy %s of Ø%s mm solid rod into the tube's foot, flush with its end, and let it cure. ", mm(mt.PlugMM), num(dc.BoreMM))
 	}
 	if mt.Screw == "" {
-		return "", fmt.Sprintf("%sLower the %s (about %.0f g) through the open top of the coil and epoxy its foot to the reflector's centre with a fillet all round.", plug, sectionWords(dc), dc.Rod.MassG)
+		return "", fmt.Sprintf("%sLower the %s (about %.0f g) through the open top of the coil and epoxy its foot to the reflector's centre, in the inner circle marked there, with a fillet all round that stays inside the outer circle, clear of the feed hole.", plug, sectionWords(dc), dc.Rod.MassG)
 	}
 	item := mt.Screw + " screw"
 	for _, h := range cl.Hardware {

@@ -46,7 +46,7 @@ type DXFOptions struct {
 }
 
 // layerColor returns the DXF colour index (group code 62) of a layer: red
-// for CUT, blue for MARK, white otherwise. Common practice (no published source):
+// for CUT, blue for MARK, green for TOOLPATH, white otherwise. Common practice (no published source):
 // red cut, blue mark is the usual laser-shop convention.
 func layerColor(name string) int {
 	switch name {
@@ -54,6 +54,8 @@ func layerColor(name string) int {
 		return 1
 	case "MARK":
 		return 5
+	case "TOOLPATH":
+		return 3
 	}
 	return 7
 }

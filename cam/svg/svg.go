@@ -40,13 +40,15 @@ type SVGOptions struct {
 }
 
 // layerStroke returns the stroke colour of a layer: red for CUT, blue for
-// MARK, black otherwise (see layerColor).
+// MARK, green for TOOLPATH, black otherwise (see layerColor).
 func layerStroke(name string) string {
 	switch name {
 	case "CUT":
 		return "#ff0000"
 	case "MARK":
 		return "#0000ff"
+	case "TOOLPATH":
+		return "#00a000"
 	}
 	return "#000000"
 }

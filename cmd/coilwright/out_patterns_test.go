@@ -87,7 +87,6 @@ func TestPatternFilesExternal(t *testing.T) {
 	dir := t.TempDir()
 	buildDemo(t, "demo-5g8-cone.toml", dir)
 	r := readReport(t, dir)
-	kerf := r.Reflector.Cutting.KerfMM
 
 	var files []string
 	for _, n := range []string{"reflector.dxf", "wedge.dxf", "panel-reflector.dxf", "panel-wedge.dxf"} {
@@ -103,10 +102,15 @@ func TestPatternFilesExternal(t *testing.T) {
 			t.Errorf("ezdxf: %s", line)
 		}
 		if f[0] == "reflector.dxf" {
-			// The disc's cut path: half the 50 mm diameter plus half the kerf.
+			// The CUT layer is the true part: half the 50 mm diameter, with
+			// no kerf offset (a CAM applying its own cutter compensation
+			// would otherwise cut a disc one kerf too large).
 			got, _ := strconv.ParseFloat(f[4], 64)
-			if want := *r.Reflector.DiameterMM/2 + kerf/2; math.Abs(got-want) > 1e-6 {
+			if want := *r.Reflector.DiameterMM / 2; math.Abs(got-want) > 1e-6 {
 				t.Errorf("disc radius %.9f mm, want %.9f", got, want)
+			}
+			if strings.Contains(f[3], "TOOLPATH") {
+				t.Errorf("a tool path was not asked for: %s", line)
 			}
 		}
 	}
@@ -116,10 +120,13 @@ func TestPatternFilesExternal(t *testing.T) {
 		name string
 		w, h float64 // mm
 	}{
-		// Disc plus the kerf, plus the SVG's 2 mm margin each side.
-		{"reflector.svg", 50 + kerf + 4, 50 + kerf + 4},
-		{"panel-reflector.svg", r.Reflector.Panel.SheetWidthMM, r.Reflector.Panel.SheetHeightMM},
-		{"panel-wedge.svg", r.Wedge.Panel.SheetWidthMM, r.Wedge.Panel.SheetHeightMM},
+		// The printed note (one 2.5 mm line, 5 mm pitch, under the disc)
+		// makes the page taller and wider than the 50 mm disc plus the
+		// SVG's 2 mm margins; see TestPatternNoteAndToolPath.
+		// The sheet, and under it the printed note: one 2.5 mm line at a
+		// 5 mm pitch and 2.5 mm below it, 7.5 mm in all.
+		{"panel-reflector.svg", r.Reflector.Panel.SheetWidthMM, r.Reflector.Panel.SheetHeightMM + 7.5},
+		{"panel-wedge.svg", r.Wedge.Panel.SheetWidthMM, r.Wedge.Panel.SheetHeightMM + 7.5},
 	} {
 		pdf := filepath.Join(t.TempDir(), tc.name+".pdf")
 		if out, err := exec.Command(rsvg, "-f", "pdf", "-o", pdf, filepath.Join(dir, tc.name)).CombinedOutput(); err != nil {
@@ -142,7 +149,7 @@ func TestPatternFilesExternal(t *testing.T) {
 		t.Fatalf("qpdf --check: %v\n%s", err, out)
 	}
 	text, _ := exec.Command(pdftotext, tpl, "-").Output()
-	for _, want := range []string{"Reflector", "Matching wedge", "For milling or shearing", "50 mm: print at 100 %"} {
+	for _, want := range []string{"Reflector", "Matching wedge", "For milling or shearing", "50 mm: print at 100 %", "true part outline, with no kerf allowance"} {
 		if !bytes.Contains(text, []byte(want)) {
 			t.Errorf("templates.pdf lacks %q", want)
 		}
@@ -207,6 +214,95 @@ for f in sys.argv[1:]:
 	for _, line := range strings.Split(strings.TrimSpace(string(out)), "\n") {
 		if line != "AC1015 4 0 0" {
 			t.Errorf("ezdxf: %q, want release 2000, $INSUNITS 4, no errors or fixes", line)
+		}
+	}
+}
+
+// ezdxfLayers loads a DXF strictly, audits it, and prints the error and
+// fix counts, then each circle as "layer radius" and each layer's entity
+// count as "layer count".
+const ezdxfLayers = `
+import sys, ezdxf, collections
+d = ezdxf.readfile(sys.argv[1])
+a = d.audit()
+print(len(a.errors), len(a.fixes))
+n = collections.Counter()
+for e in d.modelspace():
+    n[e.dxf.layer] += 1
+    if e.dxftype() == 'CIRCLE' and abs(e.dxf.center[0]) < 1e-9 and abs(e.dxf.center[1]) < 1e-9:
+        print('circle', e.dxf.layer, repr(e.dxf.radius))
+for k in sorted(n):
+    print('layer', k, n[k])
+`
+
+// TestPatternNoteAndToolPath builds the 5.8 GHz demo (a 50 mm disc, 1 mm
+// mill kerf) with and without the tool path and reads reflector.dxf with
+// ezdxf: the CUT outline is the true 25.000 mm radius in both; with
+// tool_path the TOOLPATH layer carries it at 25.5 mm (radius plus half the
+// kerf); every file carries its printed note, and the SVG names the
+// layers it holds.
+func TestPatternNoteAndToolPath(t *testing.T) {
+	py := checktool.NeedPython(t, "ezdxf")
+	b, _ := templates.Demo("demo-5g8-cone.toml")
+	for _, tp := range []bool{false, true} {
+		spec := filepath.Join(t.TempDir(), "tp.toml")
+		extra := ""
+		if tp {
+			extra = "\n[cutting]\ntool_path = true\n"
+		}
+		if err := os.WriteFile(spec, append(b, extra...), 0o644); err != nil {
+			t.Fatal(err)
+		}
+		dir := t.TempDir()
+		var stdout, stderr bytes.Buffer
+		if code := run([]string{"build", spec, "-o", dir}, &stdout, &stderr); code != 0 {
+			t.Fatalf("build: exit %d: %s", code, stderr.String())
+		}
+		kerf := readReport(t, dir).Reflector.Cutting.KerfMM
+		out, err := exec.Command(py, "-c", ezdxfLayers, filepath.Join(dir, "reflector.dxf")).CombinedOutput()
+		if err != nil {
+			t.Fatalf("ezdxf: %v\n%s", err, out)
+		}
+		lines := strings.Split(strings.TrimSpace(string(out)), "\n")
+		if lines[0] != "0 0" {
+			t.Errorf("tool_path %v: ezdxf audit: %s", tp, lines[0])
+		}
+		radii := map[string][]float64{}
+		counts := map[string]int{}
+		for _, l := range lines[1:] {
+			f := strings.Fields(l)
+			switch f[0] {
+			case "circle":
+				r, _ := strconv.ParseFloat(f[2], 64)
+				radii[f[1]] = append(radii[f[1]], r)
+			case "layer":
+				counts[f[1]], _ = strconv.Atoi(f[2])
+			}
+		}
+		// Source: the demo's reflector is a 50 mm disc; the kerf of a mill
+		// is 1 mm by default (design.json). Tolerance 1e-6 mm: the DXF
+		// writes more digits.
+		const tol = 1e-6
+		if r := radii["CUT"]; len(r) == 0 || math.Abs(r[0]-25) > tol {
+			t.Errorf("tool_path %v: CUT circles about the centre %v, want the disc at 25.000 mm first", tp, r)
+		}
+		if counts["NOTE"] == 0 {
+			t.Errorf("tool_path %v: no printed note on the NOTE layer", tp)
+		}
+		switch r := radii["TOOLPATH"]; {
+		case !tp && counts["TOOLPATH"] != 0:
+			t.Errorf("TOOLPATH written without being asked for")
+		case tp && (len(r) == 0 || math.Abs(r[0]-(25+kerf/2)) > tol):
+			t.Errorf("TOOLPATH circles about the centre %v, want %.3f mm first", r, 25+kerf/2)
+		}
+		svgBody, _ := os.ReadFile(filepath.Join(dir, "reflector.svg"))
+		for _, want := range []string{`<g id="NOTE"`, "Layer CUT: the true part outline"} {
+			if !bytes.Contains(svgBody, []byte(want)) {
+				t.Errorf("tool_path %v: reflector.svg lacks %q", tp, want)
+			}
+		}
+		if got := bytes.Contains(svgBody, []byte(`<g id="TOOLPATH"`)); got != tp {
+			t.Errorf("tool_path %v: reflector.svg TOOLPATH group present %v", tp, got)
 		}
 	}
 }

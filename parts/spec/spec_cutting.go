@@ -18,6 +18,10 @@ type CuttingSpec struct {
 	SpacingMM     float64  `toml:"spacing_mm"`      // between parts' cut paths, default 3 mm
 	Paper         string   `toml:"paper"`           // template paper, "A4" or "Letter"
 	DXF           string   `toml:"dxf"`             // "R12" or "R2000"
+	// ToolPath adds the tool-centre path (the CUT outline offset by half
+	// the kerf) on a layer of its own, TOOLPATH; the CUT layer is always
+	// the true part outline.
+	ToolPath bool `toml:"tool_path"`
 }
 
 // Cutting defaults. Common practice (no published source): a 1 mm end mill
