@@ -132,15 +132,21 @@ func Steps() []Step {
 	}
 }
 
-// Write adds the step's files to s.
-func (st Step) Write(k *Kit, s Sink) error { return st.write(k, s) }
-
 // Write adds every output file to s, step by step, calling progress (when
 // not nil) with each step's name as it starts. An error names its step.
 func (k *Kit) Write(s Sink, progress func(step string)) error {
+	return k.WriteSteps(s, Steps(), progress)
+}
+
+// WriteSteps adds the files of the given steps to s, in the order given,
+// calling progress (when not nil) with each step's name as it starts. The
+// report page lists only what the steps before it wrote; a caller that
+// leaves out a step (a quick check that skips the former's meshing) gets a
+// report without it.
+func (k *Kit) WriteSteps(s Sink, steps []Step, progress func(step string)) error {
 	// The report page lists and embeds what the steps before it wrote.
 	s = &recorder{next: s}
-	for _, st := range Steps() {
+	for _, st := range steps {
 		if progress != nil {
 			progress(st.Name)
 		}

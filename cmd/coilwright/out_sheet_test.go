@@ -13,6 +13,7 @@ import (
 	"strconv"
 	"strings"
 	"testing"
+	"time"
 
 	"coilwright/cam/checktool"
 	"coilwright/parts"
@@ -233,10 +234,6 @@ func TestWireBlankMatchesDesignJSON(t *testing.T) {
 			if err := json.Unmarshal(b, &dj); err != nil {
 				t.Fatal(err)
 			}
-			spec, err := spec.ParseSpec([]byte(demoText(t, demo)))
-			if err != nil {
-				t.Fatal(err)
-			}
 			var blank map[string]string
 			for _, r := range readCSV(t, filepath.Join(dir, "cutlist.csv")) {
 				if r["item"] == "wire blank" {
@@ -246,12 +243,20 @@ func TestWireBlankMatchesDesignJSON(t *testing.T) {
 			if blank == nil {
 				t.Fatal("cutlist.csv has no wire blank")
 			}
-			// Allowances as the cut list defines them: lock tail, the feed
-			// lead from the wire centre down to the dielectric stub, and
-			// the trim at both ends.
-			lock := math.Max(parts.MinLockTailMM, parts.LockTailWires*spec.Wire.DiameterMM)
+			// Allowances as the cut list defines them: the lock end, bent
+			// into the former's lock hole and as deep as the planned hole
+			// (or the feed lead it is later cut to, if that is longer),
+			// and the trim at the free end.
+			l, err := loadSpec("", demo)
+			if err != nil {
+				t.Fatal(err)
+			}
+			k, err := newKit(l, time.Time{})
+			if err != nil {
+				t.Fatal(err)
+			}
 			lead := dj.FirstTurnHeightMM - parts.FeedStandoffMM
-			want := dj.WireLengthMM + lock + lead + 2*parts.TrimPerEndMM
+			want := dj.WireLengthMM + math.Max(k.Former.LockHoleMM, lead) + parts.TrimPerEndMM
 			if got := atof(t, blank["length_mm"]); math.Abs(got-want) > csvTol {
 				t.Errorf("blank %.1f mm, design.json arc %.3f mm + allowances = %.3f mm", got, dj.WireLengthMM, want)
 			}

@@ -18,16 +18,13 @@ import (
 // buildInMemory runs every output step but the former's (whose meshing is
 // slow and planned apart by jig.Plan) into memory.
 func buildInMemory(k *kit.Kit) error {
-	var m kit.Memory
+	var steps []kit.Step
 	for _, st := range kit.Steps() {
-		if st.Name == "winding former" {
-			continue
-		}
-		if err := st.Write(k, &m); err != nil {
-			return fmt.Errorf("%s: %w", st.Name, err)
+		if st.Name != "winding former" {
+			steps = append(steps, st)
 		}
 	}
-	return nil
+	return k.WriteSteps(&kit.Memory{}, steps, nil)
 }
 
 // loadBytes parses a spec held in memory.
