@@ -97,18 +97,13 @@ func NewBuildSheet(d *Design, cl *CutList, specSHA256 string) *BuildSheet {
 		Quantity: s.Quantity, Inspection: d.InspectionTable()}
 	b.HandWords = handWords(d.Coil.Hand)
 	b.View = d.SideView(cl)
-	b.Summary = fmt.Sprintf("%s MHz %s helix, %s turns, %s", num(s.FrequencyMHz), s.Coil.Shape, num(d.Coil.Turns), b.Hand)
+	b.Summary = fmt.Sprintf("%s MHz %s helix, %s, %s", num(s.FrequencyMHz), s.Coil.Shape, TurnsText(d.Coil.Turns), b.Hand)
 	b.Design = designRows(d, cl)
 	b.Tools = tools(s)
 	b.Materials = materials(s, cl)
 	b.Cautions = cautions(d)
 	b.Steps = steps(d, cl, strip, b.Cautions)
-	b.InspectionNote = "Measure each turn across its middle with calipers over the outside of the wire, at two places 90° apart, and write the mean in the blank column. "
-	if s.Wire.InspectionToleranceMM != nil {
-		b.InspectionNote += fmt.Sprintf("The tolerance, ±%s mm, is set in the spec.", num(*s.Wire.InspectionToleranceMM))
-	} else {
-		b.InspectionNote += fmt.Sprintf("The tolerance is ±%s %% of the turn's diameter, at least %s mm: a turn 1 %% too large tunes about 1 %% low.", num(100*InspectionFraction), num(InspectionFloorMM))
-	}
+	b.InspectionNote = InspectionNoteText(d)
 	b.Warnings = append(append([]Warning{}, d.Warnings...), cl.Warnings...)
 	b.Closing = []string{
 		"This sheet is a guide for careful hobby construction, not professional advice. Follow the local regulations, electrical and workshop codes, and the conditions of any licence that apply where you build and transmit; where they differ from this sheet, they win.",
@@ -138,11 +133,11 @@ func designRows(d *Design, cl *CutList) []SheetRow {
 		{"Centre frequency", fmt.Sprintf("%s MHz (wavelength %.2f mm)", num(s.FrequencyMHz), d.Wavelength)},
 		{"Band", band},
 		{"Hand", fmt.Sprintf("%s (%s winding)", d.Coil.Hand, map[Hand]string{RightHand: "right-hand", LeftHand: "left-hand"}[d.Coil.Hand])},
-		{"Coil", fmt.Sprintf("%s, %s turns, %s feed", s.Coil.Shape, num(d.Coil.Turns), s.Coil.Feed)},
+		{"Coil", fmt.Sprintf("%s, %s, %s feed", s.Coil.Shape, TurnsText(d.Coil.Turns), s.Coil.Feed)},
 		{"Diameter (wire centre)", fmt.Sprintf("%s at the base, %s at the top", mm2(2*d.Coil.StartRadius), mm2(2*d.Coil.EndRadius))},
 		{"Pitch", fmt.Sprintf("%.1f° at the first turn, %.2f mm per turn at the first turn", d.Turns[0].PitchAngleDeg, d.Turns[0].SpacingMM)},
 		{"First turn height", fmt.Sprintf("%s, wire centre above the reflector", mm2(d.Coil.Z0))},
-		{"Coil height", fmt.Sprintf("%s from the first turn to the top (%s to the top of the wire)", mm(d.AxialLength), mm(d.Coil.Z0+d.AxialLength+s.Wire.DiameterMM/2))},
+		{"Coil height", d.Heights().Text()},
 		{"Wire", fmt.Sprintf("%s, Ø%s mm; winding %s, blank %s", s.Wire.Material, num(s.Wire.DiameterMM), mm(cl.Wire.ArcMM), mm(cl.Wire.LengthMM))},
 		{"Reflector", fmt.Sprintf("%s, %s across, %s mm thick", s.Reflector.Shape, mm(s.Reflector.SizeMM(d.Wavelength)), num(s.Reflector.ThicknessMM))},
 		{"Support rod", fmt.Sprintf("%s, Ø%s mm × %s", cl.Dowel.Material, num(cl.Dowel.DiameterMM), mm(cl.Dowel.LengthMM))},
@@ -247,7 +242,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 	expect := fmt.Sprintf("Expect the return loss to be at least %s dB (VSWR below 1.9) across the band, with its best point near %s MHz.", num(ReturnLossTargetDB), num(s.FrequencyMHz))
 	clearance := ""
 	if strip != nil && len(strip.Stations) > 0 {
-		strip1 = fmt.Sprintf("Cut the matching strip from its 1:1 template: %s long, %s wide at the feed end narrowing to %s. File its edges smooth.", mm(strip.Length), mm2(strip.FeedWidth), mm2(strip.EndWidth))
+		strip1 = fmt.Sprintf("Cut the matching strip from its 1:1 template: %s long, %s. File its edges smooth.", mm(strip.Length), StripShapeText(strip))
 		clearance = fmt.Sprintf(" The strip's underside is only %s above the reflector at the feed: keep the solder there flat.", mm2(strip.Stations[0].Height))
 		expect += fmt.Sprintf(" The design estimates a return loss of about %.0f dB at %s MHz (|Γ| = %.2f from the matching strip alone).", ReturnLossDB(strip.Reflection), num(s.FrequencyMHz), strip.Reflection)
 	}
@@ -296,7 +291,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 		}},
 		{Title: "Wind under tension", Text: []string{
 			"Lay the wire into the groove turn by turn, pulling it tight with steady tension so it seats at the bottom of the groove all the way round. Do not let it ride up on the groove wall.",
-			fmt.Sprintf("Wind all %s turns %s until mark B reaches the stop notch at the end of the groove.", num(d.Coil.Turns), windTo),
+			fmt.Sprintf("Wind all %s %s until mark B reaches the stop notch at the end of the groove.", TurnsText(d.Coil.Turns), windTo),
 		}},
 		{Title: "Hold and overbend", Text: []string{
 			"Hold the wire at mark B for about ten seconds, then press every turn once more into its groove with a thumb, a little tighter than it lies, to set the bend.",
@@ -332,7 +327,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 			"Slide the sleeve up against the reflector's back face, over the cable's joint, and shrink it evenly with the hot-air tool. Fix the cable to the reflector with the cable tie.",
 		}, Cautions: pick(all, HazardBurns)},
 		{Title: "Final checks", Text: []string{
-			"Compare the antenna with the side view: hand, turn count, first turn height and overall height.",
+			"Compare the antenna with the side view: hand, turn count, first turn height and overall height (" + mm(d.Heights().Overall) + " from the reflector's top face to the top of the wire).",
 			"With the multimeter, check there is no continuity between the connector's centre pin and its body: the coil and strip must not touch the reflector.",
 			fmt.Sprintf("Calibrate the vector network analyser (VNA) at the end of its test cable, connect the antenna, point it at open sky away from metal, and sweep the return loss (S11) across %s.", band),
 			expect,

@@ -10,6 +10,8 @@ package parts
 import (
 	"fmt"
 	"math"
+	"strings"
+	"unicode"
 
 	"coilwright/cam/geom"
 	"coilwright/parts/spec"
@@ -277,13 +279,19 @@ func (r *Reflector) draw() {
 // source): about 0.6–0.75 for sans-serif capitals and digits.
 const textAdvance = 0.75
 
-// joinLabel joins the kit name and hand tag with a space, skipping empties.
+// joinLabel joins the kit name and hand tag with a space, skipping empties
+// and a tag the name already holds as a word.
 func joinLabel(a, b string) string {
 	switch {
 	case a == "":
 		return b
 	case b == "":
 		return a
+	}
+	for _, w := range strings.FieldsFunc(a, func(r rune) bool { return !unicode.IsLetter(r) && !unicode.IsDigit(r) }) {
+		if strings.EqualFold(w, b) {
+			return a
+		}
 	}
 	return a + " " + b
 }

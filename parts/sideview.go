@@ -54,7 +54,7 @@ func (d *Design) SideView(cl *CutList) SideView {
 		{A: geom.Vec2{X: -rt, Y: top}, B: geom.Vec2{X: rt, Y: top}, Offset: u + wd,
 			Text: fmt.Sprintf("Ø%.2f top", 2*rt)},
 		{A: geom.Vec2{X: size / 2, Y: 0}, B: geom.Vec2{X: size / 2, Y: top}, Offset: -1.5 * u,
-			Text: fmt.Sprintf("%.1f to the top turn", top)},
+			Text: fmt.Sprintf("%.1f plate to top wire centre", top)},
 		{A: geom.Vec2{X: -size / 2, Y: 0}, B: geom.Vec2{X: -size / 2, Y: c.Z0}, Offset: 1.5 * u,
 			Text: fmt.Sprintf("%.2f first turn", c.Z0)},
 		{A: geom.Vec2{X: -size / 2, Y: -t}, B: geom.Vec2{X: size / 2, Y: -t}, Offset: -(cable + 3*u),

@@ -22,6 +22,7 @@ type newOptions struct {
 	shape        string
 	kit          string
 	turns        float64
+	hand         string
 }
 
 // starter is the data the starter-spec template is executed with.
@@ -30,6 +31,7 @@ type starter struct {
 	FrequencyMHz float64
 	Shape        string
 	Turns        float64
+	Hand         string
 	WireMM       float64
 }
 
@@ -42,11 +44,12 @@ func newNewCmd() *cobra.Command {
 spec, every key explained. With --frequency-mhz it prints a starter spec
 sized for that band and --shape, ready to edit and build.`,
 		Example: `  coilwright new > reference.toml
-  coilwright new --frequency-mhz 5800 --shape conical --kit "Hilltop 5G8" > hilltop.toml`,
+  coilwright new --frequency-mhz 5800 --shape conical --kit "Hilltop 5G8" > hilltop.toml
+  coilwright new --frequency-mhz 2440 --hand LHCP > lhcp.toml`,
 		Args: exactArgs(0, "no arguments (use flags)"),
 		RunE: func(cmd *cobra.Command, _ []string) error {
 			sized := cmd.Flags().Changed("frequency-mhz")
-			for _, f := range []string{"shape", "kit", "turns"} {
+			for _, f := range []string{"shape", "kit", "turns", "hand"} {
 				if !sized && cmd.Flags().Changed(f) {
 					return usageError{fmt.Errorf("--%s sizes a starter spec and needs --frequency-mhz, e.g. new --frequency-mhz 5800 --%s ...", f, f)}
 				}
@@ -58,6 +61,7 @@ sized for that band and --shape, ready to edit and build.`,
 	cmd.Flags().StringVar(&o.shape, "shape", "cylindrical", `coil shape: "cylindrical" or "conical"`)
 	cmd.Flags().StringVar(&o.kit, "kit", "", "kit name (default from the frequency)")
 	cmd.Flags().Float64Var(&o.turns, "turns", 0, "number of turns (default 5 conical, 7 cylindrical)")
+	cmd.Flags().StringVar(&o.hand, "hand", "RHCP", `winding hand and polarisation: "RHCP" or "LHCP"`)
 	return cmd
 }
 
@@ -78,7 +82,10 @@ func runNew(w, stderr io.Writer, o newOptions, sized bool) error {
 	if o.turns != 0 && !(o.turns >= spec.MinTurns && o.turns <= spec.MaxTurns) {
 		return usageError{fmt.Errorf("--turns %g: must be between %g and %g (fractions allowed), e.g. --turns 6", o.turns, spec.MinTurns, spec.MaxTurns)}
 	}
-	st := starter{Kit: o.kit, FrequencyMHz: o.frequencyMHz, Shape: o.shape, Turns: o.turns}
+	if o.hand != "RHCP" && o.hand != "LHCP" {
+		return usageError{fmt.Errorf(`--hand %q: use "RHCP" or "LHCP"`, o.hand)}
+	}
+	st := starter{Kit: o.kit, FrequencyMHz: o.frequencyMHz, Shape: o.shape, Turns: o.turns, Hand: o.hand}
 	if st.Kit == "" {
 		st.Kit = fmt.Sprintf("Starter %g MHz %s", o.frequencyMHz, o.shape)
 	}
