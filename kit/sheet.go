@@ -59,7 +59,7 @@ func (k *Kit) writeSheet(out Sink) error {
 	if err != nil {
 		return err
 	}
-	doc := sheetDocument(sheet, page)
+	doc := sheetDocument(sheet, page, k.stepFigures(sheet))
 	doc.TrailingPages = len(k.templates)
 	pages, err := doc.Pages()
 	if err != nil {

@@ -119,7 +119,7 @@ type CoaxCut struct {
 	FlareMM      float64 // braid fanned out round the hole on the back face; 0 for a solid outer
 	FeedHoleMM   float64 // feed hole in the reflector
 	CutMM        float64 // FinishedMM + ThroughMM + ProudMM + CentreMM
-	// Jack is "sma-flange" or "sma-bulkhead" when a panel jack is mounted
+	// Jack is the reflector.connector name ("sma-flange", "n-bulkhead", …) when a panel jack is mounted
 	// in the reflector; the cable is then a jumper of FinishedMM with a
 	// plug at each end, and the strip lengths are zero.
 	Jack string
@@ -173,7 +173,7 @@ func NewCutList(d *Design) (*CutList, error) {
 	if d.Patterns != nil {
 		cx.FeedHoleMM = d.Patterns.Reflector.Input.Feed.Diameter
 	}
-	if j := s.Reflector.Connector; j == "sma-flange" || j == "sma-bulkhead" {
+	if j := s.Reflector.Connector; FeedKindByConnector(j) != FeedCoax {
 		cx = CoaxCut{Spec: s.Coax.Type, Cable: cable, FinishedMM: s.Coax.LengthMM, CutMM: s.Coax.LengthMM, ThroughMM: thick, CentreMM: drop + FeedStandoffMM, FeedHoleMM: cx.FeedHoleMM, Jack: j}
 	}
 	cl.Coax = cx
@@ -303,8 +303,12 @@ func hardware(d *Design, cl *CutList) []HardwareItem {
 	s := d.Spec
 	var hw []HardwareItem
 	cable := cl.Coax.Cable
-	hw = append(hw, HardwareItem{Item: "SMA connector to suit " + cable.Name, Count: 1,
-		Note: "or a cable with the connector fitted; strip the connector end to the connector maker's dimensions"})
+	if j, ok := spec.ConnectorByID(s.Reflector.Connector); ok && j.Mount != "pigtail" {
+		hw = append(hw, HardwareItem{Item: j.Name, Count: 1, Note: "mounted in the reflector's feed cut-out; the feed cable plugs into it"})
+	} else {
+		hw = append(hw, HardwareItem{Item: "SMA connector to suit " + cable.Name, Count: 1,
+			Note: "or a cable with the connector fitted; strip the connector end to the connector maker's dimensions"})
+	}
 	if cl.Dowel.DiameterMM >= 6 {
 		want := s.Reflector.ThicknessMM + 2*3.0 // two thread diameters into the rod
 		i, _ := slices.BinarySearch(screwLengthsMM, want)
@@ -312,7 +316,13 @@ func hardware(d *Design, cl *CutList) []HardwareItem {
 		hw = append(hw, HardwareItem{Item: fmt.Sprintf("M3 × %s mm screw, nylon or stainless, with washer", num(length)), Count: 1,
 			Note: "from behind the reflector into a 2.5 mm pilot hole in the rod's foot"})
 	}
-	hw = append(hw, HardwareItem{Item: "cable tie, 2.5 mm wide", Count: 1, Note: "strain relief for the cable behind the reflector"})
+	if cl.Coax.Jack == "" {
+		hw = append(hw, HardwareItem{Item: "cable tie, 2.5 mm wide", Count: 1, Note: "strain relief for the cable behind the reflector"})
+		if m, _ := spec.SheetMaterialByID(s.Reflector.Material); m.Joint == "clamp" {
+			hw = append(hw, HardwareItem{Item: "M3 solder tag (tinned ring terminal), M3 × 8 mm screw, nut and star washer", Count: 1,
+				Note: "grounds the cable's outer conductor to the aluminium plate beside the feed hole"})
+		}
+	}
 	return hw
 }
 
@@ -340,10 +350,12 @@ func (cl *CutList) Rows() []CutRow {
 			Note: fmt.Sprintf("passes inside the smallest turn (%.2f mm inside) with %s mm clearance; %s", dw.InnerTurnMM, num(dw.ClearanceMM), dw.MaterialAdvice)},
 		{Item: "feed cable", Material: cx.Cable.Name, Size: fmt.Sprintf("Ø%s mm", num(cx.Cable.Outer)), Count: 1, LengthMM: cx.CutMM,
 			Note: coaxNote(cx)},
-		{Item: "heat-shrink sleeve", Material: "2:1 polyolefin", Size: fmt.Sprintf("Ø%s → Ø%s mm", num(sl.SuppliedMM), num(sl.RecoveredMM)), Count: 1, LengthMM: sl.LengthMM,
-			Note: "over the cable where it leaves the reflector's back face; slide it on before soldering"},
 		{Item: "solder", Material: "solder wire", Size: "", Amount: cl.Solder.Amount, Unit: cl.Solder.Unit, Note: cl.Solder.Basis},
 		{Item: "epoxy", Material: "two-part epoxy, slow-setting", Amount: cl.Epoxy.Amount, Unit: cl.Epoxy.Unit, Note: cl.Epoxy.Basis},
+	}
+	if cx.Jack == "" {
+		rows = slices.Insert(rows, 3, CutRow{Item: "heat-shrink sleeve", Material: "2:1 polyolefin", Size: fmt.Sprintf("Ø%s → Ø%s mm", num(sl.SuppliedMM), num(sl.RecoveredMM)), Count: 1, LengthMM: sl.LengthMM,
+			Note: "over the cable where it leaves the reflector's back face; slide it on before soldering"})
 	}
 	for _, h := range cl.Hardware {
 		rows = append(rows, CutRow{Item: "hardware", Material: h.Item, Count: h.Count, Note: h.Note})

@@ -71,13 +71,9 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 	if rs.Shape == "square" {
 		in.Shape, in.CornerRadius = ReflectorSquare, rs.CornerRadiusMM
 	}
-	switch rs.Connector {
-	case "sma-flange":
-		in.Feed = FeedHole{Kind: FeedSMAFlange}
-	case "sma-bulkhead":
-		in.Feed = FeedHole{Kind: FeedSMABulkhead}
-	default:
-		in.Feed = FeedHole{Kind: FeedCoax, Diameter: s.Coax.Cable().FeedHoleMM()}
+	in.Feed = FeedHole{Kind: FeedKindByConnector(rs.Connector)}
+	if in.Feed.Kind == FeedCoax {
+		in.Feed.Diameter = s.Coax.Cable().FeedHoleMM()
 	}
 	if rs.FeedHoleMM != nil {
 		in.Feed.Diameter = *rs.FeedHoleMM
@@ -119,7 +115,10 @@ func (p *Patterns) label(m spec.SheetMaterial) string {
 	case m.Halogenated:
 		return fmt.Sprintf("For milling or shearing: %s is a halogenated laminate, not for laser cutting. %s; kerf %.2f mm compensated.", m.Name, capitalise(methodName(p.Method)), p.Kerf)
 	}
-	return fmt.Sprintf("%s: %s; kerf %.2f mm compensated.", capitalise(m.Name), methodName(p.Method), p.Kerf)
+	if m.Reflective && p.Method == "laser" {
+		return fmt.Sprintf("%s: for a fibre laser only (a CO2 laser's beam reflects off it); kerf %.2f mm compensated.", capitalise(m.Name), p.Kerf)
+	}
+	return fmt.Sprintf("%s: labelled for %s; kerf %.2f mm compensated.", capitalise(m.Name), methodName(p.Method), p.Kerf)
 }
 
 // capitalise upper-cases the first ASCII letter of s.
