@@ -358,6 +358,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 			expect,
 			"Before transmitting, work out the EIRP and check the limit that applies to you.",
 		}, Cautions: pick(all, HazardRF)},
+		{Title: "Checks without a network analyser", Text: acceptanceText(d), Cautions: pick(all, HazardRF)},
 	}
 	if cx.Jack != "" {
 		// A panel jack has no cable at the plate to shrink or tie.
