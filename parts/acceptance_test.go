@@ -22,7 +22,6 @@ func TestSeenThroughFeeder(t *testing.T) {
 	}
 }
 
-
 func TestAcceptanceReadings(t *testing.T) {
 	text := strings.NewReplacer("%MAT%", "brass", "%CONN%", "coax", "%CABLE%", "rg58", "%METHOD%", "mill").Replace(combo) + "\n[rf]\nfeeder_loss_db = 1.0\n"
 	d := mustDesign(t, text)
