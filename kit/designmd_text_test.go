@@ -1,6 +1,7 @@
 package kit
 
 import (
+	"errors"
 	"strings"
 	"testing"
 
@@ -59,5 +60,24 @@ func TestDesignMarkdownWording(t *testing.T) {
 		if !strings.Contains(md, want) {
 			t.Errorf("design.md lacks %q", want)
 		}
+	}
+}
+
+// TestWireLongerThanStockIsRefused plans one kit whose wire blank is
+// longer than the stock rod: check refuses it on stock.wire_rod_mm with
+// the length that fits and the other way out.
+func TestWireLongerThanStockIsRefused(t *testing.T) {
+	text := strings.Replace(squareHard, "turns = 1.0", "turns = 8.0", 1) + "\n[stock]\nwire_rod_mm = 500.0\n"
+	s, err := spec.ParseSpec([]byte(text))
+	if err != nil {
+		t.Fatal(err)
+	}
+	_, err = New(Source{Name: "t.toml", Bytes: []byte(text), Spec: s}, Options{})
+	var se *spec.SpecError
+	if !errors.As(err, &se) || se.Key != "stock.wire_rod_mm" || se.Line == 0 {
+		t.Fatalf("error %v, want a stock.wire_rod_mm SpecError with its line", err)
+	}
+	if !strings.Contains(se.Fix, "set wire_rod_mm = ") || !strings.Contains(se.Fix, "reel") {
+		t.Errorf("fix %q", se.Fix)
 	}
 }

@@ -67,10 +67,14 @@ func New(src Source, opt Options) (*Kit, error) {
 	if k.cutList, err = parts.NewCutList(d); err != nil {
 		return nil, err
 	}
+	// The batch plan also checks that each piece fits its stock rod, so
+	// one kit is planned too, and its plan kept only for a batch.
+	bp, err := newBatchPlan(d, k.cutList, k.parts)
+	if err != nil {
+		return nil, err
+	}
 	if src.Spec.Quantity > 1 {
-		if k.batch, err = newBatchPlan(d, k.cutList, k.parts); err != nil {
-			return nil, err
-		}
+		k.batch = bp
 	}
 	if k.templates, err = templatePages(d, k.parts); err != nil {
 		return nil, err

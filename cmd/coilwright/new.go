@@ -2,9 +2,11 @@ package main
 
 import (
 	"bytes"
+	"errors"
 	"fmt"
 	"io"
 	"math"
+	"strings"
 	"text/template"
 
 	"github.com/spf13/cobra"
@@ -33,6 +35,9 @@ type starter struct {
 	Turns        float64
 	Hand         string
 	WireMM       float64
+	// WireRodMM and DowelRodMM are stock lengths written only when the
+	// default 1000 mm is too short for one piece.
+	WireRodMM, DowelRodMM float64
 }
 
 func newNewCmd() *cobra.Command {
@@ -104,6 +109,15 @@ func runNew(w, stderr io.Writer, o newOptions, sized bool) error {
 	if err := starterTmpl.Execute(&buf, st); err != nil {
 		return err
 	}
+	// A large coil's wire blank or rod is longer than the default stock:
+	// write the stock length that takes it, from the refusal's own figure.
+	if n := stockNeeds(buf.Bytes()); len(n) > 0 {
+		st.WireRodMM, st.DowelRodMM = n["stock.wire_rod_mm"], n["stock.dowel_rod_mm"]
+		buf.Reset()
+		if err := starterTmpl.Execute(&buf, st); err != nil {
+			return err
+		}
+	}
 	if err := checkStarter(buf.Bytes()); err != nil {
 		fmt.Fprintf(stderr, "coilwright: the starter spec does not pass check yet; edit it first:\n%v\n", err)
 	}
@@ -120,4 +134,30 @@ func checkStarter(b []byte) error {
 	}
 	_, err = kit.New(kit.Source{Name: "starter", Bytes: b, Spec: s}, kit.Options{})
 	return err
+}
+
+// stockNeeds returns, for each stock key a starter spec is refused on,
+// the length its fix asks for.
+func stockNeeds(b []byte) map[string]float64 {
+	err := checkStarter(b)
+	var errs spec.SpecErrors
+	var one *spec.SpecError
+	switch {
+	case errors.As(err, &errs):
+	case errors.As(err, &one):
+		errs = spec.SpecErrors{one}
+	default:
+		return nil
+	}
+	out := map[string]float64{}
+	for _, e := range errs {
+		if e.Key != "stock.wire_rod_mm" && e.Key != "stock.dowel_rod_mm" {
+			continue
+		}
+		var v float64
+		if _, err := fmt.Sscanf(e.Fix[strings.Index(e.Fix, "=")+1:], "%g", &v); err == nil {
+			out[e.Key] = v
+		}
+	}
+	return out
 }
