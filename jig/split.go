@@ -18,13 +18,13 @@ import (
 
 // Joint sizes, mm. Common practice (no published source): a 0.2 mm
 // radial clearance is a sliding fit on a hobby FDM printer; the peg is as
-// long as it is wide.
+// long as it is wide, and no thinner than 2 mm, which prints cleanly.
 const (
 	// JointClearanceMM is the radial clearance of the rod in the bore and
 	// of the peg in its socket.
 	JointClearanceMM = 0.2
 	// jointPegMinMM and jointPegMaxMM bound the peg's radius.
-	jointPegMinMM = 1.5
+	jointPegMinMM = 1.0
 	jointPegMaxMM = 4.0
 )
 

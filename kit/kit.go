@@ -48,6 +48,8 @@ type Kit struct {
 	cutList   *parts.CutList
 	batch     *batchPlan // nil for one kit
 	templates []pdf.Page // the 1:1 template pages, laid out once
+	split     *jig.SplitPlan // sections of a former taller than the printer; nil when it fits or cannot be split
+	formerObj *jig.Former    // the former split, when split is set
 }
 
 // New works out the design for src and plans every part of the build.
@@ -76,6 +78,7 @@ func New(src Source, opt Options) (*Kit, error) {
 	if src.Spec.Quantity > 1 {
 		k.batch = bp
 	}
+	k.planSplit()
 	if k.templates, err = templatePages(d, k.parts); err != nil {
 		return nil, err
 	}

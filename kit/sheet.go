@@ -52,6 +52,13 @@ func (k *Kit) writeSheet(out Sink) error {
 		}
 	}
 	sheet := parts.NewBuildSheet(d, cl, k.Source.SHA256())
+	if k.split != nil {
+		for i, st := range sheet.Steps {
+			if st.Title == "Lock its end in the former" {
+				sheet.Steps[i].Text = append([]string{k.sectionAssembly()}, st.Text...)
+			}
+		}
+	}
 	if err := out.Add("build-sheet.md", func(w io.Writer) error { return sheetTmpl.Execute(w, sheet) }); err != nil {
 		return err
 	}

@@ -111,8 +111,15 @@ func runNew(w, stderr io.Writer, o newOptions, sized bool) error {
 	}
 	// A large coil's wire blank or rod is longer than the default stock:
 	// write the stock length that takes it, from the refusal's own figure.
-	if n := stockNeeds(buf.Bytes()); len(n) > 0 {
-		st.WireRodMM, st.DowelRodMM = n["stock.wire_rod_mm"], n["stock.dowel_rod_mm"]
+	// The check stops at the first stock too short, so ask again for the
+	// other.
+	for range 2 {
+		n := stockNeeds(buf.Bytes())
+		if len(n) == 0 {
+			break
+		}
+		st.WireRodMM = max(st.WireRodMM, n["stock.wire_rod_mm"])
+		st.DowelRodMM = max(st.DowelRodMM, n["stock.dowel_rod_mm"])
 		buf.Reset()
 		if err := starterTmpl.Execute(&buf, st); err != nil {
 			return err
