@@ -46,8 +46,8 @@ type Kit struct {
 	opt       Options
 	parts     []cutPart
 	cutList   *parts.CutList
-	batch     *batchPlan // nil for one kit
-	templates []pdf.Page // the 1:1 template pages, laid out once
+	batch     *batchPlan     // nil for one kit
+	templates []pdf.Page     // the 1:1 template pages, laid out once
 	split     *jig.SplitPlan // sections of a former taller than the printer; nil when it fits or cannot be split
 	formerObj *jig.Former    // the former split, when split is set
 }
