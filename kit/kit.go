@@ -43,13 +43,14 @@ type Kit struct {
 	Former jig.FormerPlan // the former's sizes, drive and envelope
 	Report parts.Report   // as in design.json and check --json
 
-	opt       Options
-	parts     []cutPart
-	cutList   *parts.CutList
-	batch     *batchPlan     // nil for one kit
-	templates []pdf.Page     // the 1:1 template pages, laid out once
-	split     *jig.SplitPlan // sections of a former taller than the printer; nil when it fits or cannot be split
-	formerObj *jig.Former    // the former split, when split is set
+	opt         Options
+	parts       []cutPart
+	cutList     *parts.CutList
+	batch       *batchPlan       // nil for one kit
+	templates   []pdf.Page       // the 1:1 template pages, laid out once
+	split       *jig.SplitPlan   // sections of a former taller than the printer; nil when it fits or cannot be split
+	formerObj   *jig.Former      // the former split, when split is set
+	splitParams jig.FormerParams // its sizes: bored through for the rod
 }
 
 // New works out the design for src and plans every part of the build.

@@ -13,6 +13,7 @@ import (
 
 	"coilwright/cam/geom"
 	"coilwright/cam/pdf"
+	"coilwright/jig"
 	"coilwright/parts"
 	"coilwright/parts/spec"
 )
@@ -88,11 +89,19 @@ func handTurn(d *parts.Design) string {
 // bent at a right angle into the hole, mark A at the mouth.
 func (k *Kit) lockFigure() pdf.Figure {
 	d, p, w := k.Design, k.Former.Params, k.cutList.Wire
+	if k.formerObj != nil {
+		p = k.splitParams
+	}
 	wd := p.Wire
 	r := k.Former.Path.StartRadius // wire centre in the groove
 	bottom := r - wd/2
 	core := bottom + p.GrooveDepth
-	holeIn := bottom - p.LockDepth
+	// The hole stops a wall short of the drive cut (jig's lockHole).
+	driveR := p.BoreDiameter / 2
+	if p.Drive == jig.HexSocket {
+		driveR = p.HexAcrossFlats / math.Sqrt(3)
+	}
+	holeIn := math.Max(bottom-p.LockDepth, driveR+p.MinWall)
 	half := (wd + p.Clearance) / 2
 	sense := handSense(d)
 	up := math.Pi / 2
@@ -282,6 +291,9 @@ func feedFigure(d *parts.Design, cl *parts.CutList) pdf.Figure {
 	cab := cx.Cable
 	hole := cx.FeedHoleMM / 2
 	span := math.Max(2.2*cab.Outer, 6)
+	if cx.Jack != "" {
+		span = math.Max(span, 1.6*hole+4)
+	}
 	z0 := d.Coil.Z0
 	wd := d.Spec.Wire.DiameterMM
 	plate := func(x0, x1 float64) pdf.FigurePath {
@@ -297,8 +309,8 @@ func feedFigure(d *parts.Design, cl *parts.CutList) pdf.Figure {
 		paths = append(paths,
 			pdf.FigurePath{Points: rect(-body, below, body, -t), Closed: true, Fill: true, FillGray: 0.3, Gray: 1},
 			pdf.FigurePath{Points: rect(-cab.Centre/2, -t, cab.Centre/2, cx.CentreMM), Closed: true, Fill: true, FillGray: 0.8, Gray: 1})
-		dims = append(dims, geom.Dimension{A: geom.Vec2{X: cab.Centre / 2, Y: 0}, B: geom.Vec2{X: cab.Centre / 2, Y: cx.CentreMM}, Offset: -(span * 0.35), Text: fmt.Sprintf("contact %.1f above the plate", cx.CentreMM)})
-		labels = append(labels, pdf.FigureLabel{At: geom.Vec2{X: 0, Y: below - 1.5}, Text: "jack body under the plate", Center: true})
+		dims = append(dims, geom.Dimension{A: geom.Vec2{X: -cab.Centre / 2, Y: 0}, B: geom.Vec2{X: -cab.Centre / 2, Y: cx.CentreMM}, Offset: span * 0.45, Text: fmt.Sprintf("contact %.1f above the plate", cx.CentreMM)})
+		labels = append(labels, pdf.FigureLabel{At: geom.Vec2{X: 0, Y: (below - t) / 2}, Text: "jack body under the plate", Center: true})
 	} else {
 		top := cx.ProudMM
 		diel := cab.Dielectric / 2

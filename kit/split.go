@@ -34,7 +34,7 @@ func (k *Kit) planSplit() {
 		k.Design.Warnings = append(k.Design.Warnings, parts.Warning{Code: "former-split", Message: "the former could not be split into sections: " + err.Error()})
 		return
 	}
-	k.formerObj = f
+	k.formerObj, k.splitParams = f, params
 	for i, w := range k.Design.Warnings {
 		if w.Code == "former-size" {
 			k.Design.Warnings[i] = parts.Warning{Code: "former-size", Message: fmt.Sprintf(

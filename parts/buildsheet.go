@@ -289,7 +289,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 	coaxSteps := ch.feedSteps(cx, clearance)
 	lead := fmt.Sprintf("At the coil's start, bend the feed lead straight down, parallel to the axis: it is %s long and ends just above the coax's dielectric.", mm(w.FeedLeadMM))
 	if w.FeedLeadMM < 2*w.DiameterMM {
-		lead = fmt.Sprintf("The wire's start sits only %s above the coax's dielectric, too little to bend a lead: leave the start straight; the centre conductor is soldered to its side in step 11.", mm(w.FeedLeadMM))
+		lead = fmt.Sprintf("The wire's start sits only %s above the coax's dielectric, too little to bend a lead: leave the start straight; the centre conductor is soldered to its side in the step that solders the coil.", mm(w.FeedLeadMM))
 	}
 	rodHole := ""
 	screw := "Lower the rod through the open top of the coil and epoxy its foot to the reflector's centre."
@@ -373,15 +373,25 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 				list[i].Title = "Mount the " + ch.connector.Name
 			}
 			for j, t := range list[i].Text {
-				list[i].Text[j] = strings.ReplaceAll(strings.ReplaceAll(t, "Solder the centre conductor to", "Solder the connector's rear contact to"), "the coax's dielectric", "the connector's insulator")
+				list[i].Text[j] = strings.NewReplacer("Solder the centre conductor to", "Solder the connector's rear contact to", "the coax's dielectric", "the connector's insulator", "the bare centre conductor", "the connector's rear contact", "the centre conductor is soldered", "the connector's rear contact is soldered").Replace(t)
 			}
 		}
 	}
-	shrink := 0
+	shrink, coil := 0, 0
 	for i := range list {
 		list[i].Number = i + 1
-		if list[i].Title == "Heat-shrink" {
+		switch list[i].Title {
+		case "Heat-shrink":
 			shrink = i + 1
+		case "Solder the coil":
+			coil = i + 1
+		}
+	}
+	if coil > 0 {
+		for i := range list {
+			for j, t := range list[i].Text {
+				list[i].Text[j] = strings.ReplaceAll(t, "in the step that solders the coil", fmt.Sprintf("in step %d", coil))
+			}
 		}
 	}
 	if shrink > 0 {

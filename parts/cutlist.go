@@ -201,7 +201,7 @@ func NewCutList(d *Design) (*CutList, error) {
 	cl.Hardware = hardware(d, cl)
 	if drop < 2*wd {
 		cl.Warnings = append(cl.Warnings, Warning{Code: "short-feed-lead",
-			Message: fmt.Sprintf("the wire centre is only %.1f mm above the dielectric stub: too little to bend a lead down; solder the centre conductor to the side of the wire's start", drop)})
+			Message: fmt.Sprintf("the wire centre is only %.1f mm above the %s: too little to bend a lead down; solder the %s to the side of the wire's start", drop, feedStub(cx).stub, feedStub(cx).pin)})
 	}
 	if dw.AbsorbsWater {
 		cl.Warnings = append(cl.Warnings, Warning{Code: "wood-dowel", Message: dw.MaterialAdvice})
@@ -372,4 +372,14 @@ func coaxNote(cx CoaxCut) string {
 		flare = fmt.Sprintf("braid flare %.1f mm", cx.FlareMM)
 	}
 	return fmt.Sprintf("%.1f mm to the reflector's back face + %.1f mm through it; bare centre %.1f mm, bare dielectric %.1f mm, %s; feed hole Ø%.2f mm", cx.FinishedMM, cx.ThroughMM, cx.CentreMM, cx.DielectricMM, flare, cx.FeedHoleMM)
+}
+
+// feedStub names what stands up through the plate at the feed: the
+// coax's dielectric stub and centre conductor, or a jack's insulator and
+// rear contact.
+func feedStub(cx CoaxCut) struct{ stub, pin string } {
+	if cx.Jack != "" {
+		return struct{ stub, pin string }{"connector's insulator", "connector's rear contact"}
+	}
+	return struct{ stub, pin string }{"dielectric stub", "centre conductor"}
 }

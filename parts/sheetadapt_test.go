@@ -65,7 +65,7 @@ func TestSheetFollowsMaterialAndConnector(t *testing.T) {
 		"tinplate":  {want: []string{"takes solder"}, not: []string{"copper face", "cannot be soft-soldered", "Laminate dust"}},
 	}
 	pigtailNot := []string{"lock washer", "four screws", "rear contact"}
-	jackNot := []string{"heat-shrink", "Heat-shrink", "cable tie", "sleeve", "Cut the cable to", "Push the cable up"}
+	jackNot := []string{"heat-shrink", "Heat-shrink", "cable tie", "sleeve", "Cut the cable to", "Push the cable up", "centre conductor", "coax's dielectric"}
 	conn := map[string]rule{
 		"coax":         {want: []string{"Heat-shrink", "cable tie", "Push the cable up through the feed hole"}, not: pigtailNot},
 		"sma-flange":   {want: []string{"SMA four-hole flange jack", "four screws", "rear contact"}, not: append([]string{"lock washer", "N "}, jackNot...)},
