@@ -52,10 +52,10 @@ func (k *Kit) writeSheet(out Sink) error {
 		}
 	}
 	sheet := parts.NewBuildSheet(d, cl, k.Source.SHA256())
-	if k.split != nil {
+	if lead := k.formerLead(); lead != "" {
 		for i, st := range sheet.Steps {
 			if st.Title == "Lock its end in the former" {
-				sheet.Steps[i].Text = append([]string{k.sectionAssembly()}, st.Text...)
+				sheet.Steps[i].Text = append([]string{lead}, st.Text...)
 			}
 		}
 	}

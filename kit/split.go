@@ -89,3 +89,17 @@ func (k *Kit) sectionAssembly() string {
 	return fmt.Sprintf("This former is printed as %d sections, numbered on their top faces. Slide them onto the Ø%s mm support rod in order, section 1 (the flange) first, turning each until its socket drops over the key peg of the one below, and clamp the stack so the joints close: the groove runs on across each joint. Wind over the joints as if the former were one piece.",
 		n, num(k.cutList.Dowel.DiameterMM))
 }
+
+// formerLead is the paragraph the lock step opens with when the former is
+// not printed whole: the sections' assembly, or, for a former no printer
+// section takes, winding on a turned mandrel instead.
+func (k *Kit) formerLead() string {
+	switch {
+	case k.split != nil:
+		return k.sectionAssembly()
+	case !k.Former.FitsPrinter:
+		return fmt.Sprintf("No former is printed for this coil: at %.0f mm across and %.0f mm tall it does not fit the print volume. Wind on a turned or built-up mandrel instead, its wire-centre diameters as in the Former (mm) column of design.md's wire and winding table, with a hole for the lock end at the start and a pencil line for the pitch; the steps below read the same with the mandrel in place of the former.",
+			k.Former.DiameterMM, k.Former.HeightMM)
+	}
+	return ""
+}

@@ -77,3 +77,20 @@ func TestTallFormerIsSplit(t *testing.T) {
 		}
 	}
 }
+
+// TestWideFormerSaysMandrel: a former wider than the printer is neither
+// written nor split, and the lock step says to wind on a mandrel.
+func TestWideFormerSaysMandrel(t *testing.T) {
+	k := specKit(t, strings.Replace(lBand, "[stock]", "[former]\nprint_width_mm = 20.0\n\n[stock]", 1))
+	if k.split != nil {
+		t.Fatal("a former wider than the printer was split")
+	}
+	var m Memory
+	if err := k.writeSheet(&m); err != nil {
+		t.Fatal(err)
+	}
+	b, _ := m.File("build-sheet.md")
+	if !strings.Contains(string(b), "No former is printed for this coil") || strings.Contains(string(b), "printed as 2 sections") {
+		t.Error("the lock step does not say to wind on a mandrel")
+	}
+}
