@@ -108,9 +108,14 @@ func (k *Kit) lockFigure() pdf.Figure {
 	span := 0.9 // radians of groove drawn
 	o := geom.Vec2{}
 	// The mouth at the top; the tail runs down the hole towards the axis.
-	// The tail drawn at its true length: a tail longer than the hole
-	// shows as running past the hole's bottom.
-	tail := w.LockTailMM
+	// A tail longer than the hole is cut to the hole's depth first (the
+	// lock end is cut down to the feed lead after winding anyway).
+	tail, tailText, cutNote := w.LockTailMM, fmt.Sprintf("tail %.1f", w.LockTailMM), ""
+	if room := r - holeIn; tail > room {
+		tail = math.Floor(room*2) / 2
+		tailText = fmt.Sprintf("tail %.1f (cut from %.1f)", tail, w.LockTailMM)
+		cutNote = fmt.Sprintf(" This lock hole takes only %.1f mm: cut the lock end to %.1f mm beyond mark A before pushing it in.", room, tail)
+	}
 	paths := []pdf.FigurePath{
 		{Points: arc(o, core, up-1.3*span, up+1.3*span, 64), Gray: 0.8},
 		{Points: arc(o, bottom, up-1.3*span, up+1.3*span, 64), Gray: 0.4, Dash: 1},
@@ -121,7 +126,7 @@ func (k *Kit) lockFigure() pdf.Figure {
 	// A short bar across the wire at the mouth: mark A.
 	paths = append(paths, pdf.FigurePath{Points: geom.Polyline{{X: -1.6 * wd, Y: core}, {X: 1.6 * wd, Y: core}}, StrokeMM: 0.25 * wd, Gray: 1})
 	dims := []geom.Dimension{
-		{A: geom.Vec2{X: 0, Y: r}, B: geom.Vec2{X: 0, Y: r - tail}, Offset: -sense * (half + wd), Text: fmt.Sprintf("tail %.1f", w.LockTailMM)},
+		{A: geom.Vec2{X: 0, Y: r}, B: geom.Vec2{X: 0, Y: r - tail}, Offset: sense * (half + 8*wd), Text: tailText},
 		{A: geom.Vec2{X: 0, Y: core}, B: geom.Vec2{X: 0, Y: holeIn}, Offset: sense * (half + 3*wd), Text: fmt.Sprintf("hole %.1f deep", core-holeIn)},
 	}
 	end := arc(o, core+2.5*wd, up+sense*span, up+sense*span, 1)[0]
@@ -132,7 +137,7 @@ func (k *Kit) lockFigure() pdf.Figure {
 		{At: geom.Vec2{X: sense * (half + 0.5*wd), Y: holeIn - 1.5*wd}, Text: "lock hole", Right: sense < 0},
 	}
 	return pdf.Figure{Paths: paths, Dimensions: dims, Labels: labels, Height: stepFigureHeight,
-		Caption: fmt.Sprintf("Lock tail, seen along the former's axis (mm, not to scale with the other figures): bend the last %.1f mm before mark A at a right angle and push it down the lock hole until mark A sits at the hole's mouth; the wire then runs along the groove.", w.LockTailMM)}
+		Caption: fmt.Sprintf("Lock tail, seen along the former's axis (mm, not to scale with the other figures): bend the lock end at a right angle at mark A and push it down the lock hole until mark A sits at the hole's mouth; the wire then runs along the groove.%s", cutNote)}
 }
 
 // windingFigure draws the coil seen from its open end with the way the

@@ -40,7 +40,7 @@ func TestStepFiguresCarryTheirDimensions(t *testing.T) {
 			w := d.Patterns.Wedge
 			in := d.Patterns.Reflector.Input
 			want := map[string][]string{
-				"lock tail": {"Lock tail, seen along the former's axis", fmt.Sprintf("tail %.1f", cl.Wire.LockTailMM), "mark A at the hole's mouth"},
+				"lock tail": {"Lock tail, seen along the former's axis", "tail ", fmt.Sprintf("%.1f", cl.Wire.LockTailMM), "mark A at the hole's mouth", "deep"},
 				"winding": {"Winding direction, seen from the open end", d.Coil.Hand.String(), fmt.Sprintf("Ø%.2f wire centre at the base", 2*d.Coil.StartRadius),
 					"seen from the open end: " + handTurn(d) + " as it rises"},
 				"strip": {"Matching strip (mm)", "FEED END", fmt.Sprintf("%.2f along the centreline", w.Length),
