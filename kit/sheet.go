@@ -52,11 +52,15 @@ func (k *Kit) writeSheet(out Sink) error {
 		}
 	}
 	sheet := parts.NewBuildSheet(d, cl, k.Source.SHA256())
-	if lead := k.formerLead(); lead != "" {
-		for i, st := range sheet.Steps {
-			if st.Title == "Lock its end in the former" {
-				sheet.Steps[i].Text = append([]string{lead}, st.Text...)
-			}
+	for i, st := range sheet.Steps {
+		if st.Title != "Lock its end in the former" {
+			continue
+		}
+		if lead := k.formerLead(); lead != "" {
+			sheet.Steps[i].Text = append([]string{lead}, sheet.Steps[i].Text...)
+		}
+		if note, _ := k.lockCut(); note != "" && (k.Former.FitsPrinter || k.split != nil) {
+			sheet.Steps[i].Text = append(sheet.Steps[i].Text, note)
 		}
 	}
 	if err := out.Add("build-sheet.md", func(w io.Writer) error { return sheetTmpl.Execute(w, sheet) }); err != nil {

@@ -96,12 +96,7 @@ func (k *Kit) lockFigure() pdf.Figure {
 	r := k.Former.Path.StartRadius // wire centre in the groove
 	bottom := r - wd/2
 	core := bottom + p.GrooveDepth
-	// The hole stops a wall short of the drive cut (jig's lockHole).
-	driveR := p.BoreDiameter / 2
-	if p.Drive == jig.HexSocket {
-		driveR = p.HexAcrossFlats / math.Sqrt(3)
-	}
-	holeIn := math.Max(bottom-p.LockDepth, driveR+p.MinWall)
+	holeIn := r - k.lockRoom()
 	half := (wd + p.Clearance) / 2
 	sense := handSense(d)
 	up := math.Pi / 2
@@ -111,10 +106,10 @@ func (k *Kit) lockFigure() pdf.Figure {
 	// A tail longer than the hole is cut to the hole's depth first (the
 	// lock end is cut down to the feed lead after winding anyway).
 	tail, tailText, cutNote := w.LockTailMM, fmt.Sprintf("tail %.1f", w.LockTailMM), ""
-	if room := r - holeIn; tail > room {
-		tail = math.Floor(room*2) / 2
+	if note, cut := k.lockCut(); note != "" {
+		tail = cut
 		tailText = fmt.Sprintf("tail %.1f (cut from %.1f)", tail, w.LockTailMM)
-		cutNote = fmt.Sprintf(" This lock hole takes only %.1f mm: cut the lock end to %.1f mm beyond mark A before pushing it in.", room, tail)
+		cutNote = " " + note
 	}
 	paths := []pdf.FigurePath{
 		{Points: arc(o, core, up-1.3*span, up+1.3*span, 64), Gray: 0.8},
@@ -353,4 +348,38 @@ func feedFigure(d *parts.Design, cl *parts.CutList) pdf.Figure {
 	labels = append(labels, pdf.FigureLabel{At: geom.Vec2{X: span, Y: -t - 0.9*t - 0.6}, Text: fmt.Sprintf("plate, %.1f thick", t), Right: true})
 	return pdf.Figure{Paths: paths, Dimensions: dims, Labels: labels, Height: stepFigureHeight,
 		Caption: "Feed in section at the plate (mm): what is stripped to which length, and where the wire's start sits above it."}
+}
+
+// lockParams returns the sizes of the former as printed: bored through
+// for the rod when it is split.
+func (k *Kit) lockParams() jig.FormerParams {
+	if k.formerObj != nil {
+		return k.splitParams
+	}
+	return k.Former.Params
+}
+
+// lockRoom returns how far the lock tail can reach from the wire's centre
+// at the hole's mouth to the hole's bottom, which stops a wall short of
+// the drive cut (as jig's lockHole does), mm.
+func (k *Kit) lockRoom() float64 {
+	p := k.lockParams()
+	bottom := k.Former.Path.StartRadius - p.Wire/2
+	driveR := p.BoreDiameter / 2
+	if p.Drive == jig.HexSocket {
+		driveR = p.HexAcrossFlats / math.Sqrt(3)
+	}
+	return k.Former.Path.StartRadius - math.Max(bottom-p.LockDepth, driveR+p.MinWall)
+}
+
+// lockCut returns the instruction to cut the lock end shorter when the
+// hole does not take the whole tail, and the length to cut it to; empty
+// when it does.
+func (k *Kit) lockCut() (string, float64) {
+	room, tail := k.lockRoom(), k.cutList.Wire.LockTailMM
+	if tail <= room {
+		return "", tail
+	}
+	cut := math.Floor(room*2) / 2
+	return fmt.Sprintf("This lock hole takes only %.1f mm: cut the lock end to %.1f mm beyond mark A before pushing it in.", room, cut), cut
 }

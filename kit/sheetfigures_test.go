@@ -87,3 +87,24 @@ func TestSideViewShowsTheHand(t *testing.T) {
 		}
 	}
 }
+
+// TestLockCutInTheSteps: when the lock hole is shallower than the lock
+// tail (the hole stops a wall short of the drive), the lock step itself,
+// not only the PDF figure, says how short to cut the tail.
+func TestLockCutInTheSteps(t *testing.T) {
+	for _, demo := range templates.Demos() {
+		k := demoKit(t, demo, Options{Version: "test"})
+		note, cut := k.lockCut()
+		if room := k.lockRoom(); (note != "") != (k.cutList.Wire.LockTailMM > room) || cut > room {
+			t.Errorf("%s: room %.2f mm, tail %.2f mm, cut %.2f mm, note %q", demo, room, k.cutList.Wire.LockTailMM, cut, note)
+		}
+		var m Memory
+		if err := k.writeSheet(&m); err != nil {
+			t.Fatal(err)
+		}
+		b, _ := m.File("build-sheet.md")
+		if note != "" && !strings.Contains(string(b), note) {
+			t.Errorf("%s: the lock step lacks %q", demo, note)
+		}
+	}
+}
