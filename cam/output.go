@@ -12,6 +12,7 @@ import (
 	"path/filepath"
 	"sort"
 	"strings"
+	"sync"
 )
 
 // ManifestName is the file in every output folder that records what the
@@ -60,17 +61,27 @@ func (e *ForeignFilesError) Error() string {
 // Is makes errors.Is(err, ErrForeignFiles) true.
 func (e *ForeignFilesError) Is(target error) bool { return target == ErrForeignFiles }
 
-// Output is a build's output folder while the build runs. Each file is
-// written in full to a hidden temporary file in the folder; Commit renames
-// them all into place and removes outputs of the previous build that this
-// one no longer makes; Abort removes the temporary files and leaves the
-// folder as it was. An Output is not safe for concurrent use.
+// Output is a build's output folder while the build runs, holding the
+// folder's lock. Each file is written in full to a hidden temporary file in
+// the folder; Commit switches the folder to the new set of files (renaming
+// them into place and removing outputs of the previous build that this one
+// no longer makes) in a way that survives a crash; Abort removes the
+// temporary files and leaves the folder as it was. An Output is not safe
+// for concurrent use, except Interrupt.
 type Output struct {
 	dir      string
 	previous map[string]bool // files the previous build recorded
 	staged   []staged
 	names    map[string]bool
 	done     bool // committed: the staged files are in place
+
+	lock    *dirLock   // held from NewOutput until Commit or Abort
+	created []string   // folders NewOutput made, deepest first
+	ignored []string   // manifest entries that are not plain output names
+	mu      sync.Mutex // guards temps and interrupted against Interrupt
+	temps   map[string]bool
+	stopped bool                    // Interrupt ran: no new temporary files
+	failAt  func(step string) error // test hook: fail the commit at a step
 }
 
 type staged struct {
@@ -79,58 +90,120 @@ type staged struct {
 	sum       string
 }
 
-// NewOutput prepares dir (creating it if needed) for a build. Unless force
-// is set, it fails with a *ForeignFilesError when dir holds a file that the
-// manifest of a previous build does not list.
+// NewOutput prepares dir (creating it if needed) for a build and takes the
+// folder's lock, which Commit or Abort releases; while another build holds
+// it, NewOutput fails with a *BusyError. It first finishes a commit that an
+// earlier, interrupted build had decided (see Commit) and removes the
+// temporary files interrupted builds left. Unless force is set, it then
+// fails with a *ForeignFilesError when dir holds a file that the manifest of
+// a previous build does not list. Manifest entries that are not plain
+// output names are ignored (see Ignored).
 func NewOutput(dir string, force bool) (*Output, error) {
-	if err := os.MkdirAll(dir, 0o755); err != nil {
-		return nil, err
-	}
-	prev, err := readManifestNames(dir)
+	return newOutput(dir, force, nil)
+}
+
+// newOutput is NewOutput with a hook that can fail the recovery of an
+// interrupted commit at any step (nil in normal use).
+func newOutput(dir string, force bool, failAt func(string) error) (*Output, error) {
+	created, err := makeDir(dir)
 	if err != nil {
 		return nil, err
 	}
-	entries, err := os.ReadDir(dir)
-	if err != nil {
+	o := &Output{dir: dir, names: map[string]bool{}, created: created, temps: map[string]bool{}}
+	if o.lock, err = lockDir(dir); err != nil {
+		o.Abort()
 		return nil, err
+	}
+	if err := o.prepare(force, failAt); err != nil {
+		o.Abort()
+		return nil, err
+	}
+	return o, nil
+}
+
+// prepare recovers the folder from interrupted builds and checks that every
+// file in it is the tool's own, unless force is set.
+func (o *Output) prepare(force bool, failAt func(string) error) error {
+	if err := recoverCommit(o.dir, failAt); err != nil {
+		return err
+	}
+	if err := removeStaleTemps(o.dir); err != nil {
+		return err
+	}
+	prev, ignored, err := readManifestNames(o.dir)
+	if err != nil {
+		return err
+	}
+	o.previous, o.ignored = prev, ignored
+	entries, err := os.ReadDir(o.dir)
+	if err != nil {
+		return err
 	}
 	var foreign []string
 	for _, e := range entries {
 		n := e.Name()
-		if n == ManifestName && prev != nil || prev[n] {
+		if n == ManifestName && prev != nil || prev[n] && e.Type().IsRegular() {
 			continue
 		}
 		foreign = append(foreign, n)
 	}
 	if len(foreign) > 0 && !force {
 		sort.Strings(foreign)
-		return nil, &ForeignFilesError{Dir: dir, Names: foreign}
+		return &ForeignFilesError{Dir: o.dir, Names: foreign}
 	}
-	return &Output{dir: dir, previous: prev, names: map[string]bool{}}, nil
+	return nil
+}
+
+// makeDir creates dir and any missing parents, and returns the folders it
+// created, deepest first.
+func makeDir(dir string) ([]string, error) {
+	var missing []string
+	for d := filepath.Clean(dir); ; d = filepath.Dir(d) {
+		if _, err := os.Lstat(d); !errors.Is(err, fs.ErrNotExist) {
+			break
+		}
+		missing = append(missing, d)
+		if filepath.Dir(d) == d {
+			break
+		}
+	}
+	if err := os.MkdirAll(dir, 0o755); err != nil {
+		return nil, err
+	}
+	return missing, nil
 }
 
 // readManifestNames returns the files a previous build listed, or nil when
-// there is no manifest.
-func readManifestNames(dir string) (map[string]bool, error) {
+// there is no manifest, and the listed names it ignores because they are
+// not plain output names (see validName).
+func readManifestNames(dir string) (map[string]bool, []string, error) {
 	b, err := os.ReadFile(filepath.Join(dir, ManifestName))
 	if errors.Is(err, fs.ErrNotExist) {
-		return nil, nil
+		return nil, nil, nil
 	}
 	if err != nil {
-		return nil, err
+		return nil, nil, err
 	}
 	var m Manifest
 	if err := json.Unmarshal(b, &m); err != nil || m.Tool != "coilwright" {
-		return nil, nil // not ours: the folder check treats it as foreign
+		return nil, nil, nil // not ours: the folder check treats it as foreign
 	}
 	names := map[string]bool{}
+	var ignored []string
 	for _, f := range m.Files {
-		if f.Name != "" && !strings.ContainsAny(f.Name, `/\`) {
+		if validName(f.Name) {
 			names[f.Name] = true
+		} else {
+			ignored = append(ignored, f.Name)
 		}
 	}
-	return names, nil
+	return names, ignored, nil
 }
+
+// Ignored returns the entries of the previous build's manifest that are not
+// plain output names (a path, ".", "..", a hidden or control-character
+// name): NewOutput neither trusts nor removes them.
+func (o *Output) Ignored() []string { return o.ignored }
 
 // Dir returns the output folder.
 func (o *Output) Dir() string { return o.dir }
@@ -138,16 +211,27 @@ func (o *Output) Dir() string { return o.dir }
 // Add writes one output file through write into a temporary file and
 // records its size and hash. The name must be a plain file name, used once.
 func (o *Output) Add(name string, write func(io.Writer) error) error {
-	if name == "" || name != filepath.Base(name) || strings.HasPrefix(name, ".") || name == ManifestName {
+	if !validName(name) || name == ManifestName {
 		return fmt.Errorf("cam: bad output name %q", name)
 	}
 	if o.names[name] {
 		return fmt.Errorf("cam: output %q written twice", name)
 	}
-	tmp, size, sum, err := writeTemp(o.dir, name, write)
+	f, err := o.newTemp(name)
 	if err != nil {
 		return err
 	}
+	size, sum, err := fillTemp(f, name, write)
+	o.mu.Lock()
+	defer o.mu.Unlock()
+	if err != nil {
+		delete(o.temps, f.Name())
+		return err
+	}
+	if o.stopped {
+		return ErrInterrupted
+	}
+	tmp := f.Name()
 	o.names[name] = true
 	o.staged = append(o.staged, staged{name: name, tmp: tmp, size: size, sum: sum})
 	return nil
@@ -165,55 +249,71 @@ func (o *Output) Files() []ManifestFile {
 }
 
 // Commit writes the manifest m (with Files filled from the staged outputs)
-// and moves every staged file into place, then removes files the previous
-// build made that this one did not. The manifest goes in last, so a folder
-// is never described by a manifest newer than its files.
+// and switches the folder from the previous build's set of files to this
+// one's, then releases the folder's lock. The switch is crash-consistent
+// (see commit.go): until its commit record is on disk a failure leaves the
+// previous set; after it, Commit or the next NewOutput completes the new
+// set.
 func (o *Output) Commit(m Manifest) error {
-	m.Files = o.Files()
-	b, err := json.MarshalIndent(m, "", "  ")
-	if err != nil {
-		o.Abort()
-		return err
+	o.mu.Lock()
+	defer o.mu.Unlock()
+	if o.stopped {
+		return ErrInterrupted
 	}
-	mtmp, _, _, err := writeTemp(o.dir, ManifestName, func(w io.Writer) error {
-		_, err := w.Write(append(b, '\n'))
-		return err
-	})
-	if err != nil {
-		o.Abort()
-		return err
-	}
-	for _, s := range o.staged {
-		if err := os.Rename(s.tmp, filepath.Join(o.dir, s.name)); err != nil {
-			os.Remove(mtmp)
-			o.Abort()
-			return err
-		}
-	}
-	o.done = true
-	if err := os.Rename(mtmp, filepath.Join(o.dir, ManifestName)); err != nil {
-		return err
-	}
-	for name := range o.previous {
-		if !o.names[name] {
-			if err := os.Remove(filepath.Join(o.dir, name)); err != nil && !errors.Is(err, fs.ErrNotExist) {
-				return err
-			}
-		}
-	}
-	return nil
+	return o.commit(m)
 }
 
-// Abort removes every staged temporary file; files already in the folder
-// are left untouched. After Commit it does nothing.
+// Abort removes every staged temporary file, and the folders NewOutput
+// created, and releases the folder's lock; files already in the folder are
+// left untouched. After Commit it only releases the lock.
 func (o *Output) Abort() {
-	if o.done {
-		return
+	o.mu.Lock()
+	defer o.mu.Unlock()
+	o.abortLocked()
+}
+
+// Interrupt is Abort for another goroutine (a signal handler): it waits
+// for a running Commit to finish, aborts unless the commit is decided, and
+// makes every later Add and Commit fail with ErrInterrupted.
+func (o *Output) Interrupt() {
+	o.mu.Lock()
+	defer o.mu.Unlock()
+	o.stopped = true
+	o.abortLocked()
+}
+
+// ErrInterrupted is returned by Add and Commit after Interrupt.
+var ErrInterrupted = errors.New("cam: build interrupted")
+
+func (o *Output) abortLocked() {
+	if !o.done {
+		for p := range o.temps {
+			os.Remove(p)
+		}
+		o.temps = map[string]bool{}
+		o.staged = nil
+		for _, d := range o.created {
+			os.Remove(d) // only when empty: the folder may have gained other files
+		}
 	}
-	for _, s := range o.staged {
-		os.Remove(s.tmp)
+	o.lock.release()
+	o.lock = nil
+}
+
+// newTemp creates a temporary file for name and records it, so that Abort
+// and Interrupt can remove it while it is being written.
+func (o *Output) newTemp(name string) (*os.File, error) {
+	o.mu.Lock()
+	defer o.mu.Unlock()
+	if o.stopped {
+		return nil, ErrInterrupted
 	}
-	o.staged = nil
+	f, err := createTemp(o.dir, name)
+	if err != nil {
+		return nil, err
+	}
+	o.temps[f.Name()] = true
+	return f, nil
 }
 
 // maxTempTries bounds the search for an unused temporary file name.
@@ -241,15 +341,29 @@ func writeTemp(dir, name string, write func(io.Writer) error) (string, int64, st
 	if err != nil {
 		return "", 0, "", err
 	}
+	size, sum, err := fillTemp(f, name, write)
+	if err != nil {
+		return "", 0, "", err
+	}
+	return f.Name(), size, sum, nil
+}
+
+// fillTemp writes the temporary file f for name through write, syncs and
+// closes it, and returns its size and SHA-256; on failure it removes f.
+func fillTemp(f *os.File, name string, write func(io.Writer) error) (int64, string, error) {
 	h := sha256.New()
 	cw := &countWriter{w: io.MultiWriter(f, h)}
 	werr := write(cw)
-	cerr := f.Close()
-	if werr != nil || cerr != nil {
-		os.Remove(f.Name())
-		return "", 0, "", fmt.Errorf("writing %s: %w", name, errors.Join(werr, cerr))
+	var serr error
+	if werr == nil {
+		serr = f.Sync()
 	}
-	return f.Name(), cw.n, hex.EncodeToString(h.Sum(nil)), nil
+	cerr := f.Close()
+	if werr != nil || serr != nil || cerr != nil {
+		os.Remove(f.Name())
+		return 0, "", fmt.Errorf("writing %s: %w", name, errors.Join(werr, serr, cerr))
+	}
+	return cw.n, hex.EncodeToString(h.Sum(nil)), nil
 }
 
 // ErrExists is returned by WriteFileAtomic when the file exists and
@@ -272,7 +386,7 @@ func WriteFileAtomic(path string, replace bool, write func(io.Writer) error) err
 		os.Remove(tmp)
 		return err
 	}
-	return nil
+	return syncDir(filepath.Dir(path))
 }
 
 type countWriter struct {

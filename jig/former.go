@@ -398,7 +398,7 @@ func newFlange(r, face, outer float64, p FormerParams) (sdf.SDF3, error) {
 // groove bottom, stopping a wall short of the drive cut.
 func lockHole(path WirePath, p FormerParams, a, up, driveR float64) (sdf.SDF3, error) {
 	bottom := path.Radius(0) - p.Wire/2
-	inner := math.Max(bottom-p.LockDepth, driveR+p.MinWall)
+	inner := math.Max(bottom-p.LockDepth, driveR+lockFloor(p))
 	if bottom-inner < p.Wire/2 {
 		return nil, formerError("only %.2f mm of wire-lock hole fits above the drive cut", bottom-inner)
 	}
@@ -414,6 +414,11 @@ func lockHole(path WirePath, p FormerParams, a, up, driveR float64) (sdf.SDF3, e
 	x := geom.Vec3{Y: up} // section X along the tangent, Y up the print
 	return sdf.Move(e, sdf.Frame(geom.Vec3{Z: path.Z(0)}, x, geom.Vec3{X: 1})), nil
 }
+
+// lockFloor returns the material left between the wire-lock hole's end and
+// the drive cut, mm: the least wall, and at least one wire radius so the
+// bent tail cannot push through. Common practice (no published source).
+func lockFloor(p FormerParams) float64 { return math.Max(p.MinWall, p.Wire/2) }
 
 // stopNotch returns the stop at the end of the winding: a radial pocket one
 // wire diameter below the groove bottom (less where the drive cut needs its

@@ -76,7 +76,11 @@ type FormerPlan struct {
 	// DriveChanged reports that the default hex socket did not fit and a
 	// through-bore as wide as the walls allow was planned instead.
 	DriveChanged bool
-	Problems     []FitProblem // empty when the former can be made
+	// LockHoleMM is the depth of the wire-lock hole below the groove
+	// bottom as modelled: the lock end the hole takes when the wire is bent
+	// into it at a right angle.
+	LockHoleMM float64
+	Problems   []FitProblem // empty when the former can be made
 }
 
 // Plan sizes the former for d from its [former] table: the groove must fit
@@ -154,7 +158,9 @@ func Plan(d *parts.Design) FormerPlan {
 	}
 	// The wire-lock hole stops a wall short of the drive cut; it must still
 	// take half a wire diameter of wire.
-	if avail := math.Min(p.LockDepth, e.startBottom-driveR-MinWallMM); avail < wire/2 {
+	avail := math.Min(p.LockDepth, e.startBottom-driveR-lockFloor(p))
+	pl.LockHoleMM = avail
+	if avail < wire/2 {
 		pl.Problems = append(pl.Problems, FitProblem{Kind: FitLockHole, Needed: wire / 2, Available: avail})
 	}
 	if p.Drive == HexSocket && p.HexDepth+driveR > e.height-MinWallMM {

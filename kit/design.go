@@ -22,6 +22,12 @@ var reportFuncs = template.FuncMap{
 	"deref": func(p *float64) float64 { return *p },
 	"pct":   func(v float64) float64 { return 100 * v },
 	"turns": parts.TurnsText,
+	"signed": func(v float64) string {
+		if v < 0 {
+			return fmt.Sprintf("− %.1f", -v)
+		}
+		return fmt.Sprintf("+ %.1f", v)
+	},
 }
 
 // WriteReportJSON writes the design report as indented JSON: the content

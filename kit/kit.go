@@ -5,6 +5,8 @@ import (
 	"encoding/hex"
 	"fmt"
 	"io"
+	"path/filepath"
+	"strings"
 	"time"
 
 	"coilwright/cam/pdf"
@@ -25,6 +27,16 @@ type Source struct {
 func (s Source) SHA256() string {
 	h := sha256.Sum256(s.Bytes)
 	return hex.EncodeToString(h[:])
+}
+
+// BaseName returns the spec's file name without its folder, or
+// "demo:NAME", as the manifest records it: the same file gives the same
+// manifest however its path was typed.
+func (s Source) BaseName() string {
+	if strings.HasPrefix(s.Name, "demo:") {
+		return s.Name
+	}
+	return filepath.Base(s.Name)
 }
 
 // Options are what a build records besides the spec. The zero value
@@ -60,6 +72,9 @@ func New(src Source, opt Options) (*Kit, error) {
 	if err != nil {
 		return nil, err
 	}
+	if d, err = solveField(d); err != nil {
+		return nil, err
+	}
 	k := &Kit{Source: src, Design: d, opt: opt}
 	if k.Former, err = planFormer(d); err != nil {
 		return nil, err
@@ -70,6 +85,7 @@ func New(src Source, opt Options) (*Kit, error) {
 	if k.cutList, err = parts.NewCutList(d); err != nil {
 		return nil, err
 	}
+	k.cutList.FitLockTail(k.Former.LockHoleMM)
 	// The batch plan also checks that each piece fits its stock rod, so
 	// one kit is planned too, and its plan kept only for a batch.
 	bp, err := newBatchPlan(d, k.cutList, k.parts)
@@ -107,12 +123,20 @@ func Steps() []Step {
 		{"cut list and build sheet", (*Kit).writeSheet},
 		{"cut patterns", (*Kit).writePatterns},
 		{"winding former", (*Kit).writeFormer},
+		{"field solution", (*Kit).writeField},
+		{"plots", (*Kit).writePlots},
+		{"report page", (*Kit).writeHTML},
 	}
 }
+
+// Write adds the step's files to s.
+func (st Step) Write(k *Kit, s Sink) error { return st.write(k, s) }
 
 // Write adds every output file to s, step by step, calling progress (when
 // not nil) with each step's name as it starts. An error names its step.
 func (k *Kit) Write(s Sink, progress func(step string)) error {
+	// The report page lists and embeds what the steps before it wrote.
+	s = &recorder{next: s}
 	for _, st := range Steps() {
 		if progress != nil {
 			progress(st.Name)

@@ -71,6 +71,7 @@ func (k *Kit) writeSheet(out Sink) error {
 		return err
 	}
 	doc := sheetDocument(sheet, page, k.stepFigures(sheet))
+	doc.Blocks = withBandFigure(doc.Blocks, pdf.Group{Blocks: []pdf.Block{pdf.Heading{Text: "What the analyser should show", Level: 3}, bandFigure(k.electrical())}})
 	doc.TrailingPages = len(k.templates)
 	pages, err := doc.Pages()
 	if err != nil {

@@ -52,9 +52,9 @@ func acceptanceText(d *Design) []string {
 	lambda := d.Wavelength
 	size := math.Max(d.Heights().Overall, s.Reflector.SizeMM(lambda))
 	far := math.Max(FarFieldMM(size, lambda), 10*lambda)
-	g := d.Estimates.Gain.Value
+	g, _ := d.QuotedGain()
 	lin := g - DipoleGainDBi - LinearToCircularLossDB
-	rss := fmt.Sprintf("Received signal against a reference antenna: set up a steady source in the band at least %.1f m away (the far-field distance 2D²/λ, and no less than ten wavelengths), in the open, antennas at the same height. Read its strength on a receiver with a signal-strength reading in dB, first with a half-wave dipole (%.2f dBi) parallel to the source's polarisation, then with this antenna pointed at the source. From a linearly polarised source, expect this antenna to read about %s the dipole (its %.1f dBi, less the dipole's %.2f dBi and the %.0f dB a circular antenna loses to a linear wave).",
+	rss := fmt.Sprintf("Received signal against a reference antenna: set up a steady source in the band at least %.1f m away (the far-field distance 2D²/λ, and no less than ten wavelengths), in the open, antennas at the same height. Read its strength on a receiver with a signal-strength reading in dB, first with a half-wave dipole (%.2f dBi) parallel to the source's polarisation, then with this antenna pointed at the source. From a linearly polarised source, expect this antenna to read about %s the dipole (its %.1f dBic, less the dipole's %.2f dBi and the %.0f dB a circular antenna loses to a linear wave).",
 		far/1000, DipoleGainDBi, dbAbove(lin), g, DipoleGainDBi, LinearToCircularLossDB)
 	rss += fmt.Sprintf(" From a %s source, expect about %s the dipole; a source of the opposite hand reads far lower, typically 15 dB or more below the right hand (from memory), which checks the winding hand. Turning this antenna about its axis should change the reading from a linear source by no more than a few dB; a large change means the coil radiates poorly polarised. Reading several dB less than expected: check the hand, the turn sizes and the feed.", d.Coil.Hand, dbAbove(g-DipoleGainDBi))
 	return []string{swr, rss}

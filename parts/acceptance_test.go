@@ -26,10 +26,10 @@ func TestAcceptanceReadings(t *testing.T) {
 	text := strings.NewReplacer("%MAT%", "brass", "%CONN%", "coax", "%CABLE%", "rg58", "%METHOD%", "mill").Replace(combo) + "\n[rf]\nfeeder_loss_db = 1.0\n"
 	d := mustDesign(t, text)
 	got := strings.Join(acceptanceText(d), "\n")
-	g := d.Estimates.Gain.Value
+	g, _ := d.QuotedGain()
 	for _, want := range []string{
 		"SWR meter at the transmitter", "below 1.9 at the antenna", "below 1.67", // 1 dB feeder: see TestSeenThroughFeeder
-		fmt.Sprintf("about %.0f dB above the dipole (its %.1f dBi", g-DipoleGainDBi-LinearToCircularLossDB, g),
+		fmt.Sprintf("about %.0f dB above the dipole (its %.1f dBic", g-DipoleGainDBi-LinearToCircularLossDB, g),
 		"opposite hand", "Above 2:",
 	} {
 		if !strings.Contains(got, want) {

@@ -140,9 +140,9 @@ func designRows(d *Design, cl *CutList) []SheetRow {
 		{"Coil height", d.Heights().Text()},
 		{"Wire", fmt.Sprintf("%s, Ø%s mm; winding %s, blank %s", s.Wire.Material, num(s.Wire.DiameterMM), mm(cl.Wire.ArcMM), mm(cl.Wire.LengthMM))},
 		{"Reflector", fmt.Sprintf("%s, %s across, %s mm thick", s.Reflector.Shape, mm(s.Reflector.SizeMM(d.Wavelength)), num(s.Reflector.ThicknessMM))},
-		{"Support rod", fmt.Sprintf("%s, Ø%s mm × %s", cl.Dowel.Material, num(cl.Dowel.DiameterMM), mm(cl.Dowel.LengthMM))},
+		{"Support rod", fmt.Sprintf("%s × %s", sectionWords(cl.Dowel), mm(cl.Dowel.LengthMM))},
 		{"Feed cable", feedRow(d, cl)},
-		{"Gain (estimate)", fmt.Sprintf("%.1f dBi, %s", d.Estimates.Gain.Value, d.Estimates.Gain.Formula)},
+		d.gainRow(),
 		{"Half-power beamwidth (estimate)", fmt.Sprintf("%.0f°", d.Estimates.HPBW.Value)},
 	}
 	if d.EIRP != nil {
@@ -179,7 +179,7 @@ func tools(s *spec.Spec, c sheetChoice) []string {
 func materials(s *spec.Spec, cl *CutList) []SheetRow {
 	rows := []SheetRow{
 		{"Wire blank", fmt.Sprintf("%s, Ø%s mm, %s", cl.Wire.Material, num(cl.Wire.DiameterMM), mm(cl.Wire.LengthMM))},
-		{"Support rod", fmt.Sprintf("%s, Ø%s mm, %s", cl.Dowel.Material, num(cl.Dowel.DiameterMM), mm(cl.Dowel.LengthMM))},
+		{"Support rod", fmt.Sprintf("%s, %s", sectionWords(cl.Dowel), mm(cl.Dowel.LengthMM))},
 		{"Feed cable", fmt.Sprintf("%s, cut %s", cl.Coax.Cable.Name, mm(cl.Coax.CutMM))},
 		{"Heat-shrink", fmt.Sprintf("2:1 sleeve Ø%s mm (shrinks to Ø%s mm), %s", num(cl.Sleeve.SuppliedMM), num(cl.Sleeve.RecoveredMM), mm(cl.Sleeve.LengthMM))},
 		{"Reflector", fmt.Sprintf("%s %s, %s mm thick, cut from the template", s.Reflector.Shape, plateName(s), num(s.Reflector.ThicknessMM))},
@@ -207,8 +207,8 @@ func plateName(s *spec.Spec) string {
 }
 
 func cautions(d *Design, c sheetChoice) []Hazard {
-	gain := d.Estimates.Gain.Value
-	rf := fmt.Sprintf("This antenna concentrates power: its estimated gain is %.1f dBi, so EIRP (dBm) = transmitter power (dBm) − feeder loss (dB) + %.1f dB.", gain, gain)
+	gain, _ := d.QuotedGain()
+	rf := fmt.Sprintf("This antenna concentrates power: its "+d.gainWord()+" gain is %.1f dBic, so EIRP (dBm) = transmitter power (dBm) − feeder loss (dB) + %.1f dB.", gain, gain)
 	if e := d.EIRP; e != nil {
 		rf += fmt.Sprintf(" With %s dBm in and %s dB loss that is %.1f dBm (%.0f mW).", num(e.TxPowerDBm), num(e.FeederLossDB), e.EIRPDBm, e.EIRPmW)
 	}
@@ -264,9 +264,9 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 	// feed end) and its stop notch at the end; the flange is at the feed end
 	// unless the coil widens away from the feed, when the former is printed
 	// the other way up.
-	startEnd := TrimPerEndMM + w.LockTailMM + w.FeedLeadMM
-	marks := fmt.Sprintf("Mark the blank at %s from one end (mark A: the start of the winding; the end before it is the lock end, which goes into the former's lock hole and is later cut down to the feed lead) and again %s further on (mark B: the end of the winding, at the stop notch). The %s beyond mark B is trim.",
-		mm(startEnd), mm(w.ArcMM), mm(TrimPerEndMM))
+	marks := fmt.Sprintf("Mark the blank at %s from one end (mark A: the start of the winding; the end before it is the lock end, which goes into the former's lock hole and is later cut down to the feed lead) and at %s from the same end, %s further on: the length of the former's groove from the lock hole to the stop notch (mark B: the end of the winding, at the stop notch). The %s beyond mark B is trim.",
+		mm(w.MarkAMM), mm(w.MarkBMM), mm(w.ArcMM), mm(TrimPerEndMM))
+	unwind := (d.Former.Turns - d.Coil.Turns) * 360
 	lockAt, windTo := "at the flange end of the former, the coil's feed end", "towards the free end of the former"
 	if d.Former.EndRadius > d.Former.StartRadius {
 		lockAt, windTo = "at the free end of the former, away from the flange: this coil widens away from its feed, so the former is printed feed end up", "towards the flange"
@@ -291,14 +291,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 	if w.FeedLeadMM < 2*w.DiameterMM {
 		lead = fmt.Sprintf("The wire's start sits only %s above the coax's dielectric, too little to bend a lead: leave the start straight; the centre conductor is soldered to its side in the step that solders the coil.", mm(w.FeedLeadMM))
 	}
-	rodHole := ""
-	screw := "Lower the rod through the open top of the coil and epoxy its foot to the reflector's centre."
-	for _, h := range cl.Hardware {
-		if strings.HasPrefix(h.Item, "M3") {
-			rodHole = " Drill a 3.2 mm hole at the centre cross for the rod's screw."
-			screw = fmt.Sprintf("Drill a 2.5 mm pilot hole 8 mm deep in the centre of the rod's foot. Lower the rod through the open top of the coil onto the reflector's centre hole and fix it from behind with the %s.", h.Item)
-		}
-	}
+	rodHole, screw := rodMountSteps(cl)
 	wireNotes := ""
 	for _, c := range d.Wire.Material.Cautions {
 		wireNotes += " This wire: " + c.Text() + "."
@@ -310,18 +303,18 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 			marks,
 		}, Cautions: pick(all, HazardEyes)},
 		{Title: "Lock its end in the former", Text: []string{
-			"Push the lock end into the lock hole at the start of the groove, " + lockAt + ", until mark A sits at the mouth of the hole.",
+			fmt.Sprintf("Bend the lock end at a right angle at mark A, so that its %s stands straight out from the blank. Push it into the lock hole at the start of the groove, %s, until the bend at mark A sits at the mouth of the hole and the blank lies along the groove.", mm(w.LockTailMM), lockAt),
 			"Check the hand mark on the former: this coil is " + d.Coil.Hand.String() + ", " + handWords(d.Coil.Hand) + ".",
 		}},
 		{Title: "Wind under tension", Text: []string{
 			"Lay the wire into the groove turn by turn, pulling it tight with steady tension so it seats at the bottom of the groove all the way round. Do not let it ride up on the groove wall.",
-			fmt.Sprintf("Wind all %s %s until mark B reaches the stop notch at the end of the groove.", TurnsText(d.Coil.Turns), windTo),
+			fmt.Sprintf("Wind the %.2f turns of the groove %s until mark B reaches the stop notch at its end.", d.Former.Turns, windTo),
 		}},
 		{Title: "Hold and overbend", Text: []string{
 			"Hold the wire at mark B for about ten seconds, then press every turn once more into its groove with a thumb, a little tighter than it lies, to set the bend.",
 		}},
 		{Title: "Release", Text: []string{
-			"Let go of the end at mark B slowly and let the coil open up on the former: it springs out to its relaxed size. Free the lock end and twist the coil off along the groove.",
+			fmt.Sprintf("Let go of the end at mark B slowly and let the coil open up on the former: it springs out to its relaxed size and, keeping its length, unwinds by about %.0f° to %s. Free the lock end and twist the coil off along the groove.", unwind, TurnsText(d.Coil.Turns)),
 		}},
 		{Title: "Measure each turn against the inspection table", Text: []string{
 			"Measure every turn across its middle, over the outside of the wire, and write the reading in the inspection table at the end of this sheet.",

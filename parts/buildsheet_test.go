@@ -78,7 +78,7 @@ func TestRFCautionCarriesGainAndEIRP(t *testing.T) {
 			rf = c.Text
 		}
 	}
-	if g := fmt.Sprintf("%.1f dBi", d.Estimates.Gain.Value); !strings.Contains(rf, g) {
+	if g := fmt.Sprintf("%.1f dBic", d.Estimates.Gain.Value); !strings.Contains(rf, g) {
 		t.Errorf("RF caution lacks the gain %s: %s", g, rf)
 	}
 	// Source: e.i.r.p. definition, ITU Radio Regulations, Article 1:

@@ -6,8 +6,9 @@
 // the feed lead at the feed end (a radial arm to the axis for a centre
 // feed, then the drop from the wire centre to the top of the coax's
 // dielectric stub), and a trim allowance squared off both ends. The support
-// rod is the largest stock diameter that passes inside the smallest relaxed
-// turn with the given radial clearance, as long as the coil is high. The
+// rod is the thinnest stocked rod or tube that carries the coil and passes
+// inside the smallest relaxed turn with the given radial clearance
+// (ChooseSupportRod), as long as the coil is high. The
 // coax comes up through the reflector from behind. A solid outer
 // conductor passes through the hole and ends flush with the top face; a
 // braid ends at the back face, fanned out flat round the hole, and only
@@ -49,8 +50,6 @@ const (
 	// SleeveLengthMM is the heat-shrink sleeve over the cable where it
 	// leaves the reflector's back face.
 	SleeveLengthMM = 25.0
-	// HeavyRodMM is the rod diameter above which a tube is suggested.
-	HeavyRodMM = 20.0
 )
 
 // dowelDiametersMM are the support-rod diameters commonly stocked in
@@ -81,11 +80,14 @@ type CutList struct {
 }
 
 // WireBlank is the straight wire cut for one coil: LengthMM = ArcMM +
-// LockTailMM + FeedLeadMM + TrimMM.
+// LockTailMM + FeedLeadMM + TrimMM. Marks A and B bound the winding: A at
+// the mouth of the former's lock hole, B at its stop notch.
 type WireBlank struct {
 	Material   string
 	DiameterMM float64
-	ArcMM      float64 // centreline arc length of the winding (design.json wire_length_mm)
+	ArcMM      float64 // the former's groove from lock hole to stop notch, the winding's length (= design.json wire_length_mm, the wire keeping its length on release)
+	MarkAMM    float64 // mark A from the lock end: trim, lock tail and feed lead
+	MarkBMM    float64 // mark B from the lock end: MarkAMM + ArcMM
 	LockTailMM float64 // locked in the former's lock hole at the start of the groove (the feed end)
 	FeedLeadMM float64 // drop from the wire centre at the start to the top of the dielectric stub
 	TrimMM     float64 // squared off both ends after release
@@ -99,7 +101,9 @@ type DowelCut struct {
 	LengthMM       float64
 	ClearanceMM    float64 // radial gap asked for
 	InnerTurnMM    float64 // inside diameter of the smallest relaxed turn
-	Automatic      bool    // diameter chosen from DowelDiametersMM()
+	Automatic      bool    // diameter chosen by ChooseSupportRod
+	BoreMM         float64 // bore of a tube, 0 for a solid rod
+	Rod            SupportRod
 	SlotWidthMM    float64 // slot across the foot for a centre feed's lead, else 0
 	SlotDepthMM    float64
 	AbsorbsWater   bool   // wood: takes up water and detunes the coil
@@ -148,6 +152,25 @@ type HardwareItem struct {
 	Note  string
 }
 
+// FitLockTail sets the lock end, the wire beyond mark A that is bent at a
+// right angle and pushed into the former's lock hole, to the hole's depth
+// holeMM below the groove bottom, or to the feed lead if that is longer
+// (with a warning), and works out the blank and marks again: the lock end
+// is later cut down to the feed lead, so it needs no trim of its own.
+func (cl *CutList) FitLockTail(holeMM float64) {
+	w := &cl.Wire
+	w.LockTailMM = holeMM
+	if w.FeedLeadMM > holeMM {
+		w.LockTailMM = w.FeedLeadMM
+		cl.Warnings = append(cl.Warnings, Warning{Code: "lock-hole-short",
+			Message: fmt.Sprintf("the former's lock hole is %.1f mm deep but the feed lead is cut %.1f mm from the lock end: deepen former.lock_hole_depth_mm or use a thinner drive", holeMM, w.FeedLeadMM)})
+	}
+	w.TrimMM = TrimPerEndMM
+	w.LengthMM = w.LockTailMM + w.ArcMM + w.TrimMM
+	w.MarkAMM = w.LockTailMM
+	w.MarkBMM = w.MarkAMM + w.ArcMM
+}
+
 // NewCutList works out the cut list of one kit from a design.
 func NewCutList(d *Design) (*CutList, error) {
 	s := d.Spec
@@ -179,10 +202,12 @@ func NewCutList(d *Design) (*CutList, error) {
 	cl.Coax = cx
 
 	// Wire blank.
-	w := WireBlank{Material: s.Wire.Material, DiameterMM: wd, ArcMM: d.WireLength,
+	w := WireBlank{Material: s.Wire.Material, DiameterMM: wd, ArcMM: d.Former.Length(),
 		LockTailMM: math.Max(MinLockTailMM, LockTailWires*wd),
 		FeedLeadMM: drop, TrimMM: 2 * TrimPerEndMM}
 	w.LengthMM = w.ArcMM + w.LockTailMM + w.FeedLeadMM + w.TrimMM
+	w.MarkAMM = TrimPerEndMM + w.LockTailMM + w.FeedLeadMM
+	w.MarkBMM = w.MarkAMM + w.ArcMM
 	cl.Wire = w
 
 	dw, err := dowelCut(d)
@@ -206,6 +231,7 @@ func NewCutList(d *Design) (*CutList, error) {
 	if dw.AbsorbsWater {
 		cl.Warnings = append(cl.Warnings, Warning{Code: "wood-dowel", Message: dw.MaterialAdvice})
 	}
+	cl.Warnings = append(cl.Warnings, rodWarnings(d, dw)...)
 	return cl, nil
 }
 
@@ -218,19 +244,16 @@ func dowelCut(d *Design) (DowelCut, error) {
 	wd := s.Wire.DiameterMM
 	inner := 2*smallestTurnRadius(d.Coil) - wd
 	dc := DowelCut{Material: s.Dowel.Material, ClearanceMM: s.Dowel.ClearanceMM, InnerTurnMM: inner}
-	room := inner - 2*dc.ClearanceMM
-	if s.Dowel.DiameterMM != nil {
-		dc.DiameterMM = *s.Dowel.DiameterMM // Spec.Validate checked that it fits
-	} else {
-		// i counts the stock sizes below room, so size i−1 is the largest that fits.
-		i, _ := slices.BinarySearch(dowelDiametersMM, room+1e-9)
-		if i == 0 { // ParseSpec refuses such a spec (DowelSpec.validateFit)
-			return DowelCut{}, fmt.Errorf("no stock rod fits %.2f mm inside the smallest turn: the spec was not validated", inner)
-		}
-		dc.DiameterMM = dowelDiametersMM[i-1]
-		dc.Automatic = true
-	}
 	dc.LengthMM = d.Coil.Z0 + d.AxialLength + wd/2 + DowelOverhangMM
+	given := 0.0
+	if s.Dowel.DiameterMM != nil {
+		given = *s.Dowel.DiameterMM // checkFit checked that it fits
+	}
+	rod, err := ChooseSupportRod(s.Dowel.Material, inner-2*dc.ClearanceMM, dc.LengthMM, 2*smallestTurnRadius(d.Coil), given)
+	if err != nil {
+		return DowelCut{}, err
+	}
+	dc.Rod, dc.DiameterMM, dc.BoreMM, dc.Automatic = rod, rod.OuterMM, rod.BoreMM, given == 0
 	switch s.Dowel.Material {
 	case "wood":
 		dc.AbsorbsWater = true
@@ -240,10 +263,42 @@ func dowelCut(d *Design) (DowelCut, error) {
 	default:
 		dc.MaterialAdvice = "a low-loss rod that takes up little water"
 	}
-	if dc.DiameterMM > HeavyRodMM {
-		dc.MaterialAdvice += fmt.Sprintf("; a tube of %s mm outside diameter saves weight", num(dc.DiameterMM))
-	}
 	return dc, nil
+}
+
+// rodWarnings returns the warnings the support rod raises: dielectric
+// loading above RodShiftWarnFraction, a default rod more slender than
+// MaxRodSlenderness, and a rod too heavy for any mount sized here.
+func rodWarnings(d *Design, dc DowelCut) []Warning {
+	var w []Warning
+	r := dc.Rod
+	if l := r.Loading; l.ShiftFraction > RodShiftWarnFraction {
+		fix := "give a thinner dowel.diameter_mm, or hold the coil with thin low-loss spacers outside the winding"
+		if dc.Automatic {
+			fix = "this is the thinnest stocked section that carries the coil: hold the coil with thin low-loss spacers outside the winding instead, or check where the best match falls with a sweep"
+		}
+		if d.Spec.Dowel.Material != "ptfe" {
+			fix = "PTFE has the lowest permittivity of the rod materials; or " + fix
+		}
+		w = append(w, Warning{Code: "rod-loading", Message: fmt.Sprintf("the %s fills %.1f %% of the area inside the smallest turn (εr %.1f): a first-order estimate lowers the frequency by about %.1f %% (%.0f MHz); %s",
+			sectionWords(dc), 100*l.FillRatio, l.Permittivity, 100*l.ShiftFraction, l.ShiftFraction*d.Spec.FrequencyMHz, fix)})
+	}
+	if r.Slender {
+		w = append(w, Warning{Code: "rod-slender", Message: fmt.Sprintf("a rod %s long needs about Ø%.0f mm to stay straight (%g diameters long at most), but only Ø%s mm passes inside the smallest turn: support the coil from outside as well", mm(r.LengthMM), r.MinOuterMM, MaxRodSlenderness, num(r.OuterMM))})
+	}
+	if r.Mount.Overloaded {
+		w = append(w, Warning{Code: "rod-heavy", Message: fmt.Sprintf("the support rod weighs about %.0f g: %s; use a tube or a thinner rod, or mount it in a collar bolted to the reflector", r.MassG, r.Mount.Basis)})
+	}
+	return w
+}
+
+// sectionWords names the support section: "Ø8 mm ptfe rod" or "Ø8/6 mm
+// ptfe tube".
+func sectionWords(dc DowelCut) string {
+	if dc.BoreMM > 0 {
+		return fmt.Sprintf("Ø%s/%s mm %s tube", num(dc.DiameterMM), num(dc.BoreMM), dc.Material)
+	}
+	return fmt.Sprintf("Ø%s mm %s rod", num(dc.DiameterMM), dc.Material)
 }
 
 // sleeveFor picks the smallest 2:1 sleeve whose supplied bore is at least
@@ -295,8 +350,8 @@ func epoxyEstimate(d *Design, dw DowelCut) Consumable {
 		Basis: fmt.Sprintf("%d beads from rod to wire and a fillet round the rod's foot, plus half again for mixing waste", beads)}
 }
 
-// screwLengthsMM are the stocked lengths of M3 screws, mm. Common practice
-// (no published source; ISO 4762 and ISO 7045 list these lengths).
+// screwLengthsMM are the stocked lengths of M3 to M5 screws, mm. Common
+// practice (no published source; ISO 4762 and ISO 7045 list these lengths).
 var screwLengthsMM = []float64{6, 8, 10, 12, 16, 20, 25, 30}
 
 func hardware(d *Design, cl *CutList) []HardwareItem {
@@ -309,12 +364,16 @@ func hardware(d *Design, cl *CutList) []HardwareItem {
 		hw = append(hw, HardwareItem{Item: "SMA connector to suit " + cable.Name, Count: 1,
 			Note: "or a cable with the connector fitted; strip the connector end to the connector maker's dimensions"})
 	}
-	if cl.Dowel.DiameterMM >= 6 {
-		want := s.Reflector.ThicknessMM + 2*3.0 // two thread diameters into the rod
+	if mt := cl.Dowel.Rod.Mount; mt.Screw != "" {
+		want := s.Reflector.ThicknessMM + 2*mt.PilotMM // about two thread diameters into the rod
 		i, _ := slices.BinarySearch(screwLengthsMM, want)
 		length := screwLengthsMM[min(i, len(screwLengthsMM)-1)]
-		hw = append(hw, HardwareItem{Item: fmt.Sprintf("M3 × %s mm screw, nylon or stainless, with washer", num(length)), Count: 1,
-			Note: "from behind the reflector into a 2.5 mm pilot hole in the rod's foot"})
+		into := "the rod's foot"
+		if mt.PlugMM > 0 {
+			into = "the plug in the tube's foot"
+		}
+		hw = append(hw, HardwareItem{Item: fmt.Sprintf("%s × %s mm screw, nylon or stainless, with washer", mt.Screw, num(length)), Count: 1,
+			Note: fmt.Sprintf("from behind the reflector into a %s mm pilot hole in %s; %s", num(mt.PilotMM), into, mt.Basis)})
 	}
 	if cl.Coax.Jack == "" {
 		hw = append(hw, HardwareItem{Item: "cable tie, 2.5 mm wide", Count: 1, Note: "strain relief for the cable behind the reflector"})
@@ -345,9 +404,9 @@ func (cl *CutList) Rows() []CutRow {
 	w, dw, cx, sl := cl.Wire, cl.Dowel, cl.Coax, cl.Sleeve
 	rows := []CutRow{
 		{Item: "wire blank", Material: w.Material, Size: fmt.Sprintf("Ø%s mm", num(w.DiameterMM)), Count: 1, LengthMM: w.LengthMM,
-			Note: fmt.Sprintf("winding %.1f + lock tail %.1f + feed lead %.1f + trim %.1f mm", w.ArcMM, w.LockTailMM, w.FeedLeadMM, w.TrimMM)},
-		{Item: "support rod", Material: dw.Material, Size: fmt.Sprintf("Ø%s mm", num(dw.DiameterMM)), Count: 1, LengthMM: dw.LengthMM,
-			Note: fmt.Sprintf("passes inside the smallest turn (%.2f mm inside) with %s mm clearance; %s", dw.InnerTurnMM, num(dw.ClearanceMM), dw.MaterialAdvice)},
+			Note: blankNote(w)},
+		{Item: "support rod", Material: dw.Material, Size: rodSize(dw), Count: 1, LengthMM: dw.LengthMM,
+			Note: rodNote(dw)},
 		{Item: "feed cable", Material: cx.Cable.Name, Size: fmt.Sprintf("Ø%s mm", num(cx.Cable.Outer)), Count: 1, LengthMM: cx.CutMM,
 			Note: coaxNote(cx)},
 		{Item: "solder", Material: "solder wire", Size: "", Amount: cl.Solder.Amount, Unit: cl.Solder.Unit, Note: cl.Solder.Basis},
@@ -361,6 +420,15 @@ func (cl *CutList) Rows() []CutRow {
 		rows = append(rows, CutRow{Item: "hardware", Material: h.Item, Count: h.Count, Note: h.Note})
 	}
 	return rows
+}
+
+// blankNote sums the wire blank: with the lock end fitted to the former's
+// hole (FitLockTail) the feed lead is cut from the lock end.
+func blankNote(w WireBlank) string {
+	if math.Abs(w.LengthMM-(w.LockTailMM+w.ArcMM+w.TrimMM)) < 1e-9 {
+		return fmt.Sprintf("lock end %.1f (bent into the lock hole, later cut to the %.1f mm feed lead) + winding %.1f + trim %.1f mm", w.LockTailMM, w.FeedLeadMM, w.ArcMM, w.TrimMM)
+	}
+	return fmt.Sprintf("winding %.1f + lock tail %.1f + feed lead %.1f + trim %.1f mm", w.ArcMM, w.LockTailMM, w.FeedLeadMM, w.TrimMM)
 }
 
 func coaxNote(cx CoaxCut) string {

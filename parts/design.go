@@ -28,6 +28,8 @@ type Design struct {
 	Wire WireDesign
 	// Patterns is the reflector plate and the matching wedge.
 	Patterns *Patterns
+	// Field is the field solution, nil unless it ran (see WithField).
+	Field *FieldSolution
 }
 
 // Turn is one row of the per-turn table, evaluated at the turn's middle
@@ -53,7 +55,7 @@ type Turn struct {
 type EIRPFigure struct {
 	TxPowerDBm   float64
 	FeederLossDB float64
-	GainDBi      float64
+	GainDBic     float64
 	EIRPDBm      float64
 	EIRPmW       float64
 }
@@ -103,7 +105,7 @@ func NewDesign(s *spec.Spec) (*Design, error) {
 	if s.RF.TxPowerDBm != nil {
 		g := d.Estimates.Gain.Value
 		e := EIRP(*s.RF.TxPowerDBm, s.RF.FeederLossDB, g)
-		d.EIRP = &EIRPFigure{TxPowerDBm: *s.RF.TxPowerDBm, FeederLossDB: s.RF.FeederLossDB, GainDBi: g, EIRPDBm: e, EIRPmW: DBmToMilliwatt(e)}
+		d.EIRP = &EIRPFigure{TxPowerDBm: *s.RF.TxPowerDBm, FeederLossDB: s.RF.FeederLossDB, GainDBic: g, EIRPDBm: e, EIRPmW: DBmToMilliwatt(e)}
 	}
 	d.Warnings = d.warnings(cl)
 	if d.Wire, err = newWireDesign(s); err != nil {
@@ -186,7 +188,7 @@ func (d *Design) warnings(meanCl float64) []Warning {
 		add("reflector-size", "reflector %.2f λ across is smaller than %.1f λ: expect a strong back lobe", r, MinReflectorLambda)
 	}
 	if d.EIRP != nil {
-		add("eirp", "EIRP %.1f dBm (%.0f mW) with this antenna: check the limit that applies where you transmit and under your licence", d.EIRP.EIRPDBm, d.EIRP.EIRPmW)
+		w = append(w, eirpWarning(d.EIRP))
 	}
 	return w
 }

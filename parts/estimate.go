@@ -7,7 +7,7 @@ import "math"
 type Estimate struct {
 	Name    string  `json:"name"`    // what is estimated, e.g. "input resistance"
 	Value   float64 `json:"value"`   // in Unit
-	Unit    string  `json:"unit"`    // "ohm", "deg", "dBi", "ratio"
+	Unit    string  `json:"unit"`    // "ohm", "deg", "dBic", "ratio"
 	Formula string  `json:"formula"` // the formula as written, with its author
 	Source  string  `json:"source"`  // where it is published
 	Valid   string  `json:"valid"`   // the range in which the source trusts it
@@ -20,11 +20,11 @@ type HelixEstimates struct {
 	InputResistance Estimate
 	HPBW            Estimate // half-power beamwidth
 	FNBW            Estimate // first-null beamwidth
-	Directivity15   Estimate // Kraus's original 15 Cλ² N Sλ, in dBi
-	Directivity12   Estimate // revised 12 Cλ² N Sλ, in dBi
-	Emerson         Estimate // gain fit over axial length, dBi
+	Directivity15   Estimate // Kraus's original 15 Cλ² N Sλ, in dBic
+	Directivity12   Estimate // revised 12 Cλ² N Sλ, in dBic
+	Emerson         Estimate // gain fit over axial length, dBic
 	AxialRatio      Estimate
-	Gain            Estimate // the gain the report leads with: Emerson where valid, else the 12 form
+	Gain            Estimate // the gain the report leads with: TextbookGain, continuous and capped, dBic
 }
 
 // All returns the estimates in report order.
@@ -63,13 +63,14 @@ func KrausDirectivity(k, cl, n, sl float64) float64 { return k * cl * cl * n * s
 // Source: Kraus, Marhefka & Khan, 4th ed., ex. 8-5.2.
 func AxialRatio(n float64) float64 { return (2*n + 1) / (2 * n) }
 
-// EmersonGain returns the gain in dBi of an axial-mode helix of axial
+// EmersonGain returns the gain in dBic of an axial-mode helix of axial
 // length Lλ wavelengths: 10.25 + 1.22·Lλ − 0.0726·Lλ². Source: Emerson,
 // "The gain of an axial-mode helix antenna", ARRL Antenna Compendium vol.
 // 4, 1995; range 2 ≤ Lλ ≤ 7 from memory.
 func EmersonGain(ll float64) float64 { return 10.25 + 1.22*ll - 0.0726*ll*ll }
 
-// DBi converts a power ratio to decibels.
+// DBi converts a power ratio to decibels (dBi, or dBic for a circularly
+// polarised gain against an isotropic circularly polarised antenna).
 func DBi(ratio float64) float64 { return 10 * math.Log10(ratio) }
 
 // The pitch-angle range, in radians, in which the Kraus beamwidth,
@@ -99,23 +100,20 @@ func EstimateHelix(cl, sl, n float64, peripheral bool) HelixEstimates {
 	h.FNBW = Estimate{Name: "first-null beamwidth", Value: KrausFNBW(cl, n, sl), Unit: "deg",
 		Formula: "FNBW = 115°/(Cλ·√(N·Sλ)) (Kraus)", Source: krausSource,
 		Valid: h.HPBW.Valid, InRange: h.HPBW.InRange}
-	h.Directivity15 = Estimate{Name: "directivity (original)", Value: DBi(KrausDirectivity(15, cl, n, sl)), Unit: "dBi",
+	h.Directivity15 = Estimate{Name: "directivity (original)", Value: DBi(KrausDirectivity(15, cl, n, sl)), Unit: "dBic",
 		Formula: "D = 15·Cλ²·N·Sλ (Kraus)", Source: "Kraus, Antennas, 2nd ed., ch. 7",
 		Valid: h.HPBW.Valid + "; overestimates long helices", InRange: h.HPBW.InRange}
-	h.Directivity12 = Estimate{Name: "directivity (revised)", Value: DBi(KrausDirectivity(12, cl, n, sl)), Unit: "dBi",
+	h.Directivity12 = Estimate{Name: "directivity (revised)", Value: DBi(KrausDirectivity(12, cl, n, sl)), Unit: "dBic",
 		Formula: "D = 12·Cλ²·N·Sλ (Kraus)", Source: krausSource + ", ex. 8-5.2",
 		Valid: h.HPBW.Valid + "; overestimates long helices", InRange: h.HPBW.InRange}
 	ll := n * sl
-	h.Emerson = Estimate{Name: "gain (fit)", Value: EmersonGain(ll), Unit: "dBi",
+	h.Emerson = Estimate{Name: "gain (fit)", Value: EmersonGain(ll), Unit: "dBic",
 		Formula: "G = 10.25 + 1.22·Lλ − 0.0726·Lλ² (Emerson)", Source: "Emerson, ARRL Antenna Compendium vol. 4, 1995",
 		Valid: "2 ≤ Lλ ≤ 7 (range from memory), 12.5° pitch, Cλ ≈ 1", InRange: ll >= 2 && ll <= 7 && inCl}
 	h.AxialRatio = Estimate{Name: "axial ratio", Value: AxialRatio(n), Unit: "ratio",
 		Formula: "AR = (2N + 1)/(2N) (Kraus)", Source: krausSource + ", ex. 8-5.2",
 		Valid: h.HPBW.Valid, InRange: h.HPBW.InRange}
-	h.Gain = h.Directivity12
-	if h.Emerson.InRange {
-		h.Gain = h.Emerson
-	}
+	h.Gain = textbookGain(h, cl, sl, n)
 	return h
 }
 

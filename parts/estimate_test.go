@@ -65,16 +65,16 @@ func TestEmersonAgainstKraus(t *testing.T) {
 }
 
 func TestEstimatesChooseGain(t *testing.T) {
-	t.Run("Emerson inside its range", func(t *testing.T) {
+	t.Run("Emerson for a long helix", func(t *testing.T) {
 		e := EstimateHelix(1, 0.2217, 12, false) // Lλ 2.66, α 12.5°
-		if e.Gain.Formula != e.Emerson.Formula || !e.Gain.InRange {
-			t.Errorf("gain formula %q, want Emerson's", e.Gain.Formula)
+		if math.Abs(e.Gain.Value-e.Emerson.Value) > 1e-12 || !e.Gain.InRange {
+			t.Errorf("gain %.3f dBic, want Emerson's %.3f", e.Gain.Value, e.Emerson.Value)
 		}
 	})
-	t.Run("12 form below Emerson's range", func(t *testing.T) {
+	t.Run("12 form for a short helix", func(t *testing.T) {
 		e := EstimateHelix(1, 0.2217, 5, false) // Lλ 1.1
-		if e.Gain.Formula != e.Directivity12.Formula {
-			t.Errorf("gain formula %q, want the 12 form", e.Gain.Formula)
+		if math.Abs(e.Gain.Value-e.Directivity12.Value) > 1e-12 {
+			t.Errorf("gain %.3f dBic, want the 12 form's %.3f", e.Gain.Value, e.Directivity12.Value)
 		}
 	})
 }
@@ -99,4 +99,50 @@ func TestEIRP(t *testing.T) {
 	if mw := DBmToMilliwatt(14); math.Abs(mw-25.1189) > 1e-3 {
 		t.Errorf("14 dBm = %v mW, want 25.1189", mw)
 	}
+}
+
+func TestQuotedGainIsContinuousAndCapped(t *testing.T) {
+	// The quoted gain must not jump where one formula hands over to the
+	// other: over turn counts 3 to 60 in steps of 0.01 turn at Cλ = 1,
+	// Sλ = 0.2217 (α = 12.5°), the largest step of the quoted gain must
+	// stay within the largest step either formula makes on its own
+	// (Kraus's 12 form moves 10·log10(N+0.01)/N ≤ 0.015 dB per step at
+	// N = 3 [calc]). The bound is Emerson's fit at Lλ = 7: 10.25 + 8.54 −
+	// 3.5574 = 15.2326 dBic [calc, Emerson, ARRL Antenna Compendium vol. 4].
+	const sl, step, maxStepDB = 0.2217, 0.01, 0.02
+	if c := GainCapDBic(); math.Abs(c-15.2326) > dbTol {
+		t.Fatalf("cap = %.4f dBic, want 15.2326", c)
+	}
+	prev := EstimateHelix(1, sl, 3, false).Gain.Value
+	for n := 3 + step; n <= 60; n += step {
+		g := EstimateHelix(1, sl, n, false).Gain.Value
+		if math.Abs(g-prev) > maxStepDB {
+			t.Fatalf("gain jumps %.3f dB between %.2f and %.2f turns", g-prev, n-step, n)
+		}
+		if g > GainCapDBic()+1e-12 {
+			t.Fatalf("%.2f turns: gain %.2f dBic above the cap", n, g)
+		}
+		prev = g
+	}
+	t.Run("9 and 9.1 turns", func(t *testing.T) {
+		// A hard switch between the formulas quotes 13.8 at 9 turns and
+		// 12.4 at 9.1 turns, Sλ = 0.2217 [calc].
+		a, b := EstimateHelix(1, sl, 9, false).Gain.Value, EstimateHelix(1, sl, 9.1, false).Gain.Value
+		if math.Abs(a-b) > 0.1 {
+			t.Errorf("9 turns %.2f dBic, 9.1 turns %.2f dBic", a, b)
+		}
+	})
+	t.Run("50 turns", func(t *testing.T) {
+		// The 12 form alone quotes 21.2 here [calc].
+		if g := EstimateHelix(1, sl, 50, false).Gain.Value; math.Abs(g-GainCapDBic()) > 1e-9 {
+			t.Errorf("50 turns: %.2f dBic, want the cap %.2f", g, GainCapDBic())
+		}
+	})
+	t.Run("unit", func(t *testing.T) {
+		for _, e := range EstimateHelix(1, sl, 12, false).All() {
+			if e.Unit == "dBi" {
+				t.Errorf("%s in dBi: circular gain is stated in dBic", e.Name)
+			}
+		}
+	})
 }

@@ -83,12 +83,15 @@ const (
 // with width, so the root is found by bisection on ln u; an error is
 // returned when z lies outside the range reachable for 0.001 ≤ w/h ≤ 1000.
 func StripWidthRatio(z, tn float64) (float64, error) {
+	// bisectMaxSteps bounds the bisection: halving the interval of ln u
+	// (width 13.8) reaches any float64 resolution in fewer than 100 steps.
+	const bisectMaxSteps = 100
 	imp := func(u float64) float64 { return hjZ01(u + hjThicknessDelta(u, tn)) }
 	lo, hi := math.Log(minStripRatio), math.Log(maxStripRatio)
 	if zl, zh := imp(minStripRatio), imp(maxStripRatio); z > zl || z < zh || math.IsNaN(z) {
 		return 0, fmt.Errorf("strip impedance %.4g Ω is outside the reachable range %.4g–%.4g Ω", z, zh, zl)
 	}
-	for hi-lo > ratioRelTol {
+	for steps := 0; hi-lo > ratioRelTol && steps < bisectMaxSteps; steps++ {
 		mid := (lo + hi) / 2
 		if imp(math.Exp(mid)) > z {
 			lo = mid

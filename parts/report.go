@@ -31,6 +31,12 @@ type Report struct {
 	Reflector               *ReflectorReport `json:"reflector,omitempty"`
 	Wedge                   *WedgeReport     `json:"wedge,omitempty"`
 	Warnings                []Warning        `json:"warnings"`
+	// QuotedGainDBic is the gain the report leads with (the field
+	// solution's realised gain in dBic when it ran, else the textbook
+	// estimate) and QuotedGainSource says which.
+	QuotedGainDBic    float64        `json:"quoted_gain_dbic"`
+	QuotedGainSource string         `json:"quoted_gain_source"`
+	Field            *FieldSolution `json:"field,omitempty"`
 }
 
 // TurnReport is one row of the per-turn table in the report.
@@ -56,10 +62,10 @@ type Estimates struct {
 	InputResistanceOhm float64    `json:"input_resistance_ohm"`
 	HPBWDeg            float64    `json:"hpbw_deg"`
 	FNBWDeg            float64    `json:"fnbw_deg"`
-	GainDBi            float64    `json:"gain_dbi"`
+	GainDBic           float64    `json:"gain_dbic"`
 	GainFormula        string     `json:"gain_formula"`
-	Directivity15DBi   float64    `json:"directivity_15_dbi"`
-	Directivity12DBi   float64    `json:"directivity_12_dbi"`
+	Directivity15DBic  float64    `json:"directivity_15_dbic"`
+	Directivity12DBic  float64    `json:"directivity_12_dbic"`
 	AxialRatio         float64    `json:"axial_ratio"`
 	AxialRatioDB       float64    `json:"axial_ratio_db"`
 	Formulas           []Estimate `json:"formulas"`
@@ -69,7 +75,7 @@ type Estimates struct {
 type EIRPReport struct {
 	TxPowerDBm   float64 `json:"tx_power_dbm"`
 	FeederLossDB float64 `json:"feeder_loss_db"`
-	GainDBi      float64 `json:"gain_dbi"`
+	GainDBic     float64 `json:"gain_dbic"`
 	EIRPDBm      float64 `json:"eirp_dbm"`
 	EIRPmW       float64 `json:"eirp_mw"`
 	Caution      string  `json:"caution"`
@@ -98,10 +104,10 @@ func (d *Design) Report() Report {
 			InputResistanceOhm: e.InputResistance.Value,
 			HPBWDeg:            e.HPBW.Value,
 			FNBWDeg:            e.FNBW.Value,
-			GainDBi:            e.Gain.Value,
+			GainDBic:           e.Gain.Value,
 			GainFormula:        e.Gain.Formula,
-			Directivity15DBi:   e.Directivity15.Value,
-			Directivity12DBi:   e.Directivity12.Value,
+			Directivity15DBic:  e.Directivity15.Value,
+			Directivity12DBic:  e.Directivity12.Value,
 			AxialRatio:         e.AxialRatio.Value,
 			AxialRatioDB:       20 * math.Log10(e.AxialRatio.Value),
 			Formulas:           e.All(),
@@ -125,7 +131,9 @@ func (d *Design) Report() Report {
 	d.patternReports(&r)
 	if d.EIRP != nil {
 		f := d.EIRP
-		r.EIRP = &EIRPReport{TxPowerDBm: f.TxPowerDBm, FeederLossDB: f.FeederLossDB, GainDBi: f.GainDBi, EIRPDBm: f.EIRPDBm, EIRPmW: f.EIRPmW, Caution: EIRPCaution}
+		r.EIRP = &EIRPReport{TxPowerDBm: f.TxPowerDBm, FeederLossDB: f.FeederLossDB, GainDBic: f.GainDBic, EIRPDBm: f.EIRPDBm, EIRPmW: f.EIRPmW, Caution: EIRPCaution}
 	}
+	r.QuotedGainDBic, r.QuotedGainSource = d.QuotedGain()
+	r.Field = d.Field
 	return r
 }

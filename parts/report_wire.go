@@ -18,6 +18,9 @@ type WireReport struct {
 	Solderability    string   `json:"solderability"`
 	Cautions         []string `json:"cautions"`
 	Source           string   `json:"source"`
+	// ConductivityMSm is the conductivity the field solver uses, MS/m.
+	ConductivityMSm    float64 `json:"conductivity_ms_per_m"`
+	ConductivitySource string  `json:"conductivity_source"`
 }
 
 // FormerReport describes the springback-compensated former path.
@@ -38,6 +41,7 @@ func (d *Design) wireReport() WireReport {
 		YoungsModulusGPa: m.YoungsModulus / 1000, YieldMPa: m.Yield, LibraryYieldMPa: w.LibraryYield,
 		Calibration: d.Spec.Wire.Calibration, Calibrated: w.Calibration != nil,
 		Elongation: m.Elongation, Solderability: string(m.Solderability), Cautions: []string{}, Source: m.Source,
+		ConductivityMSm: m.Conductivity / 1e6, ConductivitySource: m.ConductivitySource,
 	}
 	for _, c := range m.Cautions {
 		r.Cautions = append(r.Cautions, c.Text())

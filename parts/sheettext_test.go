@@ -2,6 +2,7 @@ package parts
 
 import (
 	"math"
+	"regexp"
 	"strings"
 	"testing"
 
@@ -37,7 +38,7 @@ func TestTurnsText(t *testing.T) {
 		t.Fatal(err)
 	}
 	b := NewBuildSheet(d, cl, strings.Repeat("0", 64))
-	if all := sheetText(b); strings.Contains(all, "1 turns") {
+	if all := sheetText(b); regexp.MustCompile(`(^|[^0-9.])1 turns`).MatchString(all) {
 		t.Error(`the sheet of a one-turn coil says "1 turns"`)
 	}
 }

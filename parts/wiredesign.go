@@ -94,13 +94,17 @@ func newWireDesign(s *spec.Spec) (WireDesign, error) {
 }
 
 // compensateCoil returns the former coil that relaxes to target under
-// model: same kind, turns, hand and start height, end radii compensated,
-// heights held. A constant-angle former's spacing depends on its own radii,
-// so its ends are compensated again at the spacing the former has there
-// until the radii settle.
+// model: same kind, hand, start height and total height, end radii
+// compensated, and as many turns as make its groove as long as the target
+// coil's wire. The wire keeps its length when it springs open: wound on
+// the smaller former it needs a few degrees more than the target's turns,
+// and released it unwinds by the difference. A constant-angle former's
+// spacing depends on its own radii and turns, so its ends are compensated
+// again at the spacing the former has there until the radii settle.
 func compensateCoil(target Coil, model *wire.Springback) (Coil, error) {
 	f := target
 	s0, s1 := target.SpacingAt(0), target.SpacingAt(target.Span())
+	want := target.Length()
 	for range formerIterations {
 		prev := f
 		ws, err := model.Compensate(target.StartRadius, s0)
@@ -116,24 +120,54 @@ func compensateCoil(target Coil, model *wire.Springback) (Coil, error) {
 			}
 			f.EndRadius = we.FormerRadius
 		}
-		if f.Mode != ConstantAngle || f.EndRadius == f.StartRadius {
-			return f, nil
-		}
-		// On the cone, Z − Z0 = (r − r0)·cos θ0/sin θ0 with sin θ0 = k/tan α
-		// (Dyson, IEEE Trans. AP-13, 1965). Holding the height H
-		// fixes u = tan θ0 = (r1 − r0)/H, hence sin θ0 = u/√(1 + u²) and
-		// tan α = k/sin θ0.
-		u := (f.EndRadius - f.StartRadius) / target.Height()
-		sinTheta := u / math.Sqrt(1+u*u)
-		k := math.Log(f.EndRadius/f.StartRadius) / f.Span()
-		f.PitchAngle = math.Atan(k / sinTheta)
+		f = holdLength(f, target.Height(), want)
 		if math.Abs(f.StartRadius-prev.StartRadius) < formerSettle*f.StartRadius &&
-			math.Abs(f.EndRadius-prev.EndRadius) < formerSettle*f.EndRadius {
+			math.Abs(f.EndRadius-prev.EndRadius) < formerSettle*f.EndRadius &&
+			math.Abs(f.Turns-prev.Turns) < formerSettle*f.Turns {
 			return f, nil
 		}
 		s0, s1 = f.SpacingAt(0), f.SpacingAt(f.Span())
 	}
 	return f, nil
+}
+
+// holdLength returns f with its turns set so that its centreline is want
+// mm long while its end radii and its height stay as they are: the
+// spacing (constant spacing) or the pitch angle (constant angle) follows
+// the turns. The length is nearly proportional to the turns, so the
+// fixed-point step N ← N·want/L settles in a few rounds.
+func holdLength(f Coil, height, want float64) Coil {
+	for range formerIterations {
+		f = withTurns(f, f.Turns*want/f.Length(), height)
+		if math.Abs(f.Length()-want) < formerSettle*want {
+			break
+		}
+	}
+	return f
+}
+
+// withTurns returns f with n turns over the same height and end radii.
+func withTurns(f Coil, n, height float64) Coil {
+	f.Turns = n
+	if f.Mode != ConstantAngle || f.EndRadius == f.StartRadius {
+		f.Spacing = height / n
+		return f
+	}
+	// On the cone, Z − Z0 = (r − r0)·cos θ0/sin θ0 with sin θ0 = k/tan α
+	// (Dyson, IEEE Trans. AP-13, 1965). Holding the height H fixes
+	// u = tan θ0 = (r1 − r0)/H, hence sin θ0 = u/√(1 + u²) and
+	// tan α = k/sin θ0.
+	u := (f.EndRadius - f.StartRadius) / height
+	sinTheta := u / math.Sqrt(1+u*u)
+	k := math.Log(f.EndRadius/f.StartRadius) / f.Span()
+	f.PitchAngle = math.Atan(k / sinTheta)
+	return f
+}
+
+// formerPhi returns the azimuth on the former that winds to azimuth phi
+// of the relaxed coil: the same share of the winding.
+func (d *Design) formerPhi(phi float64) float64 {
+	return phi * d.Former.Turns / d.Coil.Turns
 }
 
 // springbackTurns fills the per-turn former, prediction and tolerance, and
@@ -150,8 +184,8 @@ func (d *Design) springbackTurns() ([]Warning, error) {
 	for i := range d.Turns {
 		t := &d.Turns[i]
 		mid := (t.StartPhi + t.EndPhi) / 2
-		rf := d.Former.Radius(mid)
-		win, err := w.Model.Relax(rf, d.Former.SpacingAt(mid))
+		rf := d.Former.Radius(d.formerPhi(mid))
+		win, err := w.Model.Relax(rf, d.Former.SpacingAt(d.formerPhi(mid)))
 		if err != nil {
 			return nil, fmt.Errorf("turn %d: %w", t.Index, err)
 		}
@@ -211,7 +245,7 @@ func (d *Design) yieldSpread() (float64, error) {
 		if err != nil {
 			return 0, err
 		}
-		w, err := s.Relax(d.Former.Radius(mid), d.Former.SpacingAt(mid))
+		w, err := s.Relax(d.Former.Radius(d.formerPhi(mid)), d.Former.SpacingAt(d.formerPhi(mid)))
 		if err != nil {
 			return 0, err
 		}

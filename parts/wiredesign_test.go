@@ -85,8 +85,11 @@ func TestFormerCompensation(t *testing.T) {
 			// target on every turn.
 			d := mustDesign(t, specText(5800, cylinder5800, `material = "`+material+`"
 diameter_mm = 1.6`))
-			if d.Former.Spacing != d.Coil.Spacing || d.Former.Mode != d.Coil.Mode || d.Former.Hand != d.Coil.Hand || d.Former.Z0 != d.Coil.Z0 {
-				t.Errorf("former %+v does not hold the coil's spacing, kind, hand and start %+v", d.Former, d.Coil)
+			// The wire keeps its length: the former winds the coil's wire
+			// length over the coil's height, in more turns.
+			if relErr(d.Former.Length(), d.Coil.Length()) > tol || relErr(d.Former.Height(), d.Coil.Height()) > tol ||
+				d.Former.Mode != d.Coil.Mode || d.Former.Hand != d.Coil.Hand || d.Former.Z0 != d.Coil.Z0 || !(d.Former.Turns > d.Coil.Turns) {
+				t.Errorf("former %+v does not hold the coil's wire length, height, kind, hand and start %+v", d.Former, d.Coil)
 			}
 			if !(d.Former.StartRadius < d.Coil.StartRadius) {
 				t.Errorf("former radius %g not below coil radius %g", d.Former.StartRadius, d.Coil.StartRadius)
@@ -109,13 +112,13 @@ diameter_mm = 1.6`))
 			d := mustDesign(t, specText(5800, tc.coil, `material = "brass-c26000-half-hard"
 diameter_mm = 1.6`))
 			// Source: identity; each end is compensated exactly.
-			for _, phi := range []float64{0, d.Coil.Span()} {
+			for _, phi := range []float64{0, d.Former.Span()} {
 				w, err := d.Wire.Model.Relax(d.Former.Radius(phi), d.Former.SpacingAt(phi))
 				if err != nil {
 					t.Fatal(err)
 				}
-				if relErr(w.RelaxedRadius, d.Coil.Radius(phi)) > 1e-6 {
-					t.Errorf("φ %.3g: relaxes to %.9g mm, coil %.9g", phi, w.RelaxedRadius, d.Coil.Radius(phi))
+				if want := d.Coil.Radius(phi * d.Coil.Turns / d.Former.Turns); relErr(w.RelaxedRadius, want) > 1e-6 {
+					t.Errorf("φ %.3g: relaxes to %.9g mm, coil %.9g", phi, w.RelaxedRadius, want)
 				}
 			}
 			// Source: the groove holds the heights: same start and total height.

@@ -4,8 +4,6 @@ package html
 
 import (
 	"bytes"
-	"context"
-	"errors"
 	"image"
 	"image/png"
 	"os"
@@ -14,84 +12,22 @@ import (
 	"regexp"
 	"strconv"
 	"strings"
-	"syscall"
 	"testing"
-	"time"
+
+	"coilwright/cam/checktool"
 
 	xhtml "golang.org/x/net/html"
 )
 
-// browserTimeout bounds one headless browser run, so a hung browser fails
-// the test instead of stalling CI.
-const browserTimeout = 90 * time.Second
+// needChromium returns the path of Debian's chromium (see checktool).
+func needChromium(t *testing.T) string { return checktool.Chromium(t) }
 
-// needChromium returns the path of Debian's chromium, skipping the test
-// when it is missing unless COILWRIGHT_REQUIRE_TOOLS=1 demands it.
-func needChromium(t *testing.T) string {
-	t.Helper()
-	p, err := exec.LookPath("chromium")
-	if err != nil {
-		if os.Getenv("COILWRIGHT_REQUIRE_TOOLS") == "1" {
-			t.Fatalf("chromium is required (COILWRIGHT_REQUIRE_TOOLS=1) but not installed")
-		}
-		t.Skip("chromium not installed")
-	}
-	return p
-}
+// needTool returns the path of an external checker (see checktool).
+func needTool(t *testing.T, name string) string { return checktool.Need(t, name) }
 
-// needTool returns the path of an external checker, skipping the test when
-// it is missing unless COILWRIGHT_REQUIRE_TOOLS=1 demands it.
-func needTool(t *testing.T, name string) string {
-	t.Helper()
-	p, err := exec.LookPath(name)
-	if err != nil {
-		if os.Getenv("COILWRIGHT_REQUIRE_TOOLS") == "1" {
-			t.Fatalf("%s is required (COILWRIGHT_REQUIRE_TOOLS=1) but not installed", name)
-		}
-		t.Skipf("%s not installed", name)
-	}
-	return p
-}
-
-// runChromium runs chromium headless on page with extra arguments and a
-// fresh profile, offline-minded (no background fetches, no updates), and
-// returns what it printed on stdout. The whole process group is killed
-// when browserTimeout passes.
+// runChromium runs chromium headless on page (see checktool.RunChromium).
 func runChromium(t *testing.T, chromium, page string, extra ...string) []byte {
-	t.Helper()
-	ctx, cancel := context.WithTimeout(context.Background(), browserTimeout)
-	defer cancel()
-	args := []string{
-		"--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run",
-		"--disable-background-networking", "--disable-component-update", "--disable-sync",
-		"--disable-dev-shm-usage", "--hide-scrollbars",
-		"--user-data-dir=" + t.TempDir(),
-	}
-	args = append(args, extra...)
-	args = append(args, "file://"+page)
-	cmd := exec.CommandContext(ctx, chromium, args...)
-	cmd.SysProcAttr = &syscall.SysProcAttr{Setpgid: true}
-	cmd.Cancel = func() error { return syscall.Kill(-cmd.Process.Pid, syscall.SIGKILL) }
-	cmd.WaitDelay = 5 * time.Second
-	var stdout, stderr bytes.Buffer
-	cmd.Stdout, cmd.Stderr = &stdout, &stderr
-	err := cmd.Run()
-	if errors.Is(ctx.Err(), context.DeadlineExceeded) {
-		t.Fatalf("chromium did not finish within %v\n%s", browserTimeout, tail(stderr.String()))
-	}
-	if err != nil {
-		t.Fatalf("chromium: %v\n%s", err, tail(stderr.String()))
-	}
-	return stdout.Bytes()
-}
-
-// tail returns the last lines of a long log.
-func tail(s string) string {
-	lines := strings.Split(strings.TrimSpace(s), "\n")
-	if len(lines) > 20 {
-		lines = lines[len(lines)-20:]
-	}
-	return strings.Join(lines, "\n")
+	return checktool.RunChromium(t, chromium, page, extra...)
 }
 
 // writeSample writes the sample report for paper to a fresh folder and

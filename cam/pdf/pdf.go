@@ -78,6 +78,18 @@ type PDFOptions struct {
 	Created time.Time
 }
 
+// maxSourceDateEpoch is 9999-12-31T23:59:59Z: a PDF date has a four-digit
+// year. Source: ISO 32000-1:2008, §7.9.4 Dates.
+const maxSourceDateEpoch = 253402300799
+
+// clipEnv cuts an environment value echoed in a message to 40 bytes.
+func clipEnv(v string) string {
+	if len(v) > 40 {
+		return v[:40] + "…"
+	}
+	return v
+}
+
 // SourceDateEpoch parses the value of the SOURCE_DATE_EPOCH convention
 // (whole seconds since 1970-01-01 UTC). An empty value gives the zero
 // time.
@@ -86,8 +98,9 @@ func SourceDateEpoch(v string) (time.Time, error) {
 		return time.Time{}, nil
 	}
 	s, err := strconv.ParseInt(v, 10, 64)
-	if err != nil || s < 0 {
-		return time.Time{}, fmt.Errorf("SOURCE_DATE_EPOCH = %q: must be a whole number of seconds since 1970", v)
+	if err != nil || s < 0 || s > maxSourceDateEpoch {
+		return time.Time{}, fmt.Errorf("SOURCE_DATE_EPOCH = %q: must be a whole number of seconds from 0 (1970) to %d (the end of 9999); unset it or give e.g. $(git log -1 --format=%%ct)",
+			clipEnv(v), maxSourceDateEpoch)
 	}
 	return time.Unix(s, 0).UTC(), nil
 }

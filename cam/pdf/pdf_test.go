@@ -70,6 +70,10 @@ func TestSourceDateEpoch(t *testing.T) {
 		{"0", time.Unix(0, 0).UTC(), true},
 		{"1714979289", time.Date(2024, 5, 6, 7, 8, 9, 0, time.UTC), true},
 		{"-5", time.Time{}, false},
+		// Source: `date -u -d @253402300799` prints Fri Dec 31 23:59:59 UTC 9999.
+		{"253402300799", time.Date(9999, 12, 31, 23, 59, 59, 0, time.UTC), true},
+		{"253402300800", time.Time{}, false},
+		{"9223372036854775807", time.Time{}, false},
 		{"soon", time.Time{}, false},
 	} {
 		t.Run(fmt.Sprintf("value %q", tc.in), func(t *testing.T) {

@@ -72,10 +72,14 @@ func renderMesh(m *geom.Mesh, size int, d geom.Vec3) *image.RGBA {
 	for i := range depth {
 		depth[i] = math.Inf(-1)
 	}
-	col := make([][3]float64, n*n)
-	for i := range col {
-		col[i] = [3]float64{float64(previewBackground.R), float64(previewBackground.G), float64(previewBackground.B)}
+	// Each sample keeps the index of the face it shows (−1 for the
+	// background) and each face its colour: a quarter of the memory of a
+	// colour per sample.
+	face := make([]int32, n*n)
+	for i := range face {
+		face[i] = -1
 	}
+	faceRGB := make([][3]float64, len(m.Faces))
 	var sx, sy, sz [3]float64
 	for i, f := range m.Faces {
 		nrm := m.Normal(i)
@@ -83,7 +87,7 @@ func renderMesh(m *geom.Mesh, size int, d geom.Vec3) *image.RGBA {
 			continue // faces away from the eye
 		}
 		shade := 0.35 + 0.65*math.Max(0, nrm.Dot(light))
-		rgb := [3]float64{previewBase[0] * shade, previewBase[1] * shade, previewBase[2] * shade}
+		faceRGB[i] = [3]float64{previewBase[0] * shade, previewBase[1] * shade, previewBase[2] * shade}
 		for k := range 3 {
 			p := m.Vertices[f[k]].Sub(c)
 			sx[k] = float64(n)/2 + p.Dot(right)*scale
@@ -110,18 +114,22 @@ func renderMesh(m *geom.Mesh, size int, d geom.Vec3) *image.RGBA {
 				}
 				z := w0*sz[0] + w1*sz[1] + w2*sz[2]
 				if j := y*n + x; z > depth[j] {
-					depth[j], col[j] = z, rgb
+					depth[j], face[j] = z, int32(i)
 				}
 			}
 		}
 	}
+	background := [3]float64{float64(previewBackground.R), float64(previewBackground.G), float64(previewBackground.B)}
 	img := image.NewRGBA(image.Rect(0, 0, size, size))
 	for y := range size {
 		for x := range size {
 			var s [3]float64
 			for dy := range ss {
 				for dx := range ss {
-					c := col[(y*ss+dy)*n+x*ss+dx]
+					c := background
+					if fi := face[(y*ss+dy)*n+x*ss+dx]; fi >= 0 {
+						c = faceRGB[fi]
+					}
 					s[0], s[1], s[2] = s[0]+c[0], s[1]+c[1], s[2]+c[2]
 				}
 			}

@@ -23,6 +23,7 @@ type buildOptions struct {
 	demo     string
 	json     bool
 	progress io.Writer // step names go here as they start; nil for none
+	stderr   io.Writer // where an interrupted build says so
 }
 
 func newBuildCmd() *cobra.Command {
@@ -50,6 +51,7 @@ not make, unless --force is given.`,
 				o.demo = templates.DefaultDemo
 			}
 			o.progress = terminal(cmd.ErrOrStderr())
+			o.stderr = cmd.ErrOrStderr()
 			return runBuild(cmd.OutOrStdout(), path, o)
 		},
 	}
@@ -86,6 +88,13 @@ func runBuild(w io.Writer, path string, o buildOptions) error {
 	if err != nil {
 		return err
 	}
+	if o.stderr != nil {
+		defer interruptOnSignal(out, o.stderr)()
+		if ig := out.Ignored(); len(ig) > 0 {
+			fmt.Fprintf(o.stderr, "coilwright: %s: ignored %d entries of the previous manifest that are not output names (%s)\n",
+				dir, len(ig), clipList(ig))
+		}
+	}
 	var progress func(string)
 	if o.progress != nil {
 		progress = func(step string) { fmt.Fprintf(o.progress, "coilwright: %s…\n", step) }
@@ -94,7 +103,7 @@ func runBuild(w io.Writer, path string, o buildOptions) error {
 		out.Abort()
 		return err
 	}
-	m := cam.Manifest{Tool: "coilwright", Version: Version, Spec: l.Name, SpecSHA256: l.SHA256()}
+	m := cam.Manifest{Tool: "coilwright", Version: Version, Spec: l.BaseName(), SpecSHA256: l.SHA256()}
 	files := out.Files()
 	if err := out.Commit(m); err != nil {
 		return err

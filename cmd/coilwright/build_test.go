@@ -97,7 +97,7 @@ func TestDesignJSONFields(t *testing.T) {
 		Estimates struct {
 			InputResistanceOhm *float64 `json:"input_resistance_ohm"`
 			HPBWDeg            *float64 `json:"hpbw_deg"`
-			GainDBi            *float64 `json:"gain_dbi"`
+			GainDBic           *float64 `json:"gain_dbic"`
 			GainFormula        string   `json:"gain_formula"`
 			AxialRatio         *float64 `json:"axial_ratio"`
 		} `json:"estimates"`
@@ -117,7 +117,7 @@ func TestDesignJSONFields(t *testing.T) {
 		}
 	}
 	e := d.Estimates
-	if e.InputResistanceOhm == nil || e.HPBWDeg == nil || e.GainDBi == nil || e.GainFormula == "" || e.AxialRatio == nil {
+	if e.InputResistanceOhm == nil || e.HPBWDeg == nil || e.GainDBic == nil || e.GainFormula == "" || e.AxialRatio == nil {
 		t.Errorf("estimates incomplete: %+v", e)
 	}
 }

@@ -24,7 +24,7 @@ func newCheckCmd() *cobra.Command {
 the per-turn table, the estimates and any warnings. A spec with problems
 lists every problem with its key and line and exits with status 2.`,
 		Example: `  coilwright check kestrel.toml
-  coilwright check --json kestrel.toml | jq .estimates.gain_dbi
+  coilwright check --json kestrel.toml | jq .estimates.gain_dbic
   coilwright check --demo demo-2g4-cylinder.toml`,
 		Args: maxArgs(1, "one spec file"),
 		RunE: func(cmd *cobra.Command, args []string) error {
@@ -65,7 +65,7 @@ func runCheck(w io.Writer, path string, o checkOptions) error {
 	fmt.Fprintf(tw, "diameter\t%.2f mm base, %.2f mm top (wire centre)\n", r.BaseDiameterMM, r.TopDiameterMM)
 	fmt.Fprintf(tw, "axial length\t%.2f mm\n", r.AxialLengthMM)
 	fmt.Fprintf(tw, "wire length\t%.1f mm\n", r.WireLengthMM)
-	fmt.Fprintf(tw, "gain\t%.1f dBi (%s)\n", r.Estimates.GainDBi, r.Estimates.GainFormula)
+	fmt.Fprintf(tw, "gain\t%.1f dBic (%s)\n", r.Estimates.GainDBic, r.Estimates.GainFormula)
 	fmt.Fprintf(tw, "beamwidth\t%.1f° half-power\n", r.Estimates.HPBWDeg)
 	fmt.Fprintf(tw, "input resistance\t%.0f Ω\n", r.Estimates.InputResistanceOhm)
 	fmt.Fprintf(tw, "axial ratio\t%.3f (%.2f dB)\n", r.Estimates.AxialRatio, r.Estimates.AxialRatioDB)
@@ -81,6 +81,7 @@ func runCheck(w io.Writer, path string, o checkOptions) error {
 		fmt.Fprintf(w, "%4d  %11.2f  %5.3f  %7.2f  %10.2f  %9.2f  %13.2f  %12.2f\n", t.Index, t.DiameterMM, t.CircumferenceLambda, t.PitchAngleDeg, t.SpacingMM,
 			t.FormerDiameterMM, t.SpringbackMM, t.ToleranceMM)
 	}
+	printField(w, r.Field)
 	if len(r.Warnings) > 0 {
 		fmt.Fprintln(w, "\nwarnings:")
 		for _, wr := range r.Warnings {

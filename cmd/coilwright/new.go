@@ -8,6 +8,7 @@ import (
 	"math"
 	"strings"
 	"text/template"
+	"unicode"
 
 	"github.com/spf13/cobra"
 
@@ -78,8 +79,11 @@ func runNew(w, stderr io.Writer, o newOptions, sized bool) error {
 		_, err := w.Write(templates.Reference())
 		return err
 	}
-	if o.frequencyMHz < spec.MinFrequencyMHz || o.frequencyMHz > spec.MaxFrequencyMHz {
+	if !(o.frequencyMHz >= spec.MinFrequencyMHz && o.frequencyMHz <= spec.MaxFrequencyMHz) { // NaN fails too
 		return usageError{fmt.Errorf("--frequency-mhz %g is outside %g–%g MHz", o.frequencyMHz, spec.MinFrequencyMHz, spec.MaxFrequencyMHz)}
+	}
+	if strings.IndexFunc(o.kit, unicode.IsControl) >= 0 {
+		return usageError{fmt.Errorf("--kit %s: holds a control character; give printable text", clipQuote(o.kit))}
 	}
 	if o.shape != "cylindrical" && o.shape != "conical" {
 		return usageError{fmt.Errorf(`--shape %q: use "cylindrical" or "conical"`, o.shape)}

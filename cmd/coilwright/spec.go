@@ -3,8 +3,6 @@ package main
 import (
 	"errors"
 	"fmt"
-	"io/fs"
-	"os"
 	"strings"
 	"time"
 
@@ -30,8 +28,8 @@ func loadSpec(path, demo string) (*kit.Source, error) {
 		}
 		l.Name, l.Bytes = "demo:"+demo, b
 	default:
-		b, err := os.ReadFile(path)
-		if errors.Is(err, fs.ErrNotExist) {
+		b, err := readInputFile(path)
+		if errors.Is(err, errNotFound) {
 			return nil, inputError{path, errors.New("no such file; write one with `coilwright new > spec.toml`")}
 		}
 		if err != nil {

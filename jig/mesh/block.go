@@ -5,6 +5,7 @@ package mesh
 
 import (
 	"math"
+	"slices"
 
 	"coilwright/cam/geom"
 	"coilwright/jig/sdf"
@@ -53,8 +54,9 @@ type blockWorker struct {
 	g    *grid
 	s    sdf.SDF3
 	vals []float64
-	done []bool  // whether vals holds the point's value
-	vert []int32 // local vertex per block edge slot, −1 when unset
+	done []bool      // whether vals holds the point's value
+	vert []int32     // local vertex per block edge slot, −1 when unset
+	norm []geom.Vec3 // unit normal per local vertex, zero until needed
 	p    *patch
 }
 
@@ -89,26 +91,41 @@ func (w *blockWorker) run(i int) *patch {
 		w.done[j] = false
 	}
 	anyNeg, anyPos := false, false
-	for sb, ok := range live {
-		if !ok {
+	sample := func(x, y, z int) float64 {
+		k := x + bp*(y+bp*z)
+		if w.done[k] {
+			return w.vals[k]
+		}
+		w.done[k] = true
+		v := w.s.Eval(g.point(i0+x, j0+y, k0+z))
+		w.vals[k] = v
+		if v < 0 {
+			anyNeg = true
+		} else {
+			anyPos = true
+		}
+		return v
+	}
+	// Within the live sub-blocks, regions of 2³ cells are culled by the
+	// value at their centre, itself a grid point: a region farther from
+	// the surface than its half diagonal has every corner of the centre's
+	// sign, so its cells hold no crossing, and a point that only dead
+	// regions use is never needed.
+	var region [regions * regions * regions]bool
+	rh := float64(regionCells) * g.h / 2
+	for r := range region {
+		rx, ry, rz := r%regions, r/regions%regions, r/(regions*regions)
+		if !live[rx/2+2*(ry/2)+4*(rz/2)] {
 			continue
 		}
-		sx, sy, sz := sb&1*sub, sb>>1&1*sub, sb>>2&1*sub
-		for z := sz; z <= sz+sub; z++ {
-			for y := sy; y <= sy+sub; y++ {
-				for x := sx; x <= sx+sub; x++ {
-					k := x + bp*(y+bp*z)
-					if w.done[k] {
-						continue
-					}
-					w.done[k] = true
-					v := w.s.Eval(g.point(i0+x, j0+y, k0+z))
-					w.vals[k] = v
-					if v < 0 {
-						anyNeg = true
-					} else {
-						anyPos = true
-					}
+		v := sample(regionCells*rx+1, regionCells*ry+1, regionCells*rz+1)
+		region[r] = math.Abs(v) <= rh*math.Sqrt(3)*(1+1e-9)
+	}
+	for z := range bp {
+		for y := range bp {
+			for x := range bp {
+				if regionUses(&region, x, y, z) {
+					sample(x, y, z)
 				}
 			}
 		}
@@ -119,11 +136,17 @@ func (w *blockWorker) run(i int) *patch {
 	for j := range w.vert {
 		w.vert[j] = -1
 	}
-	w.p = &patch{}
+	// The patch is built in the worker's scratch and copied out at its
+	// exact size, so blocks waiting to be merged hold no spare capacity.
+	if w.p == nil {
+		w.p = &patch{}
+	}
+	w.p.keys, w.p.pos, w.p.tris = w.p.keys[:0], w.p.pos[:0], w.p.tris[:0]
+	w.norm = w.norm[:0]
 	for z := range blockCells {
 		for y := range blockCells {
 			for x := range blockCells {
-				if live[x/sub+2*(y/sub)+4*(z/sub)] {
+				if region[x/regionCells+regions*(y/regionCells+regions*(z/regionCells))] {
 					w.cell(i0, j0, k0, x, y, z)
 				}
 			}
@@ -132,7 +155,29 @@ func (w *blockWorker) run(i int) *patch {
 	if len(w.p.tris) == 0 {
 		return nil
 	}
-	return w.p
+	return &patch{keys: slices.Clone(w.p.keys), pos: slices.Clone(w.p.pos), tris: slices.Clone(w.p.tris)}
+}
+
+// regionCells is the edge of a culling region in cells (its centre is then a
+// grid point), and regions the number of regions along a block's edge.
+const (
+	regionCells = 2
+	regions     = blockCells / regionCells
+)
+
+// regionUses reports whether block point (x, y, z) is a corner of a cell in
+// a live region.
+func regionUses(region *[regions * regions * regions]bool, x, y, z int) bool {
+	for rz := max(0, (z-1)/regionCells); rz <= min(regions-1, z/regionCells); rz++ {
+		for ry := max(0, (y-1)/regionCells); ry <= min(regions-1, y/regionCells); ry++ {
+			for rx := max(0, (x-1)/regionCells); rx <= min(regions-1, x/regionCells); rx++ {
+				if region[rx+regions*(ry+regions*rz)] {
+					return true
+				}
+			}
+		}
+	}
+	return false
 }
 
 // cell emits the triangles of local cell (x, y, z) in the block at
@@ -318,6 +363,6 @@ func (w *blockWorker) vertex(i0, j0, k0, x, y, z, e int, v *[8]float64) int32 {
 	w.vert[slot] = idx
 	w.p.keys = append(w.p.keys, g.edgeKey(gi, gj, gk, a))
 	w.p.pos = append(w.p.pos, pa.Add(d.Scale(t)))
-	w.p.norm = append(w.p.norm, geom.Vec3{})
+	w.norm = append(w.norm, geom.Vec3{})
 	return idx
 }

@@ -149,7 +149,7 @@ func (w *blockWorker) fanAbout(c []int32, ci, cj, ck, no int) {
 	cellKey := (uint64(ck)*uint64(w.g.np[1])+uint64(cj))*uint64(w.g.np[0]) + uint64(ci)
 	w.p.keys = append(w.p.keys, w.g.featureBase()+cellKey*4+uint64(no))
 	w.p.pos = append(w.p.pos, p)
-	w.p.norm = append(w.p.norm, geom.Vec3{})
+	w.norm = append(w.norm, geom.Vec3{})
 	for i := range c {
 		w.p.tris = append(w.p.tris, [3]int32{idx, c[i], c[(i+1)%len(c)]})
 	}
@@ -216,7 +216,7 @@ func (w *blockWorker) gradient(p geom.Vec3) geom.Vec3 {
 // vertex lies on the surface to within rootTol cells, so its own value is
 // taken as zero, an error of at most rootTol/0.05 = 0.2 % in each component.
 func (w *blockWorker) normal(i int32) geom.Vec3 {
-	if n := w.p.norm[i]; n != (geom.Vec3{}) {
+	if n := w.norm[i]; n != (geom.Vec3{}) {
 		return n
 	}
 	p := w.p.pos[i]
@@ -229,6 +229,6 @@ func (w *blockWorker) normal(i int32) geom.Vec3 {
 	if n == (geom.Vec3{}) {
 		n = geom.Vec3{Z: 1}
 	}
-	w.p.norm[i] = n
+	w.norm[i] = n
 	return n
 }

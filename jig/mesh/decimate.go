@@ -375,7 +375,7 @@ func (d *decimator) cost(r, k uint32) (float64, bool) {
 	}
 	p := d.pos[k]
 	e := d.pos[r].Sub(p)
-	return math.Max(d.q[r].eval(p)+d.q[k].eval(p), 0) + lengthWeight*e.Dot(e), true
+	return max(d.q[r].eval(p)+d.q[k].eval(p), 0) + lengthWeight*e.Dot(e), true
 }
 
 // option is a vertex r may be moved onto and the cost of that move.
@@ -446,23 +446,40 @@ func (d *worker) movedNext(v, r, k uint32) {
 	}
 }
 
-// neighbours fills d.ring with the vertices sharing an edge with v.
+// neighbours fills d.ring with the vertices sharing an edge with v, in the
+// order they first appear in v's faces.
 func (d *worker) neighbours(v uint32) {
 	d.ring = d.ring[:0]
+	e := d.nextEpoch()
+	d.mark[v] = e
 	for _, fi := range d.liveFaces(v) {
 		for _, u := range d.faces[fi] {
-			if u != v && !slices.Contains(d.ring, u) {
+			if d.mark[u] != e {
+				d.mark[u] = e
 				d.ring = append(d.ring, u)
 			}
 		}
 	}
 }
 
+// nextEpoch starts a new round of marks and returns its value.
+func (d *worker) nextEpoch() uint32 {
+	if d.epoch >= math.MaxUint32-1 {
+		clear(d.mark)
+		d.epoch = 0
+	}
+	d.epoch++
+	return d.epoch
+}
+
 // liveFaces drops dead faces from v's list and returns it.
 func (d *decimator) liveFaces(v uint32) []int32 {
 	fs := d.vfaces[v]
 	n := 0
-	for _, f := range fs {
+	for n < len(fs) && !d.dead[fs[n]] {
+		n++ // nothing to move before the first dead face
+	}
+	for _, f := range fs[n:] {
 		if !d.dead[f] {
 			fs[n] = f
 			n++
@@ -501,22 +518,22 @@ func (d *worker) collapse(r, k uint32) bool {
 	}
 	// Link condition: the neighbours common to r and k are exactly the two
 	// opposite vertices.
-	if d.epoch >= math.MaxUint32-2 {
+	if d.epoch >= math.MaxUint32-2 { // room for the two rounds below
 		clear(d.mark)
 		d.epoch = 0
 	}
-	d.epoch++
+	inR := d.nextEpoch()
 	for _, fi := range fr {
 		for _, v := range d.faces[fi] {
-			d.mark[v] = d.epoch
+			d.mark[v] = inR
 		}
 	}
 	common := 0
-	d.epoch++
+	counted := d.nextEpoch()
 	for _, fi := range fk {
 		for _, v := range d.faces[fi] {
-			if v != r && v != k && d.mark[v] == d.epoch-1 {
-				d.mark[v] = d.epoch // count each once
+			if v != r && v != k && d.mark[v] == inR {
+				d.mark[v] = counted // count each once
 				common++
 			}
 		}

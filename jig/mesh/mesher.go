@@ -7,7 +7,9 @@ package mesh
 //     A block whose centre lies farther from the surface than its half
 //     diagonal cannot hold a sign change (the distance is 1-Lipschitz) and is
 //     skipped; so is each of its eight sub-blocks of 4³ cells by the same
-//     test, and the rest are sampled at every grid point. Blocks are handed to
+//     test, and so is each region of 2³ cells in the rest by the value at
+//     its centre, a grid point; the points the remaining regions use are
+//     sampled. Blocks are handed to
 //     all cores through an atomic counter and each writes only its own slot
 //     of a pre-indexed result slice.
 //  2. In each cell with corners of both signs (a zero value counts as
@@ -169,7 +171,7 @@ func Mesh(s sdf.SDF3, opt MeshOptions) (*geom.Mesh, error) {
 		}()
 	}
 	wg.Wait()
-	m, feature := merge(results, g.featureBase())
+	m, feature := merge(&g, results)
 	flipCreases(m, feature, s)
 	if opt.Simplify {
 		decimate(m, feature, s, simplifyShare*tol, workers)
@@ -228,13 +230,15 @@ func (g *grid) featureBase() uint64 {
 type patch struct {
 	keys []uint64
 	pos  []geom.Vec3
-	norm []geom.Vec3 // unit normal per vertex, zero until needed
 	tris [][3]int32
 }
 
 // merge welds the patches in block order into one mesh and marks the
-// vertices placed inside cells (keys from featureBase on).
-func merge(ps []*patch, featureBase uint64) (*geom.Mesh, []bool) {
+// vertices placed inside cells (keys from featureBase on). Only a vertex on
+// a grid edge lying in a block's boundary plane can occur in more than one
+// patch, so only those go through the weld map.
+func merge(g *grid, ps []*patch) (*geom.Mesh, []bool) {
+	featureBase := g.featureBase()
 	nv, nt := 0, 0
 	for _, p := range ps {
 		if p != nil {
@@ -243,8 +247,8 @@ func merge(ps []*patch, featureBase uint64) (*geom.Mesh, []bool) {
 		}
 	}
 	m := &geom.Mesh{Vertices: make([]geom.Vec3, 0, nv*3/4), Faces: make([][3]uint32, 0, nt)}
-	index := make(map[uint64]uint32, nv*3/4)
-	var feature []bool
+	index := make(map[uint64]uint32, nv/4)
+	feature := make([]bool, 0, nv*3/4)
 	var local []uint32
 	for _, p := range ps {
 		if p == nil {
@@ -252,10 +256,16 @@ func merge(ps []*patch, featureBase uint64) (*geom.Mesh, []bool) {
 		}
 		local = local[:0]
 		for i, k := range p.keys {
-			v, ok := index[k]
+			shared := k < featureBase && g.onBlockFace(k)
+			v, ok := uint32(0), false
+			if shared {
+				v, ok = index[k]
+			}
 			if !ok {
 				v = uint32(len(m.Vertices))
-				index[k] = v
+				if shared {
+					index[k] = v
+				}
 				m.Vertices = append(m.Vertices, p.pos[i])
 				feature = append(feature, k >= featureBase)
 			}
@@ -266,4 +276,18 @@ func merge(ps []*patch, featureBase uint64) (*geom.Mesh, []bool) {
 		}
 	}
 	return m, feature
+}
+
+// onBlockFace reports whether the grid edge with key k lies in a plane
+// between blocks, where the blocks on both sides can place its vertex.
+func (g *grid) onBlockFace(k uint64) bool {
+	a := int(k % 3)
+	p := k / 3
+	c := [3]int{int(p % uint64(g.np[0])), int(p / uint64(g.np[0]) % uint64(g.np[1])), int(p / (uint64(g.np[0]) * uint64(g.np[1])))}
+	for b := range 3 {
+		if b != a && c[b]%blockCells == 0 {
+			return true
+		}
+	}
+	return false
 }

@@ -180,6 +180,7 @@ func (x *intersection) Bounds() geom.Box3 { return x.t }
 // union2 is the result of Union2.
 type union2 struct {
 	s []SDF2
+	b []Box2
 	t Box2
 }
 
@@ -188,19 +189,20 @@ func Union2(s ...SDF2) (SDF2, error) {
 	if len(s) == 0 {
 		return nil, &ArgError{"union", "operands", 0, "needs at least 1"}
 	}
-	t := s[0].Bounds()
-	for _, c := range s[1:] {
-		t = t.Union(c.Bounds())
+	u := &union2{s: s, t: s[0].Bounds()}
+	for _, c := range s {
+		u.b = append(u.b, c.Bounds())
+		u.t = u.t.Union(c.Bounds())
 	}
-	return &union2{s, t}, nil
+	return u, nil
 }
 
 // Eval returns the minimum of the operands' distances, skipping operands
 // whose bounding rectangle is farther than the running minimum.
 func (u *union2) Eval(p geom.Vec2) float64 {
 	d := math.Inf(1)
-	for _, c := range u.s {
-		if b := boxDist2(c.Bounds(), p); b > 0 && b >= d {
+	for i, c := range u.s {
+		if b := boxDist2(u.b[i], p); b > 0 && b >= d {
 			continue
 		}
 		d = min(d, c.Eval(p))

@@ -2,7 +2,6 @@ package sdf
 
 import (
 	"math"
-	"sort"
 
 	"coilwright/cam/geom"
 )
@@ -63,6 +62,8 @@ type HelixSweep struct {
 	rmin, rmax float64
 	zslope     float64 // largest |dz/dφ| in the table, mm/rad
 	zlinErr    float64 // bound on |z − linear interpolation of the table|, mm
+	zfirst     []int32 // per height bucket: first table entry at or above the bucket's floor
+	zbucket    float64 // buckets per mm of height
 	b          geom.Box3
 }
 
@@ -118,6 +119,7 @@ func NewHelixSweep(h Helix, prof SDF2) (*HelixSweep, error) {
 		s.zlinErr = max(s.zlinErr, dd)
 	}
 	s.zlinErr += 1e-9
+	s.indexHeights()
 	if s.extent >= s.reach {
 		return nil, &ArgError{"helix sweep", "profile extent", s.extent,
 			"profile must fit within half the rise per turn and half the radius"}
@@ -142,7 +144,9 @@ func (s *HelixSweep) Bounds() geom.Box3 { return s.b }
 // point of the curve within D of p has an azimuth within δ = 2·asin(D/2ρ')
 // of p's (ρ' the smaller of p's radius and the curve's least), so its height
 // lies within zslope·δ of a crossing of p's meridian, and p's height must be
-// within D + zslope·δ of that crossing.
+// within D + zslope·δ of that crossing. The test is first tried with the
+// larger angle πD/2ρ' (asin x ≤ πx/2 on [0, 1]), which passes less often
+// but needs no arcsine.
 func (s *HelixSweep) EvalBound(p geom.Vec3, bound float64) float64 {
 	if bound <= -s.extent {
 		return -s.extent // no point lies deeper than extent inside the profile
@@ -152,36 +156,66 @@ func (s *HelixSweep) EvalBound(p geom.Vec3, bound float64) float64 {
 	rho := math.Hypot(q.X, q.Y)
 	rr := min(rho, s.rmin)
 	if bound > 0 && 2*rr > 2*d {
-		delta := 2 * math.Asin(d/(2*rr))
 		theta := math.Atan2(q.Y, q.X)
 		k := math.Floor((s.phiOfZ(q.Z) - theta) / (2 * math.Pi))
-		gap := math.Inf(1)
-		for _, kk := range [2]float64{k, k + 1} {
-			c := theta + 2*math.Pi*kk
-			if c < s.h.Start-delta || c > s.h.End+delta {
-				continue
-			}
-			gap = min(gap, math.Abs(q.Z-s.zLinear(c))-s.zlinErr)
-		}
-		if gap-s.zslope*delta > d {
+		if s.heightsApart(q.Z, theta, k, d, math.Pi*d/(2*rr)) ||
+			s.heightsApart(q.Z, theta, k, d, 2*math.Asin(d/(2*rr))) {
 			return bound
 		}
+		if s.far(q, rho) {
+			return s.reach - s.extent
+		}
+		return s.near(q, rho, theta, k)
 	}
 	return s.Eval(p)
 }
 
+// heightsApart reports whether every crossing of the meridian at theta near
+// turn k that lies within delta of the sweep's angles is farther in height
+// from z than d + zslope·delta.
+func (s *HelixSweep) heightsApart(z, theta, k, d, delta float64) bool {
+	gap := math.Inf(1)
+	for _, kk := range [2]float64{k, k + 1} {
+		c := theta + 2*math.Pi*kk
+		if c < s.h.Start-delta || c > s.h.End+delta {
+			continue
+		}
+		gap = min(gap, math.Abs(z-s.zLinear(c))-s.zlinErr)
+	}
+	return gap-s.zslope*delta > d
+}
+
 // Eval returns the signed distance bound from p to the sweep.
 func (s *HelixSweep) Eval(p geom.Vec3) float64 {
-	h := &s.h
-	capv := s.reach - s.extent
-	q := geom.Vec3{X: p.X, Y: float64(h.Hand) * p.Y, Z: p.Z} // right-hand frame
+	q := geom.Vec3{X: p.X, Y: float64(s.h.Hand) * p.Y, Z: p.Z} // right-hand frame
 	rho := math.Hypot(q.X, q.Y)
-	zlo, zhi := s.zs[0], s.zs[len(s.zs)-1]
-	if lb := max(max(zlo-q.Z, q.Z-zhi), max(s.rmin-rho, rho-s.rmax)); lb >= s.reach {
-		return capv
+	if s.far(q, rho) {
+		return s.reach - s.extent
 	}
 	theta := math.Atan2(q.Y, q.X)
 	k := math.Floor((s.phiOfZ(q.Z) - theta) / (2 * math.Pi))
+	return s.near(q, rho, theta, k)
+}
+
+// far reports whether the right-hand-frame point q at radius rho lies
+// beyond the sweep's reach by its height and radius alone.
+func (s *HelixSweep) far(q geom.Vec3, rho float64) bool {
+	zlo, zhi := s.zs[0], s.zs[len(s.zs)-1]
+	lb := max(max(zlo-q.Z, q.Z-zhi), max(s.rmin-rho, rho-s.rmax))
+	return lb >= s.reach
+}
+
+// footPoint is a curve point with what the profile frame needs of it.
+type footPoint struct {
+	phi, r, r1, z, z1, sn, cs float64
+}
+
+// near returns the distance of the right-hand-frame point q, at radius rho
+// and azimuth theta, whose height lies between the meridian crossings of
+// turns k and k+1.
+func (s *HelixSweep) near(q geom.Vec3, rho, theta, k float64) float64 {
+	h := &s.h
+	capv := s.reach - s.extent
 	// The two crossings of p's meridian that bracket its height, nearer
 	// first.
 	var cs [2]float64
@@ -193,7 +227,8 @@ func (s *HelixSweep) Eval(p geom.Vec3) float64 {
 	if gaps[1] < gaps[0] {
 		cs[0], cs[1], gaps[0], gaps[1] = cs[1], cs[0], gaps[1], gaps[0]
 	}
-	best, bestD := 0.0, math.Inf(1)
+	var best footPoint
+	bestD := math.Inf(1)
 	rr := min(rho, s.rmin)
 	for i, c := range cs {
 		if c < h.Start-math.Pi || c > h.End+math.Pi {
@@ -207,14 +242,17 @@ func (s *HelixSweep) Eval(p geom.Vec3) float64 {
 		}
 		lo, hi := max(h.Start, c-math.Pi), min(h.End, c+math.Pi)
 		phi := s.foot(q, max(lo, min(hi, c)), lo, hi)
-		if d := q.Sub(s.rightPoint(phi)).Len(); d < bestD {
-			best, bestD = phi, d
+		f := footPoint{phi: phi}
+		f.r, f.r1, _, f.z, f.z1, _ = s.curve(phi)
+		f.sn, f.cs = math.Sincos(phi)
+		if d := q.Sub(geom.Vec3{X: f.r * f.cs, Y: f.r * f.sn, Z: f.z}).Len(); d < bestD {
+			best, bestD = f, d
 		}
 	}
 	if bestD >= s.reach {
 		return capv
 	}
-	return min(s.profileDist(q, best), capv)
+	return min(s.profileDist(q, &best), capv)
 }
 
 // curve returns r and z with their first and second derivatives at phi from
@@ -252,20 +290,6 @@ func catmullRom(tab []float64, i int, t, h float64) (v, d1, d2 float64) {
 	return
 }
 
-// rightPoint returns the centreline point at phi in the right-hand frame.
-func (s *HelixSweep) rightPoint(phi float64) geom.Vec3 {
-	r, _, _, z, _, _ := s.curve(phi)
-	sn, cs := math.Sincos(phi)
-	return geom.Vec3{X: r * cs, Y: r * sn, Z: z}
-}
-
-// tangent returns dC/dφ at phi in the right-hand frame.
-func (s *HelixSweep) tangent(phi float64) geom.Vec3 {
-	r, r1, _, _, z1, _ := s.curve(phi)
-	sn, cs := math.Sincos(phi)
-	return geom.Vec3{X: r1*cs - r*sn, Y: r1*sn + r*cs, Z: z1}
-}
-
 // foot runs Newton's method on g(φ) = ½|C(φ) − q|² from phi, keeping φ in
 // [lo, hi], and returns the local minimiser. A step against a non-positive
 // second derivative falls back to a short downhill step.
@@ -292,12 +316,12 @@ func (s *HelixSweep) foot(q geom.Vec3, phi, lo, hi float64) float64 {
 	return phi
 }
 
-// profileDist reads q's offset from the foot at phi in the (u, v) frame and
+// profileDist reads q's offset from the foot f in the (u, v) frame and
 // returns the profile distance, capped flat past the sweep's ends.
-func (s *HelixSweep) profileDist(q geom.Vec3, phi float64) float64 {
-	d := q.Sub(s.rightPoint(phi))
-	t := s.tangent(phi).Normalize()
-	sn, cs := math.Sincos(phi)
+func (s *HelixSweep) profileDist(q geom.Vec3, f *footPoint) float64 {
+	sn, cs := f.sn, f.cs
+	d := q.Sub(geom.Vec3{X: f.r * cs, Y: f.r * sn, Z: f.z})
+	t := geom.Vec3{X: f.r1*cs - f.r*sn, Y: f.r1*sn + f.r*cs, Z: f.z1}.Normalize()
 	er := geom.Vec3{X: cs, Y: sn}
 	u := er.Sub(t.Scale(er.Dot(t))).Normalize()
 	v := t.Cross(u)
@@ -307,9 +331,9 @@ func (s *HelixSweep) profileDist(q geom.Vec3, phi float64) float64 {
 	d2 := s.prof.Eval(geom.Vec2{X: d.Dot(u), Y: d.Dot(v)})
 	w := d.Dot(t)
 	switch {
-	case phi <= s.h.Start:
+	case f.phi <= s.h.Start:
 		return extrudeDist(d2, -w)
-	case phi >= s.h.End:
+	case f.phi >= s.h.End:
 		return extrudeDist(d2, w)
 	}
 	return d2
@@ -324,15 +348,41 @@ func (s *HelixSweep) zLinear(phi float64) float64 {
 	return s.zs[i] + t*(s.zs[i+1]-s.zs[i])
 }
 
+// indexHeights buckets the heights of the z table evenly, one bucket per
+// entry, so that phiOfZ starts its search next to the answer.
+func (s *HelixSweep) indexHeights() {
+	n := len(s.zs)
+	z0 := s.zs[0]
+	s.zbucket = float64(n) / (s.zs[n-1] - z0)
+	s.zfirst = make([]int32, n+1)
+	i := 0
+	for b := range s.zfirst {
+		for i < n && s.zs[i] < z0+float64(b)/s.zbucket {
+			i++
+		}
+		s.zfirst[b] = int32(i)
+	}
+}
+
 // phiOfZ returns the angle at which the centreline reaches height z, clamped
 // to the sweep's ends, by linear interpolation in the z table.
 func (s *HelixSweep) phiOfZ(z float64) float64 {
-	i := sort.SearchFloat64s(s.zs, z)
-	switch {
-	case i == 0:
+	n := len(s.zs)
+	if z <= s.zs[0] {
 		return s.h.Start
-	case i == len(s.zs):
+	}
+	if !(z <= s.zs[n-1]) {
 		return s.h.End
+	}
+	// The first entry at or above z: start from z's bucket and step to it
+	// (the bucket only saves the search; the steps make it exact).
+	b := min(max(int((z-s.zs[0])*s.zbucket), 0), n)
+	i := int(s.zfirst[b])
+	for i > 0 && s.zs[i-1] >= z {
+		i--
+	}
+	for i < n && s.zs[i] < z {
+		i++
 	}
 	t := (z - s.zs[i-1]) / (s.zs[i] - s.zs[i-1])
 	return s.h.Start + (float64(i-1)+t)*s.dphi

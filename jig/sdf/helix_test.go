@@ -3,6 +3,7 @@ package sdf
 import (
 	"math"
 	"math/rand/v2"
+	"sort"
 	"testing"
 
 	"coilwright/cam/geom"
@@ -141,5 +142,36 @@ func TestHelixEvalBound(t *testing.T) {
 	}
 	if skipped == 0 {
 		t.Error("the bound never saved an evaluation")
+	}
+}
+
+// TestPhiOfZMatchesSearch holds the bucketed height lookup to a plain binary
+// search over the same table, at random heights and at every table entry.
+func TestPhiOfZMatchesSearch(t *testing.T) {
+	circ, _ := NewCircle(geom.Vec2{}, 0.5)
+	s, err := NewHelixSweep(testHelix(1), circ)
+	if err != nil {
+		t.Fatal(err)
+	}
+	want := func(z float64) float64 {
+		i := sort.SearchFloat64s(s.zs, z)
+		switch {
+		case i == 0:
+			return s.h.Start
+		case i == len(s.zs):
+			return s.h.End
+		}
+		f := (z - s.zs[i-1]) / (s.zs[i] - s.zs[i-1])
+		return s.h.Start + (float64(i-1)+f)*s.dphi
+	}
+	rng := rand.New(rand.NewPCG(3, 4))
+	zs := append([]float64{math.Inf(-1), math.Inf(1)}, s.zs...)
+	for range 10000 {
+		zs = append(zs, -5+45*rng.Float64())
+	}
+	for _, z := range zs {
+		if got, w := s.phiOfZ(z), want(z); got != w {
+			t.Fatalf("phiOfZ(%g) = %g, want %g", z, got, w)
+		}
 	}
 }

@@ -35,8 +35,10 @@ func (c *Circle) Bounds() Box2 {
 // Source: the polygon distance in I. Quilez, "distance functions"
 // (iquilezles.org).
 type Polygon struct {
-	v []geom.Vec2
-	b Box2
+	v  []geom.Vec2
+	e  []geom.Vec2 // e[i] = v[i−1] − v[i], cyclically
+	ee []float64   // e[i]·e[i]
+	b  Box2
 }
 
 // NewPolygon returns the polygon through the points (at least 3; the last
@@ -53,22 +55,28 @@ func NewPolygon(pts geom.Polyline) (*Polygon, error) {
 	for _, p := range v[1:] {
 		b = b.Union(Box2{p, p})
 	}
-	return &Polygon{v, b}, nil
+	g := &Polygon{v: v, b: b, e: make([]geom.Vec2, len(v)), ee: make([]float64, len(v))}
+	for i, j := 0, len(v)-1; i < len(v); j, i = i, i+1 {
+		g.e[i] = v[j].Sub(v[i])
+		g.ee[i] = g.e[i].Dot(g.e[i])
+	}
+	return g, nil
 }
 
 // Eval returns the exact signed distance from p to the polygon.
 func (g *Polygon) Eval(p geom.Vec2) float64 {
 	v := g.v
-	w0 := p.Sub(v[0])
-	d := w0.Dot(w0)
+	px, py := p.X, p.Y
+	w0x, w0y := px-v[0].X, py-v[0].Y
+	d := w0x*w0x + w0y*w0y
 	s := 1.0
 	for i, j := 0, len(v)-1; i < len(v); j, i = i, i+1 {
-		e := v[j].Sub(v[i])
-		w := p.Sub(v[i])
-		t := max(0, min(1, w.Dot(e)/e.Dot(e)))
-		b := w.Sub(e.Scale(t))
-		d = min(d, b.Dot(b))
-		c1, c2, c3 := p.Y >= v[i].Y, p.Y < v[j].Y, e.X*w.Y > e.Y*w.X
+		ex, ey := g.e[i].X, g.e[i].Y
+		wx, wy := px-v[i].X, py-v[i].Y
+		t := max(0, min(1, (wx*ex+wy*ey)/g.ee[i]))
+		bx, by := wx-ex*t, wy-ey*t
+		d = min(d, bx*bx+by*by)
+		c1, c2, c3 := py >= v[i].Y, py < v[j].Y, ex*wy > ey*wx
 		if (c1 && c2 && c3) || (!c1 && !c2 && !c3) {
 			s = -s
 		}

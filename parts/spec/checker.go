@@ -20,7 +20,7 @@ func (c *checker) has(key string) bool {
 }
 
 func (c *checker) fail(key, value, problem, fix string) {
-	c.errs = append(c.errs, &SpecError{Key: key, Line: c.pos[key], Value: value, Problem: problem, Fix: fix})
+	c.errs = append(c.errs, &SpecError{Key: key, Line: c.pos[key], Value: clipValue(value), Problem: problem, Fix: fix})
 }
 
 // orDefault sets *v to def when the key is absent from the spec and *v is

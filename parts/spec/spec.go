@@ -7,6 +7,7 @@ import (
 	"reflect"
 	"sort"
 	"strings"
+	"unicode/utf8"
 
 	toml "github.com/pelletier/go-toml/v2"
 	"github.com/pelletier/go-toml/v2/unstable"
@@ -33,6 +34,7 @@ type Spec struct {
 	Wedge     WedgeSpec     `toml:"wedge"`
 	Cutting   CuttingSpec   `toml:"cutting"`
 	Former    FormerSpec    `toml:"former"`
+	Solver    SolverSpec    `toml:"solver"`
 
 	pos positions // where each key was written; empty for a Spec built in code
 }
@@ -53,6 +55,9 @@ func ParseSpec(data []byte) (*Spec, error) {
 	if err != nil {
 		return nil, err
 	}
+	if errs := unknownKeys(data); len(errs) > 0 {
+		return nil, errs
+	}
 	var s Spec
 	dec := toml.NewDecoder(bytes.NewReader(data)).DisallowUnknownFields()
 	if err := dec.Decode(&s); err != nil {
@@ -70,9 +75,12 @@ func ParseSpec(data []byte) (*Spec, error) {
 // mutates s (the defaults).
 func (s *Spec) Validate() error {
 	c := &checker{pos: s.pos}
+	if c.checkValues(s); len(c.errs) > 0 {
+		return c.result()
+	}
 	if strings.TrimSpace(s.Kit) == "" {
 		c.fail("kit", "", "must name the kit", `add kit = "My Club 5G8 Cone"`)
-	} else if len(s.Kit) > 80 {
+	} else if utf8.RuneCountInString(s.Kit) > 80 {
 		c.fail("kit", fmt.Sprintf("%q", s.Kit), "must be at most 80 characters", "shorten the kit name")
 	}
 	if !c.has("frequency_mhz") && s.FrequencyMHz == 0 {
@@ -105,6 +113,7 @@ func (s *Spec) Validate() error {
 	s.Wedge.validate(c, s)
 	s.Cutting.validate(c, s)
 	s.Former.validate(c, s)
+	s.Solver.validate(c, s)
 	if len(c.errs) == 0 {
 		s.Cutting.validateFit(c, s)
 	}

@@ -42,17 +42,31 @@ type SheetMaterial struct {
 	// this material: "clad" (solder on the copper face), "solder" or
 	// "clamp" (cannot be soft-soldered with ordinary flux).
 	Joint string
+	// Conductivity of the conducting face at 20 °C, S/m, for the field
+	// solver's plate loss; ConductivitySource cites it.
+	Conductivity       float64
+	ConductivitySource string
+	// Magnetic marks a ferromagnetic sheet (lossier at radio frequencies
+	// than the non-magnetic loss model assumes).
+	Magnetic bool
 }
 
 // SheetMaterials lists the reflector and wedge materials.
 // Source: Barontini et al., Ind. Eng. Chem. Res. 44, 2005 (brominated
 // epoxy in FR-4 laminates).
+//
+// Conductivities as % IACS × 58.0 MS/m (Source: IEC 60028 for the scale).
 var SheetMaterials = []SheetMaterial{
-	{ID: "fr4", Name: "FR-4 copper-clad glass-epoxy laminate", Halogenated: true, Joint: "clad"},
-	{ID: "aluminium", Name: "aluminium sheet", Reflective: true, Joint: "clamp"},
-	{ID: "brass", Name: "brass sheet", Reflective: true, Joint: "solder"},
-	{ID: "copper", Name: "copper sheet", Reflective: true, Joint: "solder"},
-	{ID: "tinplate", Name: "tinplate (tinned steel)", Joint: "solder"},
+	{ID: "fr4", Name: "FR-4 copper-clad glass-epoxy laminate", Halogenated: true, Joint: "clad",
+		Conductivity: 58.0e6, ConductivitySource: "copper cladding, 100 % IACS: IEC 60028"},
+	{ID: "aluminium", Name: "aluminium sheet", Reflective: true, Joint: "clamp",
+		Conductivity: 0.35 * 58.0e6, ConductivitySource: "alloy not specified: 5052 taken, ≈ 35 % IACS, the lower of common sheet alloys (from memory)"},
+	{ID: "brass", Name: "brass sheet", Reflective: true, Joint: "solder",
+		Conductivity: 0.28 * 58.0e6, ConductivitySource: "C26000, ≈ 28 % IACS: Copper Development Association data, from memory"},
+	{ID: "copper", Name: "copper sheet", Reflective: true, Joint: "solder",
+		Conductivity: 58.0e6, ConductivitySource: "annealed copper, 100 % IACS: IEC 60028"},
+	{ID: "tinplate", Name: "tinplate (tinned steel)", Joint: "solder",
+		Conductivity: 0.10 * 58.0e6, ConductivitySource: "low-carbon steel, ≈ 10 % IACS, from memory; the thin tin coat is neglected", Magnetic: true},
 }
 
 // Reflective and Joint above: common practice (no published source).

@@ -29,8 +29,8 @@ type WireSpec struct {
 
 // Limits of the [wire] table, in mm.
 const (
-	MinWireMM      = 0.2
-	MaxWireMM      = 6.0
+	MinWireMM      = wire.MinDiameterMM
+	MaxWireMM      = wire.MaxDiameterMM
 	MinToleranceMM = 0.02
 	MaxToleranceMM = 5.0
 )

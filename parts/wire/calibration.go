@@ -241,6 +241,9 @@ func (c Calibration) Apply(m Material) (Material, error) {
 
 // validate checks the values a file can carry.
 func (c Calibration) validate() error {
+	if err := c.validateRanges(); err != nil {
+		return err
+	}
 	switch {
 	case c.Material == "":
 		return errors.New("calibration: material is missing")
@@ -286,13 +289,12 @@ func MarshalCalibration(c Calibration) ([]byte, error) {
 // errors.
 func ParseCalibration(data []byte) (Calibration, error) {
 	var c Calibration
+	if len(data) > maxCalibrationBytes {
+		return Calibration{}, fmt.Errorf("calibration: %d bytes is too large for a calibration file", len(data))
+	}
 	dec := toml.NewDecoder(bytes.NewReader(data)).DisallowUnknownFields()
 	if err := dec.Decode(&c); err != nil {
-		var sm *toml.StrictMissingError
-		if errors.As(err, &sm) {
-			return Calibration{}, fmt.Errorf("calibration: %s", sm.String())
-		}
-		return Calibration{}, fmt.Errorf("calibration: %w", err)
+		return Calibration{}, calibrationDecodeError(err)
 	}
 	if err := c.validate(); err != nil {
 		return Calibration{}, err

@@ -227,3 +227,46 @@ func BenchmarkCalibrate(b *testing.B) {
 		}
 	}
 }
+
+func TestCalibrationValuesOutsidePhysicalRangesAreRefused(t *testing.T) {
+	good := `material = "copper-annealed"
+wire_diameter_mm = 1.6
+effective_yield_mpa = 80.0
+library_yield_mpa = 69.0
+`
+	if _, err := ParseCalibration([]byte(good)); err != nil {
+		t.Fatalf("a sound calibration file was refused: %v", err)
+	}
+	for _, tc := range []struct{ old, new, want string }{
+		{"effective_yield_mpa = 80.0", "effective_yield_mpa = 1e25", "effective_yield_mpa = 1e+25: must be between 1 and 5000 MPa"},
+		{"effective_yield_mpa = 80.0", "effective_yield_mpa = 1e-30", "effective_yield_mpa"},
+		{"effective_yield_mpa = 80.0", "effective_yield_mpa = nan", "must be a finite number"},
+		{"wire_diameter_mm = 1.6", "wire_diameter_mm = 1e300", "wire_diameter_mm"},
+		{"library_yield_mpa = 69.0", "library_yield_mpa = inf", "library_yield_mpa"},
+		{"library_yield_mpa = 69.0", "library_yield_mpa = 69.0\nspacing_mm = inf", "spacing_mm"},
+		{"library_yield_mpa = 69.0", "library_yield_mpa = 69.0\nresidual_rms_mm = nan", "residual_rms_mm"},
+	} {
+		_, err := ParseCalibration([]byte(strings.Replace(good, tc.old, tc.new, 1)))
+		if err == nil || !strings.Contains(err.Error(), tc.want) {
+			t.Errorf("%s: got %v, want %q", tc.new, err, tc.want)
+		}
+	}
+}
+
+func TestLoadedFailsInsteadOfSpinning(t *testing.T) {
+	// With a yield far beyond any wire the elastic limit swamps the target
+	// curvature in floating point, so the bracket cannot grow: the solve
+	// must say so rather than loop.
+	m, err := LookupMaterial("copper-annealed")
+	if err != nil {
+		t.Fatal(err)
+	}
+	m.Yield = 1e25
+	s, err := NewWireSpringback(m, 1.6, false)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if _, err := s.Loaded(0.1); err == nil || !strings.Contains(err.Error(), "no curvature relaxes") {
+		t.Errorf("Loaded with a yield of 1e25 MPa: %v", err)
+	}
+}

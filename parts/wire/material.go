@@ -40,6 +40,9 @@ const (
 	// CautionStripEnamel says the insulating enamel must be removed where the
 	// wire is soldered.
 	CautionStripEnamel Caution = "strip-enamel"
+	// CautionRFLoss says the wire is magnetic and lossy at radio
+	// frequencies.
+	CautionRFLoss Caution = "rf-loss"
 )
 
 // Text returns the caution as a sentence for reports and build sheets.
@@ -51,6 +54,8 @@ func (c Caution) Text() string {
 		return "needs a special flux to solder: ordinary rosin flux does not wet it"
 	case CautionStripEnamel:
 		return "strip the enamel before soldering, down to bright metal"
+	case CautionRFLoss:
+		return "magnetic and lossy at radio frequencies: the field solution's conductor loss (non-magnetic skin effect) is optimistic; a copper or plated wire radiates more of the power"
 	}
 	return string(c)
 }
@@ -78,6 +83,15 @@ type Material struct {
 	// Elongation is the elongation at break as a fraction; the model warns
 	// when a winding's outer-fibre strain exceeds it.
 	Elongation float64
+	// Conductivity is the electrical conductivity at 20 °C in S/m, used by
+	// the field solver's skin-effect loss (ConductivityIACS × 58.0 MS/m).
+	Conductivity float64
+	// ConductivitySource cites the conductivity, or says it is from memory.
+	ConductivitySource string
+	// Magnetic marks a ferromagnetic wire: at radio frequencies its
+	// permeability crowds the current into a thinner skin than the
+	// non-magnetic loss model assumes, so the real loss is higher.
+	Magnetic bool
 	// Solderability grades the wire with rosin flux.
 	Solderability Solderability
 	// Cautions lists warnings a build with this wire must show.
@@ -143,11 +157,24 @@ func LookupMaterial(id string) (Material, error) {
 
 // Sources for the shared figures of several rows.
 const (
-	srcCopperE     = "E: Copper Development Association data for C11000/C10200"
-	srcCopperYield = "annealed yield 70–100 MPa: ASTM B3 via supplier data"
-	srcKn          = "K, n: Kalpakjian & Schmid, Manufacturing Engineering and Technology, table of strength coefficient and strain-hardening exponent (annealed; from memory)"
-	srcC26000      = "C26000 round wire, ASTM B134 tempers: supplier wire datasheet (E 16,000 ksi; yield at 0.5 % extension, nominal; tensile mill limits)"
+	srcCopperE        = "E: Copper Development Association data for C11000/C10200"
+	srcCopperYield    = "annealed yield 70–100 MPa: ASTM B3 via supplier data"
+	srcKn             = "K, n: Kalpakjian & Schmid, Manufacturing Engineering and Technology, table of strength coefficient and strain-hardening exponent (annealed; from memory)"
+	srcIACSCopper     = "100 % IACS = 58.0 MS/m: IEC 60028 (international annealed copper standard)"
+	srcC26000Sigma    = "28 % IACS for C26000: Copper Development Association data, from memory"
+	srcCuSn6Sigma     = "≈ 14 % IACS for CuSn6 (C51900): supplier data, from memory"
+	srcStainlessSigma = "2.4 % IACS (resistivity ≈ 0.72 µΩ·m) for 304: supplier data, from memory"
+	srcC26000         = "C26000 round wire, ASTM B134 tempers: supplier wire datasheet (E 16,000 ksi; yield at 0.5 % extension, nominal; tensile mill limits)"
 )
+
+// IACSConductivity is the conductivity of the international annealed
+// copper standard, 100 % IACS, in S/m (resistivity 1/58 Ω·mm²/m at 20 °C).
+// Source: IEC 60028.
+const IACSConductivity = 58.0e6
+
+// IACS returns the conductivity in S/m of a material quoted at pct % IACS.
+// Source: IEC 60028 (the scale's definition).
+func IACS(pct float64) float64 { return pct / 100 * IACSConductivity }
 
 // annealedCopper returns the annealed-copper row that the silver-plated and
 // enamelled rows build on.
@@ -161,6 +188,7 @@ func annealedCopper() Material {
 		TensileMin: 200, TensileMax: 250,
 		Hardening:  Hardening{Kind: HardeningPowerLaw, K: 315, N: 0.54},
 		Elongation: 0.25, Solderability: SolderExcellent,
+		Conductivity: IACS(100), ConductivitySource: srcIACSCopper,
 		Notes:  "Soft and forgiving: springs back little, but dents and stretches if pulled hard.",
 		Source: srcCopperE + "; " + srcCopperYield + "; tensile and elongation from memory; " + srcKn,
 	}
@@ -173,6 +201,7 @@ func materialTable() []Material {
 	silver.Name = "Copper, silver-plated, annealed core (ASTM B298 class)"
 	silver.Notes = "Mechanically the annealed copper core; the plating solders very easily and resists tarnish."
 	silver.Source = "as copper-annealed (the thin plating is neglected): " + silver.Source
+	silver.ConductivitySource = "as the copper core (silver, ≈ 105 % IACS, would lower the loss slightly where the plating is thicker than the skin depth): " + srcIACSCopper
 
 	enamel := annealedCopper()
 	enamel.ID = "copper-enamelled"
@@ -181,6 +210,7 @@ func materialTable() []Material {
 	enamel.Cautions = []Caution{CautionStripEnamel}
 	enamel.Notes = "Mechanically the annealed copper core; enamel stiffness neglected. Solder-through grades still need tinning where joined."
 	enamel.Source = "as copper-annealed (enamel neglected): " + enamel.Source
+	enamel.ConductivitySource = "as the copper core: " + srcIACSCopper
 
 	return []Material{
 		annealedCopper(),
@@ -191,6 +221,7 @@ func materialTable() []Material {
 			YoungsModulus: 117000, Yield: 220, YieldBasis: "0.2 % proof",
 			TensileMin: 260, TensileMax: 330,
 			Elongation: 0.10, Solderability: SolderExcellent,
+			Conductivity: IACS(98), ConductivitySource: "≈ 98 % IACS: cold drawing lowers conductivity a little; from memory",
 			Notes:  "Holds its shape better than annealed copper; springs back noticeably.",
 			Source: srcCopperE + "; yield, tensile and elongation from memory",
 		},
@@ -201,6 +232,7 @@ func materialTable() []Material {
 			YoungsModulus: 117000, Yield: 380, YieldBasis: "0.2 % proof",
 			TensileMin: 430, TensileMax: 470,
 			Elongation: 0.015, Solderability: SolderExcellent,
+			Conductivity: IACS(97), ConductivitySource: "≈ 97 % IACS: ASTM B1 minimum for hard-drawn wire, from memory",
 			Notes:  "Stiff; large springback. Tensile elongation is small, so the strain warning fires on tight formers even though the wire usually bends without cracking.",
 			Source: srcCopperE + "; tensile ≈ 460 MPa: ASTM B1 via supplier data; yield and elongation from memory",
 		},
@@ -214,6 +246,7 @@ func materialTable() []Material {
 			TensileMin: 330, TensileMax: 372,
 			Hardening:  Hardening{Kind: HardeningPowerLaw, K: 895, N: 0.49},
 			Elongation: 0.45, Solderability: SolderGood,
+			Conductivity: IACS(28), ConductivitySource: srcC26000Sigma,
 			Notes:  "Yield 110–158 MPa across suppliers; mid value taken.",
 			Source: srcC26000 + "; elongation from memory; " + srcKn + " (70-30 brass)",
 		},
@@ -224,6 +257,7 @@ func materialTable() []Material {
 			YoungsModulus: 110000, Yield: 393, YieldBasis: "0.5 % extension under load",
 			TensileMin: 425, TensileMax: 530,
 			Elongation: 0.20, Solderability: SolderGood,
+			Conductivity: IACS(28), ConductivitySource: srcC26000Sigma,
 			Source: srcC26000 + "; elongation from memory",
 		},
 		{
@@ -233,6 +267,7 @@ func materialTable() []Material {
 			YoungsModulus: 110000, Yield: 448, YieldBasis: "0.5 % extension under load",
 			TensileMin: 545, TensileMax: 650,
 			Elongation: 0.08, Solderability: SolderGood,
+			Conductivity: IACS(28), ConductivitySource: srcC26000Sigma,
 			Source: srcC26000 + "; elongation from memory",
 		},
 		{
@@ -242,6 +277,7 @@ func materialTable() []Material {
 			YoungsModulus: 110000, Yield: 482, YieldBasis: "0.5 % extension under load",
 			TensileMin: 700, TensileMax: 810,
 			Elongation: 0.03, Solderability: SolderGood,
+			Conductivity: IACS(28), ConductivitySource: srcC26000Sigma,
 			Notes:  "The datasheet gives one nominal yield for all tempers from three-quarter hard up; real hard wire is likely stronger: calibrate from a test coil.",
 			Source: srcC26000 + "; elongation from memory",
 		},
@@ -253,6 +289,7 @@ func materialTable() []Material {
 			YoungsModulus: 110000, Yield: 405, YieldBasis: "0.2 % proof",
 			TensileMin: 440, TensileMax: 540,
 			Elongation: 0.15, Solderability: SolderGood,
+			Conductivity: IACS(27), ConductivitySource: "≈ 27 % IACS for CuZn37: supplier data, from memory",
 			Notes:  "Common European yellow-brass wire; other tempers differ a lot.",
 			Source: "Rp0.2 390–420 MPa: EN 12166 (table partly unverified); E, tensile and elongation from memory",
 		},
@@ -264,6 +301,7 @@ func materialTable() []Material {
 			YoungsModulus: 110000, Yield: 420, YieldBasis: "0.2 % proof",
 			TensileMin: 500, TensileMax: 600,
 			Elongation: 0.15, Solderability: SolderGood,
+			Conductivity: IACS(14), ConductivitySource: srcCuSn6Sigma,
 			Source: "Rp0.2 390–450 MPa: EN 12166; E 103–110 GPa: ASTM B159, EN 12166; tensile and elongation from memory",
 		},
 		{
@@ -273,6 +311,7 @@ func materialTable() []Material {
 			YoungsModulus: 110000, Yield: 750, YieldBasis: "0.2 % proof",
 			TensileMin: 850, TensileMax: 1000,
 			Elongation: 0.02, Solderability: SolderGood,
+			Conductivity: IACS(14), ConductivitySource: srcCuSn6Sigma,
 			Notes:  "Very springy: expect a large springback and calibrate from a test coil.",
 			Source: "E: ASTM B159, EN 12166; yield, tensile and elongation from memory (ASTM B159 spring temper)",
 		},
@@ -285,8 +324,10 @@ func materialTable() []Material {
 			TensileMin: 345, TensileMax: 515,
 			Hardening:  Hardening{Kind: HardeningPowerLaw, K: 530, N: 0.26},
 			Elongation: 0.10, Solderability: SolderFair,
-			Notes:  "Zinc coat takes solder with an active flux; do not breathe zinc fume, and do not heat it to glowing. Steel has high RF loss: a plated or copper wire is better.",
-			Source: "E, yield, tensile and elongation from memory (ASTM A641 soft temper); " + srcKn + " (low-carbon steel)",
+			Conductivity: IACS(10), ConductivitySource: "≈ 10 % IACS (resistivity ≈ 0.17 µΩ·m) for low-carbon steel; from memory; the zinc coat (≈ 28 % IACS) is neglected", Magnetic: true,
+			Cautions: []Caution{CautionRFLoss},
+			Notes:    "Zinc coat takes solder with an active flux; do not breathe zinc fume, and do not heat it to glowing. Steel has high RF loss: a plated or copper wire is better.",
+			Source:   "E, yield, tensile and elongation from memory (ASTM A641 soft temper); " + srcKn + " (low-carbon steel)",
 		},
 		{
 			// Source: ASTM A213 minima for 304: 0.2 % yield ≥ 205 MPa,
@@ -297,6 +338,7 @@ func materialTable() []Material {
 			TensileMin: 515, TensileMax: 760,
 			Hardening:  Hardening{Kind: HardeningPowerLaw, K: 1275, N: 0.45},
 			Elongation: 0.40, Solderability: SolderPoor,
+			Conductivity: IACS(2.4), ConductivitySource: srcStainlessSigma,
 			Notes:  "The yield is the specified minimum; real annealed wire is usually stronger and hardens fast: calibrate. Needs an acid flux to solder.",
 			Source: "E 193 GPa, yield ≥ 205 MPa, tensile ≥ 515 MPa: ASTM A213 minima; upper tensile and elongation from memory; " + srcKn,
 		},
@@ -307,7 +349,8 @@ func materialTable() []Material {
 			YoungsModulus: 193000, Yield: 1500, YieldBasis: "0.2 % proof",
 			TensileMin: 1700, TensileMax: 2000,
 			Elongation: 0.01, Solderability: SolderPoor,
-			Cautions: []Caution{CautionStiff},
+			Conductivity: IACS(2.4), ConductivitySource: srcStainlessSigma + "; cold-worked 304 is partly magnetic (from memory)", Magnetic: true,
+			Cautions: []Caution{CautionStiff, CautionRFLoss},
 			Notes:    "Do not use for a hand-wound helix.",
 			Source:   "E 193 GPa: ASTM A213; yield, tensile and elongation from memory (ASTM A313 spring temper)",
 		},
@@ -320,6 +363,7 @@ func materialTable() []Material {
 			TensileMin: 55, TensileMax: 95,
 			Hardening:  Hardening{Kind: HardeningPowerLaw, K: 180, N: 0.20},
 			Elongation: 0.23, Solderability: SolderPoor,
+			Conductivity: IACS(61.8), ConductivitySource: "61.8 % IACS: ASTM B609 minimum for 1350-O, from memory",
 			Cautions: []Caution{CautionSpecialFlux},
 			Notes:    "Light and soft; its oxide refuses ordinary solder. Clamp rather than solder where possible.",
 			Source:   "E ≈ 68 GPa: published aluminium data; yield, tensile and elongation from memory (1350-O); " + srcKn + " (1100-O)",

@@ -105,3 +105,30 @@ func TestMaterialsAreCopies(t *testing.T) {
 		t.Error("changing a returned caution changed the library")
 	}
 }
+
+func TestMaterialConductivity(t *testing.T) {
+	// Source: IEC 60028: 100 % IACS is 1/58 Ω·mm²/m, 58.0 MS/m.
+	if got := IACS(100); got != 58.0e6 {
+		t.Fatalf("IACS(100) = %g S/m, want 58.0e6", got)
+	}
+	for _, m := range Materials() {
+		// Source: physical sense: metal wire conductivities lie between
+		// stainless steel (≈ 1.4 MS/m) and silver (≈ 63 MS/m).
+		if !(m.Conductivity >= 1e6 && m.Conductivity <= 63e6) {
+			t.Errorf("%s: conductivity %g S/m out of range", m.ID, m.Conductivity)
+		}
+		if s := m.ConductivitySource; s == "" || !(strings.Contains(s, "IEC") || strings.Contains(s, "ASTM") ||
+			strings.Contains(s, "from memory") || strings.Contains(s, "data")) {
+			t.Errorf("%s: conductivity source %q neither cites nor says from memory", m.ID, s)
+		}
+		if m.Magnetic != m.HasCaution(CautionRFLoss) {
+			t.Errorf("%s: magnetic %v but rf-loss caution %v", m.ID, m.Magnetic, m.HasCaution(CautionRFLoss))
+		}
+	}
+	if m, _ := LookupMaterial("copper-annealed"); m.Conductivity != 58.0e6 {
+		t.Errorf("annealed copper %g S/m, want 58.0e6 (IEC 60028)", m.Conductivity)
+	}
+	if m, _ := LookupMaterial("steel-galvanised-soft"); !m.Magnetic {
+		t.Errorf("galvanised steel not marked magnetic")
+	}
+}

@@ -161,11 +161,12 @@ func (s *Springback) Loaded(relaxed float64) (float64, error) {
 	lo := s.ElasticLimit()
 	f := func(k float64) float64 { return s.Relaxed(k) - relaxed }
 	hi := lo + relaxed
-	for f(hi) < 0 {
-		hi = lo + 2*(hi-lo)
-		if math.IsInf(hi, 0) {
-			return 0, fmt.Errorf("springback: no curvature relaxes to %g 1/mm", relaxed)
+	for steps := 0; f(hi) < 0; steps++ {
+		next := lo + 2*(hi-lo)
+		if math.IsInf(next, 0) || !(next > hi) || steps == bracketMaxSteps {
+			return 0, fmt.Errorf("springback: no curvature relaxes to %g 1/mm from the elastic limit %g 1/mm: the yield is outside what the model can bend", relaxed, lo)
 		}
+		hi = next
 	}
 	k, err := findRoot(f, lo, hi, springbackRelTol*hi)
 	if err != nil {

@@ -1,0 +1,220 @@
+package kit
+
+import (
+	"bytes"
+	"encoding/xml"
+	"math"
+	"strconv"
+	"strings"
+	"testing"
+
+	"coilwright/parts"
+	"coilwright/templates"
+)
+
+// svgNode is any SVG element read back from a plot.
+type svgNode struct {
+	XMLName  xml.Name
+	Attrs    []xml.Attr `xml:",any,attr"`
+	Children []svgNode  `xml:",any"`
+	Text     string     `xml:",chardata"`
+}
+
+func (n svgNode) attr(name string) string {
+	for _, a := range n.Attrs {
+		if a.Name.Local == name {
+			return a.Value
+		}
+	}
+	return ""
+}
+
+func (n svgNode) num(t *testing.T, name string) float64 {
+	t.Helper()
+	v, err := strconv.ParseFloat(n.attr(name), 64)
+	if err != nil {
+		t.Fatalf("<%s class=%q> %s=%q: %v", n.XMLName.Local, n.attr("class"), name, n.attr(name), err)
+	}
+	return v
+}
+
+// all returns every element under n (n included) whose class is cls.
+func (n svgNode) all(cls string) []svgNode {
+	var out []svgNode
+	if n.attr("class") == cls {
+		out = append(out, n)
+	}
+	for _, c := range n.Children {
+		out = append(out, c.all(cls)...)
+	}
+	return out
+}
+
+// texts returns the data-text of every element of class cls.
+func (n svgNode) texts(cls string) []string {
+	var out []string
+	for _, e := range n.all(cls) {
+		out = append(out, e.attr("data-text"))
+	}
+	return out
+}
+
+func parsePlot(t *testing.T, b []byte) svgNode {
+	t.Helper()
+	var n svgNode
+	if err := xml.NewDecoder(bytes.NewReader(b)).Decode(&n); err != nil {
+		t.Fatalf("plot is not well-formed XML: %v", err)
+	}
+	return n
+}
+
+// plotCoordTol is the largest difference in mm between a coordinate read
+// back and the one expected: plots write coordinates to 0.01 mm.
+const plotCoordTol = 0.006
+
+// planPlots returns the demo's plots by file name.
+func planPlots(t *testing.T, demo string) (*Kit, map[string][]byte, []string) {
+	t.Helper()
+	k := demoKit(t, demo, Options{Version: "test"})
+	ps, err := k.plots()
+	if err != nil {
+		t.Fatal(err)
+	}
+	m := map[string][]byte{}
+	var names []string
+	for _, p := range ps {
+		m[p.Name] = p.SVG
+		names = append(names, p.Name)
+	}
+	return k, m, names
+}
+
+func TestPlotFiles(t *testing.T) {
+	for demo, want := range map[string]string{
+		// One kit: no nested sheets.
+		"demo-2g4-cylinder.toml": "plot-match.svg plot-gain.svg plot-pattern-1.svg plot-pattern-2.svg plot-side.svg plot-plan.svg plot-reflector.svg plot-wedge.svg",
+		// A batch of six adds each part's nested sheet.
+		"demo-5g8-cone.toml": "plot-match.svg plot-gain.svg plot-pattern-1.svg plot-pattern-2.svg plot-side.svg plot-plan.svg plot-reflector.svg plot-wedge.svg plot-panel-reflector.svg plot-panel-wedge.svg",
+	} {
+		t.Run(demo, func(t *testing.T) {
+			_, _, names := planPlots(t, demo)
+			if got := strings.Join(names, " "); got != want {
+				t.Errorf("plots %s\nwant  %s", got, want)
+			}
+		})
+	}
+}
+
+func TestMatchPlotCoordinates(t *testing.T) {
+	for _, demo := range templates.Demos() {
+		t.Run(demo, func(t *testing.T) {
+			k, m, _ := planPlots(t, demo)
+			doc := parsePlot(t, m["plot-match.svg"])
+			e := k.electrical()
+			areas := doc.all("plot-area")
+			if len(areas) != 1 {
+				t.Fatalf("%d plot areas, want 1", len(areas))
+			}
+			a := areas[0]
+			ax, ay, aw, ah := a.num(t, "x"), a.num(t, "y"), a.num(t, "width"), a.num(t, "height")
+			// The chart's mapping written out again: the plot range across,
+			// VSWR 1 to matchVSWRMax up.
+			xAt := func(f float64) float64 { return ax + (f-e.LowMHz)/(e.HighMHz-e.LowMHz)*aw }
+			yAt := func(v float64) float64 { return ay + ah - (v-1)/(matchVSWRMax-1)*ah }
+			near := func(what string, got, want float64) {
+				t.Helper()
+				if math.Abs(got-want) > plotCoordTol {
+					t.Errorf("%s at %.3f mm, want %.3f", what, got, want)
+				}
+			}
+			b := *k.Design.Spec.BandLowMHz
+			h := *k.Design.Spec.BandHighMHz
+			edges := doc.all("band-edge")
+			if len(edges) != 2 {
+				t.Fatalf("%d band edges, want 2", len(edges))
+			}
+			near("low band edge", edges[0].num(t, "x1"), xAt(b))
+			near("high band edge", edges[1].num(t, "x1"), xAt(h))
+			bands := doc.all("band")
+			if len(bands) != 1 || bands[0].attr("data-low-mhz") != strconv.FormatFloat(b, 'f', -1, 64) {
+				t.Fatalf("band rect %v", bands)
+			}
+			near("band shading start", bands[0].num(t, "x"), xAt(b))
+			// The target is the build sheet's return-loss target as a VSWR.
+			// Source: Pozar, Microwave Engineering, 4th ed., §2.3: VSWR =
+			// (1+|Γ|)/(1−|Γ|) with |Γ| = 10^(−RL/20); 10 dB gives 1.925.
+			target := doc.all("target")
+			if len(target) != 1 {
+				t.Fatalf("%d target lines, want 1", len(target))
+			}
+			near("target line", target[0].num(t, "y1"), yAt(1.925))
+			if math.Abs(e.TargetVSWR-1.925) > 0.001 {
+				t.Errorf("target VSWR %.4f, want 1.925 for a 10 dB return loss", e.TargetVSWR)
+			}
+			for cls, want := range map[string]string{"axis-label y": "VSWR", "axis-label y2": "Return loss (dB)", "axis-label x": "Frequency (MHz)"} {
+				if got := doc.texts(cls); len(got) != 1 || got[0] != want {
+					t.Errorf("%s %q, want %q", cls, got, want)
+				}
+			}
+			if got := doc.texts("note"); len(got) != 1 || !strings.HasPrefix(got[0], "Textbook estimate") {
+				t.Errorf("note %q does not say the curves are textbook estimates", got)
+			}
+		})
+	}
+}
+
+func TestGainAndPatternPlots(t *testing.T) {
+	k, m, _ := planPlots(t, "demo-2g4-cylinder.toml")
+	gain := parsePlot(t, m["plot-gain.svg"])
+	styles := map[string]string{}
+	for _, s := range gain.all("series") {
+		styles[s.attr("data-name")] = s.attr("data-style") + " " + s.attr("stroke-dasharray")
+	}
+	if styles["RHCP"] == "" || styles["LHCP"] == "" || styles["RHCP"] == styles["LHCP"] || styles["Axial ratio"] == "" {
+		t.Errorf("series styles %q: RHCP and LHCP must differ by dash as well as colour", styles)
+	}
+	if got := strings.Join(gain.texts("axis-label y"), "|"); got != "Gain (dBic)|Axial ratio (dB)" {
+		t.Errorf("value axes %q", got)
+	}
+	// The textbook curves at the design frequency are the report's: the
+	// LHCP coil's co-polar component is LHCP.
+	p := k.Design.TextbookSweep([]float64{k.Design.Spec.FrequencyMHz})[0]
+	if k.Design.Coil.Hand != parts.LeftHand || !(p.LHCPDBic > p.RHCPDBic) {
+		t.Errorf("%s coil: RHCP %.1f, LHCP %.1f dBic", k.Design.Coil.Hand, p.RHCPDBic, p.LHCPDBic)
+	}
+	for _, name := range []string{"plot-pattern-1.svg", "plot-pattern-2.svg"} {
+		doc := parsePlot(t, m[name])
+		traces := doc.all("trace")
+		if len(traces) != 2 || traces[0].attr("data-name") != "RHCP" || traces[1].attr("data-name") != "LHCP" || traces[0].attr("data-style") == traces[1].attr("data-style") {
+			t.Errorf("%s: traces %v", name, traces)
+		}
+		rings := doc.texts("ring-label")
+		if len(rings) < 4 || !strings.HasSuffix(rings[0], "dBic") {
+			t.Errorf("%s: ring labels %q", name, rings)
+		}
+	}
+	for _, name := range []string{"plot-side.svg", "plot-plan.svg", "plot-reflector.svg", "plot-wedge.svg"} {
+		doc := parsePlot(t, m[name])
+		if got := doc.texts("scale-note"); len(got) != 1 || !strings.HasPrefix(got[0], "Scale ") {
+			t.Errorf("%s: scale note %q", name, got)
+		}
+	}
+}
+
+func TestMatchedBand(t *testing.T) {
+	// A made-up V-shaped VSWR: 1 at 100 MHz, rising 0.1 per MHz; the
+	// target 2 is crossed at 90 and 110 MHz.
+	e := &electrical{TargetVSWR: 2}
+	for f := 80.0; f <= 120; f += 4 {
+		e.FreqMHz = append(e.FreqMHz, f)
+		e.VSWR = append(e.VSWR, 1+0.1*math.Abs(f-100))
+	}
+	lo, hi, ok := e.matchedBand(100)
+	if !ok || math.Abs(lo-90) > 1e-9 || math.Abs(hi-110) > 1e-9 {
+		t.Errorf("matched band %v–%v (%v), want 90–110", lo, hi, ok)
+	}
+	e.TargetVSWR = 0.5
+	if _, _, ok := e.matchedBand(100); ok {
+		t.Error("a target below the best VSWR still gives a matched band")
+	}
+}

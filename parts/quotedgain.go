@@ -1,0 +1,61 @@
+package parts
+
+import "fmt"
+
+// QuotedGainSource names where the quoted gain comes from when the field
+// solution ran.
+const QuotedGainSource = "field solution: realised gain (co-polar peak × (1 − |Γ|²)) at the centre frequency"
+
+// WithField returns a copy of d that carries the field solution f: the
+// quoted gain (report, build sheet, EIRP) becomes f's realised gain in dBic;
+// the textbook estimates stay as a cross-check. d is not changed.
+func (d *Design) WithField(f *FieldSolution) *Design {
+	c := *d
+	c.Field = f
+	if d.EIRP != nil {
+		e := *d.EIRP
+		e.GainDBic = f.QuotedDBic()
+		e.EIRPDBm = EIRP(e.TxPowerDBm, e.FeederLossDB, e.GainDBic)
+		e.EIRPmW = DBmToMilliwatt(e.EIRPDBm)
+		c.EIRP = &e
+		c.Warnings = append([]Warning(nil), d.Warnings...)
+		for i, w := range c.Warnings {
+			if w.Code == "eirp" {
+				c.Warnings[i] = eirpWarning(&e)
+			}
+		}
+	}
+	return &c
+}
+
+// QuotedGain returns the gain the outputs lead with and where it comes
+// from: the field solution's realised gain in dBic when it ran, else the
+// textbook estimate.
+func (d *Design) QuotedGain() (value float64, source string) {
+	if d.Field != nil {
+		return d.Field.QuotedDBic(), QuotedGainSource
+	}
+	return d.Estimates.Gain.Value, d.Estimates.Gain.Formula
+}
+
+// gainRow is the build sheet's gain row.
+func (d *Design) gainRow() SheetRow {
+	if d.Field != nil {
+		return SheetRow{"Gain (field solution)", fmt.Sprintf("%.1f dBic realised at %s MHz; textbook estimate %.1f dBic (%s)",
+			d.Field.QuotedDBic(), num(d.Spec.FrequencyMHz), d.Estimates.Gain.Value, d.Estimates.Gain.Formula)}
+	}
+	return SheetRow{"Gain (estimate)", fmt.Sprintf("%.1f dBic, %s", d.Estimates.Gain.Value, d.Estimates.Gain.Formula)}
+}
+
+// gainWord says how the quoted gain was found, for sentences.
+func (d *Design) gainWord() string {
+	if d.Field != nil {
+		return "computed"
+	}
+	return "estimated"
+}
+
+// eirpWarning is the warning every design with a transmitter power carries.
+func eirpWarning(e *EIRPFigure) Warning {
+	return Warning{Code: "eirp", Message: fmt.Sprintf("EIRP %.1f dBm (%.0f mW) with this antenna: check the limit that applies where you transmit and under your licence", e.EIRPDBm, e.EIRPmW)}
+}
