@@ -91,6 +91,9 @@ func runNew(w, stderr io.Writer, o newOptions, sized bool) error {
 	if o.turns != 0 && !(o.turns >= spec.MinTurns && o.turns <= spec.MaxTurns) {
 		return usageError{fmt.Errorf("--turns %g: must be between %g and %g (fractions allowed), e.g. --turns 6", o.turns, spec.MinTurns, spec.MaxTurns)}
 	}
+	if o.hand == "" {
+		o.hand = "RHCP"
+	}
 	if o.hand != "RHCP" && o.hand != "LHCP" {
 		return usageError{fmt.Errorf(`--hand %q: use "RHCP" or "LHCP"`, o.hand)}
 	}
