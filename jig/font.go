@@ -30,7 +30,9 @@ var glyphs = map[rune][][][2]float64{
 	'M': {{{0, 0}, {0, 6}, {2, 3}, {4, 6}, {4, 0}}},
 	'P': {{{0, 0}, {0, 6}, {3, 6}, {4, 5}, {4, 4}, {3, 3}, {0, 3}}},
 	'R': {{{0, 0}, {0, 6}, {3, 6}, {4, 5}, {4, 4}, {3, 3}, {0, 3}}, {{2, 3}, {4, 0}}},
-	'z': {{{0, 4}, {4, 4}, {0, 0}, {4, 0}}},
+	// The z is a small letter at 3.5 of 6 units and narrower than the
+	// capitals, so "GHz" does not read as "GHZ" on the flange.
+	'z': {{{0.5, 3.5}, {3.5, 3.5}, {0.5, 0}, {3.5, 0}}},
 }
 
 // Font metrics in grid units.

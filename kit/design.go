@@ -6,6 +6,7 @@ import (
 	"io"
 	"text/template"
 
+	"coilwright/parts"
 	"coilwright/templates"
 )
 
@@ -20,6 +21,7 @@ var reportFuncs = template.FuncMap{
 	"g":     func(v float64) string { return fmt.Sprintf("%g", v) },
 	"deref": func(p *float64) float64 { return *p },
 	"pct":   func(v float64) float64 { return 100 * v },
+	"turns": parts.TurnsText,
 	"signed": func(v float64) string {
 		if v < 0 {
 			return fmt.Sprintf("− %.1f", -v)

@@ -16,6 +16,9 @@ import (
 // print volume is not made; the design carries a former-size warning.
 func (k *Kit) writeFormer(out Sink) error {
 	s := k.Source.Spec
+	if k.split != nil {
+		return k.writeSections(out)
+	}
 	if !k.Former.FitsPrinter {
 		return nil
 	}

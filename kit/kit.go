@@ -55,11 +55,14 @@ type Kit struct {
 	Former jig.FormerPlan // the former's sizes, drive and envelope
 	Report parts.Report   // as in design.json and check --json
 
-	opt       Options
-	parts     []cutPart
-	cutList   *parts.CutList
-	batch     *batchPlan // nil for one kit
-	templates []pdf.Page // the 1:1 template pages, laid out once
+	opt         Options
+	parts       []cutPart
+	cutList     *parts.CutList
+	batch       *batchPlan       // nil for one kit
+	templates   []pdf.Page       // the 1:1 template pages, laid out once
+	split       *jig.SplitPlan   // sections of a former taller than the printer; nil when it fits or cannot be split
+	formerObj   *jig.Former      // the former split, when split is set
+	splitParams jig.FormerParams // its sizes: bored through for the rod
 
 	// tolerance is the batch tolerance analysis; nil when it did not run.
 	tolerance *parts.ToleranceReport
@@ -89,11 +92,16 @@ func New(src Source, opt Options) (*Kit, error) {
 		return nil, err
 	}
 	k.cutList.FitLockTail(k.Former.LockHoleMM)
-	if src.Spec.Quantity > 1 {
-		if k.batch, err = newBatchPlan(d, k.cutList, k.parts); err != nil {
-			return nil, err
-		}
+	// The batch plan also checks that each piece fits its stock rod, so
+	// one kit is planned too, and its plan kept only for a batch.
+	bp, err := newBatchPlan(d, k.cutList, k.parts)
+	if err != nil {
+		return nil, err
 	}
+	if src.Spec.Quantity > 1 {
+		k.batch = bp
+	}
+	k.planSplit()
 	if err := k.analyseTolerance(); err != nil {
 		return nil, err
 	}

@@ -52,6 +52,17 @@ func (k *Kit) writeSheet(out Sink) error {
 		}
 	}
 	sheet := parts.NewBuildSheet(d, cl, k.Source.SHA256())
+	for i, st := range sheet.Steps {
+		if st.Title != "Lock its end in the former" {
+			continue
+		}
+		if lead := k.formerLead(); lead != "" {
+			sheet.Steps[i].Text = append([]string{lead}, sheet.Steps[i].Text...)
+		}
+		if note, _ := k.lockCut(); note != "" && (k.Former.FitsPrinter || k.split != nil) {
+			sheet.Steps[i].Text = append(sheet.Steps[i].Text, note)
+		}
+	}
 	if err := out.Add("build-sheet.md", func(w io.Writer) error { return sheetTmpl.Execute(w, sheet) }); err != nil {
 		return err
 	}
@@ -59,7 +70,7 @@ func (k *Kit) writeSheet(out Sink) error {
 	if err != nil {
 		return err
 	}
-	doc := sheetDocument(sheet, page)
+	doc := sheetDocument(sheet, page, k.stepFigures(sheet))
 	doc.Blocks = withBandFigure(doc.Blocks, pdf.Group{Blocks: []pdf.Block{pdf.Heading{Text: "What the analyser should show", Level: 3}, bandFigure(k.electrical())}})
 	doc.TrailingPages = len(k.templates)
 	pages, err := doc.Pages()
@@ -136,9 +147,12 @@ func newBatchPlan(d *parts.Design, cl *parts.CutList, cps []cutPart) (*batchPlan
 		name, item, key string
 		piece           float64
 		rod             cut.Rod
+		joint           string // the other fix
 	}{
-		{"Wire", "wire blank", "stock.wire_rod_mm", cl.Wire.LengthMM, cut.Rod{Length: s.Stock.WireRodMM, Kerf: s.Stock.WireKerfMM, EndTrim: s.Stock.EndTrimMM}},
-		{"Support rod", "support rod", "stock.dowel_rod_mm", cl.Dowel.LengthMM, cut.Rod{Length: s.Stock.DowelRodMM, Kerf: s.Stock.DowelKerfMM, EndTrim: s.Stock.EndTrimMM}},
+		{"Wire", "wire blank", "stock.wire_rod_mm", cl.Wire.LengthMM, cut.Rod{Length: s.Stock.WireRodMM, Kerf: s.Stock.WireKerfMM, EndTrim: s.Stock.EndTrimMM},
+			" and buy the wire on a reel or in longer lengths; the winding must be one piece (a joint in the coil changes its tuning and breaks on the former)"},
+		{"Support rod", "support rod", "stock.dowel_rod_mm", cl.Dowel.LengthMM, cut.Rod{Length: s.Stock.DowelRodMM, Kerf: s.Stock.DowelKerfMM, EndTrim: s.Stock.EndTrimMM},
+			", or join two rods end to end with a glued sleeve of the same material"},
 	} {
 		pieces := make([]cut.Piece, n)
 		for i := range pieces {
@@ -150,7 +164,7 @@ func newBatchPlan(d *parts.Design, cl *parts.CutList, cps []cutPart) (*batchPlan
 			return nil, &spec.SpecError{Key: st.key, Line: s.Line(st.key), Value: strconv.FormatFloat(st.rod.Length, 'g', -1, 64),
 				Problem: fmt.Sprintf("is too short for one %s of %.1f mm with %s mm kerf and %s mm end trim", st.item, st.piece,
 					strconv.FormatFloat(st.rod.Kerf, 'g', -1, 64), strconv.FormatFloat(st.rod.EndTrim, 'g', -1, 64)),
-				Fix: fmt.Sprintf("set %s = %.0f or more", st.key[strings.LastIndex(st.key, ".")+1:], need)}
+				Fix: fmt.Sprintf("set %s = %.0f or more%s", st.key[strings.LastIndex(st.key, ".")+1:], need, st.joint)}
 		}
 		if err != nil {
 			return nil, fmt.Errorf("%s: %w", st.item, err)

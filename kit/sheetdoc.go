@@ -13,7 +13,9 @@ import (
 func num(v float64) string { return fmt.Sprintf("%g", v) }
 
 // sheetDocument lays out the build sheet's content as a flowing document.
-func sheetDocument(b *parts.BuildSheet, page pdf.PageSize) pdf.Document {
+// figs holds figures to print after the step of each title ("feed": the
+// step that fits the cable or connector); any left over follow the steps.
+func sheetDocument(b *parts.BuildSheet, page pdf.PageSize, figs map[string][]pdf.Figure) pdf.Document {
 	var bl []pdf.Block
 	add := func(x ...pdf.Block) { bl = append(bl, x...) }
 
@@ -36,7 +38,7 @@ func sheetDocument(b *parts.BuildSheet, page pdf.PageSize) pdf.Document {
 		rows[i] = []string{r.Label, r.Value}
 	}
 	add(pdf.Table{Widths: []float64{1, 2.6}, Rows: rows})
-	add(pdf.Heading{Text: "Side view", Level: 2}, sideFigure(b))
+	add(pdf.Group{Blocks: []pdf.Block{pdf.Heading{Text: "Side view", Level: 2}, sideFigure(b)}})
 
 	add(pdf.Heading{Text: "Tools", Level: 2}, pdf.List{Items: b.Tools})
 	add(pdf.Heading{Text: "Materials (one kit)", Level: 2})
@@ -66,6 +68,22 @@ func sheetDocument(b *parts.BuildSheet, page pdf.PageSize) pdf.Document {
 				continue
 			}
 			add(pdf.Paragraph{Text: t})
+		}
+		key := st.Title
+		if strings.Contains(st.Title, "coax") || strings.HasPrefix(st.Title, "Mount the") {
+			for _, f := range figs["feed"] {
+				add(f)
+			}
+			delete(figs, "feed")
+		}
+		for _, f := range figs[key] {
+			add(f)
+		}
+		delete(figs, key)
+	}
+	for _, key := range []string{"Lock its end in the former", "Solder the wedge to the first quarter turn", "Prepare the reflector", "feed"} {
+		for _, f := range figs[key] {
+			add(f)
 		}
 	}
 
@@ -100,12 +118,20 @@ func sideFigure(b *parts.BuildSheet) pdf.Figure {
 		return geom.Polyline{{X: x0, Y: y0}, {X: x1, Y: y0}, {X: x1, Y: y1}, {X: x0, Y: y1}}
 	}
 	cable := v.CableShown
-	paths := []pdf.FigurePath{
-		{Points: rect(-v.RodDiameter/2, 0, v.RodDiameter/2, v.RodLength), Closed: true, Fill: true, FillGray: 0.08, Gray: 0.6},
-		{Points: rect(-v.ReflectorWidth/2, -v.ReflectorThick, v.ReflectorWidth/2, 0), Closed: true, Fill: true, FillGray: 0.45, Gray: 1},
-		{Points: rect(v.CoaxX-v.CoaxOuter/2, -v.ReflectorThick-cable, v.CoaxX+v.CoaxOuter/2, 0), Closed: true, Fill: true, FillGray: 0.3, Gray: 1},
-		{Points: v.Wire, StrokeMM: v.WireDiameter, Gray: 0.75},
+	// Far halves of the turns first, light and thin, behind the rod; near
+	// halves last, dark and full width, so the slant of the front of each
+	// turn shows the hand.
+	var paths []pdf.FigurePath
+	for _, far := range v.Far {
+		paths = append(paths, pdf.FigurePath{Points: far, StrokeMM: 0.6 * v.WireDiameter, Gray: 0.3})
+	}
+	paths = append(paths,
+		pdf.FigurePath{Points: rect(-v.RodDiameter/2, 0, v.RodDiameter/2, v.RodLength), Closed: true, Fill: true, FillGray: 0.08, Gray: 0.6},
+		pdf.FigurePath{Points: rect(-v.ReflectorWidth/2, -v.ReflectorThick, v.ReflectorWidth/2, 0), Closed: true, Fill: true, FillGray: 0.45, Gray: 1},
+		pdf.FigurePath{Points: rect(v.CoaxX-v.CoaxOuter/2, -v.ReflectorThick-cable, v.CoaxX+v.CoaxOuter/2, 0), Closed: true, Fill: true, FillGray: 0.3, Gray: 1})
+	for _, near := range v.Near {
+		paths = append(paths, pdf.FigurePath{Points: near, StrokeMM: v.WireDiameter, Gray: 0.85})
 	}
 	return pdf.Figure{Paths: paths, Dimensions: v.Dimensions, Height: 120,
-		Caption: fmt.Sprintf("Side view, fitted to the page (not 1:1); dimensions in mm. %s coil drawn on its wire centreline, support rod Ø%s × %.1f mm, feed cable coming up through the reflector under the coil's start.", b.Hand, num(v.RodDiameter), v.RodLength)}
+		Caption: fmt.Sprintf("Side view, fitted to the page (not 1:1); dimensions in mm. %s coil drawn on its wire centreline: the near half of each turn dark and full width, the far half light and thin behind the support rod (Ø%s × %.1f mm); feed cable coming up through the reflector under the coil's start.", b.Hand, num(v.RodDiameter), v.RodLength)}
 }

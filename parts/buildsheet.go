@@ -8,6 +8,7 @@ package parts
 
 import (
 	"fmt"
+	"strings"
 
 	"coilwright/parts/spec"
 )
@@ -96,20 +97,13 @@ func NewBuildSheet(d *Design, cl *CutList, specSHA256 string) *BuildSheet {
 		Quantity: s.Quantity, Inspection: d.InspectionTable()}
 	b.HandWords = handWords(d.Coil.Hand)
 	b.View = d.SideView(cl)
-	b.Summary = fmt.Sprintf("%s MHz %s helix, %s turns, %s", num(s.FrequencyMHz), s.Coil.Shape, num(d.Coil.Turns), b.Hand)
+	b.Summary = fmt.Sprintf("%s MHz %s helix, %s, %s", num(s.FrequencyMHz), s.Coil.Shape, TurnsText(d.Coil.Turns), b.Hand)
 	b.Design = designRows(d, cl)
-	b.Tools = tools(s)
+	b.Tools = tools(s, choiceOf(d, cl))
 	b.Materials = materials(s, cl)
-	b.Cautions = cautions(d)
+	b.Cautions = cautions(d, choiceOf(d, cl))
 	b.Steps = steps(d, cl, strip, b.Cautions)
-	b.InspectionNote = "Measure each turn across its middle with calipers over the outside of the wire, at two places 90° apart, and write the mean in the blank column. "
-	if s.Wire.InspectionToleranceMM != nil {
-		b.InspectionNote += fmt.Sprintf("The tolerance, ±%s mm, is set in the spec.", num(*s.Wire.InspectionToleranceMM))
-	} else if d.InspectionBasis != "" {
-		b.InspectionNote += d.InspectionBasis
-	} else {
-		b.InspectionNote += fmt.Sprintf("The tolerance is ±%s %% of the turn's diameter, at least %s mm: a turn 1 %% too large tunes about 1 %% low.", num(100*InspectionFraction), num(InspectionFloorMM))
-	}
+	b.InspectionNote = InspectionNoteText(d)
 	b.Warnings = append(append([]Warning{}, d.Warnings...), cl.Warnings...)
 	b.Closing = []string{
 		"This sheet is a guide for careful hobby construction, not professional advice. Follow the local regulations, electrical and workshop codes, and the conditions of any licence that apply where you build and transmit; where they differ from this sheet, they win.",
@@ -139,15 +133,15 @@ func designRows(d *Design, cl *CutList) []SheetRow {
 		{"Centre frequency", fmt.Sprintf("%s MHz (wavelength %.2f mm)", num(s.FrequencyMHz), d.Wavelength)},
 		{"Band", band},
 		{"Hand", fmt.Sprintf("%s (%s winding)", d.Coil.Hand, map[Hand]string{RightHand: "right-hand", LeftHand: "left-hand"}[d.Coil.Hand])},
-		{"Coil", fmt.Sprintf("%s, %s turns, %s feed", s.Coil.Shape, num(d.Coil.Turns), s.Coil.Feed)},
+		{"Coil", fmt.Sprintf("%s, %s, %s feed", s.Coil.Shape, TurnsText(d.Coil.Turns), s.Coil.Feed)},
 		{"Diameter (wire centre)", fmt.Sprintf("%s at the base, %s at the top", mm2(2*d.Coil.StartRadius), mm2(2*d.Coil.EndRadius))},
 		{"Pitch", fmt.Sprintf("%.1f° at the first turn, %.2f mm per turn at the first turn", d.Turns[0].PitchAngleDeg, d.Turns[0].SpacingMM)},
 		{"First turn height", fmt.Sprintf("%s, wire centre above the reflector", mm2(d.Coil.Z0))},
-		{"Coil height", fmt.Sprintf("%s from the first turn to the top (%s to the top of the wire)", mm(d.AxialLength), mm(d.Coil.Z0+d.AxialLength+s.Wire.DiameterMM/2))},
+		{"Coil height", d.Heights().Text()},
 		{"Wire", fmt.Sprintf("%s, Ø%s mm; winding %s, blank %s", s.Wire.Material, num(s.Wire.DiameterMM), mm(cl.Wire.ArcMM), mm(cl.Wire.LengthMM))},
 		{"Reflector", fmt.Sprintf("%s, %s across, %s mm thick", s.Reflector.Shape, mm(s.Reflector.SizeMM(d.Wavelength)), num(s.Reflector.ThicknessMM))},
 		{"Support rod", fmt.Sprintf("%s × %s", sectionWords(cl.Dowel), mm(cl.Dowel.LengthMM))},
-		{"Feed cable", fmt.Sprintf("%s, %s to the reflector", cl.Coax.Cable.Name, mm(cl.Coax.FinishedMM))},
+		{"Feed cable", feedRow(d, cl)},
 		d.gainRow(),
 		{"Half-power beamwidth (estimate)", fmt.Sprintf("%.0f°", d.Estimates.HPBW.Value)},
 	}
@@ -157,19 +151,29 @@ func designRows(d *Design, cl *CutList) []SheetRow {
 	return rows
 }
 
-func tools(s *spec.Spec) []string {
-	return []string{
+func tools(s *spec.Spec, c sheetChoice) []string {
+	t := []string{
 		"The printed winding former for this kit (check its hand mark reads " + s.Coil.Hand + ")",
 		"Safety glasses; nitrile gloves; fume extractor or a fan drawing fumes away",
 		"Temperature-controlled soldering iron with a stand; flux; solder wire Ø" + num(s.Stock.SolderWireMM) + " mm",
 		"Side cutters or wire cutters rated for the wire; flat-nose pliers; a fine file",
 		"Steel rule; calipers reading to 0.05 mm; fine marker",
-		"Coax stripping tool or a sharp knife; small pipe cutter for semi-rigid cable",
 		"Drill with 2.5 mm and feed-hole drills; deburring tool",
-		"Hot-air tool or heat gun for heat-shrink",
 		"Mixing cup and stick for epoxy",
-		"Multimeter; vector network analyser (VNA) covering the band, with a calibration kit",
+		"Multimeter; vector network analyser (VNA) covering the band with a calibration kit, or an SWR meter (see the final checks)",
 	}
+	switch {
+	case !c.pigtail():
+		t = append(t, "Spanner or nut driver to fit the connector's nut or screws")
+	case c.cable.Braided:
+		t = append(t, "Coax stripping tool or a sharp knife", "Hot-air tool or heat gun for heat-shrink")
+	default:
+		t = append(t, "Small pipe cutter and a sharp knife for the semi-rigid cable", "Hot-air tool or heat gun for heat-shrink")
+	}
+	if c.plate.Joint == "clamp" {
+		t = append(t, "Screwdriver and 5.5 mm spanner for the M3 clamp hardware")
+	}
+	return t
 }
 
 func materials(s *spec.Spec, cl *CutList) []SheetRow {
@@ -178,10 +182,15 @@ func materials(s *spec.Spec, cl *CutList) []SheetRow {
 		{"Support rod", fmt.Sprintf("%s, %s", sectionWords(cl.Dowel), mm(cl.Dowel.LengthMM))},
 		{"Feed cable", fmt.Sprintf("%s, cut %s", cl.Coax.Cable.Name, mm(cl.Coax.CutMM))},
 		{"Heat-shrink", fmt.Sprintf("2:1 sleeve Ø%s mm (shrinks to Ø%s mm), %s", num(cl.Sleeve.SuppliedMM), num(cl.Sleeve.RecoveredMM), mm(cl.Sleeve.LengthMM))},
-		{"Reflector", fmt.Sprintf("%s sheet, %s mm thick, cut from the template", s.Reflector.Shape, num(s.Reflector.ThicknessMM))},
-		{"Matching strip", "thin copper or brass sheet, cut from the template"},
+		{"Reflector", fmt.Sprintf("%s %s, %s mm thick, cut from the template", s.Reflector.Shape, plateName(s), num(s.Reflector.ThicknessMM))},
+		{"Matching strip", fmt.Sprintf("%s %s mm thick, cut from the template", stripName(s), num(s.Wedge.ThicknessMM))},
 		{"Solder", fmt.Sprintf("about %s mm of Ø%s mm wire", num(cl.Solder.Amount), num(s.Stock.SolderWireMM))},
 		{"Epoxy", fmt.Sprintf("about %s mL mixed, slow-setting", num(cl.Epoxy.Amount))},
+	}
+	if cl.Coax.Jack != "" {
+		// A panel jack: the cable is a ready-made jumper, nothing to shrink.
+		rows[2] = SheetRow{"Feed cable", fmt.Sprintf("%s jumper, %s, with a plug at each end (not cut from the kit)", cl.Coax.Cable.Name, mm(cl.Coax.FinishedMM))}
+		rows = append(rows[:3], rows[4:]...)
 	}
 	for _, h := range cl.Hardware {
 		rows = append(rows, SheetRow{"Hardware", fmt.Sprintf("%d × %s", h.Count, h.Item)})
@@ -189,14 +198,22 @@ func materials(s *spec.Spec, cl *CutList) []SheetRow {
 	return rows
 }
 
-func cautions(d *Design) []Hazard {
+// plateName is the reflector's sheet material as the sheet names it.
+func plateName(s *spec.Spec) string {
+	if m, ok := spec.SheetMaterialByID(s.Reflector.Material); ok {
+		return m.Name
+	}
+	return "sheet"
+}
+
+func cautions(d *Design, c sheetChoice) []Hazard {
 	gain, _ := d.QuotedGain()
 	rf := fmt.Sprintf("This antenna concentrates power: its "+d.gainWord()+" gain is %.1f dBic, so EIRP (dBm) = transmitter power (dBm) − feeder loss (dB) + %.1f dB.", gain, gain)
 	if e := d.EIRP; e != nil {
 		rf += fmt.Sprintf(" With %s dBm in and %s dB loss that is %.1f dBm (%.0f mW).", num(e.TxPowerDBm), num(e.FeederLossDB), e.EIRPDBm, e.EIRPmW)
 	}
 	rf += " EIRP limits depend on the band, the country and the licence; some rules allow only tens of milliwatts. Stay within the limit that applies to you, and keep people out of the main beam, in front of the open end, while transmitting."
-	return []Hazard{
+	hz := []Hazard{
 		{HazardSolder, "Soldering fumes and lead",
 			"Rosin flux fume causes occupational asthma: work with fume extraction or a fan drawing the plume away, and keep your head out of it. Lead in solder harms you when swallowed: no food or drink at the bench, and wash your hands after soldering. Lead-free solder is preferred."},
 		{HazardBurns, "Burns",
@@ -209,6 +226,21 @@ func cautions(d *Design) []Hazard {
 			"If the reflector is cut from glass-epoxy laminate (FR-4), never cut it on a hobby CO2 laser: it gives off toxic brominated fumes and chars. Saw, shear or mill it with dust extraction and a dust mask, with a sharp tool at a slow feed so the resin does not scorch and fume, or order it from a circuit-board maker. Sheet copper or brass is a safer reflector."},
 		{HazardRF, "RF exposure and EIRP limits", rf},
 	}
+	// The laminate caution only where the kit has laminate; the metal
+	// laser caution beside it where it has reflective metal.
+	var out []Hazard
+	for _, h := range hz {
+		if h.ID == HazardLaminate && !c.plate.Halogenated && !c.strip.Halogenated {
+			continue
+		}
+		out = append(out, h)
+		if h.ID == HazardLaminate || (h.ID == HazardEyes && !c.plate.Halogenated && !c.strip.Halogenated) {
+			if lm, ok := c.laserMetalHazard(); ok {
+				out = append(out, lm)
+			}
+		}
+	}
+	return out
 }
 
 // pick returns the cautions with the given IDs, in that order.
@@ -248,30 +280,16 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 	expect := fmt.Sprintf("Expect the return loss to be at least %s dB (VSWR below 1.9) across the band, with its best point near %s MHz.", num(ReturnLossTargetDB), num(s.FrequencyMHz))
 	clearance := ""
 	if strip != nil && len(strip.Stations) > 0 {
-		strip1 = fmt.Sprintf("Cut the matching strip from its 1:1 template: %s long, %s wide at the feed end narrowing to %s. File its edges smooth.", mm(strip.Length), mm2(strip.FeedWidth), mm2(strip.EndWidth))
+		strip1 = fmt.Sprintf("Cut the matching strip from its 1:1 template: %s long, %s. File its edges smooth.", mm(strip.Length), StripShapeText(strip))
 		clearance = fmt.Sprintf(" The strip's underside is only %s above the reflector at the feed: keep the solder there flat.", mm2(strip.Stations[0].Height))
 		expect += fmt.Sprintf(" The design estimates a return loss of about %.0f dB at %s MHz (|Γ| = %.2f from the matching strip alone).", ReturnLossDB(strip.Reflection), num(s.FrequencyMHz), strip.Reflection)
 	}
 	expect += " If the best point is low in frequency, the turns are too large; if high, too small. If the return loss falls short across the band, raise or lower the strip's far end a fraction of a millimetre at a time and sweep again."
-	prep := fmt.Sprintf("Cut the cable to %s. At the reflector end, remove %s of outer conductor to leave %s of dielectric, then %s of dielectric to bare the centre conductor.",
-		mm(cx.CutMM), mm(cx.DielectricMM+cx.CentreMM), mm(cx.DielectricMM), mm(cx.CentreMM))
-	push := "Push the cable up through the feed hole from behind until its outer conductor is flush with the top face and the dielectric stands " + mm(cx.ProudMM) + " proud. Solder the outer conductor all round the hole on the back face."
-	if cx.FlareMM > 0 {
-		prep = fmt.Sprintf("Cut the cable to %s. At the reflector end, strip the jacket back %s. Cut the braid off %s from the end and comb the %s left next to the jacket out straight. Remove %s of dielectric to bare the centre conductor.",
-			mm(cx.CutMM), mm(cx.DielectricMM+cx.CentreMM+cx.FlareMM), mm(cx.DielectricMM+cx.CentreMM), mm(cx.FlareMM), mm(cx.CentreMM))
-		push = "Push the cable up through the feed hole from behind until the braid meets the back face and the dielectric stands " + mm(cx.ProudMM) + " proud of the top face. Fan the braid out flat round the hole and solder it to the back face."
-	}
-	coaxSteps := []string{"Slide the heat-shrink sleeve onto the cable first; it is shrunk in step 13.", prep, push + clearance}
-	if cx.Jack != "" {
-		coaxSteps = []string{
-			fmt.Sprintf("Mount the SMA jack (%s) in the feed cut-out from behind and tighten it. Its centre contact must reach %s above the top face, the wire's centre height: extend it with a short piece of the coil wire soldered to it if it is shorter, keeping it clear of the hole's edge.", cx.Jack, mm(cx.CentreMM)),
-			fmt.Sprintf("The feed cable is a %s jumper with a plug at each end; slide the heat-shrink sleeve onto it before fitting the second plug.", mm(cx.FinishedMM)),
-			"Solder the jack's body to the reflector round the cut-out where the connector's maker allows it." + clearance,
-		}
-	}
+	ch := choiceOf(d, cl)
+	coaxSteps := ch.feedSteps(cx, clearance)
 	lead := fmt.Sprintf("At the coil's start, bend the feed lead straight down, parallel to the axis: it is %s long and ends just above the coax's dielectric.", mm(w.FeedLeadMM))
 	if w.FeedLeadMM < 2*w.DiameterMM {
-		lead = fmt.Sprintf("The wire's start sits only %s above the coax's dielectric, too little to bend a lead: leave the start straight; the centre conductor is soldered to its side in step 11.", mm(w.FeedLeadMM))
+		lead = fmt.Sprintf("The wire's start sits only %s above the coax's dielectric, too little to bend a lead: leave the start straight; the centre conductor is soldered to its side in the step that solders the coil.", mm(w.FeedLeadMM))
 	}
 	rodHole, screw := rodMountSteps(cl)
 	wireNotes := ""
@@ -296,7 +314,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 			"Hold the wire at mark B for about ten seconds, then press every turn once more into its groove with a thumb, a little tighter than it lies, to set the bend.",
 		}},
 		{Title: "Release", Text: []string{
-			fmt.Sprintf("Let go of the end at mark B slowly and let the coil open up on the former: it springs out to its relaxed size and, keeping its length, unwinds by about %.0f° to %s turns. Free the lock end and twist the coil off along the groove.", unwind, num(d.Coil.Turns)),
+			fmt.Sprintf("Let go of the end at mark B slowly and let the coil open up on the former: it springs out to its relaxed size and, keeping its length, unwinds by about %.0f° to %s. Free the lock end and twist the coil off along the groove.", unwind, TurnsText(d.Coil.Turns)),
 		}},
 		{Title: "Measure each turn against the inspection table", Text: []string{
 			"Measure every turn across its middle, over the outside of the wire, and write the reading in the inspection table at the end of this sheet.",
@@ -308,8 +326,9 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 		}, Cautions: pick(all, HazardEyes)},
 		{Title: "Prepare the reflector", Text: []string{
 			fmt.Sprintf("Cut the %s reflector from its 1:1 template, in %s mm sheet. Drill the Ø%.2f mm feed hole at the template's feed mark.%s", s.Reflector.Shape, num(s.Reflector.ThicknessMM), cx.FeedHoleMM, rodHole),
-			"Deburr both faces and clean the metal bright where it will be soldered.",
-		}, Cautions: pick(all, HazardLaminate, HazardEyes)},
+			"Deburr both faces.",
+			ch.plateText(),
+		}, Cautions: pick(all, HazardLaminate, HazardLaserMetal, HazardEyes)},
 		{Title: "Prepare and solder the coax", Text: coaxSteps, Cautions: pick(all, HazardSolder, HazardBurns)},
 		{Title: "Solder the wedge to the first quarter turn", Text: []string{strip1, strip2},
 			Cautions: pick(all, HazardSolder, HazardBurns)},
@@ -319,22 +338,78 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 		}, Cautions: pick(all, HazardSolder, HazardBurns)},
 		{Title: "Epoxy and support", Text: []string{
 			screw,
-			fmt.Sprintf("The turns clear the rod by about %s all round. Put two small epoxy beads per turn between the rod and the wire, on opposite sides, without moving the turns. Let it cure as the maker says.", mm(cl.Dowel.ClearanceMM)),
+			supportText(cl.Dowel),
 			"Support rod: " + cl.Dowel.MaterialAdvice + ".",
 		}, Cautions: pick(all, HazardEpoxy)},
 		{Title: "Heat-shrink", Text: []string{
 			"Slide the sleeve up against the reflector's back face, over the cable's joint, and shrink it evenly with the hot-air tool. Fix the cable to the reflector with the cable tie.",
 		}, Cautions: pick(all, HazardBurns)},
 		{Title: "Final checks", Text: []string{
-			"Compare the antenna with the side view: hand, turn count, first turn height and overall height.",
+			"Compare the antenna with the side view: hand, turn count, first turn height and overall height (" + mm(d.Heights().Overall) + " from the reflector's top face to the top of the wire).",
 			"With the multimeter, check there is no continuity between the connector's centre pin and its body: the coil and strip must not touch the reflector.",
 			fmt.Sprintf("Calibrate the vector network analyser (VNA) at the end of its test cable, connect the antenna, point it at open sky away from metal, and sweep the return loss (S11) across %s.", band),
 			expect,
 			"Before transmitting, work out the EIRP and check the limit that applies to you.",
 		}, Cautions: pick(all, HazardRF)},
+		{Title: "Checks without a network analyser", Text: acceptanceText(d), Cautions: pick(all, HazardRF)},
 	}
+	if cx.Jack != "" {
+		// A panel jack has no cable at the plate to shrink or tie.
+		for i := range list {
+			if list[i].Title == "Heat-shrink" {
+				list = append(list[:i], list[i+1:]...)
+				break
+			}
+		}
+		for i := range list {
+			if list[i].Title == "Prepare and solder the coax" {
+				list[i].Title = "Mount the " + ch.connector.Name
+			}
+			for j, t := range list[i].Text {
+				list[i].Text[j] = strings.NewReplacer("Solder the centre conductor to", "Solder the connector's rear contact to", "the coax's dielectric", "the connector's insulator", "the bare centre conductor", "the connector's rear contact", "the centre conductor is soldered", "the connector's rear contact is soldered").Replace(t)
+			}
+		}
+	}
+	shrink, coil := 0, 0
 	for i := range list {
 		list[i].Number = i + 1
+		switch list[i].Title {
+		case "Heat-shrink":
+			shrink = i + 1
+		case "Solder the coil":
+			coil = i + 1
+		}
+	}
+	if coil > 0 {
+		for i := range list {
+			for j, t := range list[i].Text {
+				list[i].Text[j] = strings.ReplaceAll(t, "in the step that solders the coil", fmt.Sprintf("in step %d", coil))
+			}
+		}
+	}
+	if shrink > 0 {
+		for i := range list {
+			for j, t := range list[i].Text {
+				list[i].Text[j] = strings.ReplaceAll(t, "it is shrunk near the end of the build", fmt.Sprintf("it is shrunk in step %d", shrink))
+			}
+		}
 	}
 	return list
+}
+
+// feedRow is the design table's feed: the cable to the plate, or the
+// panel jack and its jumper.
+func feedRow(d *Design, cl *CutList) string {
+	if j, ok := spec.ConnectorByID(d.Spec.Reflector.Connector); ok && j.Mount != "pigtail" {
+		return fmt.Sprintf("%s on the reflector; %s jumper, %s", j.Name, cl.Coax.Cable.Name, mm(cl.Coax.FinishedMM))
+	}
+	return fmt.Sprintf("%s, %s to the reflector", cl.Coax.Cable.Name, mm(cl.Coax.FinishedMM))
+}
+
+// stripName is the matching strip's sheet material as the sheet names it.
+func stripName(s *spec.Spec) string {
+	if m, ok := spec.SheetMaterialByID(s.Wedge.Material); ok {
+		return m.Name + ","
+	}
+	return "thin copper or brass sheet,"
 }

@@ -127,7 +127,7 @@ type CoaxCut struct {
 	FlareMM      float64 // braid fanned out round the hole on the back face; 0 for a solid outer
 	FeedHoleMM   float64 // feed hole in the reflector
 	CutMM        float64 // FinishedMM + ThroughMM + ProudMM + CentreMM
-	// Jack is "sma-flange" or "sma-bulkhead" when a panel jack is mounted
+	// Jack is the reflector.connector name ("sma-flange", "n-bulkhead", …) when a panel jack is mounted
 	// in the reflector; the cable is then a jumper of FinishedMM with a
 	// plug at each end, and the strip lengths are zero.
 	Jack string
@@ -200,7 +200,7 @@ func NewCutList(d *Design) (*CutList, error) {
 	if d.Patterns != nil {
 		cx.FeedHoleMM = d.Patterns.Reflector.Input.Feed.Diameter
 	}
-	if j := s.Reflector.Connector; j == "sma-flange" || j == "sma-bulkhead" {
+	if j := s.Reflector.Connector; FeedKindByConnector(j) != FeedCoax {
 		cx = CoaxCut{Spec: s.Coax.Type, Cable: cable, FinishedMM: s.Coax.LengthMM, CutMM: s.Coax.LengthMM, ThroughMM: thick, CentreMM: drop + FeedStandoffMM, FeedHoleMM: cx.FeedHoleMM, Jack: j}
 	}
 	cl.Coax = cx
@@ -230,7 +230,7 @@ func NewCutList(d *Design) (*CutList, error) {
 	cl.Hardware = hardware(d, cl)
 	if drop < 2*wd {
 		cl.Warnings = append(cl.Warnings, Warning{Code: "short-feed-lead",
-			Message: fmt.Sprintf("the wire centre is only %.1f mm above the dielectric stub: too little to bend a lead down; solder the centre conductor to the side of the wire's start", drop)})
+			Message: fmt.Sprintf("the wire centre is only %.1f mm above the %s: too little to bend a lead down; solder the %s to the side of the wire's start", drop, feedStub(cx).stub, feedStub(cx).pin)})
 	}
 	if dw.AbsorbsWater {
 		cl.Warnings = append(cl.Warnings, Warning{Code: "wood-dowel", Message: dw.MaterialAdvice})
@@ -374,8 +374,12 @@ func hardware(d *Design, cl *CutList) []HardwareItem {
 	s := d.Spec
 	var hw []HardwareItem
 	cable := cl.Coax.Cable
-	hw = append(hw, HardwareItem{Item: "SMA connector to suit " + cable.Name, Count: 1,
-		Note: "or a cable with the connector fitted; strip the connector end to the connector maker's dimensions"})
+	if j, ok := spec.ConnectorByID(s.Reflector.Connector); ok && j.Mount != "pigtail" {
+		hw = append(hw, HardwareItem{Item: j.Name, Count: 1, Note: "mounted in the reflector's feed cut-out; the feed cable plugs into it"})
+	} else {
+		hw = append(hw, HardwareItem{Item: "SMA connector to suit " + cable.Name, Count: 1,
+			Note: "or a cable with the connector fitted; strip the connector end to the connector maker's dimensions"})
+	}
 	if mt := cl.Dowel.Rod.Mount; mt.Screw != "" {
 		want := s.Reflector.ThicknessMM + 2*mt.PilotMM // about two thread diameters into the rod
 		i, _ := slices.BinarySearch(screwLengthsMM, want)
@@ -387,7 +391,13 @@ func hardware(d *Design, cl *CutList) []HardwareItem {
 		hw = append(hw, HardwareItem{Item: fmt.Sprintf("%s × %s mm screw, nylon or stainless, with washer", mt.Screw, num(length)), Count: 1,
 			Note: fmt.Sprintf("from behind the reflector into a %s mm pilot hole in %s; %s", num(mt.PilotMM), into, mt.Basis)})
 	}
-	hw = append(hw, HardwareItem{Item: "cable tie, 2.5 mm wide", Count: 1, Note: "strain relief for the cable behind the reflector"})
+	if cl.Coax.Jack == "" {
+		hw = append(hw, HardwareItem{Item: "cable tie, 2.5 mm wide", Count: 1, Note: "strain relief for the cable behind the reflector"})
+		if m, _ := spec.SheetMaterialByID(s.Reflector.Material); m.Joint == "clamp" {
+			hw = append(hw, HardwareItem{Item: "M3 solder tag (tinned ring terminal), M3 × 8 mm screw, nut and star washer", Count: 1,
+				Note: "grounds the cable's outer conductor to the aluminium plate beside the feed hole"})
+		}
+	}
 	return hw
 }
 
@@ -415,10 +425,12 @@ func (cl *CutList) Rows() []CutRow {
 			Note: rodNote(dw)},
 		{Item: "feed cable", Material: cx.Cable.Name, Size: fmt.Sprintf("Ø%s mm", num(cx.Cable.Outer)), Count: 1, LengthMM: cx.CutMM,
 			Note: coaxNote(cx)},
-		{Item: "heat-shrink sleeve", Material: "2:1 polyolefin", Size: fmt.Sprintf("Ø%s → Ø%s mm", num(sl.SuppliedMM), num(sl.RecoveredMM)), Count: 1, LengthMM: sl.LengthMM,
-			Note: "over the cable where it leaves the reflector's back face; slide it on before soldering"},
 		{Item: "solder", Material: "solder wire", Size: "", Amount: cl.Solder.Amount, Unit: cl.Solder.Unit, Note: cl.Solder.Basis},
 		{Item: "epoxy", Material: "two-part epoxy, slow-setting", Amount: cl.Epoxy.Amount, Unit: cl.Epoxy.Unit, Note: cl.Epoxy.Basis},
+	}
+	if cx.Jack == "" {
+		rows = slices.Insert(rows, 3, CutRow{Item: "heat-shrink sleeve", Material: "2:1 polyolefin", Size: fmt.Sprintf("Ø%s → Ø%s mm", num(sl.SuppliedMM), num(sl.RecoveredMM)), Count: 1, LengthMM: sl.LengthMM,
+			Note: "over the cable where it leaves the reflector's back face; slide it on before soldering"})
 	}
 	for _, h := range cl.Hardware {
 		rows = append(rows, CutRow{Item: "hardware", Material: h.Item, Count: h.Count, Note: h.Note})
@@ -444,4 +456,14 @@ func coaxNote(cx CoaxCut) string {
 		flare = fmt.Sprintf("braid flare %.1f mm", cx.FlareMM)
 	}
 	return fmt.Sprintf("%.1f mm to the reflector's back face + %.1f mm through it; bare centre %.1f mm, bare dielectric %.1f mm, %s; feed hole Ø%.2f mm", cx.FinishedMM, cx.ThroughMM, cx.CentreMM, cx.DielectricMM, flare, cx.FeedHoleMM)
+}
+
+// feedStub names what stands up through the plate at the feed: the
+// coax's dielectric stub and centre conductor, or a jack's insulator and
+// rear contact.
+func feedStub(cx CoaxCut) struct{ stub, pin string } {
+	if cx.Jack != "" {
+		return struct{ stub, pin string }{"connector's insulator", "connector's rear contact"}
+	}
+	return struct{ stub, pin string }{"dielectric stub", "centre conductor"}
 }

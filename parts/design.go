@@ -181,7 +181,7 @@ func (d *Design) warnings(meanCl float64) []Warning {
 		add("conical", "conical coil: the Kraus estimates are evaluated on the mean circumference and per turn and hold only approximately (tapered helices trade some peak gain for bandwidth)")
 	}
 	if d.Coil.Turns < MinAxialTurns {
-		add("turns", "%s turns is fewer than %s: the axial mode is weak and the estimates unreliable", num(d.Coil.Turns), num(MinAxialTurns))
+		add("turns", "%s is fewer than %s: the axial mode is weak and the estimates unreliable", TurnsText(d.Coil.Turns), num(MinAxialTurns))
 	}
 	wl := d.Spec.Wire.DiameterMM / d.Wavelength
 	if wl < MinWireLambda || wl > MaxWireLambda {

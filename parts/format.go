@@ -5,3 +5,12 @@ import "strconv"
 // num formats a number as a spec would write it: the shortest form that
 // reads back exactly.
 func num(v float64) string { return strconv.FormatFloat(v, 'g', -1, 64) }
+
+// TurnsText writes a number of turns with its noun: "1 turn", "5 turns",
+// "1.5 turns".
+func TurnsText(n float64) string {
+	if n == 1 {
+		return "1 turn"
+	}
+	return num(n) + " turns"
+}

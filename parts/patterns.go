@@ -131,7 +131,10 @@ func (p *Patterns) label(m spec.SheetMaterial) string {
 	case m.Halogenated:
 		return fmt.Sprintf("For milling or shearing: %s is a halogenated laminate, not for laser cutting. %s, kerf %.2f mm.", m.Name, capitalise(methodName(p.Method)), p.Kerf)
 	}
-	return fmt.Sprintf("%s: %s, kerf %.2f mm.", capitalise(m.Name), methodName(p.Method), p.Kerf)
+	if m.Reflective && p.Method == "laser" {
+		return fmt.Sprintf("%s: for a fibre laser only (a CO2 laser's beam reflects off it), kerf %.2f mm.", capitalise(m.Name), p.Kerf)
+	}
+	return fmt.Sprintf("%s: labelled for %s, kerf %.2f mm.", capitalise(m.Name), methodName(p.Method), p.Kerf)
 }
 
 // fileLabel adds the cut files' layer convention to a part's label (not

@@ -289,13 +289,9 @@ func feedPlacement(c Coil) (r, a float64) { return c.StartRadius, 0 }
 func specFeedHole(s *spec.Spec) (FeedHole, float64) {
 	rs := &s.Reflector
 	var f FeedHole
-	switch rs.Connector {
-	case "sma-flange":
-		f = FeedHole{Kind: FeedSMAFlange}
-	case "sma-bulkhead":
-		f = FeedHole{Kind: FeedSMABulkhead}
-	default:
-		f = FeedHole{Kind: FeedCoax, Diameter: s.Coax.Cable().FeedHoleMM()}
+	f = FeedHole{Kind: FeedKindByConnector(rs.Connector)}
+	if f.Kind == FeedCoax {
+		f.Diameter = s.Coax.Cable().FeedHoleMM()
 	}
 	if rs.FeedHoleMM != nil {
 		f.Diameter = *rs.FeedHoleMM

@@ -10,6 +10,8 @@ package parts
 import (
 	"fmt"
 	"math"
+	"strings"
+	"unicode"
 
 	"coilwright/cam/geom"
 	"coilwright/parts/spec"
@@ -47,7 +49,28 @@ const (
 	FeedSMAFlange
 	// FeedSMABulkhead mounts a bulkhead jack in a D-shaped hole.
 	FeedSMABulkhead
+	// FeedNFlange mounts a four-hole N flange jack.
+	FeedNFlange
+	// FeedNBulkhead mounts an N bulkhead jack in a D-shaped hole.
+	FeedNBulkhead
 )
+
+// flange reports whether the kind is a four-hole flange jack.
+func (k FeedKind) flange() bool { return k == FeedSMAFlange || k == FeedNFlange }
+
+// bulkhead reports whether the kind is a bulkhead jack in a D-hole.
+func (k FeedKind) bulkhead() bool { return k == FeedSMABulkhead || k == FeedNBulkhead }
+
+// FeedKindByConnector returns the feed kind of a reflector.connector
+// spec name; anything else is a coax pigtail.
+func FeedKindByConnector(id string) FeedKind {
+	for k := FeedCoax; k <= FeedNBulkhead; k++ {
+		if k.String() == id {
+			return k
+		}
+	}
+	return FeedCoax
+}
 
 // String returns the spec name of the feed kind.
 func (k FeedKind) String() string {
@@ -58,6 +81,10 @@ func (k FeedKind) String() string {
 		return "sma-flange"
 	case FeedSMABulkhead:
 		return "sma-bulkhead"
+	case FeedNFlange:
+		return "n-flange"
+	case FeedNBulkhead:
+		return "n-bulkhead"
 	}
 	return fmt.Sprintf("FeedKind(%d)", int(k))
 }
@@ -89,6 +116,16 @@ func DefaultFeedHole(k FeedKind) FeedHole {
 		// Source: connector vendor data: panel D-hole Ø 6.5 mm, 6.0 mm
 		// across the flat.
 		return FeedHole{Kind: k, Diameter: 6.5, Flat: 6.0}
+	case FeedNFlange:
+		// From memory: four-hole N flange jack, 25.4 mm square flange,
+		// holes on 18.26 mm pitch for M3 or 4-40 screws; rear spigot
+		// clearance. Check the connector's drawing.
+		return FeedHole{Kind: k, Diameter: 10.5, ScrewPitch: 18.26, ScrewDiameter: 3.4}
+	case FeedNBulkhead:
+		// From memory: N bulkhead jack on a 5/8-24 UNEF thread, panel
+		// D-hole about Ø 16.0 mm, 15.0 mm across the flat. Check the
+		// connector's drawing.
+		return FeedHole{Kind: k, Diameter: 16.0, Flat: 15.0}
 	default:
 		// The hole for 0.141 in semi-rigid, the spec's default cable.
 		return FeedHole{Kind: FeedCoax, Diameter: spec.CoaxTypes["semi-rigid-141"].FeedHoleMM()}
@@ -115,7 +152,7 @@ func (f FeedHole) withDefaults() FeedHole {
 
 // extent returns the radius about the feed point that the cut-out covers.
 func (f FeedHole) extent() float64 {
-	if f.Kind == FeedSMAFlange {
+	if f.Kind.flange() {
 		return f.ScrewPitch/math.Sqrt2 + f.ScrewDiameter/2
 	}
 	return f.Diameter / 2
@@ -178,7 +215,7 @@ func NewReflector(in ReflectorInput) (*Reflector, error) {
 	if in.Shape == ReflectorSquare && (in.CornerRadius < 0 || in.CornerRadius >= in.Size/2) {
 		return nil, fmt.Errorf("reflector: corner radius %g mm must lie in [0, %g)", in.CornerRadius, in.Size/2)
 	}
-	if f := in.Feed; f.Kind == FeedSMABulkhead && !(f.Flat > 0 && f.Flat < f.Diameter) {
+	if f := in.Feed; f.Kind.bulkhead() && !(f.Flat > 0 && f.Flat < f.Diameter) {
 		return nil, fmt.Errorf("reflector: D-hole size across the flat %g mm must lie between 0 and its diameter %g mm", f.Flat, f.Diameter)
 	}
 	// inscribed is the radius of the largest circle about the centre that
@@ -243,13 +280,13 @@ func (r *Reflector) draw() {
 	}
 	feed := polar(in.FeedRadius, in.FeedAngle)
 	place := geom.Placement{Angle: in.FeedAngle, Offset: feed}
-	switch f := in.Feed; f.Kind {
-	case FeedSMAFlange:
+	switch f := in.Feed; {
+	case f.Kind.flange():
 		d.Add(LayerCut, geom.Circle{Center: feed, Radius: f.Diameter / 2})
 		for _, s := range []geom.Vec2{{X: 1, Y: 1}, {X: -1, Y: 1}, {X: -1, Y: -1}, {X: 1, Y: -1}} {
 			d.Add(LayerCut, geom.Circle{Center: place.Apply(s.Scale(f.ScrewPitch / 2)), Radius: f.ScrewDiameter / 2})
 		}
-	case FeedSMABulkhead:
+	case f.Kind.bulkhead():
 		d.Add(LayerCut, dHole(f.Diameter, f.Flat).Place(place))
 	default:
 		d.Add(LayerCut, geom.Circle{Center: feed, Radius: f.Diameter / 2})
@@ -301,13 +338,19 @@ func (r *Reflector) draw() {
 // source): about 0.6–0.75 for sans-serif capitals and digits.
 const textAdvance = 0.75
 
-// joinLabel joins the kit name and hand tag with a space, skipping empties.
+// joinLabel joins the kit name and hand tag with a space, skipping empties
+// and a tag the name already holds as a word.
 func joinLabel(a, b string) string {
 	switch {
 	case a == "":
 		return b
 	case b == "":
 		return a
+	}
+	for _, w := range strings.FieldsFunc(a, func(r rune) bool { return !unicode.IsLetter(r) && !unicode.IsDigit(r) }) {
+		if strings.EqualFold(w, b) {
+			return a
+		}
 	}
 	return a + " " + b
 }

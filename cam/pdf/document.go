@@ -78,6 +78,20 @@ type Figure struct {
 	Dimensions []geom.Dimension
 	Height     float64
 	Caption    string
+	// Labels are short texts placed at points of the drawing.
+	Labels []FigureLabel
+}
+
+// FigureLabel is a text at a drawing point: At is the left end of its
+// baseline, the centre with Center set, or the right end with Right set.
+// Size is in points (zero: 8); Bold sets it in bold.
+type FigureLabel struct {
+	At     geom.Vec2
+	Text   string
+	Size   float64
+	Bold   bool
+	Center bool
+	Right  bool
 }
 
 // FigurePath is one outline of a Figure: a polyline, closed or open,
@@ -91,6 +105,8 @@ type FigurePath struct {
 	Gray     float64
 	Fill     bool
 	FillGray float64
+	// Dash is the dash and gap length in page mm; zero draws solid.
+	Dash float64
 }
 
 // PageBreak starts a new page.
@@ -404,6 +420,9 @@ func (l *layout) figure(f Figure) error {
 		a, b := d.Line()
 		box = box.Extend(a).Extend(b)
 	}
+	for _, lb := range f.Labels {
+		box = box.Extend(lb.At)
+	}
 	if box.IsEmpty() {
 		return fmt.Errorf("figure is empty")
 	}
@@ -444,10 +463,29 @@ func (l *layout) figure(f Figure) error {
 		l.ctx.SetStrokeWidth(math.Max(p.StrokeMM*scale, hairline))
 		l.ctx.SetStrokeCapper(canvas.RoundCap)
 		l.ctx.SetStrokeJoiner(canvas.RoundJoin)
+		if p.Dash > 0 {
+			l.ctx.SetDashes(0, p.Dash, p.Dash)
+		}
 		l.ctx.DrawPath(0, 0, path)
+		l.ctx.SetDashes(0)
 	}
 	for _, d := range f.Dimensions {
 		l.dimension(d, at)
+	}
+	for _, lb := range f.Labels {
+		pt := lb.Size
+		if pt == 0 {
+			pt = 8
+		}
+		align := canvas.Left
+		switch {
+		case lb.Center:
+			align = canvas.Center
+		case lb.Right:
+			align = canvas.Right
+		}
+		x, y := at(lb.At)
+		l.ctx.DrawText(x, y, canvas.NewTextLine(l.face(pt, lb.Bold), lb.Text, align))
 	}
 	l.ctx.DrawText(docMargin, l.y-h+height(capt)+1, capt)
 	l.y -= h + blockGap

@@ -10,6 +10,7 @@ package pdf
 import (
 	"fmt"
 	"math"
+	"strings"
 
 	"github.com/tdewolff/canvas"
 
@@ -80,8 +81,12 @@ func TemplatePages(parts []TemplatePart, opt TemplateOptions) ([]Page, error) {
 		if b.IsEmpty() {
 			return nil, fmt.Errorf("template part %q is empty", part.Title)
 		}
-		// Header lines: heading, title, notes, warnings; 5 mm each.
-		lines := 2 + len(part.Notes) + len(opt.Warnings)
+		// Header lines: heading, title, notes, warnings, each wrapped to
+		// the page's printable width; 5 mm each.
+		textW := opt.Page.Width - 2*templateMargin
+		notes := wrapLines(fam.Face(noteSizePt, canvas.Black), part.Notes, textW)
+		warns := wrapLines(fam.Face(noteSizePt, canvas.Red), opt.Warnings, textW)
+		lines := 2 + len(notes) + len(warns)
 		area := geom.Box2{
 			Min: geom.Vec2{X: templateMargin, Y: templateMargin + footerHeight},
 			Max: geom.Vec2{X: opt.Page.Width - templateMargin, Y: opt.Page.Height - templateMargin - 5*float64(lines) - 4},
@@ -133,11 +138,11 @@ func TemplatePages(parts []TemplatePart, opt TemplateOptions) ([]Page, error) {
 				}
 				text(opt.Heading, 12, canvas.Black)
 				text(title, 10, canvas.Black)
-				for _, n := range part.Notes {
-					text(n, 8.5, canvas.Black)
+				for _, n := range notes {
+					text(n, noteSizePt, canvas.Black)
 				}
-				for _, w := range opt.Warnings {
-					text(w, 8.5, canvas.Red)
+				for _, w := range warns {
+					text(w, noteSizePt, canvas.Red)
 				}
 				drawScaleBar(ctx, fam)
 				pages = append(pages, Page{page})
@@ -145,6 +150,31 @@ func TemplatePages(parts []TemplatePart, opt TemplateOptions) ([]Page, error) {
 		}
 	}
 	return pages, nil
+}
+
+// noteSizePt is the size of a template page's notes and warnings, points.
+const noteSizePt = 8.5
+
+// wrapLines breaks each of ss into lines no wider than width mm set in
+// face, at spaces; a single word wider than width stays on its own line.
+func wrapLines(face *canvas.FontFace, ss []string, width float64) []string {
+	var out []string
+	for _, s := range ss {
+		line := ""
+		for _, w := range strings.Fields(s) {
+			try := w
+			if line != "" {
+				try = line + " " + w
+			}
+			if line != "" && face.TextWidth(try) > width {
+				out = append(out, line)
+				try = w
+			}
+			line = try
+		}
+		out = append(out, line)
+	}
+	return out
 }
 
 // tileCount returns how many windows of length room, overlapping by

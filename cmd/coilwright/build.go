@@ -114,7 +114,7 @@ func runBuild(w io.Writer, path string, o buildOptions) error {
 		enc.SetIndent("", "  ")
 		return enc.Encode(m)
 	}
-	fmt.Fprintf(w, "%s: wrote %d files to %s\n", l.Name, len(files)+1, dir)
+	fmt.Fprintf(w, "%s: wrote %d files and manifest.json to %s\n", l.Name, len(files), dir)
 	for _, f := range files {
 		fmt.Fprintf(w, "  %-24s %9d bytes\n", f.Name, f.Size)
 	}

@@ -14,7 +14,7 @@ type ReflectorSpec struct {
 	ThicknessMM    float64  `toml:"thickness_mm"`     // sheet thickness, default 1.6 mm
 	Material       string   `toml:"material"`         // sheet material id, default "fr4"
 	CornerRadiusMM float64  `toml:"corner_radius_mm"` // square corners, default 0
-	Connector      string   `toml:"connector"`        // "coax", "sma-flange" or "sma-bulkhead"
+	Connector      string   `toml:"connector"`        // one of Connectors: "coax", "sma-flange", "n-bulkhead", …
 	FeedHoleMM     *float64 `toml:"feed_hole_mm"`     // feed hole diameter, default from the coax or connector
 	MountingHoles  int      `toml:"mounting_holes"`   // count, default 0
 	MountingHoleMM float64  `toml:"mounting_hole_mm"` // diameter, default 3.2 mm
@@ -35,6 +35,13 @@ type SheetMaterial struct {
 	// Halogenated marks laminates whose resin carries halogen flame
 	// retardants: cutting them by laser releases toxic fumes.
 	Halogenated bool
+	// Reflective marks metals that reflect a CO₂ laser's 10.6 µm beam
+	// and need a fibre laser to cut.
+	Reflective bool
+	// Joint is how the feed's outer conductor is grounded to a plate of
+	// this material: "clad" (solder on the copper face), "solder" or
+	// "clamp" (cannot be soft-soldered with ordinary flux).
+	Joint string
 	// Conductivity of the conducting face at 20 °C, S/m, for the field
 	// solver's plate loss; ConductivitySource cites it.
 	Conductivity       float64
@@ -50,17 +57,23 @@ type SheetMaterial struct {
 //
 // Conductivities as % IACS × 58.0 MS/m (Source: IEC 60028 for the scale).
 var SheetMaterials = []SheetMaterial{
-	{ID: "fr4", Name: "FR-4 copper-clad glass-epoxy laminate", Halogenated: true,
+	{ID: "fr4", Name: "FR-4 copper-clad glass-epoxy laminate", Halogenated: true, Joint: "clad",
 		Conductivity: 58.0e6, ConductivitySource: "copper cladding, 100 % IACS: IEC 60028"},
-	{ID: "aluminium", Name: "aluminium sheet",
+	{ID: "aluminium", Name: "aluminium sheet", Reflective: true, Joint: "clamp",
 		Conductivity: 0.35 * 58.0e6, ConductivitySource: "alloy not specified: 5052 taken, ≈ 35 % IACS, the lower of common sheet alloys (from memory)"},
-	{ID: "brass", Name: "brass sheet",
+	{ID: "brass", Name: "brass sheet", Reflective: true, Joint: "solder",
 		Conductivity: 0.28 * 58.0e6, ConductivitySource: "C26000, ≈ 28 % IACS: Copper Development Association data, from memory"},
-	{ID: "copper", Name: "copper sheet",
+	{ID: "copper", Name: "copper sheet", Reflective: true, Joint: "solder",
 		Conductivity: 58.0e6, ConductivitySource: "annealed copper, 100 % IACS: IEC 60028"},
-	{ID: "tinplate", Name: "tinplate (tinned steel)",
+	{ID: "tinplate", Name: "tinplate (tinned steel)", Joint: "solder",
 		Conductivity: 0.10 * 58.0e6, ConductivitySource: "low-carbon steel, ≈ 10 % IACS, from memory; the thin tin coat is neglected", Magnetic: true},
 }
+
+// Reflective and Joint above: common practice (no published source).
+// Copper, brass and aluminium reflect most of a CO₂ laser's 10.6 µm beam,
+// so hobby CO₂ cutters do not cut them and a fibre laser is used;
+// aluminium's oxide film stops ordinary rosin or zinc-chloride flux from
+// wetting it, so it is clamped or screwed rather than soft-soldered.
 
 // SheetMaterialByID returns the material with the given id.
 func SheetMaterialByID(id string) (SheetMaterial, bool) {
@@ -108,7 +121,7 @@ func (r *ReflectorSpec) validate(c *checker, s *Spec) {
 	c.within("reflector.thickness_mm", r.ThicknessMM, 0.05, 10, "mm")
 
 	c.oneOf("reflector.material", &r.Material, "fr4", sheetMaterialIDs()...)
-	c.oneOf("reflector.connector", &r.Connector, "coax", "coax", "sma-flange", "sma-bulkhead")
+	c.oneOf("reflector.connector", &r.Connector, "coax", connectorIDs()...)
 	size := r.SizeMM(s.Wavelength())
 	if r.CornerRadiusMM != 0 {
 		if r.Shape != "square" {

@@ -31,7 +31,7 @@ func (st *StockSpec) validate(c *checker, _ *Spec) {
 	c.orDefault("stock.dowel_kerf_mm", &st.DowelKerfMM, DefaultDowelKerfMM)
 	c.orDefault("stock.end_trim_mm", &st.EndTrimMM, DefaultEndTrimMM)
 	c.orDefault("stock.solder_wire_mm", &st.SolderWireMM, DefaultSolderMM)
-	c.within("stock.wire_rod_mm", st.WireRodMM, 50, 10000, "mm")
+	c.within("stock.wire_rod_mm", st.WireRodMM, 50, 100000, "mm") // up to a 100 m reel
 	c.within("stock.dowel_rod_mm", st.DowelRodMM, 50, 10000, "mm")
 	c.within("stock.wire_kerf_mm", st.WireKerfMM, 0, 10, "mm")
 	c.within("stock.dowel_kerf_mm", st.DowelKerfMM, 0, 10, "mm")
