@@ -8,6 +8,7 @@ import (
 	"math/rand/v2"
 	"os"
 	"path/filepath"
+	"regexp"
 	"strings"
 	"testing"
 
@@ -34,13 +35,15 @@ func loadBytes(b []byte) (kit.Source, error) {
 }
 
 func TestCheckFindsTheStockRefusal(t *testing.T) {
-	// A 780.5 MHz cylindrical starter needs a wire blank longer than the
-	// default 1000 mm rod: fine for one kit, refused for a batch.
+	// A 780.5 MHz cylindrical starter needs a wire blank longer than a
+	// 1000 mm rod; new writes the longer stock it needs, and a spec cut
+	// back to 1000 mm rods must be refused by check, not by build.
 	var buf bytes.Buffer
 	if err := runNew(&buf, io.Discard, newOptions{frequencyMHz: 780.5, shape: "cylindrical"}, true); err != nil {
 		t.Fatal(err)
 	}
 	src := strings.Replace(buf.String(), "quantity = 1", "quantity = 2", 1)
+	src = regexp.MustCompile(`wire_rod_mm = \d+`).ReplaceAllString(src, "wire_rod_mm = 1000")
 	l, err := loadBytes([]byte(src))
 	if err != nil {
 		t.Fatal(err)
@@ -51,7 +54,7 @@ func TestCheckFindsTheStockRefusal(t *testing.T) {
 	p := filepath.Join(t.TempDir(), "uhf.toml")
 	os.WriteFile(p, []byte(src), 0o644)
 	code, _, errs := runCLI(t, "check", p)
-	if code != exitBadUse || !strings.Contains(errs, "stock.wire_rod_mm = 1000: is too short") || !strings.Contains(errs, "fix: set wire_rod_mm = ") {
+	if code != exitBadUse || !strings.Contains(errs, "stock.wire_rod_mm = 1000 (line ") || !strings.Contains(errs, "is too short") || !strings.Contains(errs, "fix: set wire_rod_mm = ") {
 		t.Errorf("check: exit %d, stderr %q; want the stock.wire_rod_mm refusal", code, errs)
 	}
 }

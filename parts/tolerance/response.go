@@ -43,6 +43,12 @@ type Band struct {
 // that is under 2 MHz a step.
 const fineSteps = 800
 
+// vswrCeiling is the largest VSWR the analysis records: beyond it a kit
+// is hopelessly mismatched and the exact figure means nothing, and an
+// unbounded one could not be written to design.json or tolerance.csv.
+// Common practice (no published source): analysers read out to about 100.
+const vswrCeiling = 99.0
+
 // figures reads a kit's figures from its response: the impedance is
 // interpolated by natural cubic splines (real and imaginary parts) across
 // the swept range, the VSWR read on a fine grid; gain and axial ratio are
@@ -69,10 +75,10 @@ func figures(r Response, b Band) (parts.ToleranceFigures, error) {
 	vswr := func(f float64) float64 {
 		z := complex(sr.Predict(f), si.Predict(f))
 		g := cmplx.Abs((z - complex(b.RefOhm, 0)) / (z + complex(b.RefOhm, 0)))
-		if g >= 1 {
-			return math.Inf(1)
+		if g >= 1 { // the spline's resistance dipped below zero between samples
+			return vswrCeiling
 		}
-		return (1 + g) / (1 - g)
+		return math.Min((1+g)/(1-g), vswrCeiling)
 	}
 	lo, hi := r.FrequencyMHz[0], r.FrequencyMHz[n-1]
 	out := parts.ToleranceFigures{MinVSWR: math.Inf(1)}
