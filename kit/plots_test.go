@@ -233,6 +233,9 @@ func TestPlotsWithoutFieldSolution(t *testing.T) {
 			t.Errorf("%s: caption %q does not say textbook", p.Name, p.Caption)
 		}
 	}
+	if got := strings.Join(k.reportSectionTitles(), "|"); strings.Contains(got, fieldSectionTitle) {
+		t.Errorf("report sections %q include the field solution, which did not run", got)
+	}
 	if e := k.electrical(); len(e.FreqMHz) != sweepPoints || !e.Estimate {
 		t.Errorf("textbook curves: %d points, estimate %v", len(e.FreqMHz), e.Estimate)
 	}
