@@ -240,10 +240,29 @@ func TestPlotsWithoutFieldSolution(t *testing.T) {
 		t.Errorf("textbook curves: %d points, estimate %v", len(e.FreqMHz), e.Estimate)
 	}
 
-	// With the solver on, the gain curves and the cuts are the solution's.
+	if c := bandFigure(k.electrical()).Caption; !strings.Contains(c, "(textbook estimate)") {
+		t.Errorf("band figure caption %q does not say textbook estimate", c)
+	}
+
+	// With the solver on, the gain curves, the cuts and the build sheet's
+	// band figure are the solution's.
 	on := demoKit(t, "demo-5g8-cone.toml", Options{Version: "test"})
 	f := on.Design.Field
 	e := on.electrical()
+	fig := bandFigure(e)
+	if !strings.Contains(fig.Caption, "(field solution, plate reflector model)") {
+		t.Errorf("band figure caption %q does not name the field solution", fig.Caption)
+	}
+	if curve := fig.Paths[len(fig.Paths)-1].Points; len(curve) != len(f.Points) {
+		t.Errorf("band figure curve has %d points, the sweep %d", len(curve), len(f.Points))
+	} else {
+		for i, p := range f.Points {
+			// The figure's own mapping: VSWR 1 to bandFigVSWRMax over its height.
+			if want := (math.Min(p.VSWR, bandFigVSWRMax) - 1) / (bandFigVSWRMax - 1) * bandFigH; math.Abs(curve[i].Y-want) > 1e-9 {
+				t.Errorf("band figure point %d at %.4f, want %.4f", i, curve[i].Y, want)
+			}
+		}
+	}
 	if e.Estimate || len(e.RHCPDBic) != len(f.Points) {
 		t.Fatalf("field curves: estimate %v, %d points", e.Estimate, len(e.RHCPDBic))
 	}
