@@ -48,9 +48,14 @@ type patternCut struct {
 	LHCPDBic []float64
 }
 
-// targetVSWR is the match drawn as the target: the build sheet's return
-// loss target across the band, as a VSWR.
-func targetVSWR() float64 { return parts.VSWR(math.Pow(10, -parts.ReturnLossTargetDB/20)) }
+// targetVSWR is the match drawn as the target on every electrical plot,
+// the build sheet's band figure and the report's matched band: the build
+// sheet's return loss target across the band, as a VSWR. This is the one
+// place that picks the target for d (a spec key for it would be read
+// here).
+func targetVSWR(d *parts.Design) float64 {
+	return parts.VSWR(math.Pow(10, -parts.ReturnLossTargetDB/20))
+}
 
 // Sweep sampling of the plotted range and the pattern cuts.
 const (
@@ -92,7 +97,7 @@ func (e *electrical) centre(f0 float64) float64 {
 // range.
 func textbookElectrical(d *parts.Design) *electrical {
 	lo, hi, b := plotRange(d)
-	e := &electrical{Estimate: true, LowMHz: lo, HighMHz: hi, Band: b, TargetVSWR: targetVSWR(),
+	e := &electrical{Estimate: true, LowMHz: lo, HighMHz: hi, Band: b, TargetVSWR: targetVSWR(d),
 		Source: "Textbook estimate (Kraus, Pozar), not a field solution", Short: "Textbook estimate"}
 	e.FreqMHz = make([]float64, sweepPoints)
 	for i := range e.FreqMHz {

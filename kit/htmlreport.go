@@ -13,7 +13,8 @@ import (
 // reportPage is the name of the self-contained report page.
 const reportPage = "report.html"
 
-// reportSections are the report page's section titles, in order.
+// reportSections are the report page's fixed section titles, in order;
+// reportSectionTitles adds the analysis sections that ran.
 var reportSections = [...]string{
 	"Summary", "Plots", "Drawings", "Per-turn table", "Springback", "Parts",
 	"Cut list and batch plan", "Cautions", "Warnings", "Provenance",
@@ -63,10 +64,10 @@ func (k *Kit) reportDocument(rec *recorder) (html.Document, error) {
 	} else {
 		sum = append(sum, html.Definition{Term: "Band", Detail: fmt.Sprintf("designed at %s MHz; the spec sets no band", num(r.FrequencyMHz))})
 	}
-	sum = append(sum, html.Definition{Term: "Quoted gain", Detail: fmt.Sprintf("%.1f dBic (%s)", r.Estimates.GainDBic, r.Estimates.GainFormula)})
+	sum = append(sum, html.Definition{Term: "Quoted gain", Detail: fmt.Sprintf("%.1f dBic (%s)", r.QuotedGainDBic, r.QuotedGainSource)})
 	matched := fmt.Sprintf("none: the VSWR at %s MHz is above the target %.2f", num(r.FrequencyMHz), e.TargetVSWR)
 	if lo, hi, ok := e.matchedBand(r.FrequencyMHz); ok {
-		matched = fmt.Sprintf("%.0f–%.0f MHz at VSWR %.2f or better (return loss %.0f dB)", lo, hi, e.TargetVSWR, parts.ReturnLossTargetDB)
+		matched = fmt.Sprintf("%.0f–%.0f MHz at VSWR %.2f or better (return loss %.0f dB)", lo, hi, e.TargetVSWR, parts.ReturnLossDB((e.TargetVSWR-1)/(e.TargetVSWR+1)))
 		if lo <= e.FreqMHz[0] || hi >= e.FreqMHz[len(e.FreqMHz)-1] {
 			matched += "; the match holds to the edge of the plotted range"
 		}
@@ -75,6 +76,9 @@ func (k *Kit) reportDocument(rec *recorder) (html.Document, error) {
 		html.Definition{Term: "Coil", Detail: fmt.Sprintf("%s, %.2f turns, Ø%.2f mm base, Ø%.2f mm top, %.1f mm long, %.0f mm of wire", r.Shape, r.TurnCount, r.BaseDiameterMM, r.TopDiameterMM, r.AxialLengthMM, r.WireLengthMM)})
 	if r.Quantity > 1 {
 		sum = append(sum, html.Definition{Term: "Batch", Detail: fmt.Sprintf("%d kits", r.Quantity)})
+	}
+	if t := k.tolerance; t != nil {
+		sum = append(sum, html.Definition{Term: "Batch yield", Detail: fmt.Sprintf("%.0f %% of %d simulated kits meet VSWR %g across the band (see Tolerance)", 100*t.Share, t.Samples, t.VSWRTarget)})
 	}
 
 	// Plots.
@@ -200,13 +204,25 @@ func (k *Kit) reportDocument(rec *recorder) (html.Document, error) {
 		files = append(files, []string{f.Name, strconv.FormatInt(f.Size, 10), f.SHA256})
 	}
 
+	sections := []html.Section{
+		{ID: "summary", Title: reportSections[0], Blocks: []html.Block{html.Definitions{Items: sum}}},
+		{ID: "plots", Title: reportSections[1], Blocks: plotBlocks},
+	}
+	if d.Field != nil {
+		sections = append(sections, fieldSection(d.Field))
+	}
+	if k.tolerance != nil {
+		ts, err := toleranceSection(k.tolerance)
+		if err != nil {
+			return html.Document{}, err
+		}
+		sections = append(sections, ts)
+	}
 	return html.Document{
 		Title:    r.Kit + ": build report",
 		Subtitle: sheet.Summary,
 		Footer:   "coilwright " + version + " — spec SHA-256 " + k.Source.SHA256(),
-		Sections: []html.Section{
-			{ID: "summary", Title: reportSections[0], Blocks: []html.Block{html.Definitions{Items: sum}}},
-			{ID: "plots", Title: reportSections[1], Blocks: plotBlocks},
+		Sections: append(sections, []html.Section{
 			{ID: "drawings", Title: reportSections[2], Blocks: drawings},
 			{ID: "turns", Title: reportSections[3], Blocks: []html.Block{html.Table{
 				Caption: "One row per started turn from the feed end: the relaxed coil aimed for",
@@ -229,6 +245,6 @@ func (k *Kit) reportDocument(rec *recorder) (html.Document, error) {
 				html.Paragraph{Text: "The files written before this page, as they were written. manifest.json is written after every file, this page included, and lists them all with the same sizes and hashes."},
 				html.Table{Caption: "Files written before this page", Header: []string{"File", "Size (bytes)", "SHA-256"}, Rows: files, RowHeaders: true, Numeric: []bool{false, true, false}},
 			}},
-		},
+		}...),
 	}, nil
 }

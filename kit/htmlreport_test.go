@@ -101,6 +101,24 @@ func TestReportPageStructure(t *testing.T) {
 	if !bytes.Contains(page, []byte(k.Source.SHA256())) {
 		t.Error("provenance lacks the spec's SHA-256")
 	}
+	// The field solution's sweep table has a row per sweep point, its
+	// VSWR as in sweep.csv (to two places), and the tolerance section
+	// ranks every spread in the analysis's own words.
+	for _, p := range k.Design.Field.Points {
+		row := ">" + num(p.FrequencyMHz) + "</th>"
+		i := bytes.Index(page, []byte(row))
+		if i < 0 || !bytes.Contains(page[i:min(len(page), i+400)], []byte(">"+strconv.FormatFloat(p.VSWR, 'f', 2, 64)+"<")) {
+			t.Errorf("sweep table lacks the row at %v MHz with VSWR %.2f", p.FrequencyMHz, p.VSWR)
+		}
+	}
+	for _, s := range k.Tolerance().Sensitivities {
+		if !bytes.Contains(page, []byte(htmlEscape(s.Words))) {
+			t.Errorf("tolerance section lacks %q", s.Words)
+		}
+	}
+	if n := bytes.Count(page, []byte("Batch spread: ")); n < len(toleranceHistograms(k.Tolerance())) {
+		t.Errorf("%d histogram titles in the page, want at least %d", n, len(toleranceHistograms(k.Tolerance())))
+	}
 }
 
 // htmlEscape escapes text as the page writer does.
@@ -127,7 +145,8 @@ func htmlEscape(s string) string {
 
 func TestReportPageInBrowser(t *testing.T) {
 	chromium := checktool.Chromium(t)
-	_, _, path := builtReport(t, "demo-5g8-cone.toml", "")
+	k, _, path := builtReport(t, "demo-5g8-cone.toml", "")
+	titles := k.reportSectionTitles()
 
 	t.Run("dom", func(t *testing.T) {
 		dom := checktool.RunChromium(t, chromium, path, "--dump-dom")
@@ -150,14 +169,21 @@ func TestReportPageInBrowser(t *testing.T) {
 			}
 		}
 		walk(doc)
-		want := "Contents|" + strings.Join(reportSections[:], "|")
+		want := "Contents|" + strings.Join(titles, "|")
+		if !strings.Contains(want, "|Plots|Field solution|Tolerance|Drawings|") {
+			t.Fatalf("the demo's sections %q lack the field solution or the tolerance analysis", want)
+		}
 		if got := strings.Join(heads, "|"); got != want {
 			t.Errorf("browser sees sections %q\nwant %q", got, want)
 		}
-		// Figures: match, gain, two pattern cuts, side, plan, former
-		// picture, two flat parts, two nested sheets. Tables: per-turn,
-		// springback, cut list, two rod plans, shopping list, provenance.
-		for el, n := range map[string]int{"section": len(reportSections), "figure": 11, "table": 7, "img": 1} {
+		// Figures: match, gain, two pattern cuts, the tolerance
+		// histograms, side, plan, former picture, two flat parts, two
+		// nested sheets. Tables: the field solution's band figures and
+		// sweep; the tolerance distributions, sensitivities and inspection
+		// band; per-turn, springback, cut list, two rod plans, shopping
+		// list, provenance.
+		hist := len(toleranceHistograms(k.Tolerance()))
+		for el, n := range map[string]int{"section": len(titles), "figure": 11 + hist, "table": 2 + 3 + 7, "img": 1} {
 			if count[el] != n {
 				t.Errorf("browser sees %d <%s>, want %d", count[el], el, n)
 			}
@@ -211,7 +237,7 @@ func TestReportPagePrints(t *testing.T) {
 		{"demo-2g4-cylinder.toml", "\n[cutting]\npaper = \"Letter\"\n", "Letter", 612, 792},
 	} {
 		t.Run(tc.paper, func(t *testing.T) {
-			_, _, path := builtReport(t, tc.demo, tc.extra)
+			k, _, path := builtReport(t, tc.demo, tc.extra)
 			pdf := filepath.Join(t.TempDir(), "report.pdf")
 			checktool.RunChromium(t, chromium, path, "--print-to-pdf="+pdf, "--no-pdf-header-footer")
 			info, err := exec.Command(pdfinfo, pdf).CombinedOutput()
@@ -241,7 +267,7 @@ func TestReportPagePrints(t *testing.T) {
 				t.Fatalf("pdftotext: %v\n%s", err, text)
 			}
 			rest := string(text)
-			for _, hd := range reportSections {
+			for _, hd := range k.reportSectionTitles() {
 				loc := regexp.MustCompile(`(?m)^[ \f]*` + regexp.QuoteMeta(hd) + `[ ]*$`).FindStringIndex(rest)
 				if loc == nil {
 					t.Errorf("printed text lacks heading %q after the ones before it", hd)

@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"io"
 	"math"
+	"strings"
 
 	"coilwright/cam/plot"
 	"coilwright/parts"
@@ -19,9 +20,15 @@ type plotFile struct {
 	SVG     []byte
 }
 
-// electrical returns the curves the electrical plots draw: the textbook
-// estimates of the design.
-func (k *Kit) electrical() *electrical { return textbookElectrical(k.Design) }
+// electrical returns the curves the electrical plots, the build sheet's
+// band figure and the report's matched band draw: the field solution's
+// sweep when it ran, else the textbook estimates of the design.
+func (k *Kit) electrical() *electrical {
+	if k.Design.Field != nil {
+		return fieldElectrical(k.Design)
+	}
+	return textbookElectrical(k.Design)
+}
 
 // writePlots writes every plot SVG.
 func (k *Kit) writePlots(out Sink) error {
@@ -52,19 +59,19 @@ func (k *Kit) plots() ([]plotFile, error) {
 		return nil
 	}
 	mc := matchChart(k.Design, e)
-	if err := add("plot-match.svg", mc.Title, "VSWR and return loss against frequency, "+bandWords(e)+", the matching target drawn across.",
+	if err := add("plot-match.svg", mc.Title, "VSWR and return loss against frequency ("+e.Short+"), "+bandWords(e)+", the matching target drawn across.",
 		func(w io.Writer) error { return plot.WriteFrequencyChart(w, mc, plot.ChartOptions{}) }); err != nil {
 		return nil, err
 	}
 	gc := gainChart(e)
-	if err := add("plot-gain.svg", gc.Title, "Gain of the right- and left-hand circular components (dBic) and the axial ratio (dB) against frequency, "+bandWords(e)+".",
+	if err := add("plot-gain.svg", gc.Title, "Gain of the right- and left-hand circular components (dBic) and the axial ratio (dB) on the axis against frequency ("+e.Short+"), "+bandWords(e)+".",
 		func(w io.Writer) error { return plot.WriteFrequencyChart(w, gc, plot.ChartOptions{}) }); err != nil {
 		return nil, err
 	}
 	for i, c := range e.Cuts {
 		pp := polarCut(k.Design, e, c)
 		if err := add(fmt.Sprintf("plot-pattern-%d.svg", i+1), pp.Title,
-			fmt.Sprintf("Radiation pattern at %s MHz in the %s: both circular components in dBic, rings every 10 dB.", num(e.CentreMHz), c.Name),
+			fmt.Sprintf("Radiation pattern at %s MHz in the %s (%s): both circular components in dBic, rings every 10 dB.", num(e.CentreMHz), c.Name, strings.ToLower(e.Short[:1])+e.Short[1:]),
 			func(w io.Writer) error { return plot.WritePolarPattern(w, pp, plot.PolarOptions{}) }); err != nil {
 			return nil, err
 		}

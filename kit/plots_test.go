@@ -9,6 +9,7 @@ import (
 	"testing"
 
 	"coilwright/parts"
+	"coilwright/parts/spec"
 	"coilwright/templates"
 )
 
@@ -156,10 +157,129 @@ func TestMatchPlotCoordinates(t *testing.T) {
 					t.Errorf("%s %q, want %q", cls, got, want)
 				}
 			}
-			if got := doc.texts("note"); len(got) != 1 || !strings.HasPrefix(got[0], "Textbook estimate") {
-				t.Errorf("note %q does not say the curves are textbook estimates", got)
+			// Both demos run the field solution: the curves are its sweep,
+			// point for point, and the note names the model.
+			f := k.Design.Field
+			if f == nil {
+				t.Fatal("the demo ran no field solution")
+			}
+			if got := doc.texts("note"); len(got) != 1 || got[0] != "Field solution (method of moments, plate reflector model, "+strconv.Itoa(f.Unknowns)+" unknowns)" {
+				t.Errorf("note %q does not name the field solution and its model", got)
+			}
+			var vswr svgNode
+			for _, s := range doc.all("series") {
+				if s.attr("data-name") == "VSWR" {
+					vswr = s
+				}
+			}
+			pts := pathPoints(t, vswr.attr("d"))
+			if len(pts) != len(f.Points) {
+				t.Fatalf("VSWR curve has %d points, the sweep %d", len(pts), len(f.Points))
+			}
+			for i, p := range f.Points {
+				near("VSWR curve x", pts[i][0], xAt(p.FrequencyMHz))
+				near("VSWR curve y", pts[i][1], yAt(p.VSWR))
 			}
 		})
+	}
+}
+
+// pathPoints reads the vertices of an SVG path written as M/L commands.
+func pathPoints(t *testing.T, d string) [][2]float64 {
+	t.Helper()
+	f := strings.FieldsFunc(d, func(r rune) bool { return r == 'M' || r == 'L' || r == ' ' })
+	if len(f)%2 != 0 {
+		t.Fatalf("path %q has an odd number of coordinates", d)
+	}
+	var out [][2]float64
+	for i := 0; i < len(f); i += 2 {
+		x, err1 := strconv.ParseFloat(f[i], 64)
+		y, err2 := strconv.ParseFloat(f[i+1], 64)
+		if err1 != nil || err2 != nil {
+			t.Fatalf("path %q: %v %v", d, err1, err2)
+		}
+		out = append(out, [2]float64{x, y})
+	}
+	return out
+}
+
+// TestPlotsWithoutFieldSolution holds that a spec turning the solver off
+// draws the textbook estimates, labelled as such, and that the gain plot
+// and the pattern cuts follow the field solution when it ran.
+func TestPlotsWithoutFieldSolution(t *testing.T) {
+	b, _ := templates.Demo("demo-5g8-cone.toml")
+	b = append(append([]byte{}, b...), "\n[solver]\nenabled = false\n"...)
+	s, err := spec.ParseSpec(b)
+	if err != nil {
+		t.Fatal(err)
+	}
+	k, err := New(Source{Name: "off", Bytes: b, Spec: s}, Options{Version: "test"})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if k.Design.Field != nil {
+		t.Fatal("the solver ran though the spec turns it off")
+	}
+	ps, err := k.plots()
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, p := range ps[:4] { // match, gain, two pattern cuts
+		doc := parsePlot(t, p.SVG)
+		if got := doc.texts("note"); len(got) != 1 || !strings.HasPrefix(got[0], "Textbook estimate") {
+			t.Errorf("%s: note %q does not say the curves are textbook estimates", p.Name, got)
+		}
+		if !strings.Contains(strings.ToLower(p.Caption), "textbook estimate") {
+			t.Errorf("%s: caption %q does not say textbook", p.Name, p.Caption)
+		}
+	}
+	if got := strings.Join(k.reportSectionTitles(), "|"); strings.Contains(got, fieldSectionTitle) {
+		t.Errorf("report sections %q include the field solution, which did not run", got)
+	}
+	if e := k.electrical(); len(e.FreqMHz) != sweepPoints || !e.Estimate {
+		t.Errorf("textbook curves: %d points, estimate %v", len(e.FreqMHz), e.Estimate)
+	}
+
+	if c := bandFigure(k.electrical()).Caption; !strings.Contains(c, "(textbook estimate)") {
+		t.Errorf("band figure caption %q does not say textbook estimate", c)
+	}
+
+	// With the solver on, the gain curves, the cuts and the build sheet's
+	// band figure are the solution's.
+	on := demoKit(t, "demo-5g8-cone.toml", Options{Version: "test"})
+	f := on.Design.Field
+	e := on.electrical()
+	fig := bandFigure(e)
+	if !strings.Contains(fig.Caption, "(field solution, plate reflector model)") {
+		t.Errorf("band figure caption %q does not name the field solution", fig.Caption)
+	}
+	if curve := fig.Paths[len(fig.Paths)-1].Points; len(curve) != len(f.Points) {
+		t.Errorf("band figure curve has %d points, the sweep %d", len(curve), len(f.Points))
+	} else {
+		for i, p := range f.Points {
+			// The figure's own mapping: VSWR 1 to bandFigVSWRMax over its height.
+			if want := (math.Min(p.VSWR, bandFigVSWRMax) - 1) / (bandFigVSWRMax - 1) * bandFigH; math.Abs(curve[i].Y-want) > 1e-9 {
+				t.Errorf("band figure point %d at %.4f, want %.4f", i, curve[i].Y, want)
+			}
+		}
+	}
+	if e.Estimate || len(e.RHCPDBic) != len(f.Points) {
+		t.Fatalf("field curves: estimate %v, %d points", e.Estimate, len(e.RHCPDBic))
+	}
+	for i, p := range f.Points {
+		if e.RHCPDBic[i] != p.AxisRHCPDBic || e.LHCPDBic[i] != p.AxisLHCPDBic || e.AxialRatioDB[i] != p.AxialRatioDB {
+			t.Errorf("point %d: gain curves differ from the sweep", i)
+		}
+	}
+	if len(e.Cuts) != len(f.Cuts) || e.CentreMHz != f.Centre.FrequencyMHz {
+		t.Fatalf("%d cuts at %v MHz, the solution has %d at %v", len(e.Cuts), e.CentreMHz, len(f.Cuts), f.Centre.FrequencyMHz)
+	}
+	for i, c := range f.Cuts {
+		for j, smp := range c.Samples {
+			if e.Cuts[i].RHCPDBic[j] != smp.RHCPDBic || math.Abs(e.Cuts[i].AngleRad[j]-smp.ThetaDeg*math.Pi/180) > 1e-12 {
+				t.Fatalf("cut %d sample %d differs from the solution", i, j)
+			}
+		}
 	}
 }
 

@@ -49,7 +49,7 @@ func bandFigure(e *electrical) pdf.Figure {
 		geom.Dimension{A: geom.Vec2{X: 0, Y: 0}, B: geom.Vec2{X: bandFigW, Y: 0}, Offset: -6, Text: fmt.Sprintf("%.0f to %.0f MHz", e.LowMHz, e.HighMHz)})
 	return pdf.Figure{Paths: paths, Dimensions: dims, Height: bandFigHeight,
 		Caption: fmt.Sprintf("What the analyser should show (%s): VSWR (thick line) against frequency from %.0f to %.0f MHz, VSWR 1 at the bottom to %s at the top, grid lines at VSWR 2 and 3; the grey line is the target, VSWR %.2f (return loss %.0f dB)%s.",
-			strings.ToLower(e.Source[:1])+e.Source[1:], e.LowMHz, e.HighMHz, num(bandFigVSWRMax), e.TargetVSWR, -20*math.Log10((e.TargetVSWR-1)/(e.TargetVSWR+1)), bandCaption(e))}
+			strings.ToLower(e.Short[:1])+e.Short[1:], e.LowMHz, e.HighMHz, num(bandFigVSWRMax), e.TargetVSWR, -20*math.Log10((e.TargetVSWR-1)/(e.TargetVSWR+1)), bandCaption(e))}
 }
 
 // bandCaption names the shaded band for the figure's caption.
