@@ -8,6 +8,7 @@ package parts
 
 import (
 	"fmt"
+	"math"
 	"strings"
 
 	"coilwright/parts/spec"
@@ -280,6 +281,17 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 			screw = fmt.Sprintf("Drill a 2.5 mm pilot hole 8 mm deep in the centre of the rod's foot. Lower the rod through the open top of the coil onto the reflector's centre hole and fix it from behind with the %s.", h.Item)
 		}
 	}
+	feedAt := "at the template's feed mark"
+	standCoil := "Stand the coil over the reflector with its start beside the bare centre conductor and its axis over the reflector's centre."
+	if d.Lead.Centre {
+		feedAt = "at the centre cross: this coil is centre-fed, so the cable comes up on the axis"
+		lead = fmt.Sprintf("At the coil's start, bend the feed lead at a right angle towards the axis, parallel to the reflector (the former's radial lock hole has already set this bend): it runs %s in to the axis, where it lies on the tip of the cable's centre conductor.", mm(d.Lead.Run))
+		standCoil = fmt.Sprintf("Stand the coil over the reflector with its axis over the centre, the feed lead's end resting on the tip of the centre conductor and the lead running out along the template's tick at %.1f°.", math.Mod(d.Lead.Angle()*180/math.Pi+360, 360))
+		if f := cl.Dowel.Foot; f != nil {
+			screw = fmt.Sprintf("The rod stands over the feed, so its foot is bored, not screwed: drill a Ø%.1f mm hole %s deep up the centre of its foot, and saw a slot %s wide and as deep across one side of the foot. Lower the rod through the open top of the coil over the feed, the slot over the lead so the lead passes out through it without touching, and epoxy the foot to the reflector round the feed (keep epoxy off the joint).",
+				f.BoreMM, mm(f.BoreDepthMM), mm(f.SlotWidthMM))
+		}
+	}
 	wireNotes := ""
 	for _, c := range d.Wire.Material.Cautions {
 		wireNotes += " This wire: " + c.Text() + "."
@@ -313,14 +325,14 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 			lead,
 		}, Cautions: pick(all, HazardEyes)},
 		{Title: "Prepare the reflector", Text: []string{
-			fmt.Sprintf("Cut the %s reflector from its 1:1 template, in %s mm sheet. Drill the Ø%.2f mm feed hole at the template's feed mark.%s", s.Reflector.Shape, num(s.Reflector.ThicknessMM), cx.FeedHoleMM, rodHole),
+			fmt.Sprintf("Cut the %s reflector from its 1:1 template, in %s mm sheet. Drill the Ø%.2f mm feed hole %s.%s", s.Reflector.Shape, num(s.Reflector.ThicknessMM), cx.FeedHoleMM, feedAt, rodHole),
 			"Deburr both faces and clean the metal bright where it will be soldered.",
 		}, Cautions: pick(all, HazardLaminate, HazardEyes)},
 		{Title: "Prepare and solder the coax", Text: coaxSteps, Cautions: pick(all, HazardSolder, HazardBurns)},
 		{Title: "Solder the wedge to the first quarter turn", Text: []string{strip1, strip2},
 			Cautions: pick(all, HazardSolder, HazardBurns)},
 		{Title: "Solder the coil", Text: []string{
-			"Stand the coil over the reflector with its start beside the bare centre conductor and its axis over the reflector's centre.",
+			standCoil,
 			fmt.Sprintf("Solder the centre conductor to the feed lead and the strip's feed end. Check with a spacer that the first turn's wire centre is %s above the reflector and that no part of the wire or strip touches the reflector.", mm2(d.Coil.Z0)),
 		}, Cautions: pick(all, HazardSolder, HazardBurns)},
 		{Title: "Epoxy and support", Text: []string{

@@ -102,8 +102,9 @@ type DowelCut struct {
 	Automatic      bool    // diameter chosen from DowelDiametersMM()
 	SlotWidthMM    float64 // slot across the foot for a centre feed's lead, else 0
 	SlotDepthMM    float64
-	AbsorbsWater   bool   // wood: takes up water and detunes the coil
-	MaterialAdvice string // a sentence on the material choice
+	Foot           *RodFoot // the bored foot over a centre feed; nil for a plain foot
+	AbsorbsWater   bool     // wood: takes up water and detunes the coil
+	MaterialAdvice string   // a sentence on the material choice
 }
 
 // CoaxCut is the feed cable for one kit: the length to cut and the strip
@@ -182,6 +183,10 @@ func NewCutList(d *Design) (*CutList, error) {
 	w := WireBlank{Material: s.Wire.Material, DiameterMM: wd, ArcMM: d.WireLength,
 		LockTailMM: math.Max(MinLockTailMM, LockTailWires*wd),
 		FeedLeadMM: drop, TrimMM: 2 * TrimPerEndMM}
+	if d.Lead.Centre {
+		// The lead runs out from the axis, over the centre conductor's tip.
+		w.FeedLeadMM = d.Lead.Run
+	}
 	w.LengthMM = w.ArcMM + w.LockTailMM + w.FeedLeadMM + w.TrimMM
 	cl.Wire = w
 
@@ -199,7 +204,7 @@ func NewCutList(d *Design) (*CutList, error) {
 	cl.Solder = solderEstimate(d, cx, s.Stock.SolderWireMM)
 	cl.Epoxy = epoxyEstimate(d, dw)
 	cl.Hardware = hardware(d, cl)
-	if drop < 2*wd {
+	if drop < 2*wd && !d.Lead.Centre {
 		cl.Warnings = append(cl.Warnings, Warning{Code: "short-feed-lead",
 			Message: fmt.Sprintf("the wire centre is only %.1f mm above the dielectric stub: too little to bend a lead down; solder the centre conductor to the side of the wire's start", drop)})
 	}
@@ -229,6 +234,9 @@ func dowelCut(d *Design) (DowelCut, error) {
 		}
 		dc.DiameterMM = dowelDiametersMM[i-1]
 		dc.Automatic = true
+	}
+	if err := fitCentreFeedRod(d, &dc, room); err != nil {
+		return DowelCut{}, err
 	}
 	dc.LengthMM = d.Coil.Z0 + d.AxialLength + wd/2 + DowelOverhangMM
 	switch s.Dowel.Material {
@@ -305,7 +313,7 @@ func hardware(d *Design, cl *CutList) []HardwareItem {
 	cable := cl.Coax.Cable
 	hw = append(hw, HardwareItem{Item: "SMA connector to suit " + cable.Name, Count: 1,
 		Note: "or a cable with the connector fitted; strip the connector end to the connector maker's dimensions"})
-	if cl.Dowel.DiameterMM >= 6 {
+	if cl.Dowel.DiameterMM >= 6 && cl.Dowel.Foot == nil {
 		want := s.Reflector.ThicknessMM + 2*3.0 // two thread diameters into the rod
 		i, _ := slices.BinarySearch(screwLengthsMM, want)
 		length := screwLengthsMM[min(i, len(screwLengthsMM)-1)]

@@ -58,7 +58,12 @@ func TestWireBlankIsArcPlusAllowances(t *testing.T) {
 			}
 			// The lead drops from the wire centre at the start to the top
 			// of the dielectric stub (geometry of the joint, see cutlist.go).
-			if want := d.Coil.Z0 - FeedStandoffMM; math.Abs(w.FeedLeadMM-want) > cutTol {
+			want := d.Coil.Z0 - FeedStandoffMM
+			if d.Lead.Centre {
+				// A centre feed's lead runs in from the start to the axis.
+				want = d.Coil.StartRadius
+			}
+			if math.Abs(w.FeedLeadMM-want) > cutTol {
 				t.Errorf("feed lead %.4f mm, want %.4f mm", w.FeedLeadMM, want)
 			}
 		})
@@ -209,6 +214,7 @@ func TestWoodDowelWarns(t *testing.T) {
 
 func TestPanelJackMakesAJumper(t *testing.T) {
 	d := demoDesign(t, "demo-5g8-cone.toml", func(s string) string {
+		s = strings.Replace(s, `feed = "centre"`, `feed = "periphery"`, 1)
 		return strings.Replace(s, "[reflector]", "[reflector]\nconnector = \"sma-bulkhead\"", 1)
 	})
 	cl := mustCutList(t, d)

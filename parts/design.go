@@ -28,6 +28,9 @@ type Design struct {
 	Wire WireDesign
 	// Patterns is the reflector plate and the matching wedge.
 	Patterns *Patterns
+	// Lead is the feed lead as built: the feed hole and the conductor's
+	// path from the reflector to the start of the winding.
+	Lead FeedLead
 }
 
 // Turn is one row of the per-turn table, evaluated at the turn's middle
@@ -96,6 +99,7 @@ func NewDesign(s *spec.Spec) (*Design, error) {
 	d := &Design{Spec: s, Wavelength: s.Wavelength(), Coil: coil}
 	d.WireLength = coil.Length()
 	d.AxialLength = coil.Height()
+	d.Lead = NewFeedLead(coil, s.Coil.Feed == "centre")
 	d.Turns = turnTable(coil, d.Wavelength, s.Coil.Feed == "periphery")
 	cl := 2 * math.Pi * coil.MeanRadius() / d.Wavelength
 	sl := d.AxialLength / coil.Turns / d.Wavelength

@@ -62,7 +62,8 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 	size := rs.SizeMM(d.Wavelength)
 	in := ReflectorInput{
 		Size:       size,
-		FeedRadius: d.Coil.StartRadius,
+		FeedRadius: d.Lead.Hole.Len(),
+		FeedAngle:  d.Lead.Angle(),
 		Label:      s.Kit,
 		Hand:       d.Coil.Hand.String(),
 		Mounting: MountingHoles{Count: rs.MountingHoles, Diameter: rs.MountingHoleMM,
