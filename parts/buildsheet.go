@@ -245,14 +245,17 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 	}
 	strip1 := "Cut the matching strip from its 1:1 template and file its edges smooth."
 	strip2 := "Tin the strip and the underside of the first quarter turn. Solder the strip along the underside of the first quarter turn, its wide end at the feed and its flat face parallel to the reflector."
-	expect := fmt.Sprintf("Expect the return loss to be at least %s dB (VSWR below 1.9) across the band, with its best point near %s MHz.", num(ReturnLossTargetDB), num(s.FrequencyMHz))
+	expect := fmt.Sprintf("The matching strip is sized for a VSWR of at most %s (return loss at least %.1f dB) across the band; accept the antenna if the return loss is at least %s dB across it.", num(s.Wedge.MaxVSWR), ReturnLossDB((s.Wedge.MaxVSWR-1)/(s.Wedge.MaxVSWR+1)), num(ReturnLossTargetDB))
 	clearance := ""
 	if strip != nil && len(strip.Stations) > 0 {
 		strip1 = fmt.Sprintf("Cut the matching strip from its 1:1 template: %s long, %s wide at the feed end narrowing to %s. File its edges smooth.", mm(strip.Length), mm2(strip.FeedWidth), mm2(strip.EndWidth))
 		clearance = fmt.Sprintf(" The strip's underside is only %s above the reflector at the feed: keep the solder there flat.", mm2(strip.Stations[0].Height))
-		expect += fmt.Sprintf(" The design estimates a return loss of about %.0f dB at %s MHz (|Γ| = %.2f from the matching strip alone).", ReturnLossDB(strip.Reflection), num(s.FrequencyMHz), strip.Reflection)
+		if band := d.Patterns.LineBand; len(band) > 1 {
+			lo, hi := band[0], band[len(band)-1]
+			expect += fmt.Sprintf(" The strip's line model gives VSWR %.2f at %s MHz and %.2f at %s MHz, worst %.2f in the band.", lo.VSWR, num(lo.FrequencyMHz), hi.VSWR, num(hi.FrequencyMHz), worstVSWR(band))
+		}
 	}
-	expect += " If the best point is low in frequency, the turns are too large; if high, too small. If the return loss falls short across the band, raise or lower the strip's far end a fraction of a millimetre at a time and sweep again."
+	expect += " If the return loss is best below the band, the turns are too large; if above, too small. If the return loss falls short across the band, raise or lower the strip's far end a fraction of a millimetre at a time and sweep again."
 	prep := fmt.Sprintf("Cut the cable to %s. At the reflector end, remove %s of outer conductor to leave %s of dielectric, then %s of dielectric to bare the centre conductor.",
 		mm(cx.CutMM), mm(cx.DielectricMM+cx.CentreMM), mm(cx.DielectricMM), mm(cx.CentreMM))
 	push := "Push the cable up through the feed hole from behind until its outer conductor is flush with the top face and the dielectric stands " + mm(cx.ProudMM) + " proud. Solder the outer conductor all round the hole on the back face."
