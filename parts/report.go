@@ -34,7 +34,7 @@ type Report struct {
 	// QuotedGainDBic is the gain the report leads with (the field
 	// solution's realised gain in dBic when it ran, else the textbook
 	// estimate) and QuotedGainSource says which.
-	QuotedGainDBic    float64        `json:"quoted_gain_dbic"`
+	QuotedGainDBic   float64        `json:"quoted_gain_dbic"`
 	QuotedGainSource string         `json:"quoted_gain_source"`
 	Field            *FieldSolution `json:"field,omitempty"`
 }
