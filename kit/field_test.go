@@ -92,7 +92,7 @@ func TestFieldFilesAgree(t *testing.T) {
 			} `json:"centre"`
 		} `json:"field"`
 		EIRP struct {
-			Gain float64 `json:"gain_dbi"`
+			Gain float64 `json:"gain_dbic"`
 		} `json:"eirp"`
 	}
 	if err := json.Unmarshal(dj, &rep); err != nil {

@@ -69,6 +69,9 @@ func New(src Source, opt Options) (*Kit, error) {
 	if err != nil {
 		return nil, err
 	}
+	if d, err = searchStrip(d); err != nil {
+		return nil, err
+	}
 	if d, err = solveField(d); err != nil {
 		return nil, err
 	}

@@ -30,6 +30,9 @@ type Design struct {
 	Patterns *Patterns
 	// Field is the field solution, nil unless it ran (see WithField).
 	Field *FieldSolution
+	// StripSearch is the field solver's search for the matching strip,
+	// nil unless it ran.
+	StripSearch *StripSearch
 }
 
 // Turn is one row of the per-turn table, evaluated at the turn's middle

@@ -158,7 +158,9 @@ func sizeWedge(d *Design, zl float64) (*Wedge, []MatchPoint, *Warning, error) {
 		Taper:        wedgeTaper(&s.Wedge, zl),
 	}
 	spans := []float64{s.Wedge.SpanDeg}
-	if s.Line("wedge.span_deg") == 0 {
+	if s.Wedge.SolvedSpanDeg > 0 {
+		spans = []float64{s.Wedge.SolvedSpanDeg}
+	} else if s.Line("wedge.span_deg") == 0 {
 		spans = nil
 		for sp := MinSizedSpanDeg; sp <= MaxSizedSpanDeg+1e-9; sp += SpanStepDeg {
 			spans = append(spans, sp)

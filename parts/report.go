@@ -37,6 +37,7 @@ type Report struct {
 	QuotedGainDBic   float64        `json:"quoted_gain_dbic"`
 	QuotedGainSource string         `json:"quoted_gain_source"`
 	Field            *FieldSolution `json:"field,omitempty"`
+	StripSearch      *StripSearch   `json:"strip_search,omitempty"`
 }
 
 // TurnReport is one row of the per-turn table in the report.
@@ -135,5 +136,6 @@ func (d *Design) Report() Report {
 	}
 	r.QuotedGainDBic, r.QuotedGainSource = d.QuotedGain()
 	r.Field = d.Field
+	r.StripSearch = d.StripSearch
 	return r
 }

@@ -266,7 +266,7 @@ func TestImpossibleGeometryIsASpecError(t *testing.T) {
 	// A first turn 1.2 mm up leaves 0.25 mm under the strip's centre: the
 	// 0.92 mm centre conductor is too short for the kernel at full size,
 	// so the model thins it to 0.25/1.5 mm and says so.
-	d := demoDesign(t, "demo-5g8-cone", "first_turn_height_mm = 1.8", "first_turn_height_mm = 1.2")
+	d := demoDesign(t, "demo-5g8-cone", "[coil]", "[coil]\nfirst_turn_height_mm = 1.2")
 	st, err := Build(d, Options{Reflector: IdealGround})
 	if err != nil {
 		t.Fatal(err)

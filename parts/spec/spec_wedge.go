@@ -14,6 +14,10 @@ type WedgeSpec struct {
 	Ripple      float64 `toml:"ripple"`       // Klopfenstein |Γ|max, default 0.05
 	SpanDeg     float64 `toml:"span_deg"`     // winding angle covered; sized to MaxVSWR when absent
 	MaxVSWR     float64 `toml:"max_vswr"`     // worst VSWR across the band the strip is sized for, default 1.5
+	// SolvedSpanDeg, when above zero, is the span the whole-antenna strip
+	// search chose; it replaces the line model's sizing. Never read from
+	// a file.
+	SolvedSpanDeg float64 `toml:"-"`
 }
 
 // Wedge defaults. Common practice (no published source): the strip is
