@@ -89,4 +89,3 @@ func (m *searchMemo) put(k [32]byte, v *parts.StripSearch) {
 	m.keys = append(m.keys, k)
 	m.vals = append(m.vals, v)
 }
-

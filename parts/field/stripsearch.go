@@ -23,6 +23,9 @@ const (
 	searchImprovedVSWR = 1e-3
 )
 
+// The search keeps descending after the target is met on the ideal ground:
+// the plate's final sweep sits a little above or below it.
+
 // StripSearchModel states the model the strip search uses.
 const StripSearchModel = "Whole antenna over an ideal ground (image theory), on-axis figures only, at the band's edges and centre; coordinate search over the strip's span (30° steps, 60°–180°) and the first turn's height (×1.2 steps within ±40 % of the default, at least one wire diameter), keeping values the spec gives; the chosen strip is then solved with the spec's reflector model in the normal sweep."
 
@@ -93,7 +96,7 @@ func SearchStrip(s *spec.Spec) (*spec.Spec, *parts.StripSearch, error) {
 					}
 				}
 			}
-			if !moved || v <= s.Wedge.MaxVSWR {
+			if !moved {
 				break
 			}
 		}
