@@ -1,7 +1,14 @@
 package kit
 
 import (
+	"bytes"
+	"fmt"
+	"math"
+	"strings"
 	"testing"
+
+	"coilwright/parts/spec"
+	"coilwright/templates"
 )
 
 func TestDemosMeetTheMatchTarget(t *testing.T) {
@@ -28,5 +35,43 @@ func TestDemosMeetTheMatchTarget(t *testing.T) {
 				}
 			}
 		})
+	}
+}
+
+func TestFeedChoiceChangesTheReflectorFile(t *testing.T) {
+	// Source: DOMAIN.md §9 (Kraus): a centre feed comes up on the axis, a
+	// periphery feed under the start of the winding.
+	files := map[string][]byte{}
+	for _, feed := range []string{"periphery", "centre"} {
+		b, _ := templates.Demo("demo-2g4-cylinder.toml")
+		src := strings.Replace(string(b), `feed = "periphery"`, fmt.Sprintf("feed = %q", feed), 1)
+		s, err := spec.ParseSpec([]byte(src))
+		if err != nil {
+			t.Fatal(err)
+		}
+		k, err := New(Source{Name: feed, Bytes: []byte(src), Spec: s}, Options{})
+		if err != nil {
+			t.Fatal(err)
+		}
+		var m Memory
+		if err := k.writePatterns(&m); err != nil {
+			t.Fatal(err)
+		}
+		dxf, ok := m.File("reflector.dxf")
+		if !ok {
+			t.Fatalf("no reflector.dxf in %v", m.Names())
+		}
+		files[feed] = dxf
+		r := k.Design.Patterns.Reflector.Input.FeedRadius
+		want := 0.0
+		if feed == "periphery" {
+			want = k.Design.Coil.StartRadius
+		}
+		if math.Abs(r-want) > 1e-9 {
+			t.Errorf("%s feed: hole %.3f mm from the axis, want %.3f mm", feed, r, want)
+		}
+	}
+	if bytes.Equal(files["periphery"], files["centre"]) {
+		t.Error("centre and periphery feeds write the same reflector.dxf")
 	}
 }

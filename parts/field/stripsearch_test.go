@@ -64,3 +64,17 @@ func TestSearchStripKeepsGivenHeight(t *testing.T) {
 	}
 	t.Logf("kept 4.2 mm: VSWR %.2f; suggested span %.0f° height %.1f mm, VSWR %.2f", rec.WorstVSWR, rec.SuggestedSpanDeg, rec.SuggestedHeightMM, rec.SuggestedVSWR)
 }
+
+func BenchmarkSearchStrip(b *testing.B) {
+	for _, n := range []string{"demo-5g8-cone", "demo-2g4-cylinder"} {
+		b.Run(n, func(b *testing.B) {
+			d := demoDesign(b, n)
+			b.ReportAllocs()
+			for b.Loop() {
+				if _, _, err := SearchStrip(d.Spec); err != nil {
+					b.Fatal(err)
+				}
+			}
+		})
+	}
+}
