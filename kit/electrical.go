@@ -49,12 +49,11 @@ type patternCut struct {
 }
 
 // targetVSWR is the match drawn as the target on every electrical plot,
-// the build sheet's band figure and the report's matched band: the build
-// sheet's return loss target across the band, as a VSWR. This is the one
-// place that picks the target for d (a spec key for it would be read
-// here).
+// the build sheet's band figure and the report's matched band: the worst
+// VSWR across the band the matching strip is sized for ([wedge] max_vswr).
+// This is the one place that picks the target for d.
 func targetVSWR(d *parts.Design) float64 {
-	return parts.VSWR(math.Pow(10, -parts.ReturnLossTargetDB/20))
+	return d.Spec.Wedge.MaxVSWR
 }
 
 // Sweep sampling of the plotted range and the pattern cuts.

@@ -75,6 +75,9 @@ func New(src Source, opt Options) (*Kit, error) {
 	if err != nil {
 		return nil, err
 	}
+	if d, err = searchStrip(d); err != nil {
+		return nil, err
+	}
 	if d, err = solveField(d); err != nil {
 		return nil, err
 	}

@@ -8,6 +8,7 @@ package parts
 
 import (
 	"fmt"
+	"math"
 	"strings"
 
 	"coilwright/parts/spec"
@@ -277,12 +278,15 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 	}
 	strip1 := "Cut the matching strip from its 1:1 template and file its edges smooth."
 	strip2 := "Tin the strip and the underside of the first quarter turn. Solder the strip along the underside of the first quarter turn, its wide end at the feed and its flat face parallel to the reflector."
-	expect := fmt.Sprintf("Expect the return loss to be at least %s dB (VSWR below 1.9) across the band, with its best point near %s MHz.", num(ReturnLossTargetDB), num(s.FrequencyMHz))
+	expect := fmt.Sprintf("The matching strip is sized for a VSWR of at most %s (return loss at least %.1f dB) across the band; accept the antenna if the return loss is at least %s dB across it.", num(s.Wedge.MaxVSWR), ReturnLossDB((s.Wedge.MaxVSWR-1)/(s.Wedge.MaxVSWR+1)), num(ReturnLossTargetDB))
 	clearance := ""
 	if strip != nil && len(strip.Stations) > 0 {
 		strip1 = fmt.Sprintf("Cut the matching strip from its 1:1 template: %s long, %s. File its edges smooth.", mm(strip.Length), StripShapeText(strip))
 		clearance = fmt.Sprintf(" The strip's underside is only %s above the reflector at the feed: keep the solder there flat.", mm2(strip.Stations[0].Height))
-		expect += fmt.Sprintf(" The design estimates a return loss of about %.0f dB at %s MHz (|Γ| = %.2f from the matching strip alone).", ReturnLossDB(strip.Reflection), num(s.FrequencyMHz), strip.Reflection)
+		if band := d.Patterns.LineBand; len(band) > 1 {
+			lo, hi := band[0], band[len(band)-1]
+			expect += fmt.Sprintf(" The strip's line model gives VSWR %.2f at %s MHz and %.2f at %s MHz, worst %.2f in the band.", lo.VSWR, num(lo.FrequencyMHz), hi.VSWR, num(hi.FrequencyMHz), worstVSWR(band))
+		}
 	}
 	expect += " If the best point is low in frequency, the turns are too large; if high, too small. If the return loss falls short across the band, raise or lower the strip's far end a fraction of a millimetre at a time and sweep again."
 	ch := choiceOf(d, cl)
@@ -292,6 +296,18 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 		lead = fmt.Sprintf("The wire's start sits only %s above the coax's dielectric, too little to bend a lead: leave the start straight; the centre conductor is soldered to its side in the step that solders the coil.", mm(w.FeedLeadMM))
 	}
 	rodHole, screw := rodMountSteps(cl)
+	feedAt := "at the template's feed mark"
+	standCoil := "Stand the coil over the reflector with its start beside the bare centre conductor and its axis over the reflector's centre."
+	if d.CentreFed() {
+		feedAt = "at the centre cross: this coil is centre-fed, so the cable comes up on the axis"
+		lead = fmt.Sprintf("At the coil's start, bend the feed lead at a right angle towards the axis, parallel to the reflector (the former's radial lock hole has already set this bend): it runs %s in to the axis, where it lies on the tip of the cable's centre conductor.", mm(d.FeedRun()))
+		standCoil = fmt.Sprintf("Stand the coil over the reflector with its axis over the centre, the feed lead's end resting on the tip of the centre conductor and the lead running out along the template's tick at %.1f°.", math.Mod(d.FeedAngle()*180/math.Pi+360, 360))
+		if f := cl.Dowel.Foot; f != nil {
+			rodHole = ""
+			screw = fmt.Sprintf("The rod stands over the feed, so its foot is bored, not screwed: drill a Ø%.1f mm hole %s deep up the centre of its foot, and saw a slot %s wide and as deep across one side of the foot. Lower the rod through the open top of the coil over the feed, the slot over the lead so the lead passes out through it without touching, and epoxy the foot to the reflector round the feed (keep epoxy off the joint).",
+				f.BoreMM, mm(f.BoreDepthMM), mm(f.SlotWidthMM))
+		}
+	}
 	wireNotes := ""
 	for _, c := range d.Wire.Material.Cautions {
 		wireNotes += " This wire: " + c.Text() + "."
@@ -325,7 +341,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 			lead,
 		}, Cautions: pick(all, HazardEyes)},
 		{Title: "Prepare the reflector", Text: []string{
-			fmt.Sprintf("Cut the %s reflector from its 1:1 template, in %s mm sheet. Drill the Ø%.2f mm feed hole at the template's feed mark.%s", s.Reflector.Shape, num(s.Reflector.ThicknessMM), cx.FeedHoleMM, rodHole),
+			fmt.Sprintf("Cut the %s reflector from its 1:1 template, in %s mm sheet. Drill the Ø%.2f mm feed hole %s.%s", s.Reflector.Shape, num(s.Reflector.ThicknessMM), cx.FeedHoleMM, feedAt, rodHole),
 			"Deburr both faces.",
 			ch.plateText(),
 		}, Cautions: pick(all, HazardLaminate, HazardLaserMetal, HazardEyes)},
@@ -333,7 +349,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 		{Title: "Solder the wedge to the first quarter turn", Text: []string{strip1, strip2},
 			Cautions: pick(all, HazardSolder, HazardBurns)},
 		{Title: "Solder the coil", Text: []string{
-			"Stand the coil over the reflector with its start beside the bare centre conductor and its axis over the reflector's centre.",
+			standCoil,
 			fmt.Sprintf("Solder the centre conductor to the feed lead and the strip's feed end. Check with a spacer that the first turn's wire centre is %s above the reflector and that no part of the wire or strip touches the reflector.", mm2(d.Coil.Z0)),
 		}, Cautions: pick(all, HazardSolder, HazardBurns)},
 		{Title: "Epoxy and support", Text: []string{

@@ -110,8 +110,9 @@ type DowelCut struct {
 	OverFeed       bool
 	SlotWidthMM    float64 // slot across the foot for a centre feed's lead, else 0
 	SlotDepthMM    float64
-	AbsorbsWater   bool   // wood: takes up water and detunes the coil
-	MaterialAdvice string // a sentence on the material choice
+	Foot           *RodFoot // the bored foot over a centre feed; nil for a plain foot
+	AbsorbsWater   bool     // wood: takes up water and detunes the coil
+	MaterialAdvice string   // a sentence on the material choice
 }
 
 // CoaxCut is the feed cable for one kit: the length to cut and the strip
@@ -209,6 +210,10 @@ func NewCutList(d *Design) (*CutList, error) {
 	w := WireBlank{Material: s.Wire.Material, DiameterMM: wd, ArcMM: d.Former.Length(),
 		LockTailMM: math.Max(MinLockTailMM, LockTailWires*wd),
 		FeedLeadMM: drop, TrimMM: 2 * TrimPerEndMM}
+	if d.CentreFed() {
+		// The lead runs out from the axis, over the centre conductor's tip.
+		w.FeedLeadMM = d.FeedRun()
+	}
 	w.LengthMM = w.ArcMM + w.LockTailMM + w.FeedLeadMM + w.TrimMM
 	w.MarkAMM = TrimPerEndMM + w.LockTailMM + w.FeedLeadMM
 	w.MarkBMM = w.MarkAMM + w.ArcMM
@@ -228,7 +233,7 @@ func NewCutList(d *Design) (*CutList, error) {
 	cl.Solder = solderEstimate(d, cx, s.Stock.SolderWireMM)
 	cl.Epoxy = epoxyEstimate(d, dw)
 	cl.Hardware = hardware(d, cl)
-	if drop < 2*wd {
+	if drop < 2*wd && !d.CentreFed() {
 		cl.Warnings = append(cl.Warnings, Warning{Code: "short-feed-lead",
 			Message: fmt.Sprintf("the wire centre is only %.1f mm above the %s: too little to bend a lead down; solder the %s to the side of the wire's start", drop, feedStub(cx).stub, feedStub(cx).pin)})
 	}
@@ -270,6 +275,9 @@ func dowelCut(d *Design) (DowelCut, error) {
 		rod.Mount = mountFor(rod, w)
 	}
 	dc.Rod, dc.DiameterMM, dc.BoreMM, dc.Automatic = rod, rod.OuterMM, rod.BoreMM, given == 0
+	if err := fitCentreFeedRod(d, &dc, inner-2*dc.ClearanceMM); err != nil {
+		return DowelCut{}, err
+	}
 	switch s.Dowel.Material {
 	case "wood":
 		dc.AbsorbsWater = true
@@ -380,7 +388,7 @@ func hardware(d *Design, cl *CutList) []HardwareItem {
 		hw = append(hw, HardwareItem{Item: "SMA connector to suit " + cable.Name, Count: 1,
 			Note: "or a cable with the connector fitted; strip the connector end to the connector maker's dimensions"})
 	}
-	if mt := cl.Dowel.Rod.Mount; mt.Screw != "" {
+	if mt := cl.Dowel.Rod.Mount; mt.Screw != "" && cl.Dowel.Foot == nil {
 		want := s.Reflector.ThicknessMM + 2*mt.PilotMM // about two thread diameters into the rod
 		i, _ := slices.BinarySearch(screwLengthsMM, want)
 		length := screwLengthsMM[min(i, len(screwLengthsMM)-1)]

@@ -33,6 +33,9 @@ type Design struct {
 	// InspectionBasis explains the per-turn inspection tolerances when a
 	// tolerance analysis derived them; empty for the fixed rule.
 	InspectionBasis string
+	// StripSearch is the field solver's search for the matching strip,
+	// nil unless it ran.
+	StripSearch *StripSearch
 }
 
 // Turn is one row of the per-turn table, evaluated at the turn's middle

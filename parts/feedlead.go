@@ -82,3 +82,32 @@ func (d *Design) StripEnd() float64 {
 	st := d.Patterns.Wedge.Stations
 	return math.Max(0, st[len(st)-1].Phi)
 }
+
+// CentreFed reports whether the cable comes up on the coil's axis (a
+// centre feed) rather than under the start of the winding.
+func (d *Design) CentreFed() bool { return d.Spec.Coil.Feed != "periphery" }
+
+// FeedRise returns the height of the feed lead's vertical part, from the
+// reflector's top face to FeedStart (mm).
+func (d *Design) FeedRise() float64 { return d.FeedStart().Z }
+
+// FeedRun returns the length of the feed lead's horizontal part, from the
+// axis out to FeedStart (mm); zero for a periphery feed.
+func (d *Design) FeedRun() float64 {
+	if !d.CentreFed() {
+		return 0
+	}
+	s := d.FeedStart()
+	return math.Hypot(s.X, s.Y)
+}
+
+// FeedLength returns the length of the feed lead along FeedLead (mm).
+func (d *Design) FeedLength() float64 { return d.FeedLead().Length() }
+
+// FeedAngle returns the azimuth of FeedStart seen from the axis, radians
+// counter-clockwise from +x: the direction a centre feed's lead runs and
+// where a periphery feed's hole sits.
+func (d *Design) FeedAngle() float64 {
+	s := d.FeedStart()
+	return math.Atan2(s.Y, s.X)
+}

@@ -43,6 +43,8 @@ type Patterns struct {
 	// LaserHalogen is set when laser cutting was asked for a halogenated
 	// laminate: the files still come, with a warning on each.
 	LaserHalogen bool
+	// LineBand is the strip's line model across the band.
+	LineBand []MatchPoint
 }
 
 // LaserHalogenWarning is the text put on every output when laser cutting
@@ -71,18 +73,14 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 	}
 
 	p.WedgeLoadOhm = d.Turns[0].InputResistanceOhm
-	w, err := NewWedge(WedgeInput{
-		Path:         d.Coil.Point,
-		Span:         s.Wedge.SpanDeg * math.Pi / 180,
-		WireDiameter: s.Wire.DiameterMM,
-		Thickness:    s.Wedge.ThicknessMM,
-		Wavelength:   d.Wavelength,
-		Taper:        wedgeTaper(&s.Wedge, p.WedgeLoadOhm),
-	})
+	w, band, miss, err := sizeWedge(d, p.WedgeLoadOhm)
 	if err != nil {
 		return nil, nil, err
 	}
-	p.Wedge = w
+	p.Wedge, p.LineBand = w, band
+	if miss != nil {
+		warns = append(warns, *miss)
+	}
 	for _, m := range w.Warnings {
 		warns = append(warns, Warning{Code: "wedge-width", Message: m})
 	}
@@ -96,7 +94,7 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 		Feed:     feed,
 		Mounting: specMounting(s, size),
 	}
-	in.FeedRadius, in.FeedAngle = feedPlacement(d.Coil)
+	in.FeedRadius, in.FeedAngle = feedPlacement(s, d.Coil)
 	if rs.Shape == "square" {
 		in.Shape, in.CornerRadius = ReflectorSquare, rs.CornerRadiusMM
 	}
@@ -238,7 +236,18 @@ type WedgeReport struct {
 	Widths              []WedgeStation `json:"widths"`
 	Cutting             CutReport      `json:"cutting"`
 	Panel               *PanelReport   `json:"panel,omitempty"`
+	// MaxVSWR is the target across the band; SpanSized says the span was
+	// chosen to meet it rather than given.
+	MaxVSWR   float64 `json:"max_vswr"`
+	SpanSized bool    `json:"span_sized"`
+	// LineBand is the line model across the band; LineWorstVSWR its worst.
+	LineBand      []MatchPoint `json:"line_band"`
+	LineWorstVSWR float64      `json:"line_worst_vswr"`
+	LineModel     string       `json:"line_model"`
 }
+
+// LineModelNote states what the line model across the band is.
+const LineModelNote = "Line model across the band: 50 Ω cable → the centre feed's horizontal lead as a round wire over the plate ((η0/2π)·acosh(h/a), if centre-fed) → the strip as cut (Hammerstad–Jensen per station) → the coil's input resistance by Kraus's formula on the first turn at each frequency (140·Cλ axial feed, 150/√Cλ peripheral); theory of small reflections with each frequency's phase. The vertical lead, the coil's reactance and coupling between turns are not in it."
 
 // WedgeNote states what the wedge figures are.
 const WedgeNote = "Widths from Hammerstad–Jensen (air, with thickness correction) along the strip's height above the reflector; mismatch from the theory of small reflections. Quasi-static line formulas applied to a strip of varying width and height: a first-order design aid."
@@ -257,7 +266,8 @@ func (d *Design) patternReports(r *Report) {
 	}
 	w := p.Wedge
 	wr := &WedgeReport{
-		Material: s.Wedge.Material, ThicknessMM: s.Wedge.ThicknessMM, Taper: s.Wedge.Taper, SpanDeg: s.Wedge.SpanDeg,
+		Material: s.Wedge.Material, ThicknessMM: s.Wedge.ThicknessMM, Taper: s.Wedge.Taper, SpanDeg: w.Span * 180 / math.Pi,
+		MaxVSWR: s.Wedge.MaxVSWR, SpanSized: s.Line("wedge.span_deg") == 0, LineBand: p.LineBand, LineWorstVSWR: worstVSWR(p.LineBand), LineModel: LineModelNote,
 		FeedOhm: spec.WedgeFeedOhm, LoadOhm: p.WedgeLoadOhm, LengthMM: w.Length, FeedWidthMM: w.FeedWidth, EndWidthMM: w.EndWidth,
 		ElectricalLengthRad: w.ElectricalLength, Reflection: w.Reflection, VSWR: VSWR(w.Reflection),
 		Method: "Hammerstad–Jensen air microstrip; small-reflection mismatch", Note: WedgeNote, Widths: w.Stations,

@@ -124,9 +124,9 @@ func TestPatternsFromDemo(t *testing.T) {
 	d := mustDesign(t, string(demoSpec(t, "demo-5g8-cone.toml")))
 	p := d.Patterns
 	in := p.Reflector.Input
-	// The demo's [reflector] diameter_mm = 50 and [coil] base_diameter_mm =
-	// 17.5: the feed hole sits on the coil's start radius.
-	if in.Size != 50 || in.FeedRadius != 17.5/2 || in.Shape != ReflectorDisc {
+	// The demo's [reflector] diameter_mm = 50 and feed = "periphery": the
+	// feed hole sits under the start of the winding.
+	if in.Size != 50 || math.Abs(in.FeedRadius-d.Coil.StartRadius) > 1e-9 || in.Shape != ReflectorDisc {
 		t.Errorf("reflector input %+v", in)
 	}
 	// Source: published cable data, 0.141 in semi-rigid jacket 3.58 mm,
@@ -191,7 +191,7 @@ func TestPlateTooSmallForFeed(t *testing.T) {
 	// A 20 mm disc cannot hold a Ø 3.68 mm feed hole 8.75 mm from its
 	// centre with 1 mm of web: the design stands, with a warning and no
 	// plate.
-	d := mustDesign(t, strings.Replace(base, "[wire]", "[reflector]\ndiameter_mm = 20.0\n[wire]", 1))
+	d := mustDesign(t, strings.Replace(strings.Replace(base, "[wire]", "[reflector]\ndiameter_mm = 20.0\n[wire]", 1), "[coil]", "[coil]\nfeed = \"periphery\"", 1))
 	if d.Patterns.Reflector != nil || !strings.Contains(","+warningCodes(d)+",", ",reflector-fit,") {
 		t.Errorf("plate %v, warnings %q", d.Patterns.Reflector, warningCodes(d))
 	}

@@ -281,8 +281,14 @@ func rodPlateRoomMM(fs []PlateFeature) float64 {
 }
 
 // feedPlacement returns the feed point's radius and angle on the plate:
-// the coil's start.
-func feedPlacement(c Coil) (r, a float64) { return c.StartRadius, 0 }
+// on the axis for a centre feed, else under the coil's start (as
+// Design.FeedPoint places it once the strip is known).
+func feedPlacement(s *spec.Spec, c Coil) (r, a float64) {
+	if s.Coil.Feed == "centre" {
+		return 0, 0
+	}
+	return c.StartRadius, 0
+}
 
 // specFeedHole returns the feed cut-out the spec asks for and the cable's
 // outside diameter.
@@ -326,7 +332,7 @@ func specMounting(s *spec.Spec, size float64) MountingHoles {
 // spec and its coil: what the rod's foot and screw must clear.
 func specPlateFeatures(s *spec.Spec, c Coil) []PlateFeature {
 	f, cable := specFeedHole(s)
-	r, a := feedPlacement(c)
+	r, a := feedPlacement(s, c)
 	return append(feedFeatures(f, r, a, cable), mountingFeatures(specMounting(s, s.Reflector.SizeMM(s.Wavelength())))...)
 }
 

@@ -38,7 +38,8 @@ type Report struct {
 	QuotedGainSource string         `json:"quoted_gain_source"`
 	Field            *FieldSolution `json:"field,omitempty"`
 	// Tolerance is the batch tolerance analysis; nil when it did not run.
-	Tolerance *ToleranceReport `json:"tolerance,omitempty"`
+	Tolerance   *ToleranceReport `json:"tolerance,omitempty"`
+	StripSearch *StripSearch     `json:"strip_search,omitempty"`
 }
 
 // TurnReport is one row of the per-turn table in the report.
@@ -137,5 +138,6 @@ func (d *Design) Report() Report {
 	}
 	r.QuotedGainDBic, r.QuotedGainSource = d.QuotedGain()
 	r.Field = d.Field
+	r.StripSearch = d.StripSearch
 	return r
 }

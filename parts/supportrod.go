@@ -158,6 +158,13 @@ func (r SupportRod) Tube() bool { return r.BoreMM > 0 }
 // only when no stock size passes (the spec check refuses such a coil
 // first).
 func ChooseSupportRod(material string, room, length, helix, given float64) (SupportRod, error) {
+	return chooseRod(material, room, length, helix, given, 0)
+}
+
+// chooseRod is ChooseSupportRod for a rod whose foot must clear a hole of
+// diameter clear mm on the axis (0 for none): a tube whose bore passes it,
+// or a solid rod that keeps MinRodWallMM round it once bored.
+func chooseRod(material string, room, length, helix, given, clear float64) (SupportRod, error) {
 	m, err := LookupRodMaterial(material)
 	if err != nil {
 		return SupportRod{}, err
@@ -173,6 +180,26 @@ func ChooseSupportRod(material string, room, length, helix, given float64) (Supp
 		}
 		slices.Sort(sizes)
 		sizes = slices.Compact(sizes)
+		// clears reports whether a stocked section of outside diameter od
+		// clears the hole: a tube by its bore, a rod by its wall.
+		clears := func(od float64) bool {
+			if clear == 0 {
+				return true
+			}
+			for _, t := range m.Tubes {
+				if t[0] == od && t[1] >= clear-rodFootFitTolMM {
+					return true
+				}
+			}
+			return od >= clear+2*MinRodWallMM-rodFootFitTolMM
+		}
+		var ok []float64
+		for _, od := range sizes {
+			if clears(od) {
+				ok = append(ok, od)
+			}
+		}
+		sizes = ok
 		fits := -1
 		for i, od := range sizes {
 			if od > room+1e-9 {
@@ -192,7 +219,7 @@ func ChooseSupportRod(material string, room, length, helix, given float64) (Supp
 		}
 		r.Slender = r.OuterMM < r.MinOuterMM-1e-9
 		for _, t := range m.Tubes {
-			if t[0] == r.OuterMM {
+			if t[0] == r.OuterMM && (clear == 0 || t[1] >= clear-rodFootFitTolMM) {
 				r.BoreMM = t[1]
 			}
 		}

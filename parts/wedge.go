@@ -72,6 +72,8 @@ type Wedge struct {
 	// end's centre at the origin and the strip starting along +x.
 	Outline  geom.Contour
 	Warnings []string
+	// Span is the winding angle the strip covers, radians.
+	Span float64
 }
 
 // pathSamples is the number of steps used to measure the path's length.
@@ -126,7 +128,7 @@ func NewWedge(in WedgeInput) (*Wedge, error) {
 		return phis[j-1] + f*(phis[j]-phis[j-1])
 	}
 
-	w := &Wedge{Length: total, ElectricalLength: 2 * math.Pi * total / in.Wavelength}
+	w := &Wedge{Length: total, ElectricalLength: 2 * math.Pi * total / in.Wavelength, Span: in.Span}
 	n := in.Stations - 1
 	prof := make([]float64, in.Stations)
 	for i := range in.Stations {

@@ -229,6 +229,8 @@ func TestWireBlankMatchesDesignJSON(t *testing.T) {
 			var dj struct {
 				WireLengthMM      float64 `json:"wire_length_mm"`
 				FirstTurnHeightMM float64 `json:"first_turn_height_mm"`
+				BaseDiameterMM    float64 `json:"base_diameter_mm"`
+				Feed              string  `json:"feed"`
 			}
 			b, _ := os.ReadFile(filepath.Join(dir, "design.json"))
 			if err := json.Unmarshal(b, &dj); err != nil {
@@ -256,6 +258,10 @@ func TestWireBlankMatchesDesignJSON(t *testing.T) {
 				t.Fatal(err)
 			}
 			lead := dj.FirstTurnHeightMM - parts.FeedStandoffMM
+			if dj.Feed == "centre" {
+				// A centre feed's lead runs in from the start to the axis.
+				lead = dj.BaseDiameterMM / 2
+			}
 			want := dj.WireLengthMM + math.Max(k.Former.LockHoleMM, lead) + parts.TrimPerEndMM
 			if got := atof(t, blank["length_mm"]); math.Abs(got-want) > csvTol {
 				t.Errorf("blank %.1f mm, design.json arc %.3f mm + allowances = %.3f mm", got, dj.WireLengthMM, want)

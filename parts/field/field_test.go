@@ -47,8 +47,8 @@ func TestLeadCentreVersusPeriphery(t *testing.T) {
 	// Source: DOMAIN.md §9 (Kraus): a centre feed comes up on the axis and
 	// a lead runs out to the winding; a periphery feed comes up under the
 	// winding's start.
-	c := demoDesign(t, "demo-5g8-cone")
-	p := demoDesign(t, "demo-5g8-cone", `feed = "centre"`, `feed = "periphery"`)
+	c := demoDesign(t, "demo-5g8-cone", `feed = "periphery"`, `feed = "centre"`)
+	p := demoDesign(t, "demo-5g8-cone")
 	cl, pl := c.FeedLead(), p.FeedLead()
 	if len(cl) != 3 || cl[0] != (geom.Vec3{}) || cl[1].X != 0 || cl[1].Y != 0 {
 		t.Errorf("centre lead %v: want up the axis, then out", cl)
@@ -186,10 +186,11 @@ func TestDemoConvergence(t *testing.T) {
 	}
 	// Thick-wire limit: the default holds segments at four radii, so the
 	// 1.5× mesh (2.67 radii) is the first to resolve the strip and the
-	// lead; the move measured is 3.6 %, above the 3 % aimed for. Between
+	// lead; the move measured is 4.3 % on the periphery-fed demo, above
+	// the 3 % aimed for. Between
 	// finer meshes it is under 1.5 % (2.67 → 2 radii). The bound below
 	// states that limit rather than hiding it.
-	const thickWireZ = 0.04
+	const thickWireZ = 0.045
 	if e > thickWireZ {
 		t.Errorf("Z_in moved %.2f %% at 1.5× density", 100*e)
 	}
@@ -265,7 +266,7 @@ func TestImpossibleGeometryIsASpecError(t *testing.T) {
 	// A first turn 1.2 mm up leaves 0.25 mm under the strip's centre: the
 	// 0.92 mm centre conductor is too short for the kernel at full size,
 	// so the model thins it to 0.25/1.5 mm and says so.
-	d := demoDesign(t, "demo-5g8-cone", "first_turn_height_mm = 1.8", "first_turn_height_mm = 1.2")
+	d := demoDesign(t, "demo-5g8-cone", "[coil]", "[coil]\nfirst_turn_height_mm = 1.2")
 	st, err := Build(d, Options{Reflector: IdealGround})
 	if err != nil {
 		t.Fatal(err)
@@ -276,7 +277,7 @@ func TestImpossibleGeometryIsASpecError(t *testing.T) {
 	}
 	var se *spec.SpecError
 	// A segment density whose segments fall under the kernel's limit.
-	d = demoDesign(t, "demo-5g8-cone")
+	d = demoDesign(t, "demo-5g8-cone", `feed = "periphery"`, `feed = "centre"`)
 	_, err = Sweep(d, Options{Reflector: IdealGround, FrequenciesMHz: []float64{5800}, AxisOnly: true, SegmentsPerWavelength: 200, MinSegmentRadii: 0.5})
 	if !errors.As(err, &se) || se.Key != "solver.segments_per_wavelength" {
 		t.Fatalf("got %v, want a spec error on solver.segments_per_wavelength", err)

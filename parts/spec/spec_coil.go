@@ -44,7 +44,7 @@ const (
 func (cs *CoilSpec) validate(c *checker, s *Spec) {
 	c.oneOf("coil.shape", &cs.Shape, "cylindrical", "cylindrical", "conical")
 	c.oneOf("coil.hand", &cs.Hand, "RHCP", "RHCP", "LHCP")
-	c.oneOf("coil.feed", &cs.Feed, "centre", "centre", "periphery")
+	c.oneOf("coil.feed", &cs.Feed, "periphery", "centre", "periphery")
 	c.oneOf("coil.pitch_mode", &cs.PitchMode, "constant_spacing", "constant_spacing", "constant_angle")
 	if cs.Turns < MinTurns || cs.Turns > MaxTurns || math.IsNaN(cs.Turns) {
 		if !c.has("coil.turns") {

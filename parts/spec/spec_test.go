@@ -47,7 +47,7 @@ diameter_mm = 1.6
 
 func TestBaseSpecIsValid(t *testing.T) {
 	s := mustParse(t, []byte(base))
-	if s.Quantity != 2 || s.Coil.Feed != "centre" || s.Reflector.Shape != "disc" {
+	if s.Quantity != 2 || s.Coil.Feed != "periphery" || s.Reflector.Shape != "disc" {
 		t.Errorf("defaults not filled: %+v", s)
 	}
 }

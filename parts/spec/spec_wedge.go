@@ -12,7 +12,12 @@ type WedgeSpec struct {
 	Material    string  `toml:"material"`     // sheet material id, default "copper"
 	Taper       string  `toml:"taper"`        // "exponential" or "klopfenstein"
 	Ripple      float64 `toml:"ripple"`       // Klopfenstein |Γ|max, default 0.05
-	SpanDeg     float64 `toml:"span_deg"`     // winding angle covered, default 90°
+	SpanDeg     float64 `toml:"span_deg"`     // winding angle covered; sized to MaxVSWR when absent
+	MaxVSWR     float64 `toml:"max_vswr"`     // worst VSWR across the band the strip is sized for, default 1.5
+	// SolvedSpanDeg, when above zero, is the span the whole-antenna strip
+	// search chose; it replaces the line model's sizing. Never read from
+	// a file.
+	SolvedSpanDeg float64 `toml:"-"`
 }
 
 // Wedge defaults. Common practice (no published source): the strip is
@@ -22,6 +27,10 @@ const (
 	DefaultWedgeThicknessMM = 0.3
 	DefaultWedgeSpanDeg     = 90.0
 	DefaultWedgeRipple      = 0.05
+	// DefaultWedgeMaxVSWR is the worst VSWR across the band the strip is
+	// sized for: 1.5, a return loss of 14 dB. Common practice (no
+	// published source).
+	DefaultWedgeMaxVSWR = 1.5
 	// WedgeFeedOhm is the feed line's impedance at the wedge's start.
 	WedgeFeedOhm = 50.0
 	// minStripHeightMM is the least air gap under the strip at the feed.
@@ -69,6 +78,8 @@ func (w *WedgeSpec) validate(c *checker, s *Spec) {
 	}
 	c.orDefault("wedge.span_deg", &w.SpanDeg, DefaultWedgeSpanDeg)
 	c.within("wedge.span_deg", w.SpanDeg, 30, 360, "degrees")
+	c.orDefault("wedge.max_vswr", &w.MaxVSWR, DefaultWedgeMaxVSWR)
+	c.within("wedge.max_vswr", w.MaxVSWR, 1.05, 3, "(VSWR)")
 	if !thickOK || s.Wire.DiameterMM <= 0 {
 		return
 	}

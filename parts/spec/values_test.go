@@ -55,7 +55,7 @@ func floatKeys() []string {
 		for i := range t.NumField() {
 			f := t.Field(i)
 			name := tomlName(f)
-			if name == "" || !f.IsExported() {
+			if name == "" || name == "-" || !f.IsExported() {
 				continue
 			}
 			ft := f.Type

@@ -103,8 +103,14 @@ func inputs(d *parts.Design) ([]input, error) {
 	return in, nil
 }
 
-// specTarget returns the VSWR the band must meet.
-func specTarget(_ *spec.Spec) float64 { return DefaultVSWRTarget }
+// specTarget returns the VSWR the band must meet: the one the matching
+// strip is sized for ([wedge] max_vswr), or DefaultVSWRTarget when unset.
+func specTarget(s *spec.Spec) float64 {
+	if s.Wedge.MaxVSWR > 0 {
+		return s.Wedge.MaxVSWR
+	}
+	return DefaultVSWRTarget
+}
 
 // DefaultVSWRTarget is the VSWR across the band a kit must reach to count
 // as meeting the spec when the spec sets none. Common practice (no

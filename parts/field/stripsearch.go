@@ -1,0 +1,136 @@
+package field
+
+import (
+	"fmt"
+	"math"
+
+	"coilwright/parts"
+	"coilwright/parts/spec"
+)
+
+// Strip search bounds. Common practice (no published source): the strip
+// covers 60°–180° of the first turn, and the first turn's height is moved
+// within ±40 % of its default, never closer to the plate than one wire
+// diameter.
+const (
+	searchMinSpanDeg   = 60.0
+	searchMaxSpanDeg   = 180.0
+	searchSpanStepDeg  = 30.0
+	searchHeightStep   = 1.2 // height factor per step
+	searchHeightRange  = 1.4 // the farthest factor from the start
+	searchRounds       = 3
+	searchFrequencies  = 3 // band edges and centre
+	searchImprovedVSWR = 1e-3
+)
+
+// The search keeps descending after the target is met on the ideal ground:
+// the plate's final sweep sits a little above or below it.
+
+// StripSearchModel states the model the strip search uses.
+const StripSearchModel = "Whole antenna over an ideal ground (image theory), on-axis figures only, at the band's edges and centre; coordinate search over the strip's span (30° steps, 60°–180°) and the first turn's height (×1.2 steps within ±40 % of the default, at least one wire diameter), keeping values the spec gives; the chosen strip is then solved with the spec's reflector model in the normal sweep."
+
+// SearchStrip chooses the matching strip's span and the first turn's
+// height for s by the whole-antenna solution: it returns a copy of s with
+// the chosen values set and the search's record. Values the spec gives
+// (wedge.span_deg, coil.first_turn_height_mm) are kept; the record says
+// what the search would choose without them.
+func SearchStrip(s *spec.Spec) (*spec.Spec, *parts.StripSearch, error) {
+	lo, hi := parts.BandMHz(s)
+	fs := make([]float64, searchFrequencies)
+	for i := range fs {
+		fs[i] = lo + (hi-lo)*float64(i)/float64(searchFrequencies-1)
+	}
+	base, err := parts.NewDesign(s)
+	if err != nil {
+		return nil, nil, err
+	}
+	h0 := base.Coil.Z0
+	sp0 := base.Patterns.Wedge.Span * 180 / math.Pi
+	rec := &parts.StripSearch{SpanGiven: s.Line("wedge.span_deg") > 0, HeightGiven: s.Line("coil.first_turn_height_mm") > 0, Model: StripSearchModel}
+	worst := func(sp, h float64) float64 {
+		c := *s
+		c.Wedge.SolvedSpanDeg = sp
+		c.Coil.FirstTurnHeightMM = &h
+		d, err := parts.NewDesign(&c)
+		if err != nil {
+			return math.Inf(1)
+		}
+		rec.Evaluations++
+		r, err := Sweep(d, Options{Reflector: IdealGround, FrequenciesMHz: fs, AxisOnly: true})
+		if err != nil {
+			return math.Inf(1)
+		}
+		w := 0.0
+		for _, p := range r.Points {
+			w = math.Max(w, p.VSWR)
+		}
+		return w
+	}
+	rec.StartVSWR = worst(sp0, h0)
+	// search runs a coordinate descent from (sp0, h0), moving the span
+	// when moveSpan and the height when moveHeight.
+	search := func(moveSpan, moveHeight bool) (float64, float64, float64) {
+		sp, h, v := sp0, h0, rec.StartVSWR
+		for range searchRounds {
+			moved := false
+			if moveSpan {
+				for _, d := range []float64{-searchSpanStepDeg, searchSpanStepDeg} {
+					for c := sp + d; c >= searchMinSpanDeg-1e-9 && c <= searchMaxSpanDeg+1e-9; c += d {
+						w := worst(c, h)
+						if w >= v-searchImprovedVSWR {
+							break
+						}
+						sp, v, moved = c, w, true
+					}
+				}
+			}
+			if moveHeight {
+				for _, f := range []float64{1 / searchHeightStep, searchHeightStep} {
+					for c := h * f; c >= h0/searchHeightRange-1e-9 && c <= h0*searchHeightRange+1e-9 && c >= s.Wire.DiameterMM; c *= f {
+						c = math.Round(c*10) / 10
+						w := worst(sp, c)
+						if w >= v-searchImprovedVSWR {
+							break
+						}
+						h, v, moved = c, w, true
+					}
+				}
+			}
+			if !moved {
+				break
+			}
+		}
+		return sp, h, v
+	}
+	sp, h, v := search(!rec.SpanGiven, !rec.HeightGiven)
+	rec.SpanDeg, rec.FirstTurnHeightMM, rec.WorstVSWR = sp, h, v
+	rec.SuggestedSpanDeg, rec.SuggestedHeightMM, rec.SuggestedVSWR = sp, h, v
+	if (rec.SpanGiven || rec.HeightGiven) && v > s.Wedge.MaxVSWR {
+		rec.SuggestedSpanDeg, rec.SuggestedHeightMM, rec.SuggestedVSWR = search(true, true)
+	}
+	c := *s
+	if !rec.SpanGiven {
+		c.Wedge.SolvedSpanDeg = sp
+	}
+	if !rec.HeightGiven {
+		c.Coil.FirstTurnHeightMM = &h
+	}
+	return &c, rec, nil
+}
+
+// StripSearchWarning returns the warning for a search that did not reach
+// the target, with a concrete fix, or nil.
+func StripSearchWarning(s *spec.Spec, r *parts.StripSearch) *parts.Warning {
+	if r == nil || r.WorstVSWR <= s.Wedge.MaxVSWR {
+		return nil
+	}
+	fix := "no strip span (60°–180°) or first-turn height within ±40 % meets it: accept a higher wedge.max_vswr, narrow the band, or add a quarter-wave transformer in the cable"
+	if s.Coil.Feed == "centre" {
+		fix = "set coil.feed = \"periphery\" (the centre feed's horizontal lead is a high-impedance line in front of the strip), or " + fix
+	}
+	if (r.SpanGiven || r.HeightGiven) && r.SuggestedVSWR < r.WorstVSWR-searchImprovedVSWR {
+		fix = fmt.Sprintf("remove the given wedge.span_deg / coil.first_turn_height_mm or set span_deg = %.0f and first_turn_height_mm = %.1f (worst VSWR %.2f on the same model)", r.SuggestedSpanDeg, r.SuggestedHeightMM, r.SuggestedVSWR)
+	}
+	return &parts.Warning{Code: "match", Message: fmt.Sprintf("the whole-antenna solution's best matching strip (span %.0f°, first turn %.1f mm up) reaches VSWR %.2f at worst in the band over an ideal ground, above wedge.max_vswr = %g; %s",
+		r.SpanDeg, r.FirstTurnHeightMM, r.WorstVSWR, s.Wedge.MaxVSWR, fix)}
+}
