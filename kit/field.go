@@ -5,7 +5,6 @@ import (
 	"fmt"
 	"io"
 	"strconv"
-	"sync"
 
 	"coilwright/cam/touchstone"
 	"coilwright/parts"
@@ -24,7 +23,7 @@ func solveField(d *parts.Design) (*parts.Design, error) {
 		return nil, err
 	}
 	key := st.Key(opt)
-	if r := fieldMemo.get(key); r != nil {
+	if r, ok := fieldMemo.get(key); ok {
 		return d.WithField(r), nil
 	}
 	r, err := st.Sweep(opt)
@@ -41,37 +40,7 @@ func solveField(d *parts.Design) (*parts.Design, error) {
 // specs differing only in cutting or former keys) does not solve it
 // again. The solution is a pure function of that key, so the output is the
 // same either way.
-var fieldMemo = &memo{}
-
-// memoSize is how many solutions fieldMemo keeps.
-const memoSize = 16
-
-type memo struct {
-	mu   sync.Mutex
-	keys [][32]byte
-	vals []*parts.FieldSolution
-}
-
-func (m *memo) get(k [32]byte) *parts.FieldSolution {
-	m.mu.Lock()
-	defer m.mu.Unlock()
-	for i, key := range m.keys {
-		if key == k {
-			return m.vals[i]
-		}
-	}
-	return nil
-}
-
-func (m *memo) put(k [32]byte, v *parts.FieldSolution) {
-	m.mu.Lock()
-	defer m.mu.Unlock()
-	if len(m.keys) == memoSize {
-		m.keys, m.vals = m.keys[1:], m.vals[1:]
-	}
-	m.keys = append(m.keys, k)
-	m.vals = append(m.vals, v)
-}
+var fieldMemo = newMemo[*parts.FieldSolution](16)
 
 // writeField writes sweep.csv, pattern.csv and sweep.s1p when the field
 // solution ran.

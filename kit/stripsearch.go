@@ -3,7 +3,6 @@ package kit
 import (
 	"crypto/sha256"
 	"slices"
-	"sync"
 
 	"coilwright/parts"
 	"coilwright/parts/field"
@@ -31,8 +30,8 @@ func searchStrip(d *parts.Design) (*parts.Design, error) {
 	}
 	var key [32]byte
 	copy(key[:], h.Sum(nil))
-	r := stripMemo.get(key)
-	if r == nil {
+	r, ok := stripMemo.get(key)
+	if !ok {
 		if _, r, err = field.SearchStrip(s); err != nil {
 			return nil, err
 		}
@@ -61,31 +60,4 @@ func searchStrip(d *parts.Design) (*parts.Design, error) {
 // stripMemo keeps the last few strip searches of this process by a digest
 // of the starting geometry and which values the spec gave: the search is a
 // pure function of them.
-var stripMemo = &searchMemo{}
-
-type searchMemo struct {
-	mu   sync.Mutex
-	keys [][32]byte
-	vals []*parts.StripSearch
-}
-
-func (m *searchMemo) get(k [32]byte) *parts.StripSearch {
-	m.mu.Lock()
-	defer m.mu.Unlock()
-	for i, key := range m.keys {
-		if key == k {
-			return m.vals[i]
-		}
-	}
-	return nil
-}
-
-func (m *searchMemo) put(k [32]byte, v *parts.StripSearch) {
-	m.mu.Lock()
-	defer m.mu.Unlock()
-	if len(m.keys) == memoSize {
-		m.keys, m.vals = m.keys[1:], m.vals[1:]
-	}
-	m.keys = append(m.keys, k)
-	m.vals = append(m.vals, v)
-}
+var stripMemo = newMemo[*parts.StripSearch](16)

@@ -7,7 +7,6 @@ import (
 	"fmt"
 	"io"
 	"strconv"
-	"sync"
 
 	"coilwright/cam/plot"
 	"coilwright/parts"
@@ -37,8 +36,8 @@ func (k *Kit) analyseTolerance() error {
 		return err
 	}
 	sum := sha256.Sum256(key)
-	rep := toleranceMemo.get(sum)
-	if rep == nil {
+	rep, ok := toleranceMemo.get(sum)
+	if !ok {
 		// The loop model is corrected to the field solution the pipeline
 		// already has (nil when the spec turns the solver off).
 		full := d.Field
@@ -65,38 +64,7 @@ func (k *Kit) analyseTolerance() error {
 // calibration (the analysis is a pure function of them, seed included), so a process that builds the
 // same design again (check then build, tests) does not run it again.
 // The reports are shared and never modified.
-var toleranceMemo = &reportMemo{}
-
-// reportMemoSize is how many analyses toleranceMemo keeps.
-const reportMemoSize = 8
-
-// reportMemo is a small most-recent cache of tolerance reports.
-type reportMemo struct {
-	mu   sync.Mutex
-	keys [][32]byte
-	vals []*parts.ToleranceReport
-}
-
-func (m *reportMemo) get(k [32]byte) *parts.ToleranceReport {
-	m.mu.Lock()
-	defer m.mu.Unlock()
-	for i, key := range m.keys {
-		if key == k {
-			return m.vals[i]
-		}
-	}
-	return nil
-}
-
-func (m *reportMemo) put(k [32]byte, v *parts.ToleranceReport) {
-	m.mu.Lock()
-	defer m.mu.Unlock()
-	if len(m.keys) == reportMemoSize {
-		m.keys, m.vals = m.keys[1:], m.vals[1:]
-	}
-	m.keys = append(m.keys, k)
-	m.vals = append(m.vals, v)
-}
+var toleranceMemo = newMemo[*parts.ToleranceReport](8)
 
 // Tolerance returns the batch tolerance analysis, or nil when it did not
 // run. The same value is in Report.Tolerance.
