@@ -2,10 +2,8 @@ package html
 
 import (
 	"bytes"
+	"coilwright/cam/internal/fixture"
 	"errors"
-	"flag"
-	"os"
-	"path/filepath"
 	"regexp"
 	"strings"
 	"testing"
@@ -15,25 +13,8 @@ import (
 	xhtml "golang.org/x/net/html"
 )
 
-var update = flag.Bool("update", false, "rewrite golden files under testdata/")
-
 // golden compares got with testdata/name, rewriting the file under -update.
-func golden(t *testing.T, name string, got []byte) {
-	t.Helper()
-	path := filepath.Join("testdata", name)
-	if *update {
-		if err := os.WriteFile(path, got, 0o644); err != nil {
-			t.Fatal(err)
-		}
-	}
-	want, err := os.ReadFile(path)
-	if err != nil {
-		t.Fatalf("%v (run go test -update to create it)", err)
-	}
-	if !bytes.Equal(got, want) {
-		t.Errorf("output differs from %s (run go test -update after checking the change)", path)
-	}
-}
+func golden(t *testing.T, name string, got []byte) { fixture.Golden(t, name, got) }
 
 // checkStructure reports every tag not closed in order, every id used
 // twice, every skipped heading level and every reference that leaves the
