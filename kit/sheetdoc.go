@@ -81,7 +81,7 @@ func sheetDocument(b *parts.BuildSheet, page pdf.PageSize, figs map[string][]pdf
 		}
 		delete(figs, key)
 	}
-	for _, key := range []string{"Lock its end in the former", "Solder the wedge to the first quarter turn", "Prepare the reflector", "feed"} {
+	for _, key := range []string{"Lock its end in the former", "Solder the wedge under the start of the winding", "Prepare the reflector", "feed"} {
 		for _, f := range figs[key] {
 			add(f)
 		}

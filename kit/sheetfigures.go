@@ -34,7 +34,7 @@ func (k *Kit) stepFigures(b *parts.BuildSheet) map[string][]pdf.Figure {
 	add("Lock its end in the former", k.lockFigure(), k.Former.Path.StartRadius > 0)
 	add("Lock its end in the former", windingFigure(d), true)
 	if d.Patterns != nil && d.Patterns.Wedge != nil {
-		add("Solder the wedge to the first quarter turn", stripFigure(d.Patterns.Wedge), true)
+		add("Solder the wedge under the start of the winding", stripFigure(d.Patterns.Wedge), true)
 	}
 	if d.Patterns != nil && d.Patterns.Reflector != nil {
 		add("Prepare the reflector", reflectorFigure(d), true)

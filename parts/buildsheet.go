@@ -277,10 +277,12 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 		band = fmt.Sprintf("%s–%s MHz", num(*s.BandLowMHz), num(*s.BandHighMHz))
 	}
 	strip1 := "Cut the matching strip from its 1:1 template and file its edges smooth."
-	strip2 := "Tin the strip and the underside of the first quarter turn. Solder the strip along the underside of the first quarter turn, its wide end at the feed and its flat face parallel to the reflector."
+	strip2 := "Tin the strip and the underside of the winding's start. Solder the strip along the underside of the winding's start, its wide end at the feed and its flat face parallel to the reflector."
 	expect := fmt.Sprintf("The matching strip is sized for a VSWR of at most %s (return loss at least %.1f dB) across the band; accept the antenna if the return loss is at least %s dB across it.", num(s.Wedge.MaxVSWR), ReturnLossDB((s.Wedge.MaxVSWR-1)/(s.Wedge.MaxVSWR+1)), num(ReturnLossTargetDB))
 	clearance := ""
 	if strip != nil && len(strip.Stations) > 0 {
+		under := fmt.Sprintf("the first %.0f° of the winding", strip.Span*180/math.Pi)
+		strip2 = "Tin the strip and the underside of " + under + ". Solder the strip along the underside of " + under + ", its wide end at the feed and its flat face parallel to the reflector."
 		strip1 = fmt.Sprintf("Cut the matching strip from its 1:1 template: %s long, %s. File its edges smooth.", mm(strip.Length), StripShapeText(strip))
 		clearance = fmt.Sprintf(" The strip's underside is only %s above the reflector at the feed: keep the solder there flat.", mm2(strip.Stations[0].Height))
 		if band := d.Patterns.LineBand; len(band) > 1 {
@@ -346,7 +348,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 			ch.plateText(),
 		}, Cautions: pick(all, HazardLaminate, HazardLaserMetal, HazardEyes)},
 		{Title: "Prepare and solder the coax", Text: coaxSteps, Cautions: pick(all, HazardSolder, HazardBurns)},
-		{Title: "Solder the wedge to the first quarter turn", Text: []string{strip1, strip2},
+		{Title: "Solder the wedge under the start of the winding", Text: []string{strip1, strip2},
 			Cautions: pick(all, HazardSolder, HazardBurns)},
 		{Title: "Solder the coil", Text: []string{
 			standCoil,

@@ -48,7 +48,7 @@ func TestCautionsNeededAtSteps(t *testing.T) {
 		"Trim and form the feed lead":                {HazardEyes},
 		"Prepare the reflector":                      {HazardLaminate},
 		"Prepare and solder the coax":                {HazardSolder, HazardBurns},
-		"Solder the wedge to the first quarter turn": {HazardSolder, HazardBurns},
+		"Solder the wedge under the start of the winding": {HazardSolder, HazardBurns},
 		"Solder the coil":                            {HazardSolder, HazardBurns},
 		"Epoxy and support":                          {HazardEpoxy},
 		"Final checks":                               {HazardRF},

@@ -68,7 +68,7 @@ var requiredStepTitles = []string{
 	"Trim and form the feed lead",
 	"Prepare the reflector",
 	"Prepare and solder the coax",
-	"Solder the wedge to the first quarter turn",
+	"Solder the wedge under the start of the winding",
 	"Solder the coil",
 	"Epoxy and support",
 	"Heat-shrink",
