@@ -35,6 +35,9 @@ func searchStrip(d *parts.Design) (*parts.Design, error) {
 		if _, r, err = field.SearchStrip(s); err != nil {
 			return nil, err
 		}
+		if r == nil {
+			return d, nil
+		}
 		stripMemo.put(key, r)
 	}
 	c := *s

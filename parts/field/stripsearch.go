@@ -103,10 +103,18 @@ func SearchStrip(s *spec.Spec) (*spec.Spec, *parts.StripSearch, error) {
 		return sp, h, v
 	}
 	sp, h, v := search(!rec.SpanGiven, !rec.HeightGiven)
+	if math.IsInf(v, 1) {
+		return s, nil, nil // no candidate could be solved: keep the line model's strip
+	}
+	if math.IsInf(rec.StartVSWR, 1) {
+		rec.StartVSWR = 0 // the line model's strip could not be solved
+	}
 	rec.SpanDeg, rec.FirstTurnHeightMM, rec.WorstVSWR = sp, h, v
 	rec.SuggestedSpanDeg, rec.SuggestedHeightMM, rec.SuggestedVSWR = sp, h, v
 	if (rec.SpanGiven || rec.HeightGiven) && v > s.Wedge.MaxVSWR {
-		rec.SuggestedSpanDeg, rec.SuggestedHeightMM, rec.SuggestedVSWR = search(true, true)
+		if a, b, c := search(true, true); !math.IsInf(c, 1) {
+			rec.SuggestedSpanDeg, rec.SuggestedHeightMM, rec.SuggestedVSWR = a, b, c
+		}
 	}
 	c := *s
 	if !rec.SpanGiven {
