@@ -44,14 +44,14 @@ func TestCautionsNeededAtSteps(t *testing.T) {
 	// the matching caution. Common practice (no published source).
 	_, b := demoSheet(t, templates.DefaultDemo)
 	want := map[string][]HazardID{
-		"Straighten and clean the wire":              {HazardEyes},
-		"Trim and form the feed lead":                {HazardEyes},
-		"Prepare the reflector":                      {HazardLaminate},
-		"Prepare and solder the coax":                {HazardSolder, HazardBurns},
+		"Straighten and clean the wire":                   {HazardEyes},
+		"Trim and form the feed lead":                     {HazardEyes},
+		"Prepare the reflector":                           {HazardLaminate},
+		"Prepare and solder the coax":                     {HazardSolder, HazardBurns},
 		"Solder the wedge under the start of the winding": {HazardSolder, HazardBurns},
-		"Solder the coil":                            {HazardSolder, HazardBurns},
-		"Epoxy and support":                          {HazardEpoxy},
-		"Final checks":                               {HazardRF},
+		"Solder the coil":                                 {HazardSolder, HazardBurns},
+		"Epoxy and support":                               {HazardEpoxy},
+		"Final checks":                                    {HazardRF},
 	}
 	for _, st := range b.Steps {
 		for _, id := range want[st.Title] {
