@@ -23,7 +23,7 @@ frequency_mhz = %g
 shape = "cylindrical"
 turns = %g
 hand = "RHCP"
-feed = "centre"
+feed = "periphery"
 base_circumference_lambda = 1.0
 pitch_angle_deg = 12.5
 
@@ -137,7 +137,7 @@ func TestTenGHzThickRodRefused(t *testing.T) {
 // screw from behind; its clearance hole must be on the CUT layer at the
 // centre, or a board house or mill operator will not cut it.
 func TestRodScrewHoleIsCut(t *testing.T) {
-	k, err := newKitText(t, starterSpec(2400, 12, ""))
+	k, err := newKitText(t, starterSpec(2400, 12, "\n[stock]\nwire_rod_mm = 2000\n"))
 	if err != nil {
 		t.Fatal(err)
 	}

@@ -141,16 +141,17 @@ func TestMatchPlotCoordinates(t *testing.T) {
 				t.Fatalf("band rect %v", bands)
 			}
 			near("band shading start", bands[0].num(t, "x"), xAt(b))
-			// The target is the build sheet's return-loss target as a VSWR.
-			// Source: Pozar, Microwave Engineering, 4th ed., §2.3: VSWR =
-			// (1+|Γ|)/(1−|Γ|) with |Γ| = 10^(−RL/20); 10 dB gives 1.925.
+			// The target is the VSWR the strip is sized for, [wedge]
+			// max_vswr (1.5 by default in both demos), drawn at its value
+			// on the VSWR axis.
 			target := doc.all("target")
 			if len(target) != 1 {
 				t.Fatalf("%d target lines, want 1", len(target))
 			}
-			near("target line", target[0].num(t, "y1"), yAt(1.925))
-			if math.Abs(e.TargetVSWR-1.925) > 0.001 {
-				t.Errorf("target VSWR %.4f, want 1.925 for a 10 dB return loss", e.TargetVSWR)
+			want := k.Design.Spec.Wedge.MaxVSWR
+			near("target line", target[0].num(t, "y1"), yAt(want))
+			if math.Abs(e.TargetVSWR-want) > 1e-9 || want != 1.5 {
+				t.Errorf("target VSWR %.4f, want the spec's max_vswr %.4f (1.5 in the demos)", e.TargetVSWR, want)
 			}
 			for cls, want := range map[string]string{"axis-label y": "VSWR", "axis-label y2": "Return loss (dB)", "axis-label x": "Frequency (MHz)"} {
 				if got := doc.texts(cls); len(got) != 1 || got[0] != want {

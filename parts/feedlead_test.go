@@ -91,18 +91,16 @@ func TestCentreFeedRodClearsTheCable(t *testing.T) {
 
 func TestCentreFeedRodConflictRefused(t *testing.T) {
 	// A given 5 mm rod cannot be bored Ø3.68 mm and keep a 1 mm wall.
-	d := demoDesign(t, "demo-5g8-cone.toml", func(s string) string {
-		s = withFeed("centre")(s)
-		return strings.Replace(s, `material = "ptfe"`, "material = \"ptfe\"\ndiameter_mm = 5.0", 1)
-	})
-	_, err := NewCutList(d)
+	// The design's fit check finds it before the cut list is made.
+	text := strings.Replace(withFeed("centre")(string(demoSpec(t, "demo-5g8-cone.toml"))), `material = "ptfe"`, "material = \"ptfe\"\ndiameter_mm = 5.0", 1)
+	_, err := NewDesign(mustParse(t, []byte(text)))
 	var se *spec.SpecError
 	if !errors.As(err, &se) || se.Key != "dowel.diameter_mm" || !strings.Contains(se.Fix, "periphery") {
 		t.Fatalf("err %v, want a dowel.diameter_mm spec error with a fix", err)
 	}
 	// The bulkhead jack's Ø6.5 mm cut-out needs an 8.5 mm rod; the next
 	// stocked size, 10 mm, does not pass inside 8.9 mm: refuse the feed.
-	d = demoDesign(t, "demo-5g8-cone.toml", func(s string) string {
+	d := demoDesign(t, "demo-5g8-cone.toml", func(s string) string {
 		return strings.Replace(withFeed("centre")(s), "[reflector]", "[reflector]\nconnector = \"sma-bulkhead\"", 1)
 	})
 	_, err = NewCutList(d)

@@ -330,10 +330,18 @@ func specMounting(s *spec.Spec, size float64) MountingHoles {
 
 // specPlateFeatures returns the feed's and mounting holes' features for a
 // spec and its coil: what the rod's foot and screw must clear.
+//
+// A centre feed comes up on the axis through the rod's bored foot
+// (RodFoot, sized by the rod chooser to pass the cable), so the rod need
+// not clear the feed there: only the mounting holes are returned.
 func specPlateFeatures(s *spec.Spec, c Coil) []PlateFeature {
+	mounting := mountingFeatures(specMounting(s, s.Reflector.SizeMM(s.Wavelength())))
+	if s.Coil.Feed == "centre" {
+		return mounting
+	}
 	f, cable := specFeedHole(s)
 	r, a := feedPlacement(s, c)
-	return append(feedFeatures(f, r, a, cable), mountingFeatures(specMounting(s, s.Reflector.SizeMM(s.Wavelength())))...)
+	return append(feedFeatures(f, r, a, cable), mounting...)
 }
 
 // PlateLayout is the plate's features, the rod's foot as fitted and the
@@ -361,7 +369,9 @@ func newPlateLayout(in ReflectorInput, dc DowelCut, w *Wedge, c Coil, cableMM fl
 		}
 	}
 	pl := PlateLayout{}
-	if !dc.OverFeed {
+	// A bored foot stands over a centre feed by design (RodFoot): it is
+	// not a plate feature that must clear the feed.
+	if !dc.OverFeed && dc.Foot == nil {
 		// The fillet takes what room the foot leaves, up to its full leg.
 		pl.RodMM = dc.DiameterMM
 		leg := math.Min(RodFilletLegMM, roomAbout(fs, FaceThrough, FaceFront)-dc.DiameterMM/2)
