@@ -7,6 +7,7 @@ import (
 	"strings"
 	"testing"
 
+	"coilwright/jig"
 	"coilwright/parts"
 	"coilwright/parts/spec"
 )
@@ -59,16 +60,8 @@ func TestCheckPassesThenFormerBuilds(t *testing.T) {
 	accepted := 0
 	for i := range draws {
 		src := randomSpecText(rng)
-		s, err := spec.ParseSpec([]byte(src))
-		if err != nil {
-			continue
-		}
-		d, err := parts.NewDesign(s)
-		if err != nil {
-			continue
-		}
-		pl, err := planFormer(d)
-		if err != nil {
+		_, pl, ok := plannedDesign(src)
+		if !ok {
 			continue
 		}
 		accepted++
@@ -82,4 +75,22 @@ func TestCheckPassesThenFormerBuilds(t *testing.T) {
 		t.Errorf("only %d of %d draws were accepted; widen the ranges less", accepted, draws)
 	}
 	t.Logf("%d of %d draws accepted", accepted, draws)
+}
+
+// plannedDesign parses, designs and plans the former of src, as check
+// does before the solver runs; ok is false when any step refuses it.
+func plannedDesign(src string) (*parts.Design, jig.FormerPlan, bool) {
+	s, err := spec.ParseSpec([]byte(src))
+	if err != nil {
+		return nil, jig.FormerPlan{}, false
+	}
+	d, err := parts.NewDesign(s)
+	if err != nil {
+		return nil, jig.FormerPlan{}, false
+	}
+	pl, err := planFormer(d)
+	if err != nil {
+		return nil, jig.FormerPlan{}, false
+	}
+	return d, pl, true
 }

@@ -6,7 +6,6 @@ import (
 	"testing"
 
 	"coilwright/parts"
-	"coilwright/parts/spec"
 )
 
 // wireAgreeMM is how closely the released-coil model, the former's groove,
@@ -73,16 +72,8 @@ func TestWireLengthMatchesGroove(t *testing.T) {
 		rng := rand.New(rand.NewPCG(7, 2026))
 		checked := 0
 		for i := 0; i < 300 && checked < 40; i++ {
-			s, err := spec.ParseSpec([]byte(randomSpecText(rng)))
-			if err != nil {
-				continue
-			}
-			d, err := parts.NewDesign(s)
-			if err != nil {
-				continue
-			}
-			pl, err := planFormer(d)
-			if err != nil {
+			d, pl, ok := plannedDesign(randomSpecText(rng))
+			if !ok {
 				continue
 			}
 			checked++
@@ -136,16 +127,8 @@ func TestLockHoleTakesTheTail(t *testing.T) {
 		rng := rand.New(rand.NewPCG(11, 2026))
 		checked := 0
 		for i := 0; i < 300 && checked < 30; i++ {
-			s, err := spec.ParseSpec([]byte(randomSpecText(rng)))
-			if err != nil {
-				continue
-			}
-			d, err := parts.NewDesign(s)
-			if err != nil {
-				continue
-			}
-			pl, err := planFormer(d)
-			if err != nil {
+			d, pl, ok := plannedDesign(randomSpecText(rng))
+			if !ok {
 				continue
 			}
 			cl, err := parts.NewCutList(d)
