@@ -88,11 +88,11 @@ func (s *Solution) Field(d Direction) FarField {
 	accumulate := func(sg *segment, i0, i1 complex128, t geom.Vec3) {
 		x := k * sg.l * r.Dot(sg.t)
 		e0, e1 := phaseMoments(x)
-		ph0 := cmplx.Exp(complex(0, k*r.Dot(sg.p0)))
-		a := complex(sg.l, 0) * ph0 * (i0*(e0-e1) + i1*e1)
-		vx += a * complex(t.X, 0)
-		vy += a * complex(t.Y, 0)
-		vz += a * complex(t.Z, 0)
+		ph0 := expj(k * r.Dot(sg.p0))
+		a := scale(ph0, sg.l) * (i0*(e0-e1) + i1*e1)
+		vx += scale(a, t.X)
+		vy += scale(a, t.Y)
+		vz += scale(a, t.Z)
 	}
 	for i := range m.segs {
 		sg := &m.segs[i]
@@ -122,8 +122,18 @@ func phaseMoments(x float64) (complex128, complex128) {
 		x2 := x * x
 		return complex(1-x2/6, x/2-x*x2/24), complex(0.5-x2/8, x/3-x*x2/30)
 	}
-	e := cmplx.Exp(complex(0, x))
-	jx := complex(0, x)
-	e0 := (e - 1) / jx
-	return e0, (e - e0) / jx
+	e := expj(x)
+	e0 := divJ(e-1, x)
+	return e0, divJ(e-e0, x)
 }
+
+// expj returns e^{jx}: the value cmplx.Exp gives for a purely imaginary
+// argument (whose modulus factor is exactly 1).
+func expj(x float64) complex128 {
+	s, c := math.Sincos(x)
+	return complex(c, s)
+}
+
+// divJ returns c/(jx) for real x ≠ 0: the value the general complex
+// division gives for a purely imaginary divisor.
+func divJ(c complex128, x float64) complex128 { return complex(imag(c)/x, -real(c)/x) }

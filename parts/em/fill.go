@@ -104,23 +104,23 @@ func (m *Mesh) scatter(z []complex128, p, q int, mo moments, tq geom.Vec3, sign 
 	n := m.nBasis
 	sp, sq := &m.segs[p], &m.segs[q]
 	for j := range mo {
-		mo[j] *= complex(sign/(4*math.Pi), 0)
+		mo[j] = scale(mo[j], sign/(4*math.Pi))
 	}
 	lp, lq := sp.l, sq.l
 	var shape [2][2]complex128 // [rising on p][rising on q]
-	shape[1][1] = mo[3] / complex(lp*lq, 0)
-	shape[1][0] = (mo[1] - mo[3]/complex(lq, 0)) / complex(lp, 0)
-	shape[0][1] = (mo[2] - mo[3]/complex(lp, 0)) / complex(lq, 0)
-	shape[0][0] = mo[0] - mo[1]/complex(lp, 0) - mo[2]/complex(lq, 0) + mo[3]/complex(lp*lq, 0)
-	v := vec * complex(sp.t.Dot(tq), 0)
-	s := sca * mo[0] / complex(lp*lq, 0)
+	shape[1][1] = divReal(mo[3], lp*lq)
+	shape[1][0] = divReal(mo[1]-divReal(mo[3], lq), lp)
+	shape[0][1] = divReal(mo[2]-divReal(mo[3], lp), lq)
+	shape[0][0] = mo[0] - divReal(mo[1], lp) - divReal(mo[2], lq) + divReal(mo[3], lp*lq)
+	v := scale(vec, sp.t.Dot(tq))
+	s := divReal(sca*mo[0], lp*lq)
 	for _, h := range m.halves[p] {
 		for _, g := range m.halves[q] {
 			ds := s
 			if h.rising != g.rising {
 				ds = -s
 			}
-			val := complex(h.sign*g.sign, 0) * (v*shape[b2i(h.rising)][b2i(g.rising)] + ds)
+			val := scale(v*shape[b2i(h.rising)][b2i(g.rising)]+ds, h.sign*g.sign)
 			z[h.basis*n+g.basis] += val
 			if p != q {
 				z[g.basis*n+h.basis] += val
@@ -148,6 +148,14 @@ func (m *Mesh) addLoss(z []complex128, p int, omega float64) {
 		}
 	}
 }
+
+// divReal returns c/d for real d: the same value the general complex
+// division gives for a divisor with zero imaginary part, without its
+// scaling steps.
+func divReal(c complex128, d float64) complex128 { return complex(real(c)/d, imag(c)/d) }
+
+// scale returns c·x for real x: the same value as c*complex(x, 0).
+func scale(c complex128, x float64) complex128 { return complex(real(c)*x, imag(c)*x) }
 
 func b2i(b bool) int {
 	if b {

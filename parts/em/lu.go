@@ -65,6 +65,20 @@ func luFactor(a []complex128, n int, piv []int, tiny float64) int {
 			for i := kb + 2*t; i < min(kb+2*t+2, n); i++ {
 				dst := a[i*n+kb : (i+1)*n]
 				c := k
+				// Four columns per pass over dst, in two pairs: the same
+				// operations in the same order as a pair per pass, with
+				// half the loads and stores of dst.
+				for ; c+3 < kb; c += 4 {
+					l0, l1, l2, l3 := a[i*n+c], a[i*n+c+1], a[i*n+c+2], a[i*n+c+3]
+					s0 := a[c*n+kb : (c+1)*n][:len(dst)]
+					s1 := a[(c+1)*n+kb : (c+2)*n][:len(dst)]
+					s2 := a[(c+2)*n+kb : (c+3)*n][:len(dst)]
+					s3 := a[(c+3)*n+kb : (c+4)*n][:len(dst)]
+					for x := range dst {
+						d := dst[x] - (l0*s0[x] + l1*s1[x])
+						dst[x] = d - (l2*s2[x] + l3*s3[x])
+					}
+				}
 				for ; c+1 < kb; c += 2 {
 					l0, l1 := a[i*n+c], a[i*n+c+1]
 					s0 := a[c*n+kb : (c+1)*n]

@@ -47,7 +47,7 @@ func SearchStrip(s *spec.Spec) (*spec.Spec, *parts.StripSearch, error) {
 	h0 := base.Coil.Z0
 	sp0 := base.Patterns.Wedge.Span * 180 / math.Pi
 	rec := &parts.StripSearch{SpanGiven: s.Line("wedge.span_deg") > 0, HeightGiven: s.Line("coil.first_turn_height_mm") > 0, Model: StripSearchModel}
-	worst := func(sp, h float64) float64 {
+	solveCandidate := func(sp, h float64) float64 {
 		c := *s
 		c.Wedge.SolvedSpanDeg = sp
 		c.Coil.FirstTurnHeightMM = &h
@@ -64,6 +64,18 @@ func SearchStrip(s *spec.Spec) (*spec.Spec, *parts.StripSearch, error) {
 		for _, p := range r.Points {
 			w = math.Max(w, p.VSWR)
 		}
+		return w
+	}
+	// A coordinate search returns to candidates it has solved (a round
+	// that moved only one coordinate retries the other's neighbours): each
+	// candidate is solved once.
+	seen := map[[2]float64]float64{}
+	worst := func(sp, h float64) float64 {
+		if w, ok := seen[[2]float64{sp, h}]; ok {
+			return w
+		}
+		w := solveCandidate(sp, h)
+		seen[[2]float64{sp, h}] = w
 		return w
 	}
 	rec.StartVSWR = worst(sp0, h0)
