@@ -32,68 +32,93 @@ const fillBlock = 32
 // fill writes the n×n impedance matrix at angular frequency omega into z
 // (row-major, overwritten).
 func (m *Mesh) fill(z []complex128, omega float64) {
+	m.fillMany([][]complex128{z}, []float64{omega})
+}
+
+// fillMany writes the impedance matrices at the angular frequencies omegas
+// into zs (one n×n row-major matrix each, overwritten). The frequencies
+// share each pair's geometry, and the kernel's phase across a run of
+// equally spaced frequencies is stepped by one rotation per frequency
+// (see phasePlan) instead of a sine and cosine each.
+func (m *Mesh) fillMany(zs [][]complex128, omegas []float64) {
 	n := m.nBasis
-	clear(z[:n*n])
-	k := omega / c0
+	nf := len(omegas)
+	for _, z := range zs {
+		clear(z[:n*n])
+	}
+	ks := make([]float64, nf)
+	vec := make([]complex128, nf)
+	sca := make([]complex128, nf)
+	for f, w := range omegas {
+		ks[f] = w / c0
+		vec[f] = complex(0, w*mu0)
+		sca[f] = complex(0, -1/(w*eps0))
+	}
+	plan := newPhasePlan(ks)
 	ns := len(m.segs)
-	vec := complex(0, omega*mu0)
-	sca := complex(0, -1/(omega*eps0))
-	direct := make([]moments, fillBlock*ns)
+	direct := make([]moments, fillBlock*ns*nf)
 	var image []moments
 	if m.ground {
-		image = make([]moments, fillBlock*ns)
+		image = make([]moments, fillBlock*ns*nf)
 	}
 	for p0 := 0; p0 < ns; p0 += fillBlock {
 		p1 := min(p0+fillBlock, ns)
 		parallelFor(p1-p0, func(i int) {
 			p := p0 + i
-			m.row(direct[i*ns:(i+1)*ns], p, m.segs, &m.near, k)
+			w := plan.scratch()
+			m.row(direct[i*ns*nf:(i+1)*ns*nf], p, m.segs, &m.near, plan, w)
 			if m.ground {
-				m.row(image[i*ns:(i+1)*ns], p, m.img, &m.nearImg, k)
+				m.row(image[i*ns*nf:(i+1)*ns*nf], p, m.img, &m.nearImg, plan, w)
 			}
 		})
 		for p := p0; p < p1; p++ {
 			i := p - p0
 			for q := p; q < ns; q++ {
-				m.scatter(z, p, q, direct[i*ns+q], m.segs[q].t, 1, vec, sca)
-				if m.ground {
-					m.scatter(z, p, q, image[i*ns+q], m.img[q].t, -1, vec, sca)
+				at := (i*ns + q) * nf
+				for f, z := range zs {
+					m.scatter(z, p, q, direct[at+f], m.segs[q].t, 1, vec[f], sca[f])
+					if m.ground {
+						m.scatter(z, p, q, image[at+f], m.img[q].t, -1, vec[f], sca[f])
+					}
 				}
 			}
 			if s := m.segs[p]; s.sigma > 0 {
-				m.addLoss(z, p, omega)
+				for f, z := range zs {
+					m.addLoss(z, p, omegas[f])
+				}
 			}
 		}
 	}
 }
 
-// row integrates test segment p against sources src[q], q ≥ p, into out[q].
-func (m *Mesh) row(out []moments, p int, src []segment, near *pairList, k float64) {
+// row integrates test segment p against sources src[q], q ≥ p, at every
+// frequency of plan into out[q·nf + f].
+func (m *Mesh) row(out []moments, p int, src []segment, near *pairList, plan *phasePlan, w *phaseScratch) {
 	sp := &m.segs[p]
+	nf := len(plan.k)
 	ni := near.start[p]
 	for q := p; q < len(src); q++ {
 		sq := &src[q]
 		a2 := pairA2(sp, sq)
+		o := out[q*nf : (q+1)*nf]
 		if ni < near.start[p+1] && near.q[ni] == q {
 			st := &near.st[ni]
-			r := remainderPair(sp, sq, a2, k, &m.rules.rem)
-			h := 0.5 * k * k
-			for j := range 4 {
-				r[j] += complex(st[j]-h*st[4+j], 0)
+			remainderPair(o, sp, sq, a2, plan, w, &m.rules.rem)
+			for f, k := range plan.k {
+				h := 0.5 * k * k
+				for j := range 4 {
+					o[f][j] += complex(st[j]-h*st[4+j], 0)
+				}
 			}
-			out[q] = r
 			ni++
 			continue
 		}
 		sep := separation(sp, sq)
 		ru := &m.rules.far[0]
-		for j := 2; j > 0; j-- {
-			if sep >= m.rules.farRatio[j] {
-				ru = &m.rules.far[j]
-				break
-			}
+		if sep >= m.rules.farRatio {
+			ru = &m.rules.far[1]
 		}
-		out[q] = farPair(sp, sq, a2, k, ru)
+		farPair(o, sp, sq, a2, plan, w, ru)
 	}
 }
 

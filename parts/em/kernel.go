@@ -68,64 +68,150 @@ func separation(p, q *segment) float64 {
 }
 
 // farPair integrates e^{−jkR}/R with the Gauss–Legendre rule r on both
-// segments.
-func farPair(p, q *segment, a2, k float64, r *rule) moments {
-	var m moments
+// segments at every frequency of plan, into out[f].
+func farPair(out []moments, p, q *segment, a2 float64, plan *phasePlan, w *phaseScratch, r *rule) {
+	clear(out)
 	n := len(r.X)
+	s0, s2 := w.s0, w.s2
 	for i := range n {
 		xi := r.X[i] * p.l
 		ri := p.p0.Add(p.t.Scale(xi))
 		wi := r.W[i] * p.l
-		var s0, s2 complex128
+		clear(s0)
+		clear(s2)
 		for j := range n {
 			xj := r.X[j] * q.l
 			d := ri.Sub(q.p0.Add(q.t.Scale(xj)))
 			R := math.Sqrt(d.Dot(d) + a2)
-			sn, cs := math.Sincos(k * R)
-			g := complex(cs/R, -sn/R) * complex(r.W[j]*q.l, 0)
-			s0 += g
-			s2 += g * complex(xj, 0)
+			g := r.W[j] * q.l / R
+			e := plan.phases(w.e, R)
+			for f, ef := range e {
+				v := scale(ef, g)
+				s0[f] += v
+				s2[f] += scale(v, xj)
+			}
 		}
-		w := complex(wi, 0)
-		m[0] += w * s0
-		m[1] += w * complex(xi, 0) * s0
-		m[2] += w * s2
-		m[3] += w * complex(xi, 0) * s2
+		for f := range out {
+			a, b := scale(s0[f], wi), scale(s2[f], wi)
+			out[f][0] += a
+			out[f][1] += scale(a, xi)
+			out[f][2] += b
+			out[f][3] += scale(b, xi)
+		}
 	}
-	return m
 }
 
 // remainderPair integrates rem(R) = (e^{−jkR} − 1)/R + k²R/2 with the
-// Gauss–Legendre rule r on both segments.
-func remainderPair(p, q *segment, a2, k float64, r *rule) moments {
-	var m moments
+// Gauss–Legendre rule r on both segments at every frequency of plan, into
+// out[f]. It works from the half-angle phase e^{−jkR/2} = c − js:
+// sin kR = 2sc and cos kR − 1 = −2s², which keeps the leading terms from
+// cancelling.
+func remainderPair(out []moments, p, q *segment, a2 float64, plan *phasePlan, w *phaseScratch, r *rule) {
+	clear(out)
 	n := len(r.X)
-	h := 0.5 * k * k
+	s0, s2 := w.s0, w.s2
 	for i := range n {
 		xi := r.X[i] * p.l
 		ri := p.p0.Add(p.t.Scale(xi))
 		wi := r.W[i] * p.l
-		var s0, s2 complex128
+		clear(s0)
+		clear(s2)
 		for j := range n {
 			xj := r.X[j] * q.l
 			d := ri.Sub(q.p0.Add(q.t.Scale(xj)))
 			R := math.Sqrt(d.Dot(d) + a2)
-			sn, _ := math.Sincos(k * R)
-			half := math.Sin(0.5 * k * R)
-			// (cos kR − 1)/R + k²R/2 written without cancellation of the
-			// leading terms.
-			re := (-2*half*half)/R + h*R
-			g := complex(re, -sn/R) * complex(r.W[j]*q.l, 0)
-			s0 += g
-			s2 += g * complex(xj, 0)
+			wj := r.W[j] * q.l
+			g := wj / R
+			e := plan.phases(w.e, 0.5*R)
+			for f, ef := range e {
+				c, sn := real(ef), -imag(ef)
+				v := complex(-2*sn*sn*g+0.5*plan.k[f]*plan.k[f]*R*wj, -2*sn*c*g)
+				s0[f] += v
+				s2[f] += scale(v, xj)
+			}
 		}
-		w := complex(wi, 0)
-		m[0] += w * s0
-		m[1] += w * complex(xi, 0) * s0
-		m[2] += w * s2
-		m[3] += w * complex(xi, 0) * s2
+		for f := range out {
+			a, b := scale(s0[f], wi), scale(s2[f], wi)
+			out[f][0] += a
+			out[f][1] += scale(a, xi)
+			out[f][2] += b
+			out[f][3] += scale(b, xi)
+		}
 	}
-	return m
+}
+
+// phasePlan evaluates e^{−jk_f R} for a list of wavenumbers k_f. Runs of
+// equally spaced wavenumbers (k_f = k_0 + fΔ) take one sine and cosine for
+// the run's first phase and one for the step e^{−jΔR}, then a complex
+// rotation per frequency; the rounding this adds grows by about one unit
+// in the last place per step (under 1e-14 over a run of any length the
+// sweeps use). Other wavenumbers take a sine and cosine each.
+type phasePlan struct {
+	k    []float64
+	runs []phaseRun
+}
+
+// phaseRun is a run of wavenumbers k[from:to] spaced by step.
+type phaseRun struct {
+	from, to int
+	step     float64
+}
+
+// phaseStepTol is the relative difference within which consecutive
+// wavenumber steps count as equal (a sweep's frequencies are computed as
+// lo + (hi − lo)·i/(n − 1), equal steps up to rounding).
+const phaseStepTol = 1e-9
+
+// newPhasePlan splits ks into runs of equal steps.
+func newPhasePlan(ks []float64) *phasePlan {
+	p := &phasePlan{k: ks}
+	for i := 0; i < len(ks); {
+		j := i + 1
+		if j < len(ks) {
+			d := (ks[j] - ks[i])
+			for j+1 < len(ks) && math.Abs(ks[j+1]-ks[j]-d) <= phaseStepTol*math.Abs(d) {
+				j++
+			}
+			j++
+			if j-i == 2 {
+				j = i + 1 // a pair costs two sines either way
+			}
+		}
+		r := phaseRun{from: i, to: j}
+		if j-i > 1 {
+			r.step = (ks[j-1] - ks[i]) / float64(j-1-i)
+		}
+		p.runs = append(p.runs, r)
+		i = j
+	}
+	return p
+}
+
+// phaseScratch is one worker's storage for a plan: the phases and the
+// per-frequency sums of one quadrature row.
+type phaseScratch struct {
+	e, s0, s2 []complex128
+}
+
+func (p *phasePlan) scratch() *phaseScratch {
+	n := len(p.k)
+	return &phaseScratch{e: make([]complex128, n), s0: make([]complex128, n), s2: make([]complex128, n)}
+}
+
+// phases writes e^{−jk_f R} for every f into e and returns it.
+func (p *phasePlan) phases(e []complex128, R float64) []complex128 {
+	for _, r := range p.runs {
+		v := expj(-p.k[r.from] * R)
+		e[r.from] = v
+		if r.to-r.from > 1 {
+			w := expj(-r.step * R)
+			for f := r.from + 1; f < r.to; f++ {
+				v *= w
+				e[f] = v
+			}
+		}
+	}
+	return e
 }
 
 // staticPair integrates 1/R and R: in closed form along q, by the

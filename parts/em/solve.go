@@ -3,7 +3,6 @@ package em
 import (
 	"math"
 	"math/cmplx"
-	"sync"
 )
 
 // singularPivot is the pivot size, relative to the largest matrix entry,
@@ -37,33 +36,54 @@ func (m *Mesh) Solve(freq float64) (*Solution, error) {
 	return m.solve(freq, z, make([]int, m.nBasis))
 }
 
-// Sweep solves at each frequency (Hz), GOMAXPROCS frequencies at a time,
-// each worker reusing its own matrix buffer. Results are in the order of
-// freqs and do not depend on the number of cores; the first error in that
-// order is returned.
+// sweepMemory bounds the matrix storage of one group of a sweep's
+// frequencies, bytes (see Sweep).
+const sweepMemory = 48 << 20
+
+// Sweep solves at each frequency (Hz). The frequencies are filled in
+// groups, as many at a time as sweepMemory holds matrices for, sharing
+// each segment pair's geometry and phases (fillMany); each group's
+// matrices are then factored GOMAXPROCS at a time. The groups depend only
+// on the frequencies and the matrix order, so the results are in the order
+// of freqs and do not depend on the number of cores; the first error in
+// that order is returned.
 func (m *Mesh) Sweep(freqs []float64) ([]*Solution, error) {
 	out := make([]*Solution, len(freqs))
 	errs := make([]error, len(freqs))
-	pool := sync.Pool{New: func() any {
-		return &buffers{z: make([]complex128, m.nBasis*m.nBasis), piv: make([]int, m.nBasis)}
-	}}
-	parallelFor(len(freqs), func(i int) {
-		b := pool.Get().(*buffers)
-		out[i], errs[i] = m.solve(freqs[i], b.z, b.piv)
-		pool.Put(b)
-	})
+	n := m.nBasis
+	per := max(1, sweepMemory/(16*n*n))
+	groups := (len(freqs) + per - 1) / max(per, 1)
+	var zs [][]complex128
+	piv := make([][]int, 0, per)
+	for g := range groups {
+		// Spread the frequencies evenly over the groups.
+		lo, hi := g*len(freqs)/groups, (g+1)*len(freqs)/groups
+		for len(zs) < hi-lo {
+			zs = append(zs, make([]complex128, n*n))
+			piv = append(piv, make([]int, n))
+		}
+		omegas := make([]float64, 0, hi-lo)
+		ok := make([]int, 0, hi-lo) // indices with a valid frequency
+		for i := lo; i < hi; i++ {
+			if err := checkFrequency(freqs[i]); err != nil {
+				errs[i] = err
+				continue
+			}
+			ok = append(ok, i)
+			omegas = append(omegas, 2*math.Pi*freqs[i])
+		}
+		m.fillMany(zs[:len(ok)], omegas)
+		parallelFor(len(ok), func(j int) {
+			i := ok[j]
+			out[i], errs[i] = m.solveFilled(freqs[i], zs[j], piv[j])
+		})
+	}
 	for _, err := range errs {
 		if err != nil {
 			return nil, err
 		}
 	}
 	return out, nil
-}
-
-// buffers is one worker's matrix storage.
-type buffers struct {
-	z   []complex128
-	piv []int
 }
 
 // matrix returns the impedance matrix at freq (Hz), row-major n×n. It is
@@ -75,12 +95,26 @@ func (m *Mesh) matrix(freq float64) []complex128 {
 }
 
 func (m *Mesh) solve(freq float64, z []complex128, piv []int) (*Solution, error) {
-	if !(freq > 0) || math.IsInf(freq, 0) {
-		return nil, &FrequencyError{Value: freq}
+	if err := checkFrequency(freq); err != nil {
+		return nil, err
 	}
+	m.fill(z, 2*math.Pi*freq)
+	return m.solveFilled(freq, z, piv)
+}
+
+// checkFrequency refuses a frequency that is not positive and finite.
+func checkFrequency(freq float64) error {
+	if !(freq > 0) || math.IsInf(freq, 0) {
+		return &FrequencyError{Value: freq}
+	}
+	return nil
+}
+
+// solveFilled factors the matrix z, filled at freq, and solves for the
+// feed.
+func (m *Mesh) solveFilled(freq float64, z []complex128, piv []int) (*Solution, error) {
 	n := m.nBasis
 	omega := 2 * math.Pi * freq
-	m.fill(z, omega)
 	scale := 0.0
 	for _, v := range z[:n*n] {
 		if c := cabs1(v); c > scale || math.IsNaN(c) {
@@ -90,15 +124,17 @@ func (m *Mesh) solve(freq float64, z []complex128, piv []int) (*Solution, error)
 	if math.IsNaN(scale) || math.IsInf(scale, 0) {
 		return nil, &NotFiniteError{Frequency: freq, Quantity: "impedance matrix"}
 	}
-	if col := luFactor(z, n, piv, singularPivot*scale); col >= 0 {
-		return nil, &SingularMatrixError{Frequency: freq, Column: col}
-	}
 	x := make([]complex128, n)
 	gw := m.gapWeights()
 	for _, g := range gw {
 		x[g.basis] = m.voltage * complex(g.w, 0)
 	}
-	luSolve(z, n, piv, x)
+	if !ldlSolve(z, n, x, singularPivot*scale) {
+		if col := luFactor(z, n, piv, singularPivot*scale); col >= 0 {
+			return nil, &SingularMatrixError{Frequency: freq, Column: col}
+		}
+		luSolve(z, n, piv, x)
+	}
 	var iGap complex128
 	for _, g := range gw {
 		iGap += x[g.basis] * complex(g.w, 0)
