@@ -18,9 +18,9 @@ import (
 )
 
 var (
-	cutlistTmpl = template.Must(template.New("cutlist.md.tmpl").Funcs(reportFuncs).ParseFS(templates.FS, "cutlist.md.tmpl"))
-	batchTmpl   = template.Must(template.New("batch.md.tmpl").Funcs(reportFuncs).ParseFS(templates.FS, "batch.md.tmpl"))
-	sheetTmpl   = template.Must(template.New("build-sheet.md.tmpl").Funcs(reportFuncs).ParseFS(templates.FS, "build-sheet.md.tmpl"))
+	cutlistTmpl = template.Must(template.New("cutlist.md.tmpl").Funcs(reportFuncs).ParseFS(templates.FS(), "cutlist.md.tmpl"))
+	batchTmpl   = template.Must(template.New("batch.md.tmpl").Funcs(reportFuncs).ParseFS(templates.FS(), "batch.md.tmpl"))
+	sheetTmpl   = template.Must(template.New("build-sheet.md.tmpl").Funcs(reportFuncs).ParseFS(templates.FS(), "build-sheet.md.tmpl"))
 )
 
 // cutlistView is what cutlist.md.tmpl reads.
