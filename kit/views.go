@@ -102,7 +102,9 @@ func addDimensions(d *geom.Drawing, dims []geom.Dimension, textH float64) {
 func sideDrawing(v parts.SideView, scale float64) geom.Drawing {
 	var d geom.Drawing
 	d.Add(layerReflector, rectContour(-v.ReflectorWidth/2, -v.ReflectorThick, v.ReflectorWidth/2, 0))
-	d.Add(layerRod, rectContour(-v.RodDiameter/2, 0, v.RodDiameter/2, v.RodLength))
+	if v.RodDiameter > 0 {
+		d.Add(layerRod, rectContour(-v.RodDiameter/2, 0, v.RodDiameter/2, v.RodLength))
+	}
 	d.Add(layerCable, rectContour(v.CoaxX-v.CoaxOuter/2, -v.ReflectorThick-v.CableShown, v.CoaxX+v.CoaxOuter/2, -v.ReflectorThick))
 	d.Add(layerWire, openContour(v.Wire))
 	addDimensions(&d, v.Dimensions, dimTextMM/scale)
@@ -177,7 +179,11 @@ func (k *Kit) viewPlots() ([]plotFile, error) {
 	// on their size: size them without the text first.
 	sv := d.SideView(k.cutList)
 	s := fit(sideDrawing(sv, 1).Bounds())
-	if err := add("plot-side.svg", "Side view", fmt.Sprintf("The %s coil on its wire centreline over the reflector, with the support rod and the feed cable; dimensions in mm.", d.Coil.Hand),
+	with := "with the support rod and the feed cable"
+	if sv.RodDiameter == 0 {
+		with = "with the feed cable (this kit has no support rod)"
+	}
+	if err := add("plot-side.svg", "Side view", fmt.Sprintf("The %s coil on its wire centreline over the reflector, %s; dimensions in mm.", d.Coil.Hand, with),
 		sideDrawing(sv, s), nil, "Dimensions in mm; the wire is drawn on its centreline.", s); err != nil {
 		return nil, err
 	}
