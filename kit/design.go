@@ -10,7 +10,7 @@ import (
 	"coilwright/templates"
 )
 
-var designTmpl = template.Must(template.New("design.md.tmpl").Funcs(reportFuncs).ParseFS(templates.FS, "design.md.tmpl"))
+var designTmpl = template.Must(template.New("design.md.tmpl").Funcs(reportFuncs).ParseFS(templates.FS(), "design.md.tmpl"))
 
 // reportFuncs are the number formats the Markdown templates use.
 var reportFuncs = template.FuncMap{

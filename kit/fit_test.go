@@ -6,25 +6,11 @@ import (
 	"testing"
 
 	"coilwright/parts/spec"
+	"coilwright/parts/spec/spectest"
 )
 
 // base is a valid 5.8 GHz conical spec the fit tests change one key of.
-const base = `kit = "Test Kit"
-frequency_mhz = 5800.0
-quantity = 2
-
-[coil]
-shape = "conical"
-turns = 5.0
-hand = "RHCP"
-base_diameter_mm = 17.5
-top_diameter_mm = 12.5
-pitch_angle_deg = 13.0
-
-[wire]
-material = "copper-annealed"
-diameter_mm = 1.6
-`
+const base = spectest.Base
 
 // newKit parses src and plans its kit.
 func newKit(src string) (*Kit, error) {

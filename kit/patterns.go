@@ -41,11 +41,15 @@ func cutParts(d *parts.Design) ([]cutPart, error) {
 	var out []cutPart
 	if p.Reflector != nil {
 		rin := p.Reflector.Input
+		marks := "centre cross, the support rod's place and the limit of its epoxy fillet, coil start tick and angle, kit name"
+		if rin.RodFoot == 0 {
+			marks = "centre cross, coil start tick and angle, kit name" // no rod's foot on the plate
+		}
 		out = append(out, cutPart{name: "reflector", title: "Reflector", label: p.ReflectorLabel, paper: p.ReflectorPaperLabel, nominal: p.Reflector.Drawing,
 			notes: []string{
 				fmt.Sprintf("%s %s, %.2f mm thick; size %.2f mm. Feed hole (%s) %.2f mm from the centre at the 0° tick.",
 					p.Material.Name, s.Reflector.Shape, s.Reflector.ThicknessMM, rin.Size, s.Reflector.Connector, rin.FeedRadius),
-				"Cut on the black lines; blue lines are marks (centre cross, the support rod's place and the limit of its epoxy fillet, coil start tick and angle, kit name).",
+				"Cut on the black lines; blue lines are marks (" + marks + ").",
 			}})
 	}
 	out = append(out, cutPart{name: "wedge", title: "Matching wedge", label: p.WedgeLabel, paper: p.WedgePaperLabel, nominal: w.Drawing(),

@@ -6,6 +6,7 @@ import (
 	"fmt"
 	"io"
 	"math"
+	"slices"
 	"strconv"
 	"strings"
 	"text/template"
@@ -18,9 +19,9 @@ import (
 )
 
 var (
-	cutlistTmpl = template.Must(template.New("cutlist.md.tmpl").Funcs(reportFuncs).ParseFS(templates.FS, "cutlist.md.tmpl"))
-	batchTmpl   = template.Must(template.New("batch.md.tmpl").Funcs(reportFuncs).ParseFS(templates.FS, "batch.md.tmpl"))
-	sheetTmpl   = template.Must(template.New("build-sheet.md.tmpl").Funcs(reportFuncs).ParseFS(templates.FS, "build-sheet.md.tmpl"))
+	cutlistTmpl = template.Must(template.New("cutlist.md.tmpl").Funcs(reportFuncs).ParseFS(templates.FS(), "cutlist.md.tmpl"))
+	batchTmpl   = template.Must(template.New("batch.md.tmpl").Funcs(reportFuncs).ParseFS(templates.FS(), "batch.md.tmpl"))
+	sheetTmpl   = template.Must(template.New("build-sheet.md.tmpl").Funcs(reportFuncs).ParseFS(templates.FS(), "build-sheet.md.tmpl"))
 )
 
 // cutlistView is what cutlist.md.tmpl reads.
@@ -143,17 +144,22 @@ func newBatchPlan(d *parts.Design, cl *parts.CutList, cps []cutPart) (*batchPlan
 	s := d.Spec
 	n := s.Quantity
 	bp := &batchPlan{Kit: s.Kit, Quantity: n}
-	for _, st := range []struct {
+	type stock struct {
 		name, item, key string
 		piece           float64
 		rod             cut.Rod
 		joint           string // the other fix
-	}{
+	}
+	stocks := []stock{
 		{"Wire", "wire blank", "stock.wire_rod_mm", cl.Wire.LengthMM, cut.Rod{Length: s.Stock.WireRodMM, Kerf: s.Stock.WireKerfMM, EndTrim: s.Stock.EndTrimMM},
 			" and buy the wire on a reel or in longer lengths; the winding must be one piece (a joint in the coil changes its tuning and breaks on the former)"},
 		{"Support rod", "support rod", "stock.dowel_rod_mm", cl.Dowel.LengthMM, cut.Rod{Length: s.Stock.DowelRodMM, Kerf: s.Stock.DowelKerfMM, EndTrim: s.Stock.EndTrimMM},
 			", or join two rods end to end with a glued sleeve of the same material"},
-	} {
+	}
+	if cl.Dowel.OverFeed {
+		stocks = stocks[:1] // the kit has no support rod
+	}
+	for _, st := range stocks {
 		pieces := make([]cut.Piece, n)
 		for i := range pieces {
 			pieces[i] = cut.Piece{Label: st.item, Length: st.piece}
@@ -177,15 +183,18 @@ func newBatchPlan(d *parts.Design, cl *parts.CutList, cps []cutPart) (*batchPlan
 		}
 		bp.Stocks = append(bp.Stocks, bs)
 	}
-	w, dw := bp.Stocks[0], bp.Stocks[1]
+	w := bp.Stocks[0]
 	nf := float64(n)
 	bp.Buy = []parts.SheetRow{
 		{Label: "Wire rods", Value: fmt.Sprintf("%d × %.0f mm, %s Ø%s mm", len(w.Plan.Rods), w.Plan.Rod.Length, cl.Wire.Material, strconv.FormatFloat(cl.Wire.DiameterMM, 'g', -1, 64))},
-		{Label: "Support rods", Value: fmt.Sprintf("%d × %.0f mm, %s Ø%s mm", len(dw.Plan.Rods), dw.Plan.Rod.Length, cl.Dowel.Material, strconv.FormatFloat(cl.Dowel.DiameterMM, 'g', -1, 64))},
 		{Label: "Feed cable", Value: fmt.Sprintf("%.0f mm of %s (%d × %.1f mm)", nf*cl.Coax.CutMM, cl.Coax.Cable.Name, n, cl.Coax.CutMM)},
 		{Label: "Heat-shrink", Value: fmt.Sprintf("%.0f mm of Ø%.1f mm 2:1 sleeve", nf*cl.Sleeve.LengthMM, cl.Sleeve.SuppliedMM)},
 		{Label: "Solder", Value: fmt.Sprintf("%.0f mm of Ø%.1f mm wire", nf*cl.Solder.Amount, s.Stock.SolderWireMM)},
 		{Label: "Epoxy", Value: fmt.Sprintf("%.1f mL mixed", nf*cl.Epoxy.Amount)},
+	}
+	if len(bp.Stocks) > 1 {
+		dw := bp.Stocks[1]
+		bp.Buy = slices.Insert(bp.Buy, 1, parts.SheetRow{Label: "Support rods", Value: fmt.Sprintf("%d × %.0f mm, %s Ø%s mm", len(dw.Plan.Rods), dw.Plan.Rod.Length, cl.Dowel.Material, strconv.FormatFloat(cl.Dowel.DiameterMM, 'g', -1, 64))})
 	}
 	for _, c := range cps {
 		bp.Sheets = append(bp.Sheets, batchSheet{Part: c.title, PerSheet: c.nest.PerSheet, Sheets: c.nest.Sheets,

@@ -125,13 +125,18 @@ func sideFigure(b *parts.BuildSheet) pdf.Figure {
 	for _, far := range v.Far {
 		paths = append(paths, pdf.FigurePath{Points: far, StrokeMM: 0.6 * v.WireDiameter, Gray: 0.3})
 	}
+	behind := "behind the support rod (Ø" + num(v.RodDiameter) + fmt.Sprintf(" × %.1f mm)", v.RodLength)
+	if v.RodDiameter > 0 {
+		paths = append(paths, pdf.FigurePath{Points: rect(-v.RodDiameter/2, 0, v.RodDiameter/2, v.RodLength), Closed: true, Fill: true, FillGray: 0.08, Gray: 0.6})
+	} else {
+		behind = "behind (this kit has no support rod)"
+	}
 	paths = append(paths,
-		pdf.FigurePath{Points: rect(-v.RodDiameter/2, 0, v.RodDiameter/2, v.RodLength), Closed: true, Fill: true, FillGray: 0.08, Gray: 0.6},
 		pdf.FigurePath{Points: rect(-v.ReflectorWidth/2, -v.ReflectorThick, v.ReflectorWidth/2, 0), Closed: true, Fill: true, FillGray: 0.45, Gray: 1},
 		pdf.FigurePath{Points: rect(v.CoaxX-v.CoaxOuter/2, -v.ReflectorThick-cable, v.CoaxX+v.CoaxOuter/2, 0), Closed: true, Fill: true, FillGray: 0.3, Gray: 1})
 	for _, near := range v.Near {
 		paths = append(paths, pdf.FigurePath{Points: near, StrokeMM: v.WireDiameter, Gray: 0.85})
 	}
 	return pdf.Figure{Paths: paths, Dimensions: v.Dimensions, Height: 120,
-		Caption: fmt.Sprintf("Side view, fitted to the page (not 1:1); dimensions in mm. %s coil drawn on its wire centreline: the near half of each turn dark and full width, the far half light and thin behind the support rod (Ø%s × %.1f mm); feed cable coming up through the reflector under the coil's start.", b.Hand, num(v.RodDiameter), v.RodLength)}
+		Caption: fmt.Sprintf("Side view, fitted to the page (not 1:1); dimensions in mm. %s coil drawn on its wire centreline: the near half of each turn dark and full width, the far half light and thin %s; feed cable coming up through the reflector under the coil's start.", b.Hand, behind)}
 }

@@ -20,6 +20,10 @@ func (k *Kit) planSplit() {
 	if pl.FitsPrinter || len(pl.Problems) > 0 || pl.DiameterMM > s.Former.PrintWidthMM {
 		return
 	}
+	if k.cutList.Dowel.OverFeed {
+		k.Design.Warnings = append(k.Design.Warnings, parts.Warning{Code: "former-split", Message: "the former could not be split into sections: they stack on the support rod, and this kit has none (see rod-over-feed)"})
+		return
+	}
 	// The sections ride on the rod: the former is bored through for it,
 	// so the lock hole and stop notch keep their wall from the rod.
 	rod := k.cutList.Dowel.DiameterMM

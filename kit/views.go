@@ -44,6 +44,18 @@ func fitScale(w, h float64) float64 {
 	return drawingScales[len(drawingScales)-1]
 }
 
+// fitWithText returns the largest standard scale at which the drawing
+// draw makes for that scale (its text sized for it) fits the room.
+func fitWithText(draw func(scale float64) geom.Drawing) float64 {
+	for _, s := range drawingScales {
+		sz := draw(s).Bounds().Size()
+		if sz.X*s <= viewMaxWidthMM && sz.Y*s <= viewMaxHeightMM {
+			return s
+		}
+	}
+	return drawingScales[len(drawingScales)-1]
+}
+
 // rectContour is a closed axis-aligned rectangle.
 func rectContour(x0, y0, x1, y1 float64) geom.Contour {
 	return geom.Contour{Closed: true, Vertices: []geom.Vertex{{P: geom.Vec2{X: x0, Y: y0}}, {P: geom.Vec2{X: x1, Y: y0}}, {P: geom.Vec2{X: x1, Y: y1}}, {P: geom.Vec2{X: x0, Y: y1}}}}
@@ -59,9 +71,17 @@ func openContour(p geom.Polyline) geom.Contour {
 }
 
 // addDimensions draws each dimension on the DIM layer: its extension
-// lines, the dimension line with short end ticks, and its text above the
-// middle of the line, textH mm high in drawing units.
+// lines, the dimension line with short end ticks, and its text, textH mm
+// high in drawing units, above the middle of the line where it fits and
+// is free, else where labelPlacer finds room (no two labels overlap).
 func addDimensions(d *geom.Drawing, dims []geom.Dimension, textH float64) {
+	type label struct {
+		dm   geom.Dimension
+		a, b geom.Vec2
+		ang  float64
+		n    geom.Vec2
+	}
+	var labels []label
 	for _, dm := range dims {
 		a, b := dm.Line()
 		ext := func(p, q geom.Vec2) geom.Line { // from p past q by textH/2
@@ -88,11 +108,16 @@ func addDimensions(d *geom.Drawing, dims []geom.Dimension, textH float64) {
 			ang += math.Pi // keep text readable from below or the right
 			n = n.Scale(-1)
 		}
-		mid := a.Add(b).Scale(0.5)
 		if ang < -math.Pi/2+1e-9 {
 			ang += math.Pi
 		}
-		d.Add(layerDim, geom.Text{At: mid.Add(n.Scale(textH * 0.4)), Height: textH, Angle: ang, Value: dm.Text, Align: geom.AlignCenter})
+		labels = append(labels, label{dm, a, b, ang, n})
+	}
+	// Every line is drawn before any text is placed, so a label keeps
+	// clear of the dimensions that come after it too.
+	p := newLabelPlacer(*d, textH/10)
+	for _, lb := range labels {
+		d.Add(layerDim, p.place(dimensionLabels(lb.dm, lb.a, lb.b, lb.ang, lb.n, textH)))
 	}
 }
 
@@ -102,7 +127,9 @@ func addDimensions(d *geom.Drawing, dims []geom.Dimension, textH float64) {
 func sideDrawing(v parts.SideView, scale float64) geom.Drawing {
 	var d geom.Drawing
 	d.Add(layerReflector, rectContour(-v.ReflectorWidth/2, -v.ReflectorThick, v.ReflectorWidth/2, 0))
-	d.Add(layerRod, rectContour(-v.RodDiameter/2, 0, v.RodDiameter/2, v.RodLength))
+	if v.RodDiameter > 0 {
+		d.Add(layerRod, rectContour(-v.RodDiameter/2, 0, v.RodDiameter/2, v.RodLength))
+	}
 	d.Add(layerCable, rectContour(v.CoaxX-v.CoaxOuter/2, -v.ReflectorThick-v.CableShown, v.CoaxX+v.CoaxOuter/2, -v.ReflectorThick))
 	d.Add(layerWire, openContour(v.Wire))
 	addDimensions(&d, v.Dimensions, dimTextMM/scale)
@@ -129,11 +156,15 @@ func planDrawing(d *parts.Design, scale float64) geom.Drawing {
 	out.Add(layerWire, openContour(wire))
 	rb, rt := c.StartRadius, c.EndRadius
 	u := 2 * math.Max(rb, rt) / 6
-	dims := []geom.Dimension{{A: geom.Vec2{X: -rb, Y: 0}, B: geom.Vec2{X: rb, Y: 0}, Offset: -(math.Max(rb, rt) + u), Text: fmt.Sprintf("Ø%.2f base", 2*rb)}}
+	// Both above the coil, the top's nearer (the plate's name is below the
+	// centre): the base's line clears the top's text by a text height.
+	textH := dimTextMM / scale
+	dims := []geom.Dimension{{A: geom.Vec2{X: -rb, Y: 0}, B: geom.Vec2{X: rb, Y: 0}, Offset: math.Max(rb, rt) + u, Text: fmt.Sprintf("Ø%.2f base", 2*rb)}}
 	if math.Abs(rb-rt) > 0.005 {
+		dims[0].Offset += 2.5 * textH
 		dims = append(dims, geom.Dimension{A: geom.Vec2{X: -rt, Y: 0}, B: geom.Vec2{X: rt, Y: 0}, Offset: math.Max(rb, rt) + u, Text: fmt.Sprintf("Ø%.2f top", 2*rt)})
 	}
-	addDimensions(&out, dims, dimTextMM/scale)
+	addDimensions(&out, dims, textH)
 	return out
 }
 
@@ -173,15 +204,20 @@ func (k *Kit) viewPlots() ([]plotFile, error) {
 		return nil
 	}
 	fit := func(b geom.Box2) float64 { sz := b.Size(); return fitScale(sz.X, sz.Y) }
-	// The views carry dimension text sized for their scale, which depends
-	// on their size: size them without the text first.
+	// The views carry dimension text sized for their scale, and where the
+	// text goes depends on its size: take the largest scale at which the
+	// view, text and all, fits.
 	sv := d.SideView(k.cutList)
-	s := fit(sideDrawing(sv, 1).Bounds())
-	if err := add("plot-side.svg", "Side view", fmt.Sprintf("The %s coil on its wire centreline over the reflector, with the support rod and the feed cable; dimensions in mm.", d.Coil.Hand),
+	s := fitWithText(func(s float64) geom.Drawing { return sideDrawing(sv, s) })
+	with := "with the support rod and the feed cable"
+	if sv.RodDiameter == 0 {
+		with = "with the feed cable (this kit has no support rod)"
+	}
+	if err := add("plot-side.svg", "Side view", fmt.Sprintf("The %s coil on its wire centreline over the reflector, %s; dimensions in mm.", d.Coil.Hand, with),
 		sideDrawing(sv, s), nil, "Dimensions in mm; the wire is drawn on its centreline.", s); err != nil {
 		return nil, err
 	}
-	s = fit(planDrawing(d, 1).Bounds())
+	s = fitWithText(func(s float64) geom.Drawing { return planDrawing(d, s) })
 	if err := add("plot-plan.svg", "Plan view", "The coil seen from above over the reflector as cut (feed hole at the start tick); dimensions in mm.",
 		planDrawing(d, s), nil, "Seen from above, away from the reflector; dimensions in mm.", s); err != nil {
 		return nil, err

@@ -9,6 +9,7 @@ package parts
 import (
 	"fmt"
 	"math"
+	"slices"
 	"strings"
 
 	"coilwright/parts/spec"
@@ -141,7 +142,7 @@ func designRows(d *Design, cl *CutList) []SheetRow {
 		{"Coil height", d.Heights().Text()},
 		{"Wire", fmt.Sprintf("%s, Ø%s mm; winding %s, blank %s", s.Wire.Material, num(s.Wire.DiameterMM), mm(cl.Wire.ArcMM), mm(cl.Wire.LengthMM))},
 		{"Reflector", fmt.Sprintf("%s, %s across, %s mm thick", s.Reflector.Shape, mm(s.Reflector.SizeMM(d.Wavelength)), num(s.Reflector.ThicknessMM))},
-		{"Support rod", fmt.Sprintf("%s × %s", sectionWords(cl.Dowel), mm(cl.Dowel.LengthMM))},
+		{"Support rod", supportRow(cl.Dowel)},
 		{"Feed cable", feedRow(d, cl)},
 		d.gainRow(),
 		{"Half-power beamwidth (estimate)", fmt.Sprintf("%.0f°", d.Estimates.HPBW.Value)},
@@ -177,6 +178,25 @@ func tools(s *spec.Spec, c sheetChoice) []string {
 	return t
 }
 
+// supportSteps is the epoxy step's text: the rod's fixing (screw), how
+// the turns meet it and the rod's material advice, or for a kit without a
+// rod how the coil is held instead.
+func supportSteps(screw string, dc DowelCut) []string {
+	if dc.OverFeed {
+		return []string{supportText(dc)}
+	}
+	return []string{screw, supportText(dc), "Support rod: " + dc.MaterialAdvice + "."}
+}
+
+// supportRow is the summary's support rod: the section and its length, or
+// none when the feed leaves it no room (OverFeed).
+func supportRow(dc DowelCut) string {
+	if dc.OverFeed {
+		return "none: the feed hole leaves no room for its foot; the coil is held from outside"
+	}
+	return fmt.Sprintf("%s × %s", sectionWords(dc), mm(dc.LengthMM))
+}
+
 func materials(s *spec.Spec, cl *CutList) []SheetRow {
 	rows := []SheetRow{
 		{"Wire blank", fmt.Sprintf("%s, Ø%s mm, %s", cl.Wire.Material, num(cl.Wire.DiameterMM), mm(cl.Wire.LengthMM))},
@@ -192,6 +212,9 @@ func materials(s *spec.Spec, cl *CutList) []SheetRow {
 		// A panel jack: the cable is a ready-made jumper, nothing to shrink.
 		rows[2] = SheetRow{"Feed cable", fmt.Sprintf("%s jumper, %s, with a plug at each end (not cut from the kit)", cl.Coax.Cable.Name, mm(cl.Coax.FinishedMM))}
 		rows = append(rows[:3], rows[4:]...)
+	}
+	if cl.Dowel.OverFeed {
+		rows = slices.Delete(rows, 1, 2) // no support rod
 	}
 	for _, h := range cl.Hardware {
 		rows = append(rows, SheetRow{"Hardware", fmt.Sprintf("%d × %s", h.Count, h.Item)})
@@ -354,11 +377,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 			standCoil,
 			fmt.Sprintf("Solder the centre conductor to the feed lead and the strip's feed end. Check with a spacer that the first turn's wire centre is %s above the reflector and that no part of the wire or strip touches the reflector.", mm2(d.Coil.Z0)),
 		}, Cautions: pick(all, HazardSolder, HazardBurns)},
-		{Title: "Epoxy and support", Text: []string{
-			screw,
-			supportText(cl.Dowel),
-			"Support rod: " + cl.Dowel.MaterialAdvice + ".",
-		}, Cautions: pick(all, HazardEpoxy)},
+		{Title: "Epoxy and support", Text: supportSteps(screw, cl.Dowel), Cautions: pick(all, HazardEpoxy)},
 		{Title: "Heat-shrink", Text: []string{
 			"Slide the sleeve up against the reflector's back face, over the cable's joint, and shrink it evenly with the hot-air tool. Fix the cable to the reflector with the cable tie.",
 		}, Cautions: pick(all, HazardBurns)},

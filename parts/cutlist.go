@@ -105,8 +105,10 @@ type DowelCut struct {
 	BoreMM      float64 // bore of a tube, 0 for a solid rod
 	Rod         SupportRod
 	// OverFeed is set when no stock rod's foot clears the feed at the
-	// plate's centre (a small coil with a large feed hole): the rod is
-	// chosen for the coil alone, and the plate does not place it.
+	// plate's centre (a small coil with a large feed hole): the kit has no
+	// support rod. The cut list, batch plan, plate, side view and steps
+	// leave it out and the coil is held from outside; the rod's sizes
+	// above are those a rod for the coil alone would have, for reference.
 	OverFeed       bool
 	SlotWidthMM    float64 // slot across the foot for a centre feed's lead, else 0
 	SlotDepthMM    float64
@@ -237,10 +239,12 @@ func NewCutList(d *Design) (*CutList, error) {
 		cl.Warnings = append(cl.Warnings, Warning{Code: "short-feed-lead",
 			Message: fmt.Sprintf("the wire centre is only %.1f mm above the %s: too little to bend a lead down; solder the %s to the side of the wire's start", drop, feedStub(cx).stub, feedStub(cx).pin)})
 	}
-	if dw.AbsorbsWater {
+	if dw.AbsorbsWater && !dw.OverFeed {
 		cl.Warnings = append(cl.Warnings, Warning{Code: "wood-dowel", Message: dw.MaterialAdvice})
 	}
-	cl.Warnings = append(cl.Warnings, rodWarnings(d, dw)...)
+	if !dw.OverFeed {
+		cl.Warnings = append(cl.Warnings, rodWarnings(d, dw)...)
+	}
 	return cl, nil
 }
 
@@ -362,9 +366,17 @@ func solderEstimate(d *Design, cx CoaxCut, solderWire float64) Consumable {
 // wire, each a block (clearance + wire) long and two wire diameters
 // square, plus a fillet of 2 mm leg round the rod's foot, and adds half
 // again for mixing waste. Common practice (no published source).
+//
+// A kit without a rod (OverFeed) has the beads only, from the outside
+// supports to the wire, each two wire diameters long.
 func epoxyEstimate(d *Design, dw DowelCut) Consumable {
 	wd := d.Spec.Wire.DiameterMM
 	beads := 2 * len(d.Turns)
+	if dw.OverFeed {
+		vol := 1.5 * float64(beads) * (2 * wd) * (2 * wd) * (2 * wd)
+		return Consumable{Amount: math.Ceil(vol/1000*10) / 10, Unit: "mL",
+			Basis: fmt.Sprintf("%d beads from the outside supports to the wire, plus half again for mixing waste", beads)}
+	}
 	gap := (dw.InnerTurnMM - dw.DiameterMM) / 2
 	vBeads := float64(beads) * (gap + wd) * (2 * wd) * (2 * wd)
 	vFoot := math.Pi * dw.DiameterMM * 2 * 2 / 2
@@ -388,7 +400,7 @@ func hardware(d *Design, cl *CutList) []HardwareItem {
 		hw = append(hw, HardwareItem{Item: "SMA connector to suit " + cable.Name, Count: 1,
 			Note: "or a cable with the connector fitted; strip the connector end to the connector maker's dimensions"})
 	}
-	if mt := cl.Dowel.Rod.Mount; mt.Screw != "" && cl.Dowel.Foot == nil {
+	if mt := cl.Dowel.Rod.Mount; mt.Screw != "" && cl.Dowel.Foot == nil && !cl.Dowel.OverFeed {
 		want := s.Reflector.ThicknessMM + 2*mt.PilotMM // about two thread diameters into the rod
 		i, _ := slices.BinarySearch(screwLengthsMM, want)
 		length := screwLengthsMM[min(i, len(screwLengthsMM)-1)]
@@ -436,8 +448,11 @@ func (cl *CutList) Rows() []CutRow {
 		{Item: "solder", Material: "solder wire", Size: "", Amount: cl.Solder.Amount, Unit: cl.Solder.Unit, Note: cl.Solder.Basis},
 		{Item: "epoxy", Material: "two-part epoxy, slow-setting", Amount: cl.Epoxy.Amount, Unit: cl.Epoxy.Unit, Note: cl.Epoxy.Basis},
 	}
+	if dw.OverFeed {
+		rows = slices.Delete(rows, 1, 2)
+	}
 	if cx.Jack == "" {
-		rows = slices.Insert(rows, 3, CutRow{Item: "heat-shrink sleeve", Material: "2:1 polyolefin", Size: fmt.Sprintf("Ø%s → Ø%s mm", num(sl.SuppliedMM), num(sl.RecoveredMM)), Count: 1, LengthMM: sl.LengthMM,
+		rows = slices.Insert(rows, len(rows)-2, CutRow{Item: "heat-shrink sleeve", Material: "2:1 polyolefin", Size: fmt.Sprintf("Ø%s → Ø%s mm", num(sl.SuppliedMM), num(sl.RecoveredMM)), Count: 1, LengthMM: sl.LengthMM,
 			Note: "over the cable where it leaves the reflector's back face; slide it on before soldering"})
 	}
 	for _, h := range cl.Hardware {

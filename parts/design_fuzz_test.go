@@ -10,13 +10,13 @@ import (
 )
 
 func TestShippedSpecsParse(t *testing.T) {
-	names, _ := fs.Glob(templates.FS, "*.toml")
+	names, _ := fs.Glob(templates.FS(), "*.toml")
 	if len(names) < 3 {
 		t.Fatalf("found %d shipped specs, want the reference and two demos", len(names))
 	}
 	for _, n := range names {
 		t.Run(n, func(t *testing.T) {
-			b, _ := fs.ReadFile(templates.FS, n)
+			b, _ := fs.ReadFile(templates.FS(), n)
 			s := mustParse(t, b)
 			if _, err := NewDesign(s); err != nil {
 				t.Fatal(err)

@@ -4,6 +4,7 @@ import (
 	"testing"
 
 	"coilwright/parts/spec"
+	"coilwright/parts/spec/spectest"
 	"coilwright/templates"
 )
 
@@ -27,19 +28,4 @@ func mustParse(t *testing.T, b []byte) *spec.Spec {
 
 // base is a valid spec the bad-input cases edit; line numbers in the cases
 // below count from its first line.
-const base = `kit = "Test Kit"
-frequency_mhz = 5800.0
-quantity = 2
-
-[coil]
-shape = "conical"
-turns = 5.0
-hand = "RHCP"
-base_diameter_mm = 17.5
-top_diameter_mm = 12.5
-pitch_angle_deg = 13.0
-
-[wire]
-material = "copper-annealed"
-diameter_mm = 1.6
-`
+const base = spectest.Base

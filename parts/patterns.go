@@ -105,7 +105,7 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 	p.Plate = newPlateLayout(in, dc, w, d.Coil, cable)
 	if dc.OverFeed {
 		warns = append(warns, Warning{Code: "rod-over-feed", Message: fmt.Sprintf(
-			"the feed hole %.2f mm from the centre leaves no room at the plate's centre for the smallest stock rod (Ø%s mm) with a fillet and %s mm clearance: no rod is placed on the reflector; support the coil from outside (foam or low-loss spacers), or use a thinner cable or a smaller feed hole",
+			"the feed hole %.2f mm from the centre leaves no room at the plate's centre for the smallest stock rod (Ø%s mm) with a fillet and %s mm clearance: the kit has no support rod (the cut list, plate, side view and steps leave it out) and the coil is held from outside with low-loss spacers or foam; for a rod, use a thinner cable or a smaller feed hole",
 			in.FeedRadius, num(dowelDiametersMM[0]), num(FootprintClearMM))})
 	}
 	in.ScrewHole, in.RodFoot, in.RodFootFillet = p.Plate.ScrewHoleMM, p.Plate.RodMM, p.Plate.FootMM

@@ -128,7 +128,7 @@ func DefaultFeedHole(k FeedKind) FeedHole {
 		return FeedHole{Kind: k, Diameter: 16.0, Flat: 15.0}
 	default:
 		// The hole for 0.141 in semi-rigid, the spec's default cable.
-		return FeedHole{Kind: FeedCoax, Diameter: spec.CoaxTypes["semi-rigid-141"].FeedHoleMM()}
+		return FeedHole{Kind: FeedCoax, Diameter: spec.CoaxTypes()["semi-rigid-141"].FeedHoleMM()}
 	}
 }
 

@@ -114,12 +114,19 @@ func (c sheetChoice) feedSteps(cx CoaxCut, clearance string) []string {
 // supportText is the epoxy step's paragraph on how the turns meet the
 // rod, worded from the real radial gap.
 func supportText(dw DowelCut) string {
+	if dw.OverFeed {
+		return "This kit has no support rod: the feed hole leaves no room for a rod's foot at the reflector's centre. " + outsideSupport
+	}
 	gap := (dw.InnerTurnMM - dw.DiameterMM) / 2
 	if gap <= epoxyBridgeMM {
 		return fmt.Sprintf("The turns clear the Ø%s mm rod by %s all round. Put two small epoxy beads per turn between the rod and the wire, on opposite sides, without moving the turns. Let it cure as the maker says.", num(dw.DiameterMM), mm(gap))
 	}
 	return fmt.Sprintf("The turns stand %s off the Ø%s mm rod all round: too far for an epoxy bead to bridge. Cut two spacers per turn from offcut rod or PTFE, %s long, and epoxy each between the rod and the wire, on opposite sides, without moving the turns. Let it cure as the maker says.", mm(gap), num(dw.DiameterMM), mm(gap))
 }
+
+// outsideSupport says how a coil without a support rod is held. Common
+// practice (no published source).
+const outsideSupport = "Hold the coil upright from outside, clear of the feed: low-loss spacers (offcuts of PTFE or glass-fibre) standing on the reflector against the outside of the turns, each turn fixed to them with a small bead of epoxy, or a sleeve of closed-cell foam round the coil. They are not in the cut list: cut them from what is to hand. Let the epoxy cure as the maker says."
 
 // epoxyBridgeMM is the widest gap a bead of thickened epoxy bridges
 // without sagging. Common practice (no published source).

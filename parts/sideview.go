@@ -20,7 +20,7 @@ type SideView struct {
 	WireDiameter   float64
 	ReflectorWidth float64 // across the plate
 	ReflectorThick float64
-	RodDiameter    float64
+	RodDiameter    float64 // 0 when the kit has no support rod
 	RodLength      float64 // from the reflector's top face
 	CoaxX          float64 // the feed point's x
 	CoaxOuter      float64
@@ -47,6 +47,9 @@ func (d *Design) SideView(cl *CutList) SideView {
 	top := c.Z0 + d.AxialLength
 	v := SideView{Wire: wire, WireDiameter: wd, ReflectorWidth: size, ReflectorThick: d.Spec.Reflector.ThicknessMM,
 		RodDiameter: cl.Dowel.DiameterMM, RodLength: cl.Dowel.LengthMM, CoaxX: c.StartRadius, CoaxOuter: cl.Coax.Cable.Outer}
+	if cl.Dowel.OverFeed {
+		v.RodDiameter, v.RodLength = 0, 0
+	}
 	v.Near, v.Far = splitRuns(wire, near)
 	rb, rt := c.StartRadius, c.EndRadius
 	// Offsets scale with the drawing so the dimensions keep their spacing

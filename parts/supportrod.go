@@ -288,6 +288,9 @@ func rodNote(dc DowelCut) string {
 // step that fixes the rod.
 func rodMountSteps(cl *CutList) (hole, fix string) {
 	dc := cl.Dowel
+	if dc.OverFeed {
+		return "", ""
+	}
 	mt := dc.Rod.Mount
 	plug := ""
 	if mt.PlugMM > 0 {
@@ -310,8 +313,12 @@ func rodMountSteps(cl *CutList) (hole, fix string) {
 
 // Description returns the support in one paragraph for the cut list: the
 // section, its length, the rule that chose it, its mass and mount, and the
-// dielectric-loading estimate.
+// dielectric-loading estimate; for a kit without a rod (OverFeed), why
+// there is none and how the coil is held instead.
 func (dc DowelCut) Description() string {
+	if dc.OverFeed {
+		return "None: the feed hole leaves no room at the reflector's centre for a rod's foot (see the rod-over-feed warning), so this kit has no support rod. " + outsideSupport
+	}
 	return fmt.Sprintf("%s, %.1f mm long: %s. Mount: %s. The loading is a first-order estimate, εeff ≈ 1 + (εr − 1)·F with F the rod's share of the area inside the smallest turn; the field is weakest on the axis, so the true shift is smaller.",
 		sectionWords(dc), dc.LengthMM, rodNote(dc), dc.Rod.Mount.Basis)
 }

@@ -10,8 +10,9 @@ import (
 //go:embed *.toml *.tmpl
 var files embed.FS
 
-// FS is the read-only file system of every embedded file.
-var FS fs.FS = files
+// FS returns the read-only file system of every embedded file. Reading a
+// file from it gives a fresh copy of the bytes.
+func FS() fs.FS { return files }
 
 // DefaultDemo is the demo spec that `build` uses when given no spec.
 const DefaultDemo = "demo-5g8-cone.toml"

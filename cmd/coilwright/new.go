@@ -17,7 +17,7 @@ import (
 	"coilwright/templates"
 )
 
-var starterTmpl = template.Must(template.ParseFS(templates.FS, "starter.toml.tmpl"))
+var starterTmpl = template.Must(template.ParseFS(templates.FS(), "starter.toml.tmpl"))
 
 // newOptions are the flags of `coilwright new`.
 type newOptions struct {

@@ -1,5 +1,7 @@
 package spec
 
+import "slices"
+
 // Connector is a panel connector the reflector can carry, or the plain
 // coax pigtail ("coax"), by its spec name.
 type Connector struct {
@@ -11,8 +13,9 @@ type Connector struct {
 	Mount string
 }
 
-// Connectors lists the reflector.connector choices.
-var Connectors = []Connector{
+// connectors lists the reflector.connector choices; Connectors hands out
+// copies.
+var connectors = []Connector{
 	{ID: "coax", Name: "coax pigtail", Mount: "pigtail"},
 	{ID: "sma-flange", Name: "SMA four-hole flange jack", Family: "SMA", Mount: "flange"},
 	{ID: "sma-bulkhead", Name: "SMA bulkhead jack", Family: "SMA", Mount: "bulkhead"},
@@ -20,9 +23,13 @@ var Connectors = []Connector{
 	{ID: "n-bulkhead", Name: "N bulkhead jack", Family: "N", Mount: "bulkhead"},
 }
 
+// Connectors returns the reflector.connector choices in the order the
+// reference spec lists them, a fresh copy the caller may change.
+func Connectors() []Connector { return slices.Clone(connectors) }
+
 // ConnectorByID returns the connector with the given spec name.
 func ConnectorByID(id string) (Connector, bool) {
-	for _, c := range Connectors {
+	for _, c := range connectors {
 		if c.ID == id {
 			return c, true
 		}
@@ -31,8 +38,8 @@ func ConnectorByID(id string) (Connector, bool) {
 }
 
 func connectorIDs() []string {
-	ids := make([]string, len(Connectors))
-	for i, c := range Connectors {
+	ids := make([]string, len(connectors))
+	for i, c := range connectors {
 		ids[i] = c.ID
 	}
 	return ids

@@ -1,9 +1,12 @@
 package spec
 
-import "fmt"
+import (
+	"fmt"
+	"maps"
+)
 
 // CoaxSpec is the [coax] table: the feed line from the connector to the
-// coil. The cable's diameters come from CoaxTypes unless given here.
+// coil. The cable's diameters come from CoaxTypes() unless given here.
 type CoaxSpec struct {
 	Type     string  `toml:"type"`      // one of CoaxTypeIDs: "semi-rigid-141", "rg58", …
 	LengthMM float64 `toml:"length_mm"` // connector to the reflector's back face, default 100 mm
@@ -40,8 +43,9 @@ func (t CoaxType) FeedHoleMM() float64 {
 	return t.Outer + FeedHoleClearanceMM
 }
 
-// CoaxTypes lists the cable types the spec accepts, by spec name.
-var CoaxTypes = map[string]CoaxType{
+// coaxTypes lists the cable types the spec accepts, by spec name;
+// CoaxTypes and CoaxTypeByID hand out copies.
+var coaxTypes = map[string]CoaxType{
 	// Source: published cable data for 0.141 in semi-rigid (RG-402).
 	"semi-rigid-141": {Name: "0.141 in semi-rigid (RG-402 class)", Outer: 3.58, Dielectric: 2.985, Centre: 0.92, Impedance: 50, Permittivity: 2.03,
 		Source: "published 0.141 in semi-rigid cable data"},
@@ -67,6 +71,17 @@ var CoaxTypes = map[string]CoaxType{
 		Source: "P. Harden, Coaxial Cable Specifications (0.019 / 0.060 / 0.101 in)"},
 }
 
+// CoaxTypes returns the cable types the spec accepts, by spec name, a
+// fresh map the caller may change.
+func CoaxTypes() map[string]CoaxType { return maps.Clone(coaxTypes) }
+
+// CoaxTypeByID returns the published data of the cable type with the spec
+// name id.
+func CoaxTypeByID(id string) (CoaxType, bool) {
+	t, ok := coaxTypes[id]
+	return t, ok
+}
+
 // CoaxTypeIDs returns the spec names of the cable types, in the order the
 // reference spec lists them.
 func CoaxTypeIDs() []string {
@@ -85,7 +100,7 @@ func (x *CoaxSpec) validate(c *checker, _ *Spec) {
 			c.within(kv.key, *kv.v, 0.1, 30, "mm")
 		}
 	}
-	if _, ok := CoaxTypes[x.Type]; !ok {
+	if _, ok := coaxTypes[x.Type]; !ok {
 		return
 	}
 	t := x.Cable()
@@ -98,7 +113,7 @@ func (x *CoaxSpec) validate(c *checker, _ *Spec) {
 // Cable returns the cable data for the spec's type with any diameters the
 // spec gives in place of the published ones. The spec must be validated.
 func (x *CoaxSpec) Cable() CoaxType {
-	t := CoaxTypes[x.Type]
+	t := coaxTypes[x.Type]
 	set := func(dst *float64, v *float64) {
 		if v != nil {
 			*dst = *v

@@ -3,6 +3,7 @@ package spec
 import (
 	"fmt"
 	"math"
+	"slices"
 )
 
 // ReflectorSpec is the [reflector] table: the ground plane behind the coil.
@@ -14,7 +15,7 @@ type ReflectorSpec struct {
 	ThicknessMM    float64  `toml:"thickness_mm"`     // sheet thickness, default 1.6 mm
 	Material       string   `toml:"material"`         // sheet material id, default "fr4"
 	CornerRadiusMM float64  `toml:"corner_radius_mm"` // square corners, default 0
-	Connector      string   `toml:"connector"`        // one of Connectors: "coax", "sma-flange", "n-bulkhead", …
+	Connector      string   `toml:"connector"`        // one of Connectors(): "coax", "sma-flange", "n-bulkhead", …
 	FeedHoleMM     *float64 `toml:"feed_hole_mm"`     // feed hole diameter, default from the coax or connector
 	MountingHoles  int      `toml:"mounting_holes"`   // count, default 0
 	MountingHoleMM float64  `toml:"mounting_hole_mm"` // diameter, default 3.2 mm
@@ -51,12 +52,13 @@ type SheetMaterial struct {
 	Magnetic bool
 }
 
-// SheetMaterials lists the reflector and wedge materials.
+// sheetMaterials lists the reflector and wedge materials; SheetMaterials
+// hands out copies.
 // Source: Barontini et al., Ind. Eng. Chem. Res. 44, 2005 (brominated
 // epoxy in FR-4 laminates).
 //
 // Conductivities as % IACS × 58.0 MS/m (Source: IEC 60028 for the scale).
-var SheetMaterials = []SheetMaterial{
+var sheetMaterials = []SheetMaterial{
 	{ID: "fr4", Name: "FR-4 copper-clad glass-epoxy laminate", Halogenated: true, Joint: "clad",
 		Conductivity: 58.0e6, ConductivitySource: "copper cladding, 100 % IACS: IEC 60028"},
 	{ID: "aluminium", Name: "aluminium sheet", Reflective: true, Joint: "clamp",
@@ -75,9 +77,13 @@ var SheetMaterials = []SheetMaterial{
 // aluminium's oxide film stops ordinary rosin or zinc-chloride flux from
 // wetting it, so it is clamped or screwed rather than soft-soldered.
 
+// SheetMaterials returns the reflector and wedge materials, a fresh copy
+// the caller may change.
+func SheetMaterials() []SheetMaterial { return slices.Clone(sheetMaterials) }
+
 // SheetMaterialByID returns the material with the given id.
 func SheetMaterialByID(id string) (SheetMaterial, bool) {
-	for _, m := range SheetMaterials {
+	for _, m := range sheetMaterials {
 		if m.ID == id {
 			return m, true
 		}
@@ -86,8 +92,8 @@ func SheetMaterialByID(id string) (SheetMaterial, bool) {
 }
 
 func sheetMaterialIDs() []string {
-	ids := make([]string, len(SheetMaterials))
-	for i, m := range SheetMaterials {
+	ids := make([]string, len(sheetMaterials))
+	for i, m := range sheetMaterials {
 		ids[i] = m.ID
 	}
 	return ids

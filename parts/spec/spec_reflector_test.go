@@ -6,7 +6,7 @@ import (
 )
 
 func TestSheetMaterialConductivity(t *testing.T) {
-	for _, m := range SheetMaterials {
+	for _, m := range SheetMaterials() {
 		// Source: physical sense: sheet metals lie between steel (≈ 5 MS/m)
 		// and copper (58 MS/m, IEC 60028).
 		if !(m.Conductivity >= 1e6 && m.Conductivity <= 58.0e6) {
