@@ -139,7 +139,8 @@ func (k *Kit) lockFigure() pdf.Figure {
 			pdf.FigurePath{Points: geom.Polyline{{X: 0, Y: -2 * half}, {X: 0, Y: 2 * half}}, StrokeMM: 0.1, Gray: 1})
 		labels[3].Text = "lead channel"
 		labels = append(labels, pdf.FigureLabel{At: geom.Vec2{X: -sense * (2*half + 0.5*wd), Y: 0}, Text: "axis", Right: sense > 0})
-		dims[0].Text = fmt.Sprintf("feed lead %.1f", tail)
+		dims[0].Text, dims[0].Offset = fmt.Sprintf("feed lead %.1f", tail), sense*(half+14*wd)
+		labels[1].Text = "mark A at the channel's mouth"
 		caption = "Lock end, seen along the former's axis (mm, not to scale with the other figures): this coil is centre-fed, so the lock hole is the feed lead's channel, running in to the axis. Bend the lock end at a right angle at mark A and push it down the channel until mark A sits at its mouth; the wire then runs along the groove, and the lock end is the feed lead."
 	}
 	return pdf.Figure{Paths: paths, Dimensions: dims, Labels: labels, Height: stepFigureHeight, Caption: caption}
