@@ -73,6 +73,15 @@ type FormerParams struct {
 	EndMargin       float64 // core beyond the groove at the free end
 	MinWall         float64 // least wall left by holes
 	Labels          [2]string
+	// CentreFeed makes the wire-lock hole a centre feed's lead channel: it
+	// runs LockDepth below the groove bottom, across the axis when the
+	// lead is longer than the start's radius, and the drive cut enters
+	// from the former's end away from the feed, stopping a wall short of
+	// the channel.
+	CentreFeed bool
+	// BoreDepth is a blind bore's depth from its face to the foot of its
+	// 45° conical roof, mm; 0 for a bore through the whole former.
+	BoreDepth float64
 }
 
 // Former is a winding former in print coordinates: the flange face on z = 0,
@@ -170,6 +179,11 @@ func NewFormer(path WirePath, p FormerParams) (*Former, error) {
 		return nil, err
 	}
 	driveR := p.driveRadius()
+	if p.CentreFeed && !p.throughBore() {
+		if room := channelRoom(path, p, e); p.driveReach() > room {
+			return nil, formerError("the drive cut reaches %.1f mm from its face; %.1f mm fits before the lead channel", p.driveReach(), room)
+		}
+	}
 	lock, err := lockHole(path, p, a, up, driveR)
 	if err != nil {
 		return nil, err
@@ -199,8 +213,11 @@ func NewFormer(path WirePath, p FormerParams) (*Former, error) {
 	if err != nil {
 		return nil, err
 	}
+	if p.driveFromTop(f.Flipped) {
+		drive = sdf.Move(drive, sdf.RotationX(math.Pi).Then(sdf.Translation(geom.Vec3{Z: f.Height})))
+	}
 	cuts = append(cuts, sdf.Cut{Shape: drive})
-	if p.Drive == ThroughBore {
+	if p.Drive == ThroughBore && p.BoreDepth == 0 {
 		f.Genus = 1
 	}
 	text, err := lettering(p, rWide+p.Fillet, rWide+p.FlangeMargin-p.Chamfer, p.FlangeThickness)
@@ -395,10 +412,18 @@ func newFlange(r, face, outer float64, p FormerParams) (sdf.SDF3, error) {
 
 // lockHole returns the radial wire-lock hole at the start: the groove's
 // section carried straight in from outside the core to LockDepth below the
-// groove bottom, stopping a wall short of the drive cut.
+// groove bottom, stopping a wall short of the drive cut. A centre feed's
+// channel shares no height with the drive cut; it may cross the axis, and
+// stops a wall short of the groove on the far side.
 func lockHole(path WirePath, p FormerParams, a, up, driveR float64) (sdf.SDF3, error) {
 	bottom := path.Radius(0) - p.Wire/2
 	inner := math.Max(bottom-p.LockDepth, driveR+lockFloor(p))
+	if p.CentreFeed && !p.throughBore() {
+		inner = bottom - p.LockDepth
+		if far := farGrooveBottom(path, p); -inner+lockFloor(p) > far {
+			return nil, formerError("the %.2f mm lead channel reaches %.2f mm past the axis, leaving less than %.2f mm under the %.2f mm groove bottom opposite", p.LockDepth, -inner, lockFloor(p), far)
+		}
+	}
 	if bottom-inner < p.Wire/2 {
 		return nil, formerError("only %.2f mm of wire-lock hole fits above the drive cut", bottom-inner)
 	}
@@ -460,6 +485,25 @@ func driveCut(p FormerParams, height, driveR float64) (sdf.SDF3, error) {
 		return nil, err
 	}
 	bottomCh := sdf.Move(mouth, sdf.Translation(geom.Vec3{Z: (top - 1) / 2}))
+	if p.Drive == ThroughBore && p.BoreDepth > 0 {
+		// A blind bore with the hex socket's 45° conical roof.
+		tall := p.BoreDepth + driveR + 1
+		bore, err := sdf.NewCylinder(driveR, tall)
+		if err != nil {
+			return nil, err
+		}
+		roof, err := sdf.NewCone(tall, driveR+tall, 0)
+		if err != nil {
+			return nil, err
+		}
+		blind, err := sdf.Intersection(0,
+			sdf.Move(bore, sdf.Translation(geom.Vec3{Z: tall/2 - 1})),
+			sdf.Move(roof, sdf.Translation(geom.Vec3{Z: p.BoreDepth + driveR - tall/2})))
+		if err != nil {
+			return nil, err
+		}
+		return sdf.Union(0, blind, bottomCh)
+	}
 	if p.Drive == ThroughBore {
 		bore, err := sdf.NewCylinder(driveR, height+2)
 		if err != nil {

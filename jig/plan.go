@@ -28,6 +28,8 @@ const (
 	FitHexDepth                     // hex socket with its roof deeper than the former allows
 	FitLettering                    // flange too narrow for legible letters
 	FitGrooveSweep                  // groove section wider than the winding leaves room for, lead-in and run-out included
+	FitFeedChannel                  // centre feed: the lead channel crosses the axis too far for a wall under the groove opposite
+	FitDriveDepth                   // centre feed: the drive cut from the far end reaches too close to the lead channel
 )
 
 // FitProblem is one size the former cannot be made with: which size, what
@@ -56,6 +58,10 @@ func (p FitProblem) Error() string {
 		return fmt.Sprintf("the groove's section reaches %.2f mm from its centre; the winding, with its lead-in and run-out, leaves %.2f mm", p.Needed, p.Available)
 	case FitLettering:
 		return fmt.Sprintf("the flange leaves room for %.1f mm letters; at least %.1f mm is needed", p.Available, p.Needed)
+	case FitFeedChannel:
+		return fmt.Sprintf("the feed lead's channel with its end wall reaches %.2f mm past the axis; the groove bottom opposite is %.2f mm from it", p.Needed, p.Available)
+	case FitDriveDepth:
+		return fmt.Sprintf("the drive cut with its roof reaches %.1f mm from the end away from the feed; %.1f mm fits before the feed lead's channel and its wall", p.Needed, p.Available)
 	}
 	return fmt.Sprintf("former size %d: needs %.2f mm, has %.2f mm", p.Kind, p.Needed, p.Available)
 }
@@ -78,9 +84,14 @@ type FormerPlan struct {
 	DriveChanged bool
 	// LockHoleMM is the depth of the wire-lock hole below the groove
 	// bottom as modelled: the lock end the hole takes when the wire is bent
-	// into it at a right angle.
+	// into it at a right angle. For a centre feed the hole is the feed
+	// lead's channel and this is the lead's length, Design.FeedRun.
 	LockHoleMM float64
-	Problems   []FitProblem // empty when the former can be made
+	// DriveMM is how far the drive cut reaches along the axis from its
+	// face, its roof included; 0 for a through-bore. A centre feed's drive
+	// cut enters from the end away from the feed (Params.CentreFeed).
+	DriveMM  float64
+	Problems []FitProblem // empty when the former can be made
 }
 
 // Plan sizes the former for d from its [former] table: the groove must fit
@@ -88,7 +99,9 @@ type FormerPlan struct {
 // leave a wall under the groove and room for the wire-lock hole, the hex
 // socket must fit the height and the lettering the flange. When the spec
 // does not name a drive and the default hex socket does not fit, the plan
-// falls back to a through-bore as wide as the walls allow.
+// falls back to a through-bore as wide as the walls allow. A centre feed's
+// lock hole is the feed lead's channel, Design.FeedRun deep, and its drive
+// cut is blind from the other end (planCentreFeed).
 func Plan(d *parts.Design) FormerPlan {
 	s := d.Spec
 	f := &s.Former
@@ -121,6 +134,10 @@ func Plan(d *parts.Design) FormerPlan {
 	if f.Drive == "bore" {
 		p.Drive = ThroughBore
 	}
+	if d.CentreFed() {
+		// The lock end is the feed lead: the hole takes all of it.
+		p.CentreFeed, p.LockDepth = true, d.FeedRun()
+	}
 	path := d.Former
 	pl := FormerPlan{Path: path, Params: p}
 	a := (wire + p.Clearance) / 2
@@ -139,6 +156,9 @@ func Plan(d *parts.Design) FormerPlan {
 	if 3.5*a > rmin {
 		pl.Problems = append(pl.Problems, FitProblem{Kind: FitGrooveRadius, Needed: 3.5 * a, Available: rmin, Groove: 2 * a})
 		return pl
+	}
+	if p.CentreFeed {
+		return planCentreFeed(pl, e, s.Line("former.drive") != 0, s.Line("former.bore_diameter_mm") != 0)
 	}
 	// Room for the drive: a wall under the groove everywhere and a
 	// wire-lock hole of at least one wire diameter at the start.
@@ -166,6 +186,17 @@ func Plan(d *parts.Design) FormerPlan {
 	if p.Drive == HexSocket && p.HexDepth+driveR > e.height-MinWallMM {
 		pl.Problems = append(pl.Problems, FitProblem{Kind: FitHexDepth, Needed: p.HexDepth + driveR + MinWallMM, Available: e.height})
 	}
+	if p.Drive == HexSocket {
+		pl.DriveMM = p.HexDepth + driveR
+	}
+	return planGrooveAndLetters(pl, e)
+}
+
+// planGrooveAndLetters adds the groove-sweep and lettering problems, the
+// last checks of every plan.
+func planGrooveAndLetters(pl FormerPlan, e extent) FormerPlan {
+	p, path := pl.Params, pl.Path
+	a := (p.Wire + p.Clearance) / 2
 	if len(pl.Problems) == 0 {
 		if _, err := grooveSweep(path, p, a, 1); err != nil {
 			pl.Problems = append(pl.Problems, grooveSweepProblem(path, p, a))
@@ -175,6 +206,51 @@ func Plan(d *parts.Design) FormerPlan {
 		pl.Problems = append(pl.Problems, FitProblem{Kind: FitLettering, Needed: minTextHeight, Available: th})
 	}
 	return pl
+}
+
+// planCentreFeed plans the drive and the lead channel of a centre-fed
+// former. The channel, LockDepth (the feed lead's length) below the groove
+// bottom, may cross the axis; it must leave lockFloor under the groove
+// bottom opposite. The drive cut enters from the end away from the feed
+// and must stop MinWall short of the channel, so a through-bore becomes a
+// blind bore as deep as that allows, and the default hex socket that does
+// not fit the walls falls back to such a bore.
+func planCentreFeed(pl FormerPlan, e extent, driveNamed, boreNamed bool) FormerPlan {
+	p, path := &pl.Params, pl.Path
+	if room := e.floor - MinWallMM; p.Drive == HexSocket && !driveNamed && p.driveRadius() > room {
+		p.Drive, pl.DriveChanged = ThroughBore, true
+		if !boreNamed {
+			// Half a millimetre inside the limit, on a 0.1 mm step.
+			p.BoreDiameter = math.Max(1, math.Min(p.BoreDiameter, math.Floor(20*(room-0.5))/10))
+		}
+	}
+	driveR := p.driveRadius()
+	if wall := e.floor - driveR; wall < MinWallMM {
+		pl.Problems = append(pl.Problems, FitProblem{Kind: FitDriveWall, Needed: MinWallMM, Available: wall})
+		return pl
+	}
+	reach := channelRoom(path, *p, e)
+	if p.Drive == ThroughBore {
+		// As deep as the channel's wall allows, on a 0.1 mm step, and at
+		// least one bore diameter deep to hold its rod. Common practice
+		// (no published source).
+		p.BoreDepth = math.Floor(10*(reach-driveR)) / 10
+		if p.BoreDepth < 2*driveR {
+			pl.Problems = append(pl.Problems, FitProblem{Kind: FitDriveDepth, Needed: 3 * driveR, Available: reach})
+			p.BoreDepth = 0
+		}
+	} else if p.HexDepth+driveR > reach {
+		pl.Problems = append(pl.Problems, FitProblem{Kind: FitDriveDepth, Needed: p.HexDepth + driveR, Available: reach})
+	}
+	pl.DriveMM = p.driveReach()
+	pl.LockHoleMM = p.LockDepth
+	// The channel's end lies LockDepth below the start's groove bottom:
+	// past the axis when the lead is longer than that radius.
+	past := p.LockDepth - e.startBottom
+	if far := farGrooveBottom(path, *p); past+lockFloor(*p) > far {
+		pl.Problems = append(pl.Problems, FitProblem{Kind: FitFeedChannel, Needed: past + lockFloor(*p), Available: far})
+	}
+	return planGrooveAndLetters(pl, e)
 }
 
 // Former builds the planned former. It refuses a plan with fit problems,

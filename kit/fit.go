@@ -2,6 +2,7 @@ package kit
 
 import (
 	"fmt"
+	"math"
 
 	"coilwright/jig"
 	"coilwright/parts"
@@ -65,6 +66,19 @@ func fitError(s *spec.Spec, pl jig.FormerPlan, p jig.FitProblem) *spec.SpecError
 		}
 		e.Problem = fmt.Sprintf("leaves the former's %.2f mm groove %.2f mm of room around its centre, lead-in and run-out included; its section needs %.2f mm", p.Groove, p.Available, p.Needed)
 		e.Fix = "raise the spacing, use thinner wire, or shorten former.lead_in_deg and former.run_out_deg"
+	case jig.FitFeedChannel:
+		e.Key, e.Value = "coil.feed", s.Coil.Feed
+		e.Problem = fmt.Sprintf("makes the former's lock hole the feed lead's channel, %.1f mm deep below the groove: with its end wall it reaches %.2f mm past the axis, but the groove bottom opposite is %.2f mm from the axis", pl.LockHoleMM, p.Needed, p.Available)
+		e.Fix = `set feed = "periphery", or use a wire that springs back less, thinner wire or a wider coil`
+	case jig.FitDriveDepth:
+		e.Key, e.Value = "former.hex_depth_mm", num(f.HexDepthMM)
+		e.Problem = fmt.Sprintf("with the socket's roof reaches %.1f mm from the former's end away from the feed; a centre feed's lead channel leaves %.1f mm before its %s mm wall", p.Needed, p.Available, num(jig.MinWallMM))
+		e.Fix = fmt.Sprintf("make the socket at most %.0f mm deep, or set coil.feed = \"periphery\"", math.Floor(p.Available-(p.Needed-f.HexDepthMM)))
+		if pl.Params.Drive == jig.ThroughBore {
+			e.Key, e.Value = "former.bore_diameter_mm", num(pl.Params.BoreDiameter)
+			e.Problem = fmt.Sprintf("needs a blind bore at least one diameter deep, %.1f mm with its roof, from the former's end away from the feed; a centre feed's lead channel leaves %.1f mm before its %s mm wall", p.Needed, p.Available, num(jig.MinWallMM))
+			e.Fix = `use a thinner bore, or set coil.feed = "periphery"`
+		}
 	case jig.FitLettering:
 		e.Key, e.Value = "former.flange_margin_mm", num(f.FlangeMarginMM)
 		e.Problem = fmt.Sprintf("leaves room for %.1f mm letters on the flange; at least %s mm is needed", p.Available, num(p.Needed))

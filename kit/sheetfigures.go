@@ -131,8 +131,19 @@ func (k *Kit) lockFigure() pdf.Figure {
 		{At: end, Text: "wire on in the groove", Center: true},
 		{At: geom.Vec2{X: sense * (half + 0.5*wd), Y: holeIn - 1.5*wd}, Text: "lock hole", Right: sense < 0},
 	}
-	return pdf.Figure{Paths: paths, Dimensions: dims, Labels: labels, Height: stepFigureHeight,
-		Caption: fmt.Sprintf("Lock tail, seen along the former's axis (mm, not to scale with the other figures): bend the lock end at a right angle at mark A and push it down the lock hole until mark A sits at the hole's mouth; the wire then runs along the groove.%s", cutNote)}
+	caption := fmt.Sprintf("Lock tail, seen along the former's axis (mm, not to scale with the other figures): bend the lock end at a right angle at mark A and push it down the lock hole until mark A sits at the hole's mouth; the wire then runs along the groove.%s", cutNote)
+	if w.CentreFed && cutNote == "" {
+		// The channel runs in to the axis (and past it when the lead is
+		// longer than the former's start radius): mark the axis.
+		paths = append(paths, pdf.FigurePath{Points: geom.Polyline{{X: -2 * half, Y: 0}, {X: 2 * half, Y: 0}}, StrokeMM: 0.1, Gray: 1},
+			pdf.FigurePath{Points: geom.Polyline{{X: 0, Y: -2 * half}, {X: 0, Y: 2 * half}}, StrokeMM: 0.1, Gray: 1})
+		labels[3].Text = "lead channel"
+		labels = append(labels, pdf.FigureLabel{At: geom.Vec2{X: -sense * (2*half + 0.5*wd), Y: 0}, Text: "axis", Right: sense > 0})
+		dims[0].Text, dims[0].Offset = fmt.Sprintf("feed lead %.1f", tail), sense*(half+14*wd)
+		labels[1].Text = "mark A at the channel's mouth"
+		caption = "Lock end, seen along the former's axis (mm, not to scale with the other figures): this coil is centre-fed, so the lock hole is the feed lead's channel, running in to the axis. Bend the lock end at a right angle at mark A and push it down the channel until mark A sits at its mouth; the wire then runs along the groove, and the lock end is the feed lead."
+	}
+	return pdf.Figure{Paths: paths, Dimensions: dims, Labels: labels, Height: stepFigureHeight, Caption: caption}
 }
 
 // windingFigure draws the coil seen from its open end with the way the
@@ -364,6 +375,10 @@ func (k *Kit) lockParams() jig.FormerParams {
 // the drive cut (as jig's lockHole does), mm.
 func (k *Kit) lockRoom() float64 {
 	p := k.lockParams()
+	if p.CentreFeed && k.formerObj == nil {
+		// The feed lead's channel, as planned.
+		return p.Wire/2 + k.Former.LockHoleMM
+	}
 	bottom := k.Former.Path.StartRadius - p.Wire/2
 	driveR := p.BoreDiameter / 2
 	if p.Drive == jig.HexSocket {

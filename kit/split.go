@@ -28,7 +28,7 @@ func (k *Kit) planSplit() {
 	// so the lock hole and stop notch keep their wall from the rod.
 	rod := k.cutList.Dowel.DiameterMM
 	params := pl.Params
-	params.Drive, params.BoreDiameter = jig.ThroughBore, rod+2*jig.JointClearanceMM
+	params.Drive, params.BoreDiameter, params.BoreDepth = jig.ThroughBore, rod+2*jig.JointClearanceMM, 0
 	f, err := jig.NewFormer(pl.Path, params)
 	if err == nil {
 		k.split, err = f.Split(s.Former.PrintHeightMM, rod, params)

@@ -290,6 +290,15 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 	// the other way up.
 	marks := fmt.Sprintf("Mark the blank at %s from one end (mark A: the start of the winding; the end before it is the lock end, which goes into the former's lock hole and is later cut down to the feed lead) and at %s from the same end, %s further on: the length of the former's groove from the lock hole to the stop notch (mark B: the end of the winding, at the stop notch). The %s beyond mark B is trim.",
 		mm(w.MarkAMM), mm(w.MarkBMM), mm(w.ArcMM), mm(TrimPerEndMM))
+	lockText := fmt.Sprintf("Bend the lock end at a right angle at mark A, so that its %s stands straight out from the blank. Push it into the lock hole at the start of the groove, %%s, until the bend at mark A sits at the mouth of the hole and the blank lies along the groove.", mm(w.LockTailMM))
+	trimText := fmt.Sprintf("Cut the lock end off %s beyond mark A: that stub is the feed lead. Cut the other end at mark B. File the cut ends smooth.", mm(w.FeedLeadMM))
+	if w.CentreFed {
+		// The former's lock hole is the lead's channel: the lock end is
+		// the feed lead, bent and sized on the former.
+		marks = strings.Replace(marks, "which goes into the former's lock hole and is later cut down to the feed lead", "which goes into the former's lead channel and is the feed lead", 1)
+		lockText = fmt.Sprintf("Bend the lock end at a right angle at mark A, towards the axis, so that its %s stands straight out from the blank. Push it into the lead channel at the start of the groove, %%s, until the bend at mark A sits at the channel's mouth and the blank lies along the groove: the channel runs in to the axis and sets the feed lead's bend, length and direction.", mm(w.LockTailMM))
+		trimText = fmt.Sprintf("The lock end, %s beyond mark A, is the feed lead: leave it as the former set it. Cut the other end at mark B and file it smooth.", mm(w.LockTailMM))
+	}
 	unwind := (d.Former.Turns - d.Coil.Turns) * 360
 	lockAt, windTo := "at the flange end of the former, the coil's feed end", "towards the free end of the former"
 	if d.Former.EndRadius > d.Former.StartRadius {
@@ -325,7 +334,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 	standCoil := "Stand the coil over the reflector with its start beside the bare centre conductor and its axis over the reflector's centre."
 	if d.CentreFed() {
 		feedAt = "at the centre cross: this coil is centre-fed, so the cable comes up on the axis"
-		lead = fmt.Sprintf("At the coil's start, bend the feed lead at a right angle towards the axis, parallel to the reflector (the former's radial lock hole has already set this bend): it runs %s in to the axis, where it lies on the tip of the cable's centre conductor.", mm(d.FeedRun()))
+		lead = fmt.Sprintf("At the coil's start the feed lead runs at a right angle towards the axis, parallel to the reflector, as the former's lead channel bent it (straighten it back to that if it moved on release): it runs %s in to the axis, where it lies on the tip of the cable's centre conductor.", mm(d.FeedRun()))
 		standCoil = fmt.Sprintf("Stand the coil over the reflector with its axis over the centre, the feed lead's end resting on the tip of the centre conductor and the lead running out along the template's tick at %.1f°.", math.Mod(d.FeedAngle()*180/math.Pi+360, 360))
 		if f := cl.Dowel.Foot; f != nil {
 			rodHole = ""
@@ -344,7 +353,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 			marks,
 		}, Cautions: pick(all, HazardEyes)},
 		{Title: "Lock its end in the former", Text: []string{
-			fmt.Sprintf("Bend the lock end at a right angle at mark A, so that its %s stands straight out from the blank. Push it into the lock hole at the start of the groove, %s, until the bend at mark A sits at the mouth of the hole and the blank lies along the groove.", mm(w.LockTailMM), lockAt),
+			fmt.Sprintf(lockText, lockAt),
 			"Check the hand mark on the former: this coil is " + d.Coil.Hand.String() + ", " + handWords(d.Coil.Hand) + ".",
 		}},
 		{Title: "Wind under tension", Text: []string{
@@ -362,7 +371,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 			"A turn outside the tolerance can be eased open or closed by hand. If every turn is large by about the same amount, this batch of wire springs back more than expected: recalibrate the former from a measured test coil before winding the rest of the batch.",
 		}},
 		{Title: "Trim and form the feed lead", Text: []string{
-			fmt.Sprintf("Cut the lock end off %s beyond mark A: that stub is the feed lead. Cut the other end at mark B. File the cut ends smooth.", mm(w.FeedLeadMM)),
+			trimText,
 			lead,
 		}, Cautions: pick(all, HazardEyes)},
 		{Title: "Prepare the reflector", Text: []string{

@@ -52,6 +52,11 @@ const (
 	SleeveLengthMM = 25.0
 )
 
+// leadChannelSlackMM is how much shorter than a centre feed's lead the
+// former's lead channel may be and still set the lead's length: the
+// rounding of the figures the cut list prints.
+const leadChannelSlackMM = 0.05
+
 // dowelDiametersMM are the support-rod diameters commonly stocked in
 // PTFE, nylon, glass-fibre and wood, in mm, ascending. Common practice (no
 // published source).
@@ -89,9 +94,13 @@ type WireBlank struct {
 	MarkAMM    float64 // mark A from the lock end: trim, lock tail and feed lead
 	MarkBMM    float64 // mark B from the lock end: MarkAMM + ArcMM
 	LockTailMM float64 // locked in the former's lock hole at the start of the groove (the feed end)
-	FeedLeadMM float64 // drop from the wire centre at the start to the top of the dielectric stub
+	FeedLeadMM float64 // periphery feed: drop from the wire centre at the start to the top of the dielectric stub; centre feed: run from the wire centre at the start in to the axis
 	TrimMM     float64 // squared off both ends after release
 	LengthMM   float64 // the blank as cut
+	// CentreFed is set for a centre feed: the former's lock hole is the
+	// feed lead's channel, so the lock end, bent at mark A, is the feed
+	// lead as built and is not cut down.
+	CentreFed bool
 }
 
 // DowelCut is the support rod for one coil.
@@ -164,10 +173,18 @@ type HardwareItem struct {
 // holeMM below the groove bottom, or to the feed lead if that is longer
 // (with a warning), and works out the blank and marks again: the lock end
 // is later cut down to the feed lead, so it needs no trim of its own.
+// For a centre feed the hole is the feed lead's channel and the lock end is
+// the feed lead itself, as long as the lead.
 func (cl *CutList) FitLockTail(holeMM float64) {
 	w := &cl.Wire
 	w.LockTailMM = holeMM
-	if w.FeedLeadMM > holeMM {
+	if w.CentreFed {
+		w.LockTailMM = w.FeedLeadMM
+		if holeMM < w.FeedLeadMM-leadChannelSlackMM {
+			cl.Warnings = append(cl.Warnings, Warning{Code: "lock-hole-short",
+				Message: fmt.Sprintf("the former's lead channel is %.1f mm deep but the feed lead runs %.1f mm in to the axis: the channel does not set the lead's length; cut the lock end to %.1f mm after release", holeMM, w.FeedLeadMM, w.FeedLeadMM)})
+		}
+	} else if w.FeedLeadMM > holeMM {
 		w.LockTailMM = w.FeedLeadMM
 		cl.Warnings = append(cl.Warnings, Warning{Code: "lock-hole-short",
 			Message: fmt.Sprintf("the former's lock hole is %.1f mm deep but the feed lead is cut %.1f mm from the lock end: deepen former.lock_hole_depth_mm or use a thinner drive", holeMM, w.FeedLeadMM)})
@@ -214,12 +231,16 @@ func NewCutList(d *Design) (*CutList, error) {
 		FeedLeadMM: drop, TrimMM: 2 * TrimPerEndMM}
 	if d.CentreFed() {
 		// The lead runs out from the axis, over the centre conductor's tip.
-		w.FeedLeadMM = d.FeedRun()
+		w.FeedLeadMM, w.CentreFed = d.FeedRun(), true
 	}
 	w.LengthMM = w.ArcMM + w.LockTailMM + w.FeedLeadMM + w.TrimMM
 	w.MarkAMM = TrimPerEndMM + w.LockTailMM + w.FeedLeadMM
 	w.MarkBMM = w.MarkAMM + w.ArcMM
 	cl.Wire = w
+	if w.CentreFed {
+		// The lock end is the feed lead: no separate lead, no trim on it.
+		cl.FitLockTail(w.FeedLeadMM)
+	}
 
 	dw, err := dowelCut(d)
 	if err != nil {
@@ -464,7 +485,11 @@ func (cl *CutList) Rows() []CutRow {
 // blankNote sums the wire blank: with the lock end fitted to the former's
 // hole (FitLockTail) the feed lead is cut from the lock end.
 func blankNote(w WireBlank) string {
-	if math.Abs(w.LengthMM-(w.LockTailMM+w.ArcMM+w.TrimMM)) < 1e-9 {
+	fitted := math.Abs(w.LengthMM-(w.LockTailMM+w.ArcMM+w.TrimMM)) < 1e-9
+	if fitted && w.CentreFed && w.LockTailMM <= w.FeedLeadMM {
+		return fmt.Sprintf("lock end %.1f (bent at mark A into the former's lead channel; it is the feed lead, in to the axis) + winding %.1f + trim %.1f mm", w.LockTailMM, w.ArcMM, w.TrimMM)
+	}
+	if fitted {
 		return fmt.Sprintf("lock end %.1f (bent into the lock hole, later cut to the %.1f mm feed lead) + winding %.1f + trim %.1f mm", w.LockTailMM, w.FeedLeadMM, w.ArcMM, w.TrimMM)
 	}
 	return fmt.Sprintf("winding %.1f + lock tail %.1f + feed lead %.1f + trim %.1f mm", w.ArcMM, w.LockTailMM, w.FeedLeadMM, w.TrimMM)
