@@ -8,6 +8,7 @@ import (
 
 	"coilwright/cam/html"
 	"coilwright/parts"
+	"coilwright/parts/line"
 )
 
 // reportPage is the name of the self-contained report page.
@@ -67,7 +68,7 @@ func (k *Kit) reportDocument(rec *recorder) (html.Document, error) {
 	sum = append(sum, html.Definition{Term: "Quoted gain", Detail: fmt.Sprintf("%.1f dBic (%s)", r.QuotedGainDBic, r.QuotedGainSource)})
 	matched := fmt.Sprintf("none: the VSWR at %s MHz is above the target %.2f", num(r.FrequencyMHz), e.TargetVSWR)
 	if lo, hi, ok := e.matchedBand(r.FrequencyMHz); ok {
-		matched = fmt.Sprintf("%.0f–%.0f MHz at VSWR %.2f or better (return loss %.0f dB)", lo, hi, e.TargetVSWR, parts.ReturnLossDB((e.TargetVSWR-1)/(e.TargetVSWR+1)))
+		matched = fmt.Sprintf("%.0f–%.0f MHz at VSWR %.2f or better (return loss %.0f dB)", lo, hi, e.TargetVSWR, line.ReturnLossDB((e.TargetVSWR-1)/(e.TargetVSWR+1)))
 		if lo <= e.FreqMHz[0] || hi >= e.FreqMHz[len(e.FreqMHz)-1] {
 			matched += "; the match holds to the edge of the plotted range"
 		}

@@ -10,6 +10,7 @@ import (
 	"coilwright/cam/pdf"
 	"coilwright/cam/svg"
 	"coilwright/parts"
+	"coilwright/parts/line"
 )
 
 // nestTolerance is the chord tolerance in mm used to flatten outlines for
@@ -53,7 +54,7 @@ func cutParts(d *parts.Design) ([]cutPart, error) {
 			fmt.Sprintf("%s, %.2f mm thick; %.2f mm along the centreline, %.2f mm wide at the feed end (tick), %.2f mm at the far end.",
 				p.WedgeMaterial.Name, s.Wedge.ThicknessMM, w.Length, w.FeedWidth, w.EndWidth),
 			fmt.Sprintf("Solder it flat under the first %.0f° of wire, the ticked end to the feed pin. Expected |Γ| %.2f (VSWR %.2f) at %.0f MHz.",
-				s.Wedge.SpanDeg, w.Reflection, parts.VSWR(w.Reflection), s.FrequencyMHz),
+				s.Wedge.SpanDeg, w.Reflection, line.VSWR(w.Reflection), s.FrequencyMHz),
 		}})
 	for i := range out {
 		c, err := cut.ApplyKerf(out[i].nominal, p.Kerf)

@@ -8,6 +8,8 @@ package parts
 import (
 	"fmt"
 	"math"
+
+	"coilwright/parts/line"
 )
 
 // DipoleGainDBi is a half-wave dipole's gain over isotropic.
@@ -27,7 +29,7 @@ const LinearToCircularLossDB = 3.0
 // Source: Pozar, Microwave Engineering, 4th ed., §2.7 (lossy line: Γ at
 // the input is Γ_L·e^(−2αℓ)).
 func SeenThroughFeeder(rlDB, lossDB float64) float64 {
-	return VSWR(math.Pow(10, -(rlDB+2*lossDB)/20))
+	return line.VSWR(math.Pow(10, -(rlDB+2*lossDB)/20))
 }
 
 // FarFieldMM is the far-field (Fraunhofer) distance 2D²/λ for an antenna
@@ -42,7 +44,7 @@ func acceptanceText(d *Design) []string {
 	if s.RF.FeederLossDB > 0 {
 		loss = s.RF.FeederLossDB
 	}
-	vswr := VSWR(math.Pow(10, -ReturnLossTargetDB/20))
+	vswr := line.VSWR(math.Pow(10, -ReturnLossTargetDB/20))
 	seen := SeenThroughFeeder(ReturnLossTargetDB, loss)
 	swr := fmt.Sprintf("SWR meter at the transmitter: put a through-line SWR meter rated for %s MHz between the transmitter and the antenna's cable, transmit at the lowest power that moves the meter, and read the SWR at the band's ends and centre. A good antenna reads below %.1f at the antenna", num(s.FrequencyMHz), vswr)
 	if loss > 0 {

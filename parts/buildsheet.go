@@ -11,6 +11,7 @@ import (
 	"math"
 	"strings"
 
+	"coilwright/parts/line"
 	"coilwright/parts/spec"
 )
 
@@ -278,7 +279,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 	}
 	strip1 := "Cut the matching strip from its 1:1 template and file its edges smooth."
 	strip2 := "Tin the strip and the underside of the winding's start. Solder the strip along the underside of the winding's start, its wide end at the feed and its flat face parallel to the reflector."
-	expect := fmt.Sprintf("The matching strip is sized for a VSWR of at most %s (return loss at least %.1f dB) across the band; accept the antenna if the return loss is at least %s dB across it.", num(s.Wedge.MaxVSWR), ReturnLossDB((s.Wedge.MaxVSWR-1)/(s.Wedge.MaxVSWR+1)), num(ReturnLossTargetDB))
+	expect := fmt.Sprintf("The matching strip is sized for a VSWR of at most %s (return loss at least %.1f dB) across the band; accept the antenna if the return loss is at least %s dB across it.", num(s.Wedge.MaxVSWR), line.ReturnLossDB((s.Wedge.MaxVSWR-1)/(s.Wedge.MaxVSWR+1)), num(ReturnLossTargetDB))
 	clearance := ""
 	if strip != nil && len(strip.Stations) > 0 {
 		under := fmt.Sprintf("the first %.0f° of the winding", strip.Span*180/math.Pi)

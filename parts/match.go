@@ -19,6 +19,7 @@ import (
 	"math"
 	"math/cmplx"
 
+	"coilwright/parts/line"
 	"coilwright/parts/spec"
 )
 
@@ -113,8 +114,8 @@ func lineMatch(d *Design, w *Wedge, freqs []float64) []MatchPoint {
 	for i, f := range freqs {
 		lambda := spec.Wavelength(f)
 		zl := KrausInputResistance(first/lambda, !d.CentreFed())
-		g := cmplx.Abs(Reflection(spec.WedgeFeedOhm, zl, prof, 2*math.Pi*total/lambda))
-		out[i] = MatchPoint{FrequencyMHz: f, LoadOhm: zl, Reflection: g, VSWR: VSWR(math.Min(g, 0.999999))}
+		g := cmplx.Abs(line.Reflection(spec.WedgeFeedOhm, zl, prof, 2*math.Pi*total/lambda))
+		out[i] = MatchPoint{FrequencyMHz: f, LoadOhm: zl, Reflection: g, VSWR: line.VSWR(math.Min(g, 0.999999))}
 	}
 	return out
 }

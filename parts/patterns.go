@@ -8,6 +8,7 @@ import (
 	"fmt"
 	"math"
 
+	"coilwright/parts/line"
 	"coilwright/parts/spec"
 )
 
@@ -269,16 +270,16 @@ func (d *Design) patternReports(r *Report) {
 		Material: s.Wedge.Material, ThicknessMM: s.Wedge.ThicknessMM, Taper: s.Wedge.Taper, SpanDeg: w.Span * 180 / math.Pi,
 		MaxVSWR: s.Wedge.MaxVSWR, SpanSized: s.Line("wedge.span_deg") == 0, LineBand: p.LineBand, LineWorstVSWR: worstVSWR(p.LineBand), LineModel: LineModelNote,
 		FeedOhm: spec.WedgeFeedOhm, LoadOhm: p.WedgeLoadOhm, LengthMM: w.Length, FeedWidthMM: w.FeedWidth, EndWidthMM: w.EndWidth,
-		ElectricalLengthRad: w.ElectricalLength, Reflection: w.Reflection, VSWR: VSWR(w.Reflection),
+		ElectricalLengthRad: w.ElectricalLength, Reflection: w.Reflection, VSWR: line.VSWR(w.Reflection),
 		Method: "Hammerstad–Jensen air microstrip; small-reflection mismatch", Note: WedgeNote, Widths: w.Stations,
 		Cutting: CutReport{Method: p.Method, KerfMM: p.Kerf, Label: p.WedgeLabel},
 	}
 	if w.Reflection > 0 {
-		wr.ReturnLossDB = ReturnLossDB(w.Reflection)
+		wr.ReturnLossDB = line.ReturnLossDB(w.Reflection)
 	}
 	if s.Wedge.Taper == "klopfenstein" {
 		wr.Ripple = s.Wedge.Ripple
-		wr.KlopfensteinA = KlopfensteinA(spec.WedgeFeedOhm, p.WedgeLoadOhm, s.Wedge.Ripple)
+		wr.KlopfensteinA = line.KlopfensteinA(spec.WedgeFeedOhm, p.WedgeLoadOhm, s.Wedge.Ripple)
 	}
 	r.Wedge = wr
 }
@@ -304,10 +305,10 @@ func reflectorReport(p *Patterns, rs *spec.ReflectorSpec, size, lambda float64) 
 }
 
 // wedgeTaper returns the wedge's impedance profile to load resistance zl.
-func wedgeTaper(w *spec.WedgeSpec, zl float64) Taper {
-	t := Taper{Kind: TaperExponential, Z0: spec.WedgeFeedOhm, ZL: zl}
+func wedgeTaper(w *spec.WedgeSpec, zl float64) line.Taper {
+	t := line.Taper{Kind: line.TaperExponential, Z0: spec.WedgeFeedOhm, ZL: zl}
 	if w.Taper == "klopfenstein" {
-		t.Kind, t.GammaMax = TaperKlopfenstein, w.Ripple
+		t.Kind, t.GammaMax = line.TaperKlopfenstein, w.Ripple
 	}
 	return t
 }

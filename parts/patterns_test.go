@@ -8,6 +8,7 @@ import (
 	"strings"
 	"testing"
 
+	"coilwright/parts/line"
 	"coilwright/parts/spec"
 )
 
@@ -217,7 +218,7 @@ func TestKlopfensteinWedge(t *testing.T) {
 
 func ExampleStripWidthRatio() {
 	// Width-to-height ratio of a 50 Ω zero-thickness strip in air.
-	u, _ := StripWidthRatio(50, 0)
+	u, _ := line.StripWidthRatio(50, 0)
 	fmt.Printf("%.3f\n", u)
 	// Output: 4.912
 }
