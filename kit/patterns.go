@@ -10,6 +10,7 @@ import (
 	"coilwright/cam/pdf"
 	"coilwright/cam/svg"
 	"coilwright/parts"
+	"coilwright/parts/flat"
 	"coilwright/parts/line"
 )
 
@@ -68,7 +69,7 @@ func cutParts(d *parts.Design) ([]cutPart, error) {
 		switch {
 		case out[i].name == "wedge":
 			out[i].nest, err = cut.NestPolygon(outerOutline(c), s.Quantity, sheet, cut.NestOptions{Interlock: true, Tolerance: nestTolerance})
-		case p.Reflector.Input.Shape == parts.ReflectorDisc:
+		case p.Reflector.Input.Shape == flat.ReflectorDisc:
 			out[i].nest, err = cut.NestDiscs(p.Reflector.Input.Size/2+p.Kerf/2, s.Quantity, sheet)
 		default:
 			out[i].nest, err = cut.NestPolygon(outerOutline(c), s.Quantity, sheet, cut.NestOptions{Tolerance: nestTolerance, Angles: []float64{0}})
@@ -83,7 +84,7 @@ func cutParts(d *parts.Design) ([]cutPart, error) {
 // outerOutline returns the first CUT entity, the part's outline, as a
 // polygon.
 func outerOutline(d geom.Drawing) geom.Polyline {
-	l, _ := d.Layer(parts.LayerCut)
+	l, _ := d.Layer(flat.LayerCut)
 	switch e := l.Entities[0].(type) {
 	case geom.Circle:
 		return e.Flatten(nestTolerance)

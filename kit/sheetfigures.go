@@ -15,6 +15,7 @@ import (
 	"coilwright/cam/pdf"
 	"coilwright/jig"
 	"coilwright/parts"
+	"coilwright/parts/flat"
 	"coilwright/parts/spec"
 )
 
@@ -172,7 +173,7 @@ func windingFigure(d *parts.Design) pdf.Figure {
 // stripFigure draws the matching strip's flat pattern with its feed end
 // marked, and under it the strip's rise above the plate along its length
 // as it follows the first part of the turn.
-func stripFigure(w *parts.Wedge) pdf.Figure {
+func stripFigure(w *flat.Wedge) pdf.Figure {
 	outline := w.Outline.Flatten(0.02)
 	paths := []pdf.FigurePath{{Points: outline, Closed: true, Fill: true, FillGray: 0.2, Gray: 1}}
 	box := geom.EmptyBox2()
@@ -213,7 +214,7 @@ func stripFigure(w *parts.Wedge) pdf.Figure {
 		Caption: fmt.Sprintf("Matching strip (mm): above, the flat pattern as cut, feed end at the left (the tick on the template); below, its underside's height above the plate along its length, at the same length scale. Bend it by hand to follow the underside of the first %.0f° of wire as the wire rises, its flat face parallel to the plate, the feed end at the feed.", last.Phi*180/math.Pi)}
 }
 
-func maxHeight(w *parts.Wedge) float64 {
+func maxHeight(w *flat.Wedge) float64 {
 	h := 0.0
 	for _, st := range w.Stations {
 		h = math.Max(h, st.Height)
@@ -228,7 +229,7 @@ func reflectorFigure(d *parts.Design) pdf.Figure {
 	r := d.Patterns.Reflector
 	in := r.Input
 	var paths []pdf.FigurePath
-	if l, ok := r.Drawing.Layer(parts.LayerCut); ok {
+	if l, ok := r.Drawing.Layer(flat.LayerCut); ok {
 		for _, e := range l.Entities {
 			switch e := e.(type) {
 			case geom.Circle:

@@ -11,6 +11,7 @@ import (
 	"math"
 	"strings"
 
+	"coilwright/parts/flat"
 	"coilwright/parts/line"
 	"coilwright/parts/spec"
 )
@@ -91,7 +92,7 @@ const ReturnLossTargetDB = 10.0
 // specSHA256 is the hex hash of the spec's bytes, printed on the cover.
 func NewBuildSheet(d *Design, cl *CutList, specSHA256 string) *BuildSheet {
 	s := d.Spec
-	var strip *Wedge
+	var strip *flat.Wedge
 	if d.Patterns != nil {
 		strip = d.Patterns.Wedge
 	}
@@ -258,7 +259,7 @@ func pick(all []Hazard, ids ...HazardID) []Hazard {
 	return out
 }
 
-func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
+func steps(d *Design, cl *CutList, strip *flat.Wedge, all []Hazard) []Step {
 	s := d.Spec
 	w := cl.Wire
 	cx := cl.Coax

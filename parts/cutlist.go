@@ -24,6 +24,7 @@ import (
 	"math"
 	"slices"
 
+	"coilwright/parts/flat"
 	"coilwright/parts/spec"
 )
 
@@ -201,7 +202,7 @@ func NewCutList(d *Design) (*CutList, error) {
 	if d.Patterns != nil {
 		cx.FeedHoleMM = d.Patterns.Reflector.Input.Feed.Diameter
 	}
-	if j := s.Reflector.Connector; FeedKindByConnector(j) != FeedCoax {
+	if j := s.Reflector.Connector; flat.FeedKindByConnector(j) != flat.FeedCoax {
 		cx = CoaxCut{Spec: s.Coax.Type, Cable: cable, FinishedMM: s.Coax.LengthMM, CutMM: s.Coax.LengthMM, ThroughMM: thick, CentreMM: drop + FeedStandoffMM, FeedHoleMM: cx.FeedHoleMM, Jack: j}
 	}
 	cl.Coax = cx

@@ -19,6 +19,7 @@ import (
 	"math"
 	"math/cmplx"
 
+	"coilwright/parts/flat"
 	"coilwright/parts/line"
 	"coilwright/parts/spec"
 )
@@ -88,7 +89,7 @@ const lineProfileSamples = 400
 
 // lineMatch evaluates the line model of strip w (with the centre feed's
 // horizontal lead in front of it when lead.Run > 0) across freqs (MHz).
-func lineMatch(d *Design, w *Wedge, freqs []float64) []MatchPoint {
+func lineMatch(d *Design, w *flat.Wedge, freqs []float64) []MatchPoint {
 	a := d.Spec.Wire.DiameterMM / 2
 	zLead := 0.0
 	rise := stripFeedHeight(d, w)
@@ -107,7 +108,7 @@ func lineMatch(d *Design, w *Wedge, freqs []float64) []MatchPoint {
 			prof[i] = zLead
 			continue
 		}
-		prof[i] = w.impedanceAt(s - run)
+		prof[i] = impedanceAt(w, s-run)
 	}
 	first := d.Turns[0].DiameterMM * math.Pi
 	out := make([]MatchPoint, len(freqs))
@@ -120,9 +121,9 @@ func lineMatch(d *Design, w *Wedge, freqs []float64) []MatchPoint {
 	return out
 }
 
-// impedanceAt interpolates the strip's realised impedance at arc length s
+// impedanceAt interpolates the realised impedance of strip w at arc length s
 // from its feed end.
-func (w *Wedge) impedanceAt(s float64) float64 {
+func impedanceAt(w *flat.Wedge, s float64) float64 {
 	st := w.Stations
 	for j := 1; j < len(st); j++ {
 		if s <= st[j].S || j == len(st)-1 {
@@ -148,10 +149,10 @@ func worstVSWR(pts []MatchPoint) float64 {
 // the band on the line model (the span with the lowest worst VSWR when
 // none does). It also returns the line model's band figures and a warning
 // when the target is not met.
-func sizeWedge(d *Design, zl float64) (*Wedge, []MatchPoint, *Warning, error) {
+func sizeWedge(d *Design, zl float64) (*flat.Wedge, []MatchPoint, *Warning, error) {
 	s := d.Spec
 	freqs := bandFrequencies(s)
-	in := WedgeInput{
+	in := flat.WedgeInput{
 		Path:         d.Coil.Point,
 		WireDiameter: s.Wire.DiameterMM,
 		Thickness:    s.Wedge.ThicknessMM,
@@ -167,12 +168,12 @@ func sizeWedge(d *Design, zl float64) (*Wedge, []MatchPoint, *Warning, error) {
 			spans = append(spans, sp)
 		}
 	}
-	var best *Wedge
+	var best *flat.Wedge
 	var bestPts []MatchPoint
 	var firstErr error
 	for _, sp := range spans {
 		in.Span = sp * math.Pi / 180
-		w, err := NewWedge(in)
+		w, err := flat.NewWedge(in)
 		if err != nil {
 			if firstErr == nil {
 				firstErr = err
@@ -209,7 +210,7 @@ func sizeWedge(d *Design, zl float64) (*Wedge, []MatchPoint, *Warning, error) {
 // stripFeedHeight returns the height above the plate at which candidate
 // strip w starts: the height of the feed lead's horizontal run, the same
 // point StripCentreline gives once w is the design's strip.
-func stripFeedHeight(d *Design, w *Wedge) float64 {
+func stripFeedHeight(d *Design, w *flat.Wedge) float64 {
 	if len(w.Stations) == 0 {
 		return d.FeedRise()
 	}

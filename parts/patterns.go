@@ -8,6 +8,7 @@ import (
 	"fmt"
 	"math"
 
+	"coilwright/parts/flat"
 	"coilwright/parts/line"
 	"coilwright/parts/spec"
 )
@@ -17,8 +18,8 @@ import (
 type Patterns struct {
 	// Reflector is nil when the plate cannot hold its feed cut-out (see
 	// the "reflector-fit" warning).
-	Reflector *Reflector
-	Wedge     *Wedge
+	Reflector *flat.Reflector
+	Wedge     *flat.Wedge
 	// WedgeLoadOhm is the resistance the wedge tapers to: the Kraus input
 	// resistance on the first turn's circumference.
 	WedgeLoadOhm float64
@@ -88,7 +89,7 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 
 	size := rs.SizeMM(d.Wavelength)
 	feed, cable := specFeedHole(s)
-	in := ReflectorInput{
+	in := flat.ReflectorInput{
 		Size:     size,
 		Label:    s.Kit,
 		Hand:     d.Coil.Hand.String(),
@@ -97,7 +98,7 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 	}
 	in.FeedRadius, in.FeedAngle = feedPlacement(s, d.Coil)
 	if rs.Shape == "square" {
-		in.Shape, in.CornerRadius = ReflectorSquare, rs.CornerRadiusMM
+		in.Shape, in.CornerRadius = flat.ReflectorSquare, rs.CornerRadiusMM
 	}
 	dc, err := dowelCut(d)
 	if err != nil {
@@ -110,7 +111,7 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 			in.FeedRadius, num(dowelDiametersMM[0]), num(FootprintClearMM))})
 	}
 	in.ScrewHole, in.RodFoot, in.RodFootFillet = p.Plate.ScrewHoleMM, p.Plate.RodMM, p.Plate.FootMM
-	refl, err := NewReflector(in)
+	refl, err := flat.NewReflector(in)
 	if err != nil {
 		// A plate too small for its feed cut-out is reported, not fatal:
 		// the rest of the design stands, and no plate files are written.
@@ -217,26 +218,26 @@ type PanelReport struct {
 
 // WedgeReport is the matching wedge in design.json.
 type WedgeReport struct {
-	Material            string         `json:"material"`
-	ThicknessMM         float64        `json:"thickness_mm"`
-	Taper               string         `json:"taper"`
-	Ripple              float64        `json:"ripple,omitempty"`
-	KlopfensteinA       float64        `json:"klopfenstein_a,omitempty"`
-	SpanDeg             float64        `json:"span_deg"`
-	FeedOhm             float64        `json:"feed_ohm"`
-	LoadOhm             float64        `json:"load_ohm"`
-	LengthMM            float64        `json:"length_mm"`
-	FeedWidthMM         float64        `json:"feed_width_mm"`
-	EndWidthMM          float64        `json:"end_width_mm"`
-	ElectricalLengthRad float64        `json:"electrical_length_rad"`
-	Reflection          float64        `json:"reflection"`
-	VSWR                float64        `json:"vswr"`
-	ReturnLossDB        float64        `json:"return_loss_db"`
-	Method              string         `json:"method"`
-	Note                string         `json:"note"`
-	Widths              []WedgeStation `json:"widths"`
-	Cutting             CutReport      `json:"cutting"`
-	Panel               *PanelReport   `json:"panel,omitempty"`
+	Material            string              `json:"material"`
+	ThicknessMM         float64             `json:"thickness_mm"`
+	Taper               string              `json:"taper"`
+	Ripple              float64             `json:"ripple,omitempty"`
+	KlopfensteinA       float64             `json:"klopfenstein_a,omitempty"`
+	SpanDeg             float64             `json:"span_deg"`
+	FeedOhm             float64             `json:"feed_ohm"`
+	LoadOhm             float64             `json:"load_ohm"`
+	LengthMM            float64             `json:"length_mm"`
+	FeedWidthMM         float64             `json:"feed_width_mm"`
+	EndWidthMM          float64             `json:"end_width_mm"`
+	ElectricalLengthRad float64             `json:"electrical_length_rad"`
+	Reflection          float64             `json:"reflection"`
+	VSWR                float64             `json:"vswr"`
+	ReturnLossDB        float64             `json:"return_loss_db"`
+	Method              string              `json:"method"`
+	Note                string              `json:"note"`
+	Widths              []flat.WedgeStation `json:"widths"`
+	Cutting             CutReport           `json:"cutting"`
+	Panel               *PanelReport        `json:"panel,omitempty"`
 	// MaxVSWR is the target across the band; SpanSized says the span was
 	// chosen to meet it rather than given.
 	MaxVSWR   float64 `json:"max_vswr"`

@@ -8,6 +8,7 @@ import (
 	"strings"
 	"testing"
 
+	"coilwright/parts/flat"
 	"coilwright/parts/line"
 	"coilwright/parts/spec"
 )
@@ -127,7 +128,7 @@ func TestPatternsFromDemo(t *testing.T) {
 	in := p.Reflector.Input
 	// The demo's [reflector] diameter_mm = 50 and feed = "periphery": the
 	// feed hole sits under the start of the winding.
-	if in.Size != 50 || math.Abs(in.FeedRadius-d.Coil.StartRadius) > 1e-9 || in.Shape != ReflectorDisc {
+	if in.Size != 50 || math.Abs(in.FeedRadius-d.Coil.StartRadius) > 1e-9 || in.Shape != flat.ReflectorDisc {
 		t.Errorf("reflector input %+v", in)
 	}
 	// Source: published cable data, 0.141 in semi-rigid jacket 3.58 mm,

@@ -8,12 +8,14 @@ package parts
 import (
 	"fmt"
 	"strings"
+
+	"coilwright/parts/flat"
 )
 
 // StripShapeText describes the matching strip's widths as cut: the feed
 // end, the far end, and the widest or narrowest point between them when
 // that lies beyond both ends.
-func StripShapeText(w *Wedge) string {
+func StripShapeText(w *flat.Wedge) string {
 	text := fmt.Sprintf("%s wide at the feed end and %s at the far end", mm2(w.FeedWidth), mm2(w.EndWidth))
 	if len(w.Stations) < 3 {
 		return text

@@ -7,6 +7,7 @@ import (
 	"testing"
 
 	"coilwright/cam/geom"
+	"coilwright/parts/flat"
 )
 
 // xband is a one-turn 10 GHz coil (λ = 29.98 mm): every turn is under
@@ -66,19 +67,8 @@ func sheetText(b *BuildSheet) string {
 }
 
 func TestReflectorLabelHandOnce(t *testing.T) {
-	for _, c := range []struct{ kit, hand, want string }{
-		{"Test 10G LHCP", "LHCP", "Test 10G LHCP"},
-		{"Club (RHCP)", "RHCP", "Club (RHCP)"},
-		{"Club 5G8", "RHCP", "Club 5G8 RHCP"},
-		{"RHCPish", "RHCP", "RHCPish RHCP"},
-		{"", "LHCP", "LHCP"},
-	} {
-		if got := joinLabel(c.kit, c.hand); got != c.want {
-			t.Errorf("joinLabel(%q, %q) = %q, want %q", c.kit, c.hand, got, c.want)
-		}
-	}
 	d := mustDesign(t, xband)
-	l, _ := d.Patterns.Reflector.Drawing.Layer(LayerMark)
+	l, _ := d.Patterns.Reflector.Drawing.Layer(flat.LayerMark)
 	found := false
 	for _, e := range l.Entities {
 		if tx, ok := e.(geom.Text); ok && strings.Contains(tx.Value, "Test 10G") {
@@ -96,7 +86,7 @@ func TestReflectorLabelHandOnce(t *testing.T) {
 func TestStripShapeText(t *testing.T) {
 	// A strip that widens between its ends: 1.90 mm at the feed, 4.29 mm
 	// mid-length, 2.00 mm at the far end.
-	w := &Wedge{FeedWidth: 1.9, EndWidth: 2.0, Length: 14, Stations: []WedgeStation{
+	w := &flat.Wedge{FeedWidth: 1.9, EndWidth: 2.0, Length: 14, Stations: []flat.WedgeStation{
 		{S: 0, Width: 1.9}, {S: 7, Width: 4.29}, {S: 14, Width: 2.0}}}
 	got := StripShapeText(w)
 	for _, want := range []string{"1.90 mm wide at the feed end", "2.00 mm at the far end", "widest (4.29 mm) 7.0 mm from the feed end"} {
@@ -108,7 +98,7 @@ func TestStripShapeText(t *testing.T) {
 		t.Errorf("%q says the strip narrows", got)
 	}
 	// A plain taper gets no middle figure.
-	w = &Wedge{FeedWidth: 3, EndWidth: 2, Stations: []WedgeStation{{S: 0, Width: 3}, {S: 5, Width: 2.5}, {S: 10, Width: 2}}}
+	w = &flat.Wedge{FeedWidth: 3, EndWidth: 2, Stations: []flat.WedgeStation{{S: 0, Width: 3}, {S: 5, Width: 2.5}, {S: 10, Width: 2}}}
 	if got := StripShapeText(w); strings.Contains(got, "widest") || strings.Contains(got, "narrowest") {
 		t.Errorf("a monotone taper is described as %q", got)
 	}

@@ -16,7 +16,7 @@
 // half to each side. The real strip is a gently twisted ribbon; sheet this
 // thin follows it when soldered.
 
-package parts
+package flat
 
 import (
 	"fmt"
