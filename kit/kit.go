@@ -12,6 +12,7 @@ import (
 	"coilwright/cam/pdf"
 	"coilwright/jig"
 	"coilwright/parts"
+	"coilwright/parts/report"
 	"coilwright/parts/spec"
 )
 
@@ -53,7 +54,7 @@ type Kit struct {
 	Source Source
 	Design *parts.Design
 	Former jig.FormerPlan // the former's sizes, drive and envelope
-	Report parts.Report   // as in design.json and check --json
+	Report report.Report  // as in design.json and check --json
 
 	opt         Options
 	parts       []cutPart
@@ -65,7 +66,7 @@ type Kit struct {
 	splitParams jig.FormerParams // its sizes: bored through for the rod
 
 	// tolerance is the batch tolerance analysis; nil when it did not run.
-	tolerance *parts.ToleranceReport
+	tolerance *report.ToleranceReport
 }
 
 // New works out the design for src and plans every part of the build.
@@ -111,7 +112,7 @@ func New(src Source, opt Options) (*Kit, error) {
 	if k.templates, err = templatePages(d, k.parts); err != nil {
 		return nil, err
 	}
-	k.Report = d.Report()
+	k.Report = report.New(d)
 	k.addPanels(&k.Report)
 	k.Report.Tolerance = k.tolerance
 	return k, nil

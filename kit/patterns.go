@@ -12,6 +12,7 @@ import (
 	"coilwright/parts"
 	"coilwright/parts/flat"
 	"coilwright/parts/line"
+	"coilwright/parts/report"
 )
 
 // nestTolerance is the chord tolerance in mm used to flatten outlines for
@@ -95,15 +96,15 @@ func outerOutline(d geom.Drawing) geom.Polyline {
 }
 
 // panelReport summarises a part's nest for design.json.
-func (c cutPart) panelReport(quantity int) *parts.PanelReport {
-	return &parts.PanelReport{
+func (c cutPart) panelReport(quantity int) *report.PanelReport {
+	return &report.PanelReport{
 		SheetWidthMM: c.sheet.Width, SheetHeightMM: c.sheet.Height, MarginMM: c.sheet.Margin, SpacingMM: c.sheet.Spacing,
 		Quantity: quantity, PartsPerSheet: c.nest.PerSheet, Sheets: c.nest.Sheets,
 	}
 }
 
 // addPanels puts each part's nesting figures into the report.
-func (k *Kit) addPanels(r *parts.Report) {
+func (k *Kit) addPanels(r *report.Report) {
 	d := k.Design
 	for _, c := range k.parts {
 		switch {

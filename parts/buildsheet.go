@@ -289,7 +289,7 @@ func steps(d *Design, cl *CutList, strip *flat.Wedge, all []Hazard) []Step {
 		clearance = fmt.Sprintf(" The strip's underside is only %s above the reflector at the feed: keep the solder there flat.", mm2(strip.Stations[0].Height))
 		if band := d.Patterns.LineBand; len(band) > 1 {
 			lo, hi := band[0], band[len(band)-1]
-			expect += fmt.Sprintf(" The strip's line model gives VSWR %.2f at %s MHz and %.2f at %s MHz, worst %.2f in the band.", lo.VSWR, num(lo.FrequencyMHz), hi.VSWR, num(hi.FrequencyMHz), worstVSWR(band))
+			expect += fmt.Sprintf(" The strip's line model gives VSWR %.2f at %s MHz and %.2f at %s MHz, worst %.2f in the band.", lo.VSWR, num(lo.FrequencyMHz), hi.VSWR, num(hi.FrequencyMHz), WorstVSWR(band))
 		}
 	}
 	expect += " If the best point is low in frequency, the turns are too large; if high, too small. If the return loss falls short across the band, raise or lower the strip's far end a fraction of a millimetre at a time and sweep again."

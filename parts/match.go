@@ -135,8 +135,8 @@ func impedanceAt(w *flat.Wedge, s float64) float64 {
 	return st[0].Ohm
 }
 
-// worstVSWR returns the largest VSWR of pts.
-func worstVSWR(pts []MatchPoint) float64 {
+// WorstVSWR returns the largest VSWR of pts.
+func WorstVSWR(pts []MatchPoint) float64 {
 	worst := 0.0
 	for _, p := range pts {
 		worst = math.Max(worst, p.VSWR)
@@ -181,10 +181,10 @@ func sizeWedge(d *Design, zl float64) (*flat.Wedge, []MatchPoint, *Warning, erro
 			continue
 		}
 		pts := lineMatch(d, w, freqs)
-		if best == nil || worstVSWR(pts) < worstVSWR(bestPts) {
+		if best == nil || WorstVSWR(pts) < WorstVSWR(bestPts) {
 			best, bestPts = w, pts
 		}
-		if worstVSWR(pts) <= s.Wedge.MaxVSWR {
+		if WorstVSWR(pts) <= s.Wedge.MaxVSWR {
 			best, bestPts = w, pts
 			break
 		}
@@ -192,7 +192,7 @@ func sizeWedge(d *Design, zl float64) (*flat.Wedge, []MatchPoint, *Warning, erro
 	if best == nil {
 		return nil, nil, nil, firstErr
 	}
-	if wv := worstVSWR(bestPts); wv > s.Wedge.MaxVSWR {
+	if wv := WorstVSWR(bestPts); wv > s.Wedge.MaxVSWR {
 		lo, hi := BandMHz(s)
 		fix := "lengthen the strip (wedge.span_deg), narrow the band, or accept a higher wedge.max_vswr"
 		if rise := stripFeedHeight(d, best); d.CentreFed() && rise > s.Wire.DiameterMM/2 {
