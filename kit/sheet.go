@@ -13,6 +13,7 @@ import (
 	"coilwright/cam/cut"
 	"coilwright/cam/pdf"
 	"coilwright/parts"
+	"coilwright/parts/sheet"
 	"coilwright/parts/spec"
 	"coilwright/templates"
 )
@@ -51,33 +52,33 @@ func (k *Kit) writeSheet(out Sink) error {
 			return err
 		}
 	}
-	sheet := parts.NewBuildSheet(d, cl, k.Source.SHA256())
-	for i, st := range sheet.Steps {
+	bs := sheet.NewBuildSheet(d, cl, k.Source.SHA256())
+	for i, st := range bs.Steps {
 		if st.Title != "Lock its end in the former" {
 			continue
 		}
 		if lead := k.formerLead(); lead != "" {
-			sheet.Steps[i].Text = append([]string{lead}, sheet.Steps[i].Text...)
+			bs.Steps[i].Text = append([]string{lead}, bs.Steps[i].Text...)
 		}
 		if note, _ := k.lockCut(); note != "" && (k.Former.FitsPrinter || k.split != nil) {
-			sheet.Steps[i].Text = append(sheet.Steps[i].Text, note)
+			bs.Steps[i].Text = append(bs.Steps[i].Text, note)
 		}
 	}
-	if err := out.Add("build-sheet.md", func(w io.Writer) error { return sheetTmpl.Execute(w, sheet) }); err != nil {
+	if err := out.Add("build-sheet.md", func(w io.Writer) error { return sheetTmpl.Execute(w, bs) }); err != nil {
 		return err
 	}
-	page, err := pdf.PageSizeByName(sheet.Paper)
+	page, err := pdf.PageSizeByName(bs.Paper)
 	if err != nil {
 		return err
 	}
-	doc := sheetDocument(sheet, page, k.stepFigures(sheet))
+	doc := sheetDocument(bs, page, k.stepFigures(bs))
 	doc.Blocks = withBandFigure(doc.Blocks, pdf.Group{Blocks: []pdf.Block{pdf.Heading{Text: "What the analyser should show", Level: 3}, bandFigure(k.electrical())}})
 	doc.TrailingPages = len(k.templates)
 	pages, err := doc.Pages()
 	if err != nil {
 		return err
 	}
-	opt := pdf.PDFOptions{Title: sheet.Kit + " — build sheet", Subject: sheet.Summary, Creator: k.creator(), Created: k.opt.Created}
+	opt := pdf.PDFOptions{Title: bs.Kit + " — build sheet", Subject: bs.Summary, Creator: k.creator(), Created: k.opt.Created}
 	return out.Add("build-sheet.pdf", func(w io.Writer) error { return pdf.WritePDF(w, append(pages, k.templates...), opt) })
 }
 
@@ -110,7 +111,7 @@ type batchPlan struct {
 	Quantity int
 	Stocks   []batchStock
 	Sheets   []batchSheet
-	Buy      []parts.SheetRow
+	Buy      []sheet.SheetRow
 }
 
 // batchSheet is the nesting of one flat part on stock sheets.
@@ -179,7 +180,7 @@ func newBatchPlan(d *parts.Design, cl *parts.CutList, cps []cutPart) (*batchPlan
 	}
 	w, dw := bp.Stocks[0], bp.Stocks[1]
 	nf := float64(n)
-	bp.Buy = []parts.SheetRow{
+	bp.Buy = []sheet.SheetRow{
 		{Label: "Wire rods", Value: fmt.Sprintf("%d × %.0f mm, %s Ø%s mm", len(w.Plan.Rods), w.Plan.Rod.Length, cl.Wire.Material, strconv.FormatFloat(cl.Wire.DiameterMM, 'g', -1, 64))},
 		{Label: "Support rods", Value: fmt.Sprintf("%d × %.0f mm, %s Ø%s mm", len(dw.Plan.Rods), dw.Plan.Rod.Length, cl.Dowel.Material, strconv.FormatFloat(cl.Dowel.DiameterMM, 'g', -1, 64))},
 		{Label: "Feed cable", Value: fmt.Sprintf("%.0f mm of %s (%d × %.1f mm)", nf*cl.Coax.CutMM, cl.Coax.Cable.Name, n, cl.Coax.CutMM)},
@@ -194,10 +195,10 @@ func newBatchPlan(d *parts.Design, cl *parts.CutList, cps []cutPart) (*batchPlan
 		if c.name == "wedge" {
 			mat = d.Patterns.WedgeMaterial.Name
 		}
-		bp.Buy = append(bp.Buy, parts.SheetRow{Label: c.title + " sheets", Value: fmt.Sprintf("%d × %g × %g mm %s (%d parts per sheet)", c.nest.Sheets, c.sheet.Width, c.sheet.Height, mat, c.nest.PerSheet)})
+		bp.Buy = append(bp.Buy, sheet.SheetRow{Label: c.title + " sheets", Value: fmt.Sprintf("%d × %g × %g mm %s (%d parts per sheet)", c.nest.Sheets, c.sheet.Width, c.sheet.Height, mat, c.nest.PerSheet)})
 	}
 	for _, h := range cl.Hardware {
-		bp.Buy = append(bp.Buy, parts.SheetRow{Label: "Hardware", Value: fmt.Sprintf("%d × %s", n*h.Count, h.Item)})
+		bp.Buy = append(bp.Buy, sheet.SheetRow{Label: "Hardware", Value: fmt.Sprintf("%d × %s", n*h.Count, h.Item)})
 	}
 	return bp, nil
 }

@@ -16,6 +16,7 @@ import (
 	"coilwright/jig"
 	"coilwright/parts"
 	"coilwright/parts/flat"
+	"coilwright/parts/sheet"
 	"coilwright/parts/spec"
 )
 
@@ -24,7 +25,7 @@ const stepFigureHeight = 62.0
 
 // stepFigures returns the figures to print after the steps with the
 // given titles, in the order the steps come.
-func (k *Kit) stepFigures(b *parts.BuildSheet) map[string][]pdf.Figure {
+func (k *Kit) stepFigures(b *sheet.BuildSheet) map[string][]pdf.Figure {
 	d, cl := k.Design, k.cutList
 	out := map[string][]pdf.Figure{}
 	add := func(title string, f pdf.Figure, ok bool) {

@@ -10,6 +10,7 @@ import (
 	"coilwright/cam/plot"
 	"coilwright/cam/svg"
 	"coilwright/parts"
+	"coilwright/parts/sheet"
 )
 
 // Layers of the side and plan view drawings.
@@ -99,7 +100,7 @@ func addDimensions(d *geom.Drawing, dims []geom.Dimension, textH float64) {
 // sideDrawing draws the side view of v: reflector, support rod, feed
 // cable, the wire's centreline and the dimensions, dimension text sized
 // for printing at scale.
-func sideDrawing(v parts.SideView, scale float64) geom.Drawing {
+func sideDrawing(v sheet.SideView, scale float64) geom.Drawing {
 	var d geom.Drawing
 	d.Add(layerReflector, rectContour(-v.ReflectorWidth/2, -v.ReflectorThick, v.ReflectorWidth/2, 0))
 	d.Add(layerRod, rectContour(-v.RodDiameter/2, 0, v.RodDiameter/2, v.RodLength))
@@ -175,7 +176,7 @@ func (k *Kit) viewPlots() ([]plotFile, error) {
 	fit := func(b geom.Box2) float64 { sz := b.Size(); return fitScale(sz.X, sz.Y) }
 	// The views carry dimension text sized for their scale, which depends
 	// on their size: size them without the text first.
-	sv := d.SideView(k.cutList)
+	sv := sheet.NewSideView(d, k.cutList)
 	s := fit(sideDrawing(sv, 1).Bounds())
 	if err := add("plot-side.svg", "Side view", fmt.Sprintf("The %s coil on its wire centreline over the reflector, with the support rod and the feed cable; dimensions in mm.", d.Coil.Hand),
 		sideDrawing(sv, s), nil, "Dimensions in mm; the wire is drawn on its centreline.", s); err != nil {

@@ -46,21 +46,10 @@ const (
 	// BraidFlareMM is the braid fanned out flat round the hole on the
 	// reflector's back face (braided cable only).
 	BraidFlareMM = 4.0
-	// DowelOverhangMM is how far the rod stands above the top turn.
-	DowelOverhangMM = 5.0
 	// SleeveLengthMM is the heat-shrink sleeve over the cable where it
 	// leaves the reflector's back face.
 	SleeveLengthMM = 25.0
 )
-
-// dowelDiametersMM are the support-rod diameters commonly stocked in
-// PTFE, nylon, glass-fibre and wood, in mm, ascending. Common practice (no
-// published source).
-var dowelDiametersMM = []float64{3, 4, 5, 6, 8, 10, 12, 15, 16, 20, 25, 30, 35, 40, 50, 60, 80, 100}
-
-// DowelDiametersMM returns the support-rod diameters commonly stocked, in
-// mm, smallest first, as a fresh slice.
-func DowelDiametersMM() []float64 { return slices.Clone(dowelDiametersMM) }
 
 // sleeveDiametersMM are the supplied diameters of 2:1 heat-shrink sleeving
 // (1/16 to 1 in), in mm, ascending. Common practice (no published source).
@@ -93,27 +82,6 @@ type WireBlank struct {
 	FeedLeadMM float64 // drop from the wire centre at the start to the top of the dielectric stub
 	TrimMM     float64 // squared off both ends after release
 	LengthMM   float64 // the blank as cut
-}
-
-// DowelCut is the support rod for one coil.
-type DowelCut struct {
-	Material    string
-	DiameterMM  float64
-	LengthMM    float64
-	ClearanceMM float64 // radial gap asked for
-	InnerTurnMM float64 // inside diameter of the smallest relaxed turn
-	Automatic   bool    // diameter chosen by ChooseSupportRod
-	BoreMM      float64 // bore of a tube, 0 for a solid rod
-	Rod         SupportRod
-	// OverFeed is set when no stock rod's foot clears the feed at the
-	// plate's centre (a small coil with a large feed hole): the rod is
-	// chosen for the coil alone, and the plate does not place it.
-	OverFeed       bool
-	SlotWidthMM    float64 // slot across the foot for a centre feed's lead, else 0
-	SlotDepthMM    float64
-	Foot           *RodFoot // the bored foot over a centre feed; nil for a plain foot
-	AbsorbsWater   bool     // wood: takes up water and detunes the coil
-	MaterialAdvice string   // a sentence on the material choice
 }
 
 // CoaxCut is the feed cable for one kit: the length to cut and the strip
@@ -220,7 +188,7 @@ func NewCutList(d *Design) (*CutList, error) {
 	w.MarkBMM = w.MarkAMM + w.ArcMM
 	cl.Wire = w
 
-	dw, err := dowelCut(d)
+	dw, err := NewDowelCut(d)
 	if err != nil {
 		return nil, err
 	}
@@ -245,52 +213,6 @@ func NewCutList(d *Design) (*CutList, error) {
 	return cl, nil
 }
 
-// smallestTurnRadius returns the smallest centreline radius of the coil:
-// the radius is monotonic in azimuth, so it is at one of the two ends.
-func smallestTurnRadius(c Coil) float64 { return math.Min(c.StartRadius, c.EndRadius) }
-
-func dowelCut(d *Design) (DowelCut, error) {
-	s := d.Spec
-	wd := s.Wire.DiameterMM
-	inner := 2*smallestTurnRadius(d.Coil) - wd
-	dc := DowelCut{Material: s.Dowel.Material, ClearanceMM: s.Dowel.ClearanceMM, InnerTurnMM: inner}
-	dc.LengthMM = d.Coil.Z0 + d.AxialLength + wd/2 + DowelOverhangMM
-	given := 0.0
-	if s.Dowel.DiameterMM != nil {
-		given = *s.Dowel.DiameterMM // checkFit checked that it fits
-	}
-	// The rod's foot, with the least fillet, must also clear the feed and
-	// mounting holes, and its screw's washer the parts on the back.
-	plate := specPlateFeatures(s, d.Coil)
-	room := inner - 2*dc.ClearanceMM
-	if pr := rodPlateRoomMM(plate); pr >= dowelDiametersMM[0]-1e-9 || given > 0 {
-		room = math.Min(room, pr)
-	} else {
-		dc.OverFeed = true
-	}
-	rod, err := ChooseSupportRod(s.Dowel.Material, room, dc.LengthMM, 2*smallestTurnRadius(d.Coil), given)
-	if err != nil {
-		return DowelCut{}, err
-	}
-	if w := 2 * roomAbout(plate, FaceThrough, FaceBack); washerODMM(rod.Mount.Screw) > w {
-		rod.Mount = mountFor(rod, w)
-	}
-	dc.Rod, dc.DiameterMM, dc.BoreMM, dc.Automatic = rod, rod.OuterMM, rod.BoreMM, given == 0
-	if err := fitCentreFeedRod(d, &dc, inner-2*dc.ClearanceMM); err != nil {
-		return DowelCut{}, err
-	}
-	switch s.Dowel.Material {
-	case "wood":
-		dc.AbsorbsWater = true
-		dc.MaterialAdvice = "wood takes up water, which raises its permittivity and loss and detunes the coil; use PTFE, nylon or glass-fibre rod, or seal the wood well"
-	case "nylon":
-		dc.MaterialAdvice = "nylon takes up a little water; PTFE or glass-fibre rod is steadier outdoors"
-	default:
-		dc.MaterialAdvice = "a low-loss rod that takes up little water"
-	}
-	return dc, nil
-}
-
 // rodWarnings returns the warnings the support rod raises: dielectric
 // loading above RodShiftWarnFraction, a default rod more slender than
 // MaxRodSlenderness, and a rod too heavy for any mount sized here.
@@ -306,7 +228,7 @@ func rodWarnings(d *Design, dc DowelCut) []Warning {
 			fix = "PTFE has the lowest permittivity of the rod materials; or " + fix
 		}
 		w = append(w, Warning{Code: "rod-loading", Message: fmt.Sprintf("the %s fills %.1f %% of the area inside the smallest turn (εr %.1f): a first-order estimate lowers the frequency by about %.1f %% (%.0f MHz); %s",
-			sectionWords(dc), 100*l.FillRatio, l.Permittivity, 100*l.ShiftFraction, l.ShiftFraction*d.Spec.FrequencyMHz, fix)})
+			SectionWords(dc), 100*l.FillRatio, l.Permittivity, 100*l.ShiftFraction, l.ShiftFraction*d.Spec.FrequencyMHz, fix)})
 	}
 	if r.Slender {
 		w = append(w, Warning{Code: "rod-slender", Message: fmt.Sprintf("a rod %s long needs about Ø%.0f mm to stay straight (%g diameters long at most), but only Ø%s mm passes inside the smallest turn: support the coil from outside as well", mm(r.LengthMM), r.MinOuterMM, MaxRodSlenderness, num(r.OuterMM))})
@@ -317,9 +239,9 @@ func rodWarnings(d *Design, dc DowelCut) []Warning {
 	return w
 }
 
-// sectionWords names the support section: "Ø8 mm ptfe rod" or "Ø8/6 mm
+// SectionWords names the support section of dc: "Ø8 mm ptfe rod" or "Ø8/6 mm
 // ptfe tube".
-func sectionWords(dc DowelCut) string {
+func SectionWords(dc DowelCut) string {
 	if dc.BoreMM > 0 {
 		return fmt.Sprintf("Ø%s/%s mm %s tube", num(dc.DiameterMM), num(dc.BoreMM), dc.Material)
 	}
@@ -475,4 +397,29 @@ func feedStub(cx CoaxCut) struct{ stub, pin string } {
 		return struct{ stub, pin string }{"connector's insulator", "connector's rear contact"}
 	}
 	return struct{ stub, pin string }{"dielectric stub", "centre conductor"}
+}
+
+// rodSize is the cut list's size column for the support: "Ø8 mm" or
+// "Ø8/6 mm tube".
+func rodSize(dc DowelCut) string {
+	if dc.BoreMM > 0 {
+		return fmt.Sprintf("Ø%s/%s mm tube", num(dc.DiameterMM), num(dc.BoreMM))
+	}
+	return fmt.Sprintf("Ø%s mm", num(dc.DiameterMM))
+}
+
+// rodNote is the cut list's note on the support: the rule that chose it,
+// its weight and mount, and the dielectric-loading estimate.
+func rodNote(dc DowelCut) string {
+	r := dc.Rod
+	why := "as the spec gives"
+	if dc.Automatic {
+		why = fmt.Sprintf("the thinnest stocked section at least 1/%g of its length (Ø%.1f mm) that passes inside the smallest turn", MaxRodSlenderness, r.MinOuterMM)
+	}
+	plug := ""
+	if r.Mount.PlugMM > 0 {
+		plug = fmt.Sprintf("; epoxy %s of Ø%s mm solid rod into its foot", mm(r.Mount.PlugMM), num(dc.BoreMM))
+	}
+	return fmt.Sprintf("%s (%.2f mm inside, %s mm clearance); about %.0f g%s; dielectric loading (first-order estimate): fill ratio %.3f, εeff %.3f, frequency lower by about %.1f %%; %s",
+		why, dc.InnerTurnMM, num(dc.ClearanceMM), r.MassG, plug, r.Loading.FillRatio, r.Loading.EffectivePerm, 100*r.Loading.ShiftFraction, dc.MaterialAdvice)
 }

@@ -236,10 +236,4 @@ func TestPanelJackMakesAJumper(t *testing.T) {
 	if cx.FeedHoleMM != 6.5 {
 		t.Errorf("feed cut-out Ø%.2f mm, want the bulkhead D-hole's 6.5 mm", cx.FeedHoleMM)
 	}
-	b := NewBuildSheet(d, cl, strings.Repeat("0", 64))
-	for _, st := range b.Steps {
-		if st.Title == "Prepare and solder the coax" && !strings.Contains(strings.Join(st.Text, " "), "Mount the SMA jack") {
-			t.Errorf("coax step does not mount the jack: %q", st.Text)
-		}
-	}
 }

@@ -99,7 +99,7 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 	if rs.Shape == "square" {
 		in.Shape, in.CornerRadius = flat.ReflectorSquare, rs.CornerRadiusMM
 	}
-	dc, err := dowelCut(d)
+	dc, err := NewDowelCut(d)
 	if err != nil {
 		return nil, nil, err
 	}

@@ -3,12 +3,13 @@
 // reference antenna, each with the reading to expect from this design and
 // what the other readings mean.
 
-package parts
+package sheet
 
 import (
 	"fmt"
 	"math"
 
+	"coilwright/parts"
 	"coilwright/parts/line"
 )
 
@@ -38,7 +39,7 @@ func SeenThroughFeeder(rlDB, lossDB float64) float64 {
 func FarFieldMM(dMM, lambdaMM float64) float64 { return 2 * dMM * dMM / lambdaMM }
 
 // acceptanceText returns the paragraphs of the no-analyser check.
-func acceptanceText(d *Design) []string {
+func acceptanceText(d *parts.Design) []string {
 	s := d.Spec
 	loss := 0.0
 	if s.RF.FeederLossDB > 0 {
@@ -52,7 +53,7 @@ func acceptanceText(d *Design) []string {
 	}
 	swr += ". Below 1.5: well matched. 1.5 to 2: usable. Above 2: look for a short at the feed, the strip touching the plate, a poor ground joint, or a coil tuned off the band. A reading that barely changes across the band, or a low reading that rises when the cable is shortened, means cable loss is hiding a mismatch."
 	lambda := d.Wavelength
-	size := math.Max(d.Heights().Overall, s.Reflector.SizeMM(lambda))
+	size := math.Max(Heights(d).Overall, s.Reflector.SizeMM(lambda))
 	far := math.Max(FarFieldMM(size, lambda), 10*lambda)
 	g, _ := d.QuotedGain()
 	lin := g - DipoleGainDBi - LinearToCircularLossDB

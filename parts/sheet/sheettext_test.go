@@ -1,4 +1,4 @@
-package parts
+package sheet
 
 import (
 	"math"
@@ -7,6 +7,7 @@ import (
 	"testing"
 
 	"coilwright/cam/geom"
+	"coilwright/parts"
 	"coilwright/parts/flat"
 )
 
@@ -29,12 +30,12 @@ diameter_mm = 1.0
 
 func TestTurnsText(t *testing.T) {
 	for n, want := range map[float64]string{1: "1 turn", 5: "5 turns", 1.5: "1.5 turns", 0.75: "0.75 turns"} {
-		if got := TurnsText(n); got != want {
+		if got := parts.TurnsText(n); got != want {
 			t.Errorf("TurnsText(%g) = %q, want %q", n, got, want)
 		}
 	}
 	d := mustDesign(t, xband)
-	cl, err := NewCutList(d)
+	cl, err := parts.NewCutList(d)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -112,7 +113,7 @@ func TestInspectionNoteNamesTheGoverningTolerance(t *testing.T) {
 		t.Errorf("10 GHz note does not say the floor governs: %q", note)
 	}
 	for _, row := range d.InspectionTable() {
-		if row.ToleranceMM != InspectionFloorMM {
+		if row.ToleranceMM != parts.InspectionFloorMM {
 			t.Errorf("turn %d tolerance %.3f, want the floor", row.Turn, row.ToleranceMM)
 		}
 	}
@@ -128,7 +129,7 @@ func TestInspectionNoteNamesTheGoverningTolerance(t *testing.T) {
 
 func TestCoilHeightsDefined(t *testing.T) {
 	d := mustDesign(t, xband)
-	h := d.Heights()
+	h := Heights(d)
 	const tol = 1e-9
 	if math.Abs(h.TopCentre-h.Axial-d.Coil.Z0) > tol || math.Abs(h.Overall-h.TopCentre-d.Spec.Wire.DiameterMM/2) > tol {
 		t.Errorf("heights %+v do not step by the first turn height %.3f and half the wire %.3f", h, d.Coil.Z0, d.Spec.Wire.DiameterMM/2)
@@ -144,8 +145,8 @@ func TestCoilHeightsDefined(t *testing.T) {
 			t.Errorf("%q lacks %s", text, mm(v))
 		}
 	}
-	cl, _ := NewCutList(d)
-	for _, dim := range d.SideView(cl).Dimensions {
+	cl, _ := parts.NewCutList(d)
+	for _, dim := range NewSideView(d, cl).Dimensions {
 		if strings.Contains(dim.Text, "top") && !strings.Contains(dim.Text, "wire centre") && !strings.Contains(dim.Text, "Ø") {
 			t.Errorf("side-view height %q does not say what it measures to", dim.Text)
 		}
