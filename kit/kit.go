@@ -12,6 +12,7 @@ import (
 	"coilwright/cam/pdf"
 	"coilwright/jig"
 	"coilwright/parts"
+	"coilwright/parts/cutlist"
 	"coilwright/parts/report"
 	"coilwright/parts/spec"
 )
@@ -58,7 +59,7 @@ type Kit struct {
 
 	opt         Options
 	parts       []cutPart
-	cutList     *parts.CutList
+	cutList     *cutlist.CutList
 	batch       *batchPlan       // nil for one kit
 	templates   []pdf.Page       // the 1:1 template pages, laid out once
 	split       *jig.SplitPlan   // sections of a former taller than the printer; nil when it fits or cannot be split
@@ -92,7 +93,7 @@ func New(src Source, opt Options) (*Kit, error) {
 	if k.parts, err = cutParts(d); err != nil {
 		return nil, err
 	}
-	if k.cutList, err = parts.NewCutList(d); err != nil {
+	if k.cutList, err = cutlist.NewCutList(d); err != nil {
 		return nil, err
 	}
 	k.cutList.FitLockTail(k.Former.LockHoleMM)

@@ -13,6 +13,7 @@ import (
 	"coilwright/cam/cut"
 	"coilwright/cam/pdf"
 	"coilwright/parts"
+	"coilwright/parts/cutlist"
 	"coilwright/parts/sheet"
 	"coilwright/parts/spec"
 	"coilwright/templates"
@@ -26,10 +27,10 @@ var (
 
 // cutlistView is what cutlist.md.tmpl reads.
 type cutlistView struct {
-	*parts.CutList
+	*cutlist.CutList
 	Kit        string
 	SpecSHA256 string
-	Rows       []parts.CutRow
+	Rows       []cutlist.CutRow
 }
 
 // writeSheet writes the cut list, the batch plan (more than one kit) and
@@ -90,7 +91,7 @@ func fmtMM(v float64) string {
 	return strconv.FormatFloat(v, 'f', 1, 64)
 }
 
-func writeCutCSV(w io.Writer, rows []parts.CutRow) error {
+func writeCutCSV(w io.Writer, rows []cutlist.CutRow) error {
 	cw := csv.NewWriter(w)
 	cw.Write([]string{"item", "material", "size", "count", "length_mm", "amount", "unit", "note"})
 	for _, r := range rows {
@@ -140,7 +141,7 @@ type rodPattern struct {
 	OffcutMM float64
 }
 
-func newBatchPlan(d *parts.Design, cl *parts.CutList, cps []cutPart) (*batchPlan, error) {
+func newBatchPlan(d *parts.Design, cl *cutlist.CutList, cps []cutPart) (*batchPlan, error) {
 	s := d.Spec
 	n := s.Quantity
 	bp := &batchPlan{Kit: s.Kit, Quantity: n}

@@ -15,6 +15,7 @@ import (
 	"coilwright/cam/pdf"
 	"coilwright/jig"
 	"coilwright/parts"
+	"coilwright/parts/cutlist"
 	"coilwright/parts/flat"
 	"coilwright/parts/sheet"
 	"coilwright/parts/spec"
@@ -287,7 +288,7 @@ func reflectorFigure(d *parts.Design) pdf.Figure {
 
 // feedFigure draws the feed in section at the plate: the cable (or the
 // jack's contact) through the feed hole with its stripped lengths.
-func feedFigure(d *parts.Design, cl *parts.CutList) pdf.Figure {
+func feedFigure(d *parts.Design, cl *cutlist.CutList) pdf.Figure {
 	cx := cl.Coax
 	t := d.Spec.Reflector.ThicknessMM
 	cab := cx.Cable

@@ -1,9 +1,6 @@
 package parts
 
-import (
-	"fmt"
-	"strconv"
-)
+import "strconv"
 
 // num formats a number as a spec would write it: the shortest form that
 // reads back exactly.
@@ -17,6 +14,3 @@ func TurnsText(n float64) string {
 	}
 	return num(n) + " turns"
 }
-
-// mm formats a length in mm to a tenth.
-func mm(v float64) string { return fmt.Sprintf("%.1f mm", v) }

@@ -43,3 +43,12 @@ pitch_angle_deg = 13.0
 material = "copper-annealed"
 diameter_mm = 1.6
 `
+
+func demoDesign(t *testing.T, name string, edit func(string) string) *Design {
+	t.Helper()
+	text := string(demoSpec(t, name))
+	if edit != nil {
+		text = edit(text)
+	}
+	return mustDesign(t, text)
+}

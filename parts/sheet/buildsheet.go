@@ -12,6 +12,7 @@ import (
 	"strings"
 
 	"coilwright/parts"
+	"coilwright/parts/cutlist"
 	"coilwright/parts/flat"
 	"coilwright/parts/line"
 	"coilwright/parts/spec"
@@ -91,7 +92,7 @@ const ReturnLossTargetDB = 10.0
 
 // NewBuildSheet assembles the build sheet of a design from its cut list.
 // specSHA256 is the hex hash of the spec's bytes, printed on the cover.
-func NewBuildSheet(d *parts.Design, cl *parts.CutList, specSHA256 string) *BuildSheet {
+func NewBuildSheet(d *parts.Design, cl *cutlist.CutList, specSHA256 string) *BuildSheet {
 	s := d.Spec
 	var strip *flat.Wedge
 	if d.Patterns != nil {
@@ -127,7 +128,7 @@ func handWords(h parts.Hand) string {
 func mm(v float64) string  { return fmt.Sprintf("%.1f mm", v) }
 func mm2(v float64) string { return fmt.Sprintf("%.2f mm", v) }
 
-func designRows(d *parts.Design, cl *parts.CutList) []SheetRow {
+func designRows(d *parts.Design, cl *cutlist.CutList) []SheetRow {
 	s := d.Spec
 	band := "not given"
 	if s.BandLowMHz != nil && s.BandHighMHz != nil {
@@ -144,7 +145,7 @@ func designRows(d *parts.Design, cl *parts.CutList) []SheetRow {
 		{"Coil height", Heights(d).Text()},
 		{"Wire", fmt.Sprintf("%s, Ø%s mm; winding %s, blank %s", s.Wire.Material, num(s.Wire.DiameterMM), mm(cl.Wire.ArcMM), mm(cl.Wire.LengthMM))},
 		{"Reflector", fmt.Sprintf("%s, %s across, %s mm thick", s.Reflector.Shape, mm(s.Reflector.SizeMM(d.Wavelength)), num(s.Reflector.ThicknessMM))},
-		{"Support rod", fmt.Sprintf("%s × %s", parts.SectionWords(cl.Dowel), mm(cl.Dowel.LengthMM))},
+		{"Support rod", fmt.Sprintf("%s × %s", cutlist.SectionWords(cl.Dowel), mm(cl.Dowel.LengthMM))},
 		{"Feed cable", feedRow(d, cl)},
 		gainRow(d),
 		{"Half-power beamwidth (estimate)", fmt.Sprintf("%.0f°", d.Estimates.HPBW.Value)},
@@ -180,10 +181,10 @@ func tools(s *spec.Spec, c sheetChoice) []string {
 	return t
 }
 
-func materials(s *spec.Spec, cl *parts.CutList) []SheetRow {
+func materials(s *spec.Spec, cl *cutlist.CutList) []SheetRow {
 	rows := []SheetRow{
 		{"Wire blank", fmt.Sprintf("%s, Ø%s mm, %s", cl.Wire.Material, num(cl.Wire.DiameterMM), mm(cl.Wire.LengthMM))},
-		{"Support rod", fmt.Sprintf("%s, %s", parts.SectionWords(cl.Dowel), mm(cl.Dowel.LengthMM))},
+		{"Support rod", fmt.Sprintf("%s, %s", cutlist.SectionWords(cl.Dowel), mm(cl.Dowel.LengthMM))},
 		{"Feed cable", fmt.Sprintf("%s, cut %s", cl.Coax.Cable.Name, mm(cl.Coax.CutMM))},
 		{"Heat-shrink", fmt.Sprintf("2:1 sleeve Ø%s mm (shrinks to Ø%s mm), %s", num(cl.Sleeve.SuppliedMM), num(cl.Sleeve.RecoveredMM), mm(cl.Sleeve.LengthMM))},
 		{"Reflector", fmt.Sprintf("%s %s, %s mm thick, cut from the template", s.Reflector.Shape, plateName(s), num(s.Reflector.ThicknessMM))},
@@ -260,7 +261,7 @@ func pick(all []Hazard, ids ...HazardID) []Hazard {
 	return out
 }
 
-func steps(d *parts.Design, cl *parts.CutList, strip *flat.Wedge, all []Hazard) []Step {
+func steps(d *parts.Design, cl *cutlist.CutList, strip *flat.Wedge, all []Hazard) []Step {
 	s := d.Spec
 	w := cl.Wire
 	cx := cl.Coax
@@ -269,7 +270,7 @@ func steps(d *parts.Design, cl *parts.CutList, strip *flat.Wedge, all []Hazard) 
 	// unless the coil widens away from the feed, when the former is printed
 	// the other way up.
 	marks := fmt.Sprintf("Mark the blank at %s from one end (mark A: the start of the winding; the end before it is the lock end, which goes into the former's lock hole and is later cut down to the feed lead) and at %s from the same end, %s further on: the length of the former's groove from the lock hole to the stop notch (mark B: the end of the winding, at the stop notch). The %s beyond mark B is trim.",
-		mm(w.MarkAMM), mm(w.MarkBMM), mm(w.ArcMM), mm(parts.TrimPerEndMM))
+		mm(w.MarkAMM), mm(w.MarkBMM), mm(w.ArcMM), mm(cutlist.TrimPerEndMM))
 	unwind := (d.Former.Turns - d.Coil.Turns) * 360
 	lockAt, windTo := "at the flange end of the former, the coil's feed end", "towards the free end of the former"
 	if d.Former.EndRadius > d.Former.StartRadius {
@@ -420,7 +421,7 @@ func steps(d *parts.Design, cl *parts.CutList, strip *flat.Wedge, all []Hazard) 
 
 // feedRow is the design table's feed: the cable to the plate, or the
 // panel jack and its jumper.
-func feedRow(d *parts.Design, cl *parts.CutList) string {
+func feedRow(d *parts.Design, cl *cutlist.CutList) string {
 	if j, ok := spec.ConnectorByID(d.Spec.Reflector.Connector); ok && j.Mount != "pigtail" {
 		return fmt.Sprintf("%s on the reflector; %s jumper, %s", j.Name, cl.Coax.Cable.Name, mm(cl.Coax.FinishedMM))
 	}

@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	"coilwright/parts"
+	"coilwright/parts/cutlist"
 	"coilwright/parts/spec"
 	"coilwright/templates"
 )
@@ -51,9 +52,9 @@ func demoDesign(t *testing.T, name string, edit func(string) string) *parts.Desi
 }
 
 // mustCutList works out d's cut list or fails t.
-func mustCutList(t *testing.T, d *parts.Design) *parts.CutList {
+func mustCutList(t *testing.T, d *parts.Design) *cutlist.CutList {
 	t.Helper()
-	cl, err := parts.NewCutList(d)
+	cl, err := cutlist.NewCutList(d)
 	if err != nil {
 		t.Fatal(err)
 	}

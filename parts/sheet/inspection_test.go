@@ -5,6 +5,7 @@ import (
 	"testing"
 
 	"coilwright/parts"
+	"coilwright/parts/cutlist"
 )
 
 func TestInspectionNoteGivesTheBasis(t *testing.T) {
@@ -20,7 +21,7 @@ func TestInspectionNoteGivesTheBasis(t *testing.T) {
 	if err := d.UseInspectionTolerances(tol, basis); err != nil {
 		t.Fatal(err)
 	}
-	cl, err := parts.NewCutList(d)
+	cl, err := cutlist.NewCutList(d)
 	if err != nil {
 		t.Fatal(err)
 	}

@@ -11,6 +11,7 @@ import (
 	"strings"
 
 	"coilwright/parts"
+	"coilwright/parts/cutlist"
 	"coilwright/parts/spec"
 )
 
@@ -29,7 +30,7 @@ type sheetChoice struct {
 	method    string
 }
 
-func choiceOf(d *parts.Design, cl *parts.CutList) sheetChoice {
+func choiceOf(d *parts.Design, cl *cutlist.CutList) sheetChoice {
 	s := d.Spec
 	c := sheetChoice{cable: cl.Coax.Cable, method: s.Cutting.Method}
 	c.plate, _ = spec.SheetMaterialByID(s.Reflector.Material)
@@ -74,7 +75,7 @@ func (c sheetChoice) clampJoint() string {
 // feedSteps returns the paragraphs of the feed step: strip and solder a
 // pigtail, or mount a panel jack. clearance is appended to the joint's
 // paragraph.
-func (c sheetChoice) feedSteps(cx parts.CoaxCut, clearance string) []string {
+func (c sheetChoice) feedSteps(cx cutlist.CoaxCut, clearance string) []string {
 	if !c.pigtail() {
 		mount := fmt.Sprintf("Fit the %s in the feed cut-out from behind, its mating face under the plate and its rear contact up through the hole.", c.connector.Name)
 		switch c.connector.Mount {
@@ -154,7 +155,7 @@ func (c sheetChoice) laserMetalHazard() (Hazard, bool) {
 // rodMountSteps returns the build sheet's words for the rod's mount: the
 // hole drilled in the reflector (with its leading space, or empty) and the
 // step that fixes the rod.
-func rodMountSteps(cl *parts.CutList) (hole, fix string) {
+func rodMountSteps(cl *cutlist.CutList) (hole, fix string) {
 	dc := cl.Dowel
 	mt := dc.Rod.Mount
 	plug := ""
@@ -162,7 +163,7 @@ func rodMountSteps(cl *parts.CutList) (hole, fix string) {
 		plug = fmt.Sprintf("Epoxy %s of Ø%s mm solid rod into the tube's foot, flush with its end, and let it cure. ", mm(mt.PlugMM), num(dc.BoreMM))
 	}
 	if mt.Screw == "" {
-		return "", fmt.Sprintf("%sLower the %s (about %.0f g) through the open top of the coil and epoxy its foot to the reflector's centre, in the inner circle marked there, with a fillet all round that stays inside the outer circle, clear of the feed hole.", plug, parts.SectionWords(dc), dc.Rod.MassG)
+		return "", fmt.Sprintf("%sLower the %s (about %.0f g) through the open top of the coil and epoxy its foot to the reflector's centre, in the inner circle marked there, with a fillet all round that stays inside the outer circle, clear of the feed hole.", plug, cutlist.SectionWords(dc), dc.Rod.MassG)
 	}
 	item := mt.Screw + " screw"
 	for _, h := range cl.Hardware {
@@ -172,6 +173,6 @@ func rodMountSteps(cl *parts.CutList) (hole, fix string) {
 	}
 	hole = fmt.Sprintf(" The %s mm hole at the centre is for the rod's %s screw.", num(mt.ClearMM), mt.Screw)
 	fix = fmt.Sprintf("%sDrill a %s mm pilot hole 8 mm deep in the centre of the %s's foot. Lower the %s (about %.0f g) through the open top of the coil onto the reflector's centre hole and fix it from behind with the %s.",
-		plug, num(mt.PilotMM), map[bool]string{true: "tube", false: "rod"}[dc.BoreMM > 0], parts.SectionWords(dc), dc.Rod.MassG, item)
+		plug, num(mt.PilotMM), map[bool]string{true: "tube", false: "rod"}[dc.BoreMM > 0], cutlist.SectionWords(dc), dc.Rod.MassG, item)
 	return hole, fix
 }

@@ -5,6 +5,7 @@ import (
 	"testing"
 
 	"coilwright/parts"
+	"coilwright/parts/cutlist"
 )
 
 // combo is a 2.44 GHz cylinder on a 130 mm square plate; the test fills in
@@ -40,7 +41,7 @@ func comboSheet(t *testing.T, mat, conn, cable, method string) string {
 	t.Helper()
 	text := strings.NewReplacer("%MAT%", mat, "%CONN%", conn, "%CABLE%", cable, "%METHOD%", method).Replace(combo)
 	d := mustDesign(t, text)
-	cl, err := parts.NewCutList(d)
+	cl, err := cutlist.NewCutList(d)
 	if err != nil {
 		t.Fatal(err)
 	}

@@ -8,6 +8,7 @@ import (
 
 	"coilwright/cam/geom"
 	"coilwright/parts"
+	"coilwright/parts/cutlist"
 	"coilwright/parts/flat"
 )
 
@@ -35,7 +36,7 @@ func TestTurnsText(t *testing.T) {
 		}
 	}
 	d := mustDesign(t, xband)
-	cl, err := parts.NewCutList(d)
+	cl, err := cutlist.NewCutList(d)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -145,7 +146,7 @@ func TestCoilHeightsDefined(t *testing.T) {
 			t.Errorf("%q lacks %s", text, mm(v))
 		}
 	}
-	cl, _ := parts.NewCutList(d)
+	cl, _ := cutlist.NewCutList(d)
 	for _, dim := range NewSideView(d, cl).Dimensions {
 		if strings.Contains(dim.Text, "top") && !strings.Contains(dim.Text, "wire centre") && !strings.Contains(dim.Text, "Ø") {
 			t.Errorf("side-view height %q does not say what it measures to", dim.Text)

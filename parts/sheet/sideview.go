@@ -6,6 +6,7 @@ import (
 
 	"coilwright/cam/geom"
 	"coilwright/parts"
+	"coilwright/parts/cutlist"
 )
 
 // SideView is the antenna seen from the side, from the −y side looking along +y (x to the right, so the view is not mirrored), in mm:
@@ -33,7 +34,7 @@ type SideView struct {
 const sideSamples = 96
 
 // NewSideView returns the side view of design d with its cut list cl.
-func NewSideView(d *parts.Design, cl *parts.CutList) SideView {
+func NewSideView(d *parts.Design, cl *cutlist.CutList) SideView {
 	c := d.Coil
 	n := int(float64(sideSamples)*c.Turns) + 1
 	wire := make(geom.Polyline, n+1)

@@ -17,13 +17,14 @@
 // and the centre conductor runs on up to the wire's centre height, where
 // it is soldered beside the feed lead.
 
-package parts
+package cutlist
 
 import (
 	"fmt"
 	"math"
 	"slices"
 
+	"coilwright/parts"
 	"coilwright/parts/flat"
 	"coilwright/parts/spec"
 )
@@ -59,13 +60,13 @@ var sleeveDiametersMM = []float64{1.6, 2.4, 3.2, 4.8, 6.4, 9.5, 12.7, 19.1, 25.4
 // It is a plain value built by NewCutList.
 type CutList struct {
 	Wire     WireBlank
-	Dowel    DowelCut
+	Dowel    parts.DowelCut
 	Coax     CoaxCut
 	Sleeve   SleeveCut
 	Solder   Consumable
 	Epoxy    Consumable
 	Hardware []HardwareItem
-	Warnings []Warning
+	Warnings []parts.Warning
 	Quantity int // kits in the batch
 }
 
@@ -136,7 +137,7 @@ func (cl *CutList) FitLockTail(holeMM float64) {
 	w.LockTailMM = holeMM
 	if w.FeedLeadMM > holeMM {
 		w.LockTailMM = w.FeedLeadMM
-		cl.Warnings = append(cl.Warnings, Warning{Code: "lock-hole-short",
+		cl.Warnings = append(cl.Warnings, parts.Warning{Code: "lock-hole-short",
 			Message: fmt.Sprintf("the former's lock hole is %.1f mm deep but the feed lead is cut %.1f mm from the lock end: deepen former.lock_hole_depth_mm or use a thinner drive", holeMM, w.FeedLeadMM)})
 	}
 	w.TrimMM = TrimPerEndMM
@@ -146,7 +147,7 @@ func (cl *CutList) FitLockTail(holeMM float64) {
 }
 
 // NewCutList works out the cut list of one kit from a design.
-func NewCutList(d *Design) (*CutList, error) {
+func NewCutList(d *parts.Design) (*CutList, error) {
 	s := d.Spec
 	if s == nil {
 		return nil, fmt.Errorf("design without a spec")
@@ -188,7 +189,7 @@ func NewCutList(d *Design) (*CutList, error) {
 	w.MarkBMM = w.MarkAMM + w.ArcMM
 	cl.Wire = w
 
-	dw, err := NewDowelCut(d)
+	dw, err := parts.NewDowelCut(d)
 	if err != nil {
 		return nil, err
 	}
@@ -203,11 +204,11 @@ func NewCutList(d *Design) (*CutList, error) {
 	cl.Epoxy = epoxyEstimate(d, dw)
 	cl.Hardware = hardware(d, cl)
 	if drop < 2*wd && !d.CentreFed() {
-		cl.Warnings = append(cl.Warnings, Warning{Code: "short-feed-lead",
+		cl.Warnings = append(cl.Warnings, parts.Warning{Code: "short-feed-lead",
 			Message: fmt.Sprintf("the wire centre is only %.1f mm above the %s: too little to bend a lead down; solder the %s to the side of the wire's start", drop, feedStub(cx).stub, feedStub(cx).pin)})
 	}
 	if dw.AbsorbsWater {
-		cl.Warnings = append(cl.Warnings, Warning{Code: "wood-dowel", Message: dw.MaterialAdvice})
+		cl.Warnings = append(cl.Warnings, parts.Warning{Code: "wood-dowel", Message: dw.MaterialAdvice})
 	}
 	cl.Warnings = append(cl.Warnings, rodWarnings(d, dw)...)
 	return cl, nil
@@ -216,10 +217,10 @@ func NewCutList(d *Design) (*CutList, error) {
 // rodWarnings returns the warnings the support rod raises: dielectric
 // loading above RodShiftWarnFraction, a default rod more slender than
 // MaxRodSlenderness, and a rod too heavy for any mount sized here.
-func rodWarnings(d *Design, dc DowelCut) []Warning {
-	var w []Warning
+func rodWarnings(d *parts.Design, dc parts.DowelCut) []parts.Warning {
+	var w []parts.Warning
 	r := dc.Rod
-	if l := r.Loading; l.ShiftFraction > RodShiftWarnFraction {
+	if l := r.Loading; l.ShiftFraction > parts.RodShiftWarnFraction {
 		fix := "give a thinner dowel.diameter_mm, or hold the coil with thin low-loss spacers outside the winding"
 		if dc.Automatic {
 			fix = "this is the thinnest stocked section that carries the coil: hold the coil with thin low-loss spacers outside the winding instead, or check where the best match falls with a sweep"
@@ -227,21 +228,21 @@ func rodWarnings(d *Design, dc DowelCut) []Warning {
 		if d.Spec.Dowel.Material != "ptfe" {
 			fix = "PTFE has the lowest permittivity of the rod materials; or " + fix
 		}
-		w = append(w, Warning{Code: "rod-loading", Message: fmt.Sprintf("the %s fills %.1f %% of the area inside the smallest turn (εr %.1f): a first-order estimate lowers the frequency by about %.1f %% (%.0f MHz); %s",
+		w = append(w, parts.Warning{Code: "rod-loading", Message: fmt.Sprintf("the %s fills %.1f %% of the area inside the smallest turn (εr %.1f): a first-order estimate lowers the frequency by about %.1f %% (%.0f MHz); %s",
 			SectionWords(dc), 100*l.FillRatio, l.Permittivity, 100*l.ShiftFraction, l.ShiftFraction*d.Spec.FrequencyMHz, fix)})
 	}
 	if r.Slender {
-		w = append(w, Warning{Code: "rod-slender", Message: fmt.Sprintf("a rod %s long needs about Ø%.0f mm to stay straight (%g diameters long at most), but only Ø%s mm passes inside the smallest turn: support the coil from outside as well", mm(r.LengthMM), r.MinOuterMM, MaxRodSlenderness, num(r.OuterMM))})
+		w = append(w, parts.Warning{Code: "rod-slender", Message: fmt.Sprintf("a rod %s long needs about Ø%.0f mm to stay straight (%g diameters long at most), but only Ø%s mm passes inside the smallest turn: support the coil from outside as well", mm(r.LengthMM), r.MinOuterMM, parts.MaxRodSlenderness, num(r.OuterMM))})
 	}
 	if r.Mount.Overloaded {
-		w = append(w, Warning{Code: "rod-heavy", Message: fmt.Sprintf("the support rod weighs about %.0f g: %s; use a tube or a thinner rod, or mount it in a collar bolted to the reflector", r.MassG, r.Mount.Basis)})
+		w = append(w, parts.Warning{Code: "rod-heavy", Message: fmt.Sprintf("the support rod weighs about %.0f g: %s; use a tube or a thinner rod, or mount it in a collar bolted to the reflector", r.MassG, r.Mount.Basis)})
 	}
 	return w
 }
 
 // SectionWords names the support section of dc: "Ø8 mm ptfe rod" or "Ø8/6 mm
 // ptfe tube".
-func SectionWords(dc DowelCut) string {
+func SectionWords(dc parts.DowelCut) string {
 	if dc.BoreMM > 0 {
 		return fmt.Sprintf("Ø%s/%s mm %s tube", num(dc.DiameterMM), num(dc.BoreMM), dc.Material)
 	}
@@ -268,7 +269,7 @@ func sleeveFor(outer float64) (SleeveCut, error) {
 // wire diameter along both sides of the first quarter turn on the
 // matching strip, a half-section lap at the centre-conductor joint, and a
 // 1 mm leg round the outer conductor at the reflector.
-func solderEstimate(d *Design, cx CoaxCut, solderWire float64) Consumable {
+func solderEstimate(d *parts.Design, cx CoaxCut, solderWire float64) Consumable {
 	wd := d.Spec.Wire.DiameterMM
 	strip := d.Coil.LengthBetween(0, math.Pi/2)
 	leg := wd / 4
@@ -285,7 +286,7 @@ func solderEstimate(d *Design, cx CoaxCut, solderWire float64) Consumable {
 // wire, each a block (clearance + wire) long and two wire diameters
 // square, plus a fillet of 2 mm leg round the rod's foot, and adds half
 // again for mixing waste. Common practice (no published source).
-func epoxyEstimate(d *Design, dw DowelCut) Consumable {
+func epoxyEstimate(d *parts.Design, dw parts.DowelCut) Consumable {
 	wd := d.Spec.Wire.DiameterMM
 	beads := 2 * len(d.Turns)
 	gap := (dw.InnerTurnMM - dw.DiameterMM) / 2
@@ -301,7 +302,7 @@ func epoxyEstimate(d *Design, dw DowelCut) Consumable {
 // practice (no published source; ISO 4762 and ISO 7045 list these lengths).
 var screwLengthsMM = []float64{6, 8, 10, 12, 16, 20, 25, 30}
 
-func hardware(d *Design, cl *CutList) []HardwareItem {
+func hardware(d *parts.Design, cl *CutList) []HardwareItem {
 	s := d.Spec
 	var hw []HardwareItem
 	cable := cl.Coax.Cable
@@ -401,7 +402,7 @@ func feedStub(cx CoaxCut) struct{ stub, pin string } {
 
 // rodSize is the cut list's size column for the support: "Ø8 mm" or
 // "Ø8/6 mm tube".
-func rodSize(dc DowelCut) string {
+func rodSize(dc parts.DowelCut) string {
 	if dc.BoreMM > 0 {
 		return fmt.Sprintf("Ø%s/%s mm tube", num(dc.DiameterMM), num(dc.BoreMM))
 	}
@@ -410,11 +411,11 @@ func rodSize(dc DowelCut) string {
 
 // rodNote is the cut list's note on the support: the rule that chose it,
 // its weight and mount, and the dielectric-loading estimate.
-func rodNote(dc DowelCut) string {
+func rodNote(dc parts.DowelCut) string {
 	r := dc.Rod
 	why := "as the spec gives"
 	if dc.Automatic {
-		why = fmt.Sprintf("the thinnest stocked section at least 1/%g of its length (Ø%.1f mm) that passes inside the smallest turn", MaxRodSlenderness, r.MinOuterMM)
+		why = fmt.Sprintf("the thinnest stocked section at least 1/%g of its length (Ø%.1f mm) that passes inside the smallest turn", parts.MaxRodSlenderness, r.MinOuterMM)
 	}
 	plug := ""
 	if r.Mount.PlugMM > 0 {

@@ -1,4 +1,4 @@
-package parts
+package cutlist
 
 import (
 	"errors"
@@ -6,6 +6,7 @@ import (
 	"strings"
 	"testing"
 
+	"coilwright/parts"
 	"coilwright/parts/spec"
 )
 
@@ -17,12 +18,12 @@ func TestCentreFeedRodClearsTheCable(t *testing.T) {
 	d := demoDesign(t, "demo-5g8-cone.toml", withFeed("centre"))
 	cl := mustCutList(t, d)
 	f := cl.Dowel.Foot
-	if f == nil || f.BoreMM < 3.68-1e-9 || f.WallMM < MinRodWallMM || cl.Dowel.DiameterMM > 8.9 {
+	if f == nil || f.BoreMM < 3.68-1e-9 || f.WallMM < parts.MinRodWallMM || cl.Dowel.DiameterMM > 8.9 {
 		t.Fatalf("rod Ø%.2f mm, foot %+v", cl.Dowel.DiameterMM, f)
 	}
 	// The bore reaches past the lead, which runs in at the strip's feed-end
 	// height (wire Ø1.6 mm).
-	if want := d.FeedRise() + 0.8 + RodFootClearMM; math.Abs(f.BoreDepthMM-want) > 1e-9 {
+	if want := d.FeedRise() + 0.8 + parts.RodFootClearMM; math.Abs(f.BoreDepthMM-want) > 1e-9 {
 		t.Errorf("bore %.2f mm deep, want %.2f mm", f.BoreDepthMM, want)
 	}
 	for _, h := range cl.Hardware {
@@ -36,7 +37,7 @@ func TestCentreFeedRodConflictRefused(t *testing.T) {
 	// A given 5 mm rod cannot be bored Ø3.68 mm and keep a 1 mm wall.
 	// The design's fit check finds it before the cut list is made.
 	text := strings.Replace(withFeed("centre")(string(demoSpec(t, "demo-5g8-cone.toml"))), `material = "ptfe"`, "material = \"ptfe\"\ndiameter_mm = 5.0", 1)
-	_, err := NewDesign(mustParse(t, []byte(text)))
+	_, err := parts.NewDesign(mustParse(t, []byte(text)))
 	var se *spec.SpecError
 	if !errors.As(err, &se) || se.Key != "dowel.diameter_mm" || !strings.Contains(se.Fix, "periphery") {
 		t.Fatalf("err %v, want a dowel.diameter_mm spec error with a fix", err)
