@@ -80,11 +80,11 @@ type WedgeReport struct {
 	LineModel     string             `json:"line_model"`
 }
 
-// LineModelNote states what the line model across the band is.
-const LineModelNote = "Line model across the band: 50 Ω cable → the centre feed's horizontal lead as a round wire over the plate ((η0/2π)·acosh(h/a), if centre-fed) → the strip as cut (Hammerstad–Jensen per station) → the coil's input resistance by Kraus's formula on the first turn at each frequency (140·Cλ axial feed, 150/√Cλ peripheral); theory of small reflections with each frequency's phase. The vertical lead, the coil's reactance and coupling between turns are not in it."
+// lineModelNote states what the line model across the band is.
+const lineModelNote = "Line model across the band: 50 Ω cable → the centre feed's horizontal lead as a round wire over the plate ((η0/2π)·acosh(h/a), if centre-fed) → the strip as cut (Hammerstad–Jensen per station) → the coil's input resistance by Kraus's formula on the first turn at each frequency (140·Cλ axial feed, 150/√Cλ peripheral); theory of small reflections with each frequency's phase. The vertical lead, the coil's reactance and coupling between turns are not in it."
 
-// WedgeNote states what the wedge figures are.
-const WedgeNote = "Widths from Hammerstad–Jensen (air, with thickness correction) along the strip's height above the reflector; mismatch from the theory of small reflections. Quasi-static line formulas applied to a strip of varying width and height: a first-order design aid."
+// wedgeNote states what the wedge figures are.
+const wedgeNote = "Widths from Hammerstad–Jensen (air, with thickness correction) along the strip's height above the reflector; mismatch from the theory of small reflections. Quasi-static line formulas applied to a strip of varying width and height: a first-order design aid."
 
 // patternReports fills the reflector and wedge sections of r from d.
 func patternReports(d *parts.Design, r *Report) {
@@ -101,10 +101,10 @@ func patternReports(d *parts.Design, r *Report) {
 	w := p.Wedge
 	wr := &WedgeReport{
 		Material: s.Wedge.Material, ThicknessMM: s.Wedge.ThicknessMM, Taper: s.Wedge.Taper, SpanDeg: w.Span * 180 / math.Pi,
-		MaxVSWR: s.Wedge.MaxVSWR, SpanSized: s.Line("wedge.span_deg") == 0, LineBand: p.LineBand, LineWorstVSWR: parts.WorstVSWR(p.LineBand), LineModel: LineModelNote,
+		MaxVSWR: s.Wedge.MaxVSWR, SpanSized: s.Line("wedge.span_deg") == 0, LineBand: p.LineBand, LineWorstVSWR: parts.WorstVSWR(p.LineBand), LineModel: lineModelNote,
 		FeedOhm: spec.WedgeFeedOhm, LoadOhm: p.WedgeLoadOhm, LengthMM: w.Length, FeedWidthMM: w.FeedWidth, EndWidthMM: w.EndWidth,
 		ElectricalLengthRad: w.ElectricalLength, Reflection: w.Reflection, VSWR: line.VSWR(w.Reflection),
-		Method: "Hammerstad–Jensen air microstrip; small-reflection mismatch", Note: WedgeNote, Widths: w.Stations,
+		Method: "Hammerstad–Jensen air microstrip; small-reflection mismatch", Note: wedgeNote, Widths: w.Stations,
 		Cutting: CutReport{Method: p.Method, KerfMM: p.Kerf, Label: p.WedgeLabel},
 	}
 	if w.Reflection > 0 {

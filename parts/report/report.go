@@ -88,8 +88,8 @@ type EIRPReport struct {
 	Caution      string  `json:"caution"`
 }
 
-// EIRPCaution is the regulatory caution printed with every EIRP figure.
-const EIRPCaution = "EIRP limits depend on the band, the country and your licence. Check the rules that apply where you transmit, stay within them, and keep people out of the main beam while transmitting."
+// eirpCaution is the regulatory caution printed with every EIRP figure.
+const eirpCaution = "EIRP limits depend on the band, the country and your licence. Check the rules that apply where you transmit, stay within them, and keep people out of the main beam while transmitting."
 
 // New returns the design summary of d for design.json and design.md.
 func New(d *parts.Design) Report {
@@ -138,7 +138,7 @@ func New(d *parts.Design) Report {
 	patternReports(d, &r)
 	if d.EIRP != nil {
 		f := d.EIRP
-		r.EIRP = &EIRPReport{TxPowerDBm: f.TxPowerDBm, FeederLossDB: f.FeederLossDB, GainDBic: f.GainDBic, EIRPDBm: f.EIRPDBm, EIRPmW: f.EIRPmW, Caution: EIRPCaution}
+		r.EIRP = &EIRPReport{TxPowerDBm: f.TxPowerDBm, FeederLossDB: f.FeederLossDB, GainDBic: f.GainDBic, EIRPDBm: f.EIRPDBm, EIRPmW: f.EIRPmW, Caution: eirpCaution}
 	}
 	r.QuotedGainDBic, r.QuotedGainSource = d.QuotedGain()
 	r.Field = d.Field

@@ -108,7 +108,7 @@ func NewBuildSheet(d *parts.Design, cl *cutlist.CutList, specSHA256 string) *Bui
 	b.Materials = materials(s, cl)
 	b.Cautions = cautions(d, choiceOf(d, cl))
 	b.Steps = steps(d, cl, strip, b.Cautions)
-	b.InspectionNote = InspectionNoteText(d)
+	b.InspectionNote = inspectionNoteText(d)
 	b.Warnings = append(append([]parts.Warning{}, d.Warnings...), cl.Warnings...)
 	b.Closing = []string{
 		"This sheet is a guide for careful hobby construction, not professional advice. Follow the local regulations, electrical and workshop codes, and the conditions of any licence that apply where you build and transmit; where they differ from this sheet, they win.",
@@ -287,7 +287,7 @@ func steps(d *parts.Design, cl *cutlist.CutList, strip *flat.Wedge, all []Hazard
 	if strip != nil && len(strip.Stations) > 0 {
 		under := fmt.Sprintf("the first %.0f° of the winding", strip.Span*180/math.Pi)
 		strip2 = "Tin the strip and the underside of " + under + ". Solder the strip along the underside of " + under + ", its wide end at the feed and its flat face parallel to the reflector."
-		strip1 = fmt.Sprintf("Cut the matching strip from its 1:1 template: %s long, %s. File its edges smooth.", mm(strip.Length), StripShapeText(strip))
+		strip1 = fmt.Sprintf("Cut the matching strip from its 1:1 template: %s long, %s. File its edges smooth.", mm(strip.Length), stripShapeText(strip))
 		clearance = fmt.Sprintf(" The strip's underside is only %s above the reflector at the feed: keep the solder there flat.", mm2(strip.Stations[0].Height))
 		if band := d.Patterns.LineBand; len(band) > 1 {
 			lo, hi := band[0], band[len(band)-1]

@@ -13,10 +13,10 @@ import (
 	"coilwright/parts/flat"
 )
 
-// StripShapeText describes the matching strip's widths as cut: the feed
+// stripShapeText describes the matching strip's widths as cut: the feed
 // end, the far end, and the widest or narrowest point between them when
 // that lies beyond both ends.
-func StripShapeText(w *flat.Wedge) string {
+func stripShapeText(w *flat.Wedge) string {
 	text := fmt.Sprintf("%s wide at the feed end and %s at the far end", mm2(w.FeedWidth), mm2(w.EndWidth))
 	if len(w.Stations) < 3 {
 		return text
@@ -45,10 +45,10 @@ func StripShapeText(w *flat.Wedge) string {
 // stroke. Common practice (no published source).
 const stripWidthNoteMM = 0.05
 
-// InspectionNoteText says how to measure the turns and which tolerance
+// inspectionNoteText says how to measure the turns and which tolerance
 // governs each: the spec's, the per cent of the diameter, or the caliper
 // floor.
-func InspectionNoteText(d *parts.Design) string {
+func inspectionNoteText(d *parts.Design) string {
 	note := "Measure each turn across its middle with calipers over the outside of the wire, at two places 90° apart, and write the mean in the blank column. "
 	if t := d.Spec.Wire.InspectionToleranceMM; t != nil {
 		return note + fmt.Sprintf("The tolerance, ±%s mm, is set in the spec.", num(*t))

@@ -90,7 +90,7 @@ func TestStripShapeText(t *testing.T) {
 	// mid-length, 2.00 mm at the far end.
 	w := &flat.Wedge{FeedWidth: 1.9, EndWidth: 2.0, Length: 14, Stations: []flat.WedgeStation{
 		{S: 0, Width: 1.9}, {S: 7, Width: 4.29}, {S: 14, Width: 2.0}}}
-	got := StripShapeText(w)
+	got := stripShapeText(w)
 	for _, want := range []string{"1.90 mm wide at the feed end", "2.00 mm at the far end", "widest (4.29 mm) 7.0 mm from the feed end"} {
 		if !strings.Contains(got, want) {
 			t.Errorf("%q lacks %q", got, want)
@@ -101,7 +101,7 @@ func TestStripShapeText(t *testing.T) {
 	}
 	// A plain taper gets no middle figure.
 	w = &flat.Wedge{FeedWidth: 3, EndWidth: 2, Stations: []flat.WedgeStation{{S: 0, Width: 3}, {S: 5, Width: 2.5}, {S: 10, Width: 2}}}
-	if got := StripShapeText(w); strings.Contains(got, "widest") || strings.Contains(got, "narrowest") {
+	if got := stripShapeText(w); strings.Contains(got, "widest") || strings.Contains(got, "narrowest") {
 		t.Errorf("a monotone taper is described as %q", got)
 	}
 }
@@ -109,7 +109,7 @@ func TestStripShapeText(t *testing.T) {
 func TestInspectionNoteNamesTheGoverningTolerance(t *testing.T) {
 	// 10 GHz: 1 % of a 9.5 mm turn is 0.095 mm, under the 0.2 mm floor.
 	d := mustDesign(t, xband)
-	note := InspectionNoteText(d)
+	note := inspectionNoteText(d)
 	if !strings.Contains(note, "±0.2 mm on every turn") || !strings.Contains(note, "floor governs") {
 		t.Errorf("10 GHz note does not say the floor governs: %q", note)
 	}
@@ -122,7 +122,7 @@ func TestInspectionNoteNamesTheGoverningTolerance(t *testing.T) {
 	// 2.2 mm, so the per cent governs every turn.
 	big := strings.Replace(strings.Replace(xband, "10000.0", "435.0", 1), "diameter_mm = 1.0", "diameter_mm = 4.0", 1)
 	big = strings.Replace(big, "turns = 1.0", "turns = 3.0", 1)
-	note = InspectionNoteText(mustDesign(t, big))
+	note = inspectionNoteText(mustDesign(t, big))
 	if !strings.Contains(note, "±1 % of each turn's diameter") || strings.Contains(note, "governs") {
 		t.Errorf("435 MHz note: %q", note)
 	}
