@@ -257,6 +257,39 @@ func mountFor(r SupportRod, maxWasherMM float64) RodMount {
 	return mt
 }
 
+// RodNote is the cut list's note on the support: the rule that chose it,
+// its weight and mount, and the dielectric-loading estimate.
+func RodNote(dc DowelCut) string {
+	r := dc.Rod
+	why := "as the spec gives"
+	if dc.Automatic {
+		why = fmt.Sprintf("the thinnest stocked section at least 1/%g of its length (Ø%.1f mm) that passes inside the smallest turn", MaxRodSlenderness, r.MinOuterMM)
+	}
+	plug := ""
+	if r.Mount.PlugMM > 0 {
+		plug = fmt.Sprintf("; epoxy %s of Ø%s mm solid rod into its foot", mm(r.Mount.PlugMM), num(dc.BoreMM))
+	}
+	return fmt.Sprintf("%s (%.2f mm inside, %s mm clearance); about %.0f g%s; dielectric loading (first-order estimate): fill ratio %.3f, εeff %.3f, frequency lower by about %.1f %%; %s",
+		why, dc.InnerTurnMM, num(dc.ClearanceMM), r.MassG, plug, r.Loading.FillRatio, r.Loading.EffectivePerm, 100*r.Loading.ShiftFraction, dc.MaterialAdvice)
+}
+
+// Description returns the support in one paragraph for the cut list: the
+// section, its length, the rule that chose it, its mass and mount, and the
+// dielectric-loading estimate.
+func (dc DowelCut) Description() string {
+	return fmt.Sprintf("%s, %.1f mm long: %s. Mount: %s. The loading is a first-order estimate, εeff ≈ 1 + (εr − 1)·F with F the rod's share of the area inside the smallest turn; the field is weakest on the axis, so the true shift is smaller.",
+		SectionWords(dc), dc.LengthMM, RodNote(dc), dc.Rod.Mount.Basis)
+}
+
+// SectionWords names the support section of dc: "Ø8 mm ptfe rod" or "Ø8/6 mm
+// ptfe tube".
+func SectionWords(dc DowelCut) string {
+	if dc.BoreMM > 0 {
+		return fmt.Sprintf("Ø%s/%s mm %s tube", num(dc.DiameterMM), num(dc.BoreMM), dc.Material)
+	}
+	return fmt.Sprintf("Ø%s mm %s rod", num(dc.DiameterMM), dc.Material)
+}
+
 // Support-rod allowance in mm. Common practice (no published source).
 const (
 	// DowelOverhangMM is how far the rod stands above the top turn.

@@ -229,7 +229,7 @@ func rodWarnings(d *parts.Design, dc parts.DowelCut) []parts.Warning {
 			fix = "PTFE has the lowest permittivity of the rod materials; or " + fix
 		}
 		w = append(w, parts.Warning{Code: "rod-loading", Message: fmt.Sprintf("the %s fills %.1f %% of the area inside the smallest turn (εr %.1f): a first-order estimate lowers the frequency by about %.1f %% (%.0f MHz); %s",
-			SectionWords(dc), 100*l.FillRatio, l.Permittivity, 100*l.ShiftFraction, l.ShiftFraction*d.Spec.FrequencyMHz, fix)})
+			parts.SectionWords(dc), 100*l.FillRatio, l.Permittivity, 100*l.ShiftFraction, l.ShiftFraction*d.Spec.FrequencyMHz, fix)})
 	}
 	if r.Slender {
 		w = append(w, parts.Warning{Code: "rod-slender", Message: fmt.Sprintf("a rod %s long needs about Ø%.0f mm to stay straight (%g diameters long at most), but only Ø%s mm passes inside the smallest turn: support the coil from outside as well", mm(r.LengthMM), r.MinOuterMM, parts.MaxRodSlenderness, num(r.OuterMM))})
@@ -238,15 +238,6 @@ func rodWarnings(d *parts.Design, dc parts.DowelCut) []parts.Warning {
 		w = append(w, parts.Warning{Code: "rod-heavy", Message: fmt.Sprintf("the support rod weighs about %.0f g: %s; use a tube or a thinner rod, or mount it in a collar bolted to the reflector", r.MassG, r.Mount.Basis)})
 	}
 	return w
-}
-
-// SectionWords names the support section of dc: "Ø8 mm ptfe rod" or "Ø8/6 mm
-// ptfe tube".
-func SectionWords(dc parts.DowelCut) string {
-	if dc.BoreMM > 0 {
-		return fmt.Sprintf("Ø%s/%s mm %s tube", num(dc.DiameterMM), num(dc.BoreMM), dc.Material)
-	}
-	return fmt.Sprintf("Ø%s mm %s rod", num(dc.DiameterMM), dc.Material)
 }
 
 // sleeveFor picks the smallest 2:1 sleeve whose supplied bore is at least
@@ -354,7 +345,7 @@ func (cl *CutList) Rows() []CutRow {
 		{Item: "wire blank", Material: w.Material, Size: fmt.Sprintf("Ø%s mm", num(w.DiameterMM)), Count: 1, LengthMM: w.LengthMM,
 			Note: blankNote(w)},
 		{Item: "support rod", Material: dw.Material, Size: rodSize(dw), Count: 1, LengthMM: dw.LengthMM,
-			Note: rodNote(dw)},
+			Note: parts.RodNote(dw)},
 		{Item: "feed cable", Material: cx.Cable.Name, Size: fmt.Sprintf("Ø%s mm", num(cx.Cable.Outer)), Count: 1, LengthMM: cx.CutMM,
 			Note: coaxNote(cx)},
 		{Item: "solder", Material: "solder wire", Size: "", Amount: cl.Solder.Amount, Unit: cl.Solder.Unit, Note: cl.Solder.Basis},
@@ -407,20 +398,4 @@ func rodSize(dc parts.DowelCut) string {
 		return fmt.Sprintf("Ø%s/%s mm tube", num(dc.DiameterMM), num(dc.BoreMM))
 	}
 	return fmt.Sprintf("Ø%s mm", num(dc.DiameterMM))
-}
-
-// rodNote is the cut list's note on the support: the rule that chose it,
-// its weight and mount, and the dielectric-loading estimate.
-func rodNote(dc parts.DowelCut) string {
-	r := dc.Rod
-	why := "as the spec gives"
-	if dc.Automatic {
-		why = fmt.Sprintf("the thinnest stocked section at least 1/%g of its length (Ø%.1f mm) that passes inside the smallest turn", parts.MaxRodSlenderness, r.MinOuterMM)
-	}
-	plug := ""
-	if r.Mount.PlugMM > 0 {
-		plug = fmt.Sprintf("; epoxy %s of Ø%s mm solid rod into its foot", mm(r.Mount.PlugMM), num(dc.BoreMM))
-	}
-	return fmt.Sprintf("%s (%.2f mm inside, %s mm clearance); about %.0f g%s; dielectric loading (first-order estimate): fill ratio %.3f, εeff %.3f, frequency lower by about %.1f %%; %s",
-		why, dc.InnerTurnMM, num(dc.ClearanceMM), r.MassG, plug, r.Loading.FillRatio, r.Loading.EffectivePerm, 100*r.Loading.ShiftFraction, dc.MaterialAdvice)
 }

@@ -145,7 +145,7 @@ func designRows(d *parts.Design, cl *cutlist.CutList) []SheetRow {
 		{"Coil height", Heights(d).Text()},
 		{"Wire", fmt.Sprintf("%s, Ø%s mm; winding %s, blank %s", s.Wire.Material, num(s.Wire.DiameterMM), mm(cl.Wire.ArcMM), mm(cl.Wire.LengthMM))},
 		{"Reflector", fmt.Sprintf("%s, %s across, %s mm thick", s.Reflector.Shape, mm(s.Reflector.SizeMM(d.Wavelength)), num(s.Reflector.ThicknessMM))},
-		{"Support rod", fmt.Sprintf("%s × %s", cutlist.SectionWords(cl.Dowel), mm(cl.Dowel.LengthMM))},
+		{"Support rod", fmt.Sprintf("%s × %s", parts.SectionWords(cl.Dowel), mm(cl.Dowel.LengthMM))},
 		{"Feed cable", feedRow(d, cl)},
 		gainRow(d),
 		{"Half-power beamwidth (estimate)", fmt.Sprintf("%.0f°", d.Estimates.HPBW.Value)},
@@ -184,7 +184,7 @@ func tools(s *spec.Spec, c sheetChoice) []string {
 func materials(s *spec.Spec, cl *cutlist.CutList) []SheetRow {
 	rows := []SheetRow{
 		{"Wire blank", fmt.Sprintf("%s, Ø%s mm, %s", cl.Wire.Material, num(cl.Wire.DiameterMM), mm(cl.Wire.LengthMM))},
-		{"Support rod", fmt.Sprintf("%s, %s", cutlist.SectionWords(cl.Dowel), mm(cl.Dowel.LengthMM))},
+		{"Support rod", fmt.Sprintf("%s, %s", parts.SectionWords(cl.Dowel), mm(cl.Dowel.LengthMM))},
 		{"Feed cable", fmt.Sprintf("%s, cut %s", cl.Coax.Cable.Name, mm(cl.Coax.CutMM))},
 		{"Heat-shrink", fmt.Sprintf("2:1 sleeve Ø%s mm (shrinks to Ø%s mm), %s", num(cl.Sleeve.SuppliedMM), num(cl.Sleeve.RecoveredMM), mm(cl.Sleeve.LengthMM))},
 		{"Reflector", fmt.Sprintf("%s %s, %s mm thick, cut from the template", s.Reflector.Shape, plateName(s), num(s.Reflector.ThicknessMM))},

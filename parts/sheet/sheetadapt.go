@@ -163,7 +163,7 @@ func rodMountSteps(cl *cutlist.CutList) (hole, fix string) {
 		plug = fmt.Sprintf("Epoxy %s of Ø%s mm solid rod into the tube's foot, flush with its end, and let it cure. ", mm(mt.PlugMM), num(dc.BoreMM))
 	}
 	if mt.Screw == "" {
-		return "", fmt.Sprintf("%sLower the %s (about %.0f g) through the open top of the coil and epoxy its foot to the reflector's centre, in the inner circle marked there, with a fillet all round that stays inside the outer circle, clear of the feed hole.", plug, cutlist.SectionWords(dc), dc.Rod.MassG)
+		return "", fmt.Sprintf("%sLower the %s (about %.0f g) through the open top of the coil and epoxy its foot to the reflector's centre, in the inner circle marked there, with a fillet all round that stays inside the outer circle, clear of the feed hole.", plug, parts.SectionWords(dc), dc.Rod.MassG)
 	}
 	item := mt.Screw + " screw"
 	for _, h := range cl.Hardware {
@@ -173,6 +173,6 @@ func rodMountSteps(cl *cutlist.CutList) (hole, fix string) {
 	}
 	hole = fmt.Sprintf(" The %s mm hole at the centre is for the rod's %s screw.", num(mt.ClearMM), mt.Screw)
 	fix = fmt.Sprintf("%sDrill a %s mm pilot hole 8 mm deep in the centre of the %s's foot. Lower the %s (about %.0f g) through the open top of the coil onto the reflector's centre hole and fix it from behind with the %s.",
-		plug, num(mt.PilotMM), map[bool]string{true: "tube", false: "rod"}[dc.BoreMM > 0], cutlist.SectionWords(dc), dc.Rod.MassG, item)
+		plug, num(mt.PilotMM), map[bool]string{true: "tube", false: "rod"}[dc.BoreMM > 0], parts.SectionWords(dc), dc.Rod.MassG, item)
 	return hole, fix
 }
