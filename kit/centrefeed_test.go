@@ -12,6 +12,7 @@ import (
 	"coilwright/cam/geom"
 	"coilwright/jig"
 	"coilwright/parts"
+	"coilwright/parts/cutlist"
 	"coilwright/parts/spec"
 	"coilwright/templates"
 )
@@ -73,7 +74,7 @@ func channelDepth(t *testing.T, k *Kit) float64 {
 // checkLeadAgrees holds the cut list's lock end, the planned channel depth,
 // the channel measured on the solid and Design.FeedRun (the lead as built,
 // parts/feedlead.go) to one another.
-func checkLeadAgrees(t *testing.T, name string, d *parts.Design, k *Kit, cl *parts.CutList) {
+func checkLeadAgrees(t *testing.T, name string, d *parts.Design, k *Kit, cl *cutlist.CutList) {
 	t.Helper()
 	lead, hole, tail := d.FeedRun(), k.Former.LockHoleMM, cl.Wire.LockTailMM
 	if math.Abs(tail-lead) > leadAgreeMM || math.Abs(hole-lead) > leadAgreeMM {
@@ -114,7 +115,7 @@ func TestCentreFeedLeadAgrees(t *testing.T) {
 				t.Errorf("draw %d: check passes but the former is refused: %v\n%s", i, err, src)
 				continue
 			}
-			cl, err := parts.NewCutList(d)
+			cl, err := cutlist.NewCutList(d)
 			if err != nil {
 				t.Fatal(err)
 			}

@@ -8,6 +8,7 @@ import (
 	"coilwright/cam/html"
 	"coilwright/cam/plot"
 	"coilwright/parts"
+	"coilwright/parts/report"
 )
 
 // The report page's analysis sections: the field solution and the batch
@@ -89,7 +90,7 @@ func fieldSection(f *parts.FieldSolution) html.Section {
 // kits meeting the target, the distributions with their histograms (the
 // same drawings as the tolerance-*.svg files), the inputs ranked by their
 // effect, and the derived inspection band.
-func toleranceSection(rep *parts.ToleranceReport) (html.Section, error) {
+func toleranceSection(rep *report.ToleranceReport) (html.Section, error) {
 	pct := func(v float64) string { return strconv.FormatFloat(100*v, 'f', 0, 64) }
 	f2 := func(v float64) string { return strconv.FormatFloat(v, 'f', 2, 64) }
 	yield := fmt.Sprintf("%s %% of %d simulated kits meet VSWR %g or better across %s–%s MHz (seed %d).",

@@ -7,7 +7,8 @@ import (
 	"strconv"
 
 	"coilwright/cam/html"
-	"coilwright/parts"
+	"coilwright/parts/line"
+	"coilwright/parts/sheet"
 )
 
 // reportPage is the name of the self-contained report page.
@@ -32,8 +33,8 @@ func (k *Kit) writeHTML(out Sink) error {
 	if err != nil {
 		return err
 	}
-	sheet := parts.NewBuildSheet(k.Design, k.cutList, k.Source.SHA256())
-	return out.Add(reportPage, func(w io.Writer) error { return html.WriteReport(w, doc, html.Options{Paper: sheet.Paper}) })
+	bs := sheet.NewBuildSheet(k.Design, k.cutList, k.Source.SHA256())
+	return out.Add(reportPage, func(w io.Writer) error { return html.WriteReport(w, doc, html.Options{Paper: bs.Paper}) })
 }
 
 // reportDocument lays out the report page from the kit, its plots and the
@@ -41,7 +42,7 @@ func (k *Kit) writeHTML(out Sink) error {
 func (k *Kit) reportDocument(rec *recorder) (html.Document, error) {
 	d, r := k.Design, k.Report
 	e := k.electrical()
-	sheet := parts.NewBuildSheet(d, k.cutList, k.Source.SHA256())
+	bs := sheet.NewBuildSheet(d, k.cutList, k.Source.SHA256())
 	plots, err := k.plots()
 	if err != nil {
 		return html.Document{}, err
@@ -56,8 +57,8 @@ func (k *Kit) reportDocument(rec *recorder) (html.Document, error) {
 
 	// Summary.
 	sum := []html.Definition{
-		{Term: "What it is", Detail: sheet.Summary + "."},
-		{Term: "Hand", Detail: r.Hand + ": " + sheet.HandWords + "."},
+		{Term: "What it is", Detail: bs.Summary + "."},
+		{Term: "Hand", Detail: r.Hand + ": " + bs.HandWords + "."},
 	}
 	if e.Band != nil {
 		sum = append(sum, html.Definition{Term: "Band", Detail: fmt.Sprintf("%s–%s MHz, centre %s MHz; designed at %s MHz", num(e.Band.LowMHz), num(e.Band.HighMHz), num(e.CentreMHz), num(r.FrequencyMHz))})
@@ -67,7 +68,7 @@ func (k *Kit) reportDocument(rec *recorder) (html.Document, error) {
 	sum = append(sum, html.Definition{Term: "Quoted gain", Detail: fmt.Sprintf("%.1f dBic (%s)", r.QuotedGainDBic, r.QuotedGainSource)})
 	matched := fmt.Sprintf("none: the VSWR at %s MHz is above the target %.2f", num(r.FrequencyMHz), e.TargetVSWR)
 	if lo, hi, ok := e.matchedBand(r.FrequencyMHz); ok {
-		matched = fmt.Sprintf("%.0f–%.0f MHz at VSWR %.2f or better (return loss %.0f dB)", lo, hi, e.TargetVSWR, parts.ReturnLossDB((e.TargetVSWR-1)/(e.TargetVSWR+1)))
+		matched = fmt.Sprintf("%.0f–%.0f MHz at VSWR %.2f or better (return loss %.0f dB)", lo, hi, e.TargetVSWR, line.ReturnLossDB((e.TargetVSWR-1)/(e.TargetVSWR+1)))
 		if lo <= e.FreqMHz[0] || hi >= e.FreqMHz[len(e.FreqMHz)-1] {
 			matched += "; the match holds to the edge of the plotted range"
 		}
@@ -170,7 +171,7 @@ func (k *Kit) reportDocument(rec *recorder) (html.Document, error) {
 
 	// Cautions: the build sheet's own.
 	var cautions []html.Definition
-	for _, c := range sheet.Cautions {
+	for _, c := range bs.Cautions {
 		cautions = append(cautions, html.Definition{Term: c.Heading, Detail: c.Text})
 	}
 
@@ -220,7 +221,7 @@ func (k *Kit) reportDocument(rec *recorder) (html.Document, error) {
 	}
 	return html.Document{
 		Title:    r.Kit + ": build report",
-		Subtitle: sheet.Summary,
+		Subtitle: bs.Summary,
 		Footer:   "coilwright " + version + " — spec SHA-256 " + k.Source.SHA256(),
 		Sections: append(sections, []html.Section{
 			{ID: "drawings", Title: reportSections[2], Blocks: drawings},

@@ -15,7 +15,7 @@ import (
 	"testing"
 
 	"coilwright/cam/checktool"
-	"coilwright/parts"
+	"coilwright/parts/sheet"
 	"coilwright/parts/spec"
 	"coilwright/templates"
 
@@ -81,8 +81,8 @@ func TestReportPageStructure(t *testing.T) {
 		t.Errorf("report.html references outside itself: %q", loc)
 	}
 	// The cautions are the build sheet's, word for word (as HTML text).
-	sheet := parts.NewBuildSheet(k.Design, k.cutList, k.Source.SHA256())
-	for _, c := range sheet.Cautions {
+	bs := sheet.NewBuildSheet(k.Design, k.cutList, k.Source.SHA256())
+	for _, c := range bs.Cautions {
 		if !bytes.Contains(page, []byte(htmlEscape(c.Text))) {
 			t.Errorf("caution %q is not the build sheet's text", c.Heading)
 		}

@@ -12,6 +12,8 @@ import (
 	"coilwright/cam/pdf"
 	"coilwright/jig"
 	"coilwright/parts"
+	"coilwright/parts/cutlist"
+	"coilwright/parts/report"
 	"coilwright/parts/spec"
 )
 
@@ -53,11 +55,11 @@ type Kit struct {
 	Source Source
 	Design *parts.Design
 	Former jig.FormerPlan // the former's sizes, drive and envelope
-	Report parts.Report   // as in design.json and check --json
+	Report report.Report  // as in design.json and check --json
 
 	opt         Options
 	parts       []cutPart
-	cutList     *parts.CutList
+	cutList     *cutlist.CutList
 	batch       *batchPlan       // nil for one kit
 	templates   []pdf.Page       // the 1:1 template pages, laid out once
 	split       *jig.SplitPlan   // sections of a former taller than the printer; nil when it fits or cannot be split
@@ -65,7 +67,7 @@ type Kit struct {
 	splitParams jig.FormerParams // its sizes: bored through for the rod
 
 	// tolerance is the batch tolerance analysis; nil when it did not run.
-	tolerance *parts.ToleranceReport
+	tolerance *report.ToleranceReport
 }
 
 // New works out the design for src and plans every part of the build.
@@ -91,7 +93,7 @@ func New(src Source, opt Options) (*Kit, error) {
 	if k.parts, err = cutParts(d); err != nil {
 		return nil, err
 	}
-	if k.cutList, err = parts.NewCutList(d); err != nil {
+	if k.cutList, err = cutlist.NewCutList(d); err != nil {
 		return nil, err
 	}
 	k.cutList.FitLockTail(k.Former.LockHoleMM)
@@ -111,7 +113,7 @@ func New(src Source, opt Options) (*Kit, error) {
 	if k.templates, err = templatePages(d, k.parts); err != nil {
 		return nil, err
 	}
-	k.Report = d.Report()
+	k.Report = report.New(d)
 	k.addPanels(&k.Report)
 	k.Report.Tolerance = k.tolerance
 	return k, nil

@@ -1,6 +1,7 @@
 package kit
 
 import (
+	"coilwright/parts/sheet"
 	"fmt"
 	"math/rand/v2"
 	"testing"
@@ -60,7 +61,7 @@ func TestViewLabelsDoNotOverlap(t *testing.T) {
 	}
 	for i, k := range kits {
 		name := fmt.Sprintf("kit %d (%s, %.0f MHz)", i, k.Source.Spec.Kit, k.Source.Spec.FrequencyMHz)
-		sv := k.Design.SideView(k.cutList)
+		sv := sheet.NewSideView(k.Design, k.cutList)
 		s := fitWithText(func(s float64) geom.Drawing { return sideDrawing(sv, s) })
 		checkLabelsApart(t, name+" side view", sideDrawing(sv, s))
 		s = fitWithText(func(s float64) geom.Drawing { return planDrawing(k.Design, s) })

@@ -10,6 +10,9 @@ import (
 	"coilwright/cam/pdf"
 	"coilwright/cam/svg"
 	"coilwright/parts"
+	"coilwright/parts/flat"
+	"coilwright/parts/line"
+	"coilwright/parts/report"
 )
 
 // nestTolerance is the chord tolerance in mm used to flatten outlines for
@@ -57,7 +60,7 @@ func cutParts(d *parts.Design) ([]cutPart, error) {
 			fmt.Sprintf("%s, %.2f mm thick; %.2f mm along the centreline, %.2f mm wide at the feed end (tick), %.2f mm at the far end.",
 				p.WedgeMaterial.Name, s.Wedge.ThicknessMM, w.Length, w.FeedWidth, w.EndWidth),
 			fmt.Sprintf("Solder it flat under the first %.0f° of wire, the ticked end to the feed pin. Expected |Γ| %.2f (VSWR %.2f) at %.0f MHz.",
-				s.Wedge.SpanDeg, w.Reflection, parts.VSWR(w.Reflection), s.FrequencyMHz),
+				s.Wedge.SpanDeg, w.Reflection, line.VSWR(w.Reflection), s.FrequencyMHz),
 		}})
 	for i := range out {
 		c, err := cut.ApplyKerf(out[i].nominal, p.Kerf)
@@ -71,7 +74,7 @@ func cutParts(d *parts.Design) ([]cutPart, error) {
 		switch {
 		case out[i].name == "wedge":
 			out[i].nest, err = cut.NestPolygon(outerOutline(c), s.Quantity, sheet, cut.NestOptions{Interlock: true, Tolerance: nestTolerance})
-		case p.Reflector.Input.Shape == parts.ReflectorDisc:
+		case p.Reflector.Input.Shape == flat.ReflectorDisc:
 			out[i].nest, err = cut.NestDiscs(p.Reflector.Input.Size/2+p.Kerf/2, s.Quantity, sheet)
 		default:
 			out[i].nest, err = cut.NestPolygon(outerOutline(c), s.Quantity, sheet, cut.NestOptions{Tolerance: nestTolerance, Angles: []float64{0}})
@@ -86,7 +89,7 @@ func cutParts(d *parts.Design) ([]cutPart, error) {
 // outerOutline returns the first CUT entity, the part's outline, as a
 // polygon.
 func outerOutline(d geom.Drawing) geom.Polyline {
-	l, _ := d.Layer(parts.LayerCut)
+	l, _ := d.Layer(flat.LayerCut)
 	switch e := l.Entities[0].(type) {
 	case geom.Circle:
 		return e.Flatten(nestTolerance)
@@ -97,15 +100,15 @@ func outerOutline(d geom.Drawing) geom.Polyline {
 }
 
 // panelReport summarises a part's nest for design.json.
-func (c cutPart) panelReport(quantity int) *parts.PanelReport {
-	return &parts.PanelReport{
+func (c cutPart) panelReport(quantity int) *report.PanelReport {
+	return &report.PanelReport{
 		SheetWidthMM: c.sheet.Width, SheetHeightMM: c.sheet.Height, MarginMM: c.sheet.Margin, SpacingMM: c.sheet.Spacing,
 		Quantity: quantity, PartsPerSheet: c.nest.PerSheet, Sheets: c.nest.Sheets,
 	}
 }
 
 // addPanels puts each part's nesting figures into the report.
-func (k *Kit) addPanels(r *parts.Report) {
+func (k *Kit) addPanels(r *report.Report) {
 	d := k.Design
 	for _, c := range k.parts {
 		switch {

@@ -10,6 +10,7 @@ import (
 
 	"coilwright/cam/geom"
 	"coilwright/parts"
+	"coilwright/parts/flat"
 	"coilwright/parts/spec"
 )
 
@@ -46,7 +47,7 @@ func newKitText(t *testing.T, text string) (*Kit, error) {
 // holes returns the plate's CUT entities after the outline, flattened.
 func holes(t *testing.T, d geom.Drawing) []geom.Polyline {
 	t.Helper()
-	l, ok := d.Layer(parts.LayerCut)
+	l, ok := d.Layer(flat.LayerCut)
 	if !ok {
 		t.Fatal("no CUT layer")
 	}
@@ -80,7 +81,7 @@ func polyGap(a, b geom.Polyline) float64 {
 // markCircles returns the MARK layer's circles about the plate's centre,
 // smallest first: the rod and the limit of its fillet.
 func markCircles(d geom.Drawing) []geom.Circle {
-	l, _ := d.Layer(parts.LayerMark)
+	l, _ := d.Layer(flat.LayerMark)
 	var out []geom.Circle
 	for _, e := range l.Entities {
 		if c, ok := e.(geom.Circle); ok && c.Center.Len() < 1e-9 {
@@ -145,7 +146,7 @@ func TestRodScrewHoleIsCut(t *testing.T) {
 	if mt.Screw != "M3" {
 		t.Fatalf("want an M3 mount for this rod, got %+v", mt)
 	}
-	l, _ := k.Design.Patterns.Reflector.Drawing.Layer(parts.LayerCut)
+	l, _ := k.Design.Patterns.Reflector.Drawing.Layer(flat.LayerCut)
 	found := false
 	for _, e := range l.Entities {
 		if c, ok := e.(geom.Circle); ok && c.Center.Len() < 1e-9 && math.Abs(2*c.Radius-mt.ClearMM) < 1e-9 {

@@ -9,6 +9,7 @@ import (
 
 	"coilwright/cam/plot"
 	"coilwright/parts"
+	"coilwright/parts/line"
 )
 
 // plotFile is one plot SVG of the build: its file name, the words a
@@ -109,7 +110,7 @@ const (
 
 // matchChart is VSWR (left) and return loss (right) against frequency.
 func matchChart(d *parts.Design, e *electrical) plot.FrequencyChart {
-	rl := parts.ReturnLossDB((e.TargetVSWR - 1) / (e.TargetVSWR + 1))
+	rl := line.ReturnLossDB((e.TargetVSWR - 1) / (e.TargetVSWR + 1))
 	label := fmt.Sprintf("Target: return loss %.0f dB, VSWR %.2f", rl, e.TargetVSWR)
 	return plot.FrequencyChart{
 		Title: d.Spec.Kit + ": match at the feed", Note: e.Source,

@@ -1,6 +1,7 @@
 package kit
 
 import (
+	"coilwright/parts/sheet"
 	"maps"
 	"slices"
 	"strings"
@@ -57,7 +58,7 @@ func TestNoRodOverTheFeed(t *testing.T) {
 			"build sheet materials": strings.Contains(file("build-sheet.md"), "| Support rod | Ø"),
 			"build sheet step":      strings.Contains(file("build-sheet.md"), "through the open top of the coil"),
 			"side view figure":      strings.Contains(file("plot-side.svg"), `id="`+layerRod+`"`) || strings.Contains(file("plot-side.svg"), ">"+layerRod+"<"),
-			"side view sizes":       k.Design.SideView(k.cutList).RodDiameter > 0,
+			"side view sizes":       sheet.NewSideView(k.Design, k.cutList).RodDiameter > 0,
 			"plate's rod marks":     len(markCircles(k.Design.Patterns.Reflector.Drawing)) > 0,
 		}
 		for _, f := range k.Design.Patterns.Plate.Features {

@@ -14,6 +14,8 @@ import (
 	"coilwright/cam/cut"
 	"coilwright/cam/pdf"
 	"coilwright/parts"
+	"coilwright/parts/cutlist"
+	"coilwright/parts/sheet"
 	"coilwright/parts/spec"
 	"coilwright/templates"
 )
@@ -26,10 +28,10 @@ var (
 
 // cutlistView is what cutlist.md.tmpl reads.
 type cutlistView struct {
-	*parts.CutList
+	*cutlist.CutList
 	Kit        string
 	SpecSHA256 string
-	Rows       []parts.CutRow
+	Rows       []cutlist.CutRow
 }
 
 // writeSheet writes the cut list, the batch plan (more than one kit) and
@@ -52,33 +54,33 @@ func (k *Kit) writeSheet(out Sink) error {
 			return err
 		}
 	}
-	sheet := parts.NewBuildSheet(d, cl, k.Source.SHA256())
-	for i, st := range sheet.Steps {
+	bs := sheet.NewBuildSheet(d, cl, k.Source.SHA256())
+	for i, st := range bs.Steps {
 		if st.Title != "Lock its end in the former" {
 			continue
 		}
 		if lead := k.formerLead(); lead != "" {
-			sheet.Steps[i].Text = append([]string{lead}, sheet.Steps[i].Text...)
+			bs.Steps[i].Text = append([]string{lead}, bs.Steps[i].Text...)
 		}
 		if note, _ := k.lockCut(); note != "" && (k.Former.FitsPrinter || k.split != nil) {
-			sheet.Steps[i].Text = append(sheet.Steps[i].Text, note)
+			bs.Steps[i].Text = append(bs.Steps[i].Text, note)
 		}
 	}
-	if err := out.Add("build-sheet.md", func(w io.Writer) error { return sheetTmpl.Execute(w, sheet) }); err != nil {
+	if err := out.Add("build-sheet.md", func(w io.Writer) error { return sheetTmpl.Execute(w, bs) }); err != nil {
 		return err
 	}
-	page, err := pdf.PageSizeByName(sheet.Paper)
+	page, err := pdf.PageSizeByName(bs.Paper)
 	if err != nil {
 		return err
 	}
-	doc := sheetDocument(sheet, page, k.stepFigures(sheet))
+	doc := sheetDocument(bs, page, k.stepFigures(bs))
 	doc.Blocks = withBandFigure(doc.Blocks, pdf.Group{Blocks: []pdf.Block{pdf.Heading{Text: "What the analyser should show", Level: 3}, bandFigure(k.electrical())}})
 	doc.TrailingPages = len(k.templates)
 	pages, err := doc.Pages()
 	if err != nil {
 		return err
 	}
-	opt := pdf.PDFOptions{Title: sheet.Kit + " — build sheet", Subject: sheet.Summary, Creator: k.creator(), Created: k.opt.Created}
+	opt := pdf.PDFOptions{Title: bs.Kit + " — build sheet", Subject: bs.Summary, Creator: k.creator(), Created: k.opt.Created}
 	return out.Add("build-sheet.pdf", func(w io.Writer) error { return pdf.WritePDF(w, append(pages, k.templates...), opt) })
 }
 
@@ -90,7 +92,7 @@ func fmtMM(v float64) string {
 	return strconv.FormatFloat(v, 'f', 1, 64)
 }
 
-func writeCutCSV(w io.Writer, rows []parts.CutRow) error {
+func writeCutCSV(w io.Writer, rows []cutlist.CutRow) error {
 	cw := csv.NewWriter(w)
 	cw.Write([]string{"item", "material", "size", "count", "length_mm", "amount", "unit", "note"})
 	for _, r := range rows {
@@ -111,7 +113,7 @@ type batchPlan struct {
 	Quantity int
 	Stocks   []batchStock
 	Sheets   []batchSheet
-	Buy      []parts.SheetRow
+	Buy      []sheet.SheetRow
 }
 
 // batchSheet is the nesting of one flat part on stock sheets.
@@ -140,7 +142,7 @@ type rodPattern struct {
 	OffcutMM float64
 }
 
-func newBatchPlan(d *parts.Design, cl *parts.CutList, cps []cutPart) (*batchPlan, error) {
+func newBatchPlan(d *parts.Design, cl *cutlist.CutList, cps []cutPart) (*batchPlan, error) {
 	s := d.Spec
 	n := s.Quantity
 	bp := &batchPlan{Kit: s.Kit, Quantity: n}
@@ -185,7 +187,7 @@ func newBatchPlan(d *parts.Design, cl *parts.CutList, cps []cutPart) (*batchPlan
 	}
 	w := bp.Stocks[0]
 	nf := float64(n)
-	bp.Buy = []parts.SheetRow{
+	bp.Buy = []sheet.SheetRow{
 		{Label: "Wire rods", Value: fmt.Sprintf("%d × %.0f mm, %s Ø%s mm", len(w.Plan.Rods), w.Plan.Rod.Length, cl.Wire.Material, strconv.FormatFloat(cl.Wire.DiameterMM, 'g', -1, 64))},
 		{Label: "Feed cable", Value: fmt.Sprintf("%.0f mm of %s (%d × %.1f mm)", nf*cl.Coax.CutMM, cl.Coax.Cable.Name, n, cl.Coax.CutMM)},
 		{Label: "Heat-shrink", Value: fmt.Sprintf("%.0f mm of Ø%.1f mm 2:1 sleeve", nf*cl.Sleeve.LengthMM, cl.Sleeve.SuppliedMM)},
@@ -194,7 +196,7 @@ func newBatchPlan(d *parts.Design, cl *parts.CutList, cps []cutPart) (*batchPlan
 	}
 	if len(bp.Stocks) > 1 {
 		dw := bp.Stocks[1]
-		bp.Buy = slices.Insert(bp.Buy, 1, parts.SheetRow{Label: "Support rods", Value: fmt.Sprintf("%d × %.0f mm, %s Ø%s mm", len(dw.Plan.Rods), dw.Plan.Rod.Length, cl.Dowel.Material, strconv.FormatFloat(cl.Dowel.DiameterMM, 'g', -1, 64))})
+		bp.Buy = slices.Insert(bp.Buy, 1, sheet.SheetRow{Label: "Support rods", Value: fmt.Sprintf("%d × %.0f mm, %s Ø%s mm", len(dw.Plan.Rods), dw.Plan.Rod.Length, cl.Dowel.Material, strconv.FormatFloat(cl.Dowel.DiameterMM, 'g', -1, 64))})
 	}
 	for _, c := range cps {
 		bp.Sheets = append(bp.Sheets, batchSheet{Part: c.title, PerSheet: c.nest.PerSheet, Sheets: c.nest.Sheets,
@@ -203,10 +205,10 @@ func newBatchPlan(d *parts.Design, cl *parts.CutList, cps []cutPart) (*batchPlan
 		if c.name == "wedge" {
 			mat = d.Patterns.WedgeMaterial.Name
 		}
-		bp.Buy = append(bp.Buy, parts.SheetRow{Label: c.title + " sheets", Value: fmt.Sprintf("%d × %g × %g mm %s (%d parts per sheet)", c.nest.Sheets, c.sheet.Width, c.sheet.Height, mat, c.nest.PerSheet)})
+		bp.Buy = append(bp.Buy, sheet.SheetRow{Label: c.title + " sheets", Value: fmt.Sprintf("%d × %g × %g mm %s (%d parts per sheet)", c.nest.Sheets, c.sheet.Width, c.sheet.Height, mat, c.nest.PerSheet)})
 	}
 	for _, h := range cl.Hardware {
-		bp.Buy = append(bp.Buy, parts.SheetRow{Label: "Hardware", Value: fmt.Sprintf("%d × %s", n*h.Count, h.Item)})
+		bp.Buy = append(bp.Buy, sheet.SheetRow{Label: "Hardware", Value: fmt.Sprintf("%d × %s", n*h.Count, h.Item)})
 	}
 	return bp, nil
 }

@@ -6,7 +6,7 @@ import (
 
 	"coilwright/cam/geom"
 	"coilwright/cam/pdf"
-	"coilwright/parts"
+	"coilwright/parts/sheet"
 )
 
 // num formats a number compactly.
@@ -15,7 +15,7 @@ func num(v float64) string { return fmt.Sprintf("%g", v) }
 // sheetDocument lays out the build sheet's content as a flowing document.
 // figs holds figures to print after the step of each title ("feed": the
 // step that fits the cable or connector); any left over follow the steps.
-func sheetDocument(b *parts.BuildSheet, page pdf.PageSize, figs map[string][]pdf.Figure) pdf.Document {
+func sheetDocument(b *sheet.BuildSheet, page pdf.PageSize, figs map[string][]pdf.Figure) pdf.Document {
 	var bl []pdf.Block
 	add := func(x ...pdf.Block) { bl = append(bl, x...) }
 
@@ -112,7 +112,7 @@ func sheetDocument(b *parts.BuildSheet, page pdf.PageSize, figs map[string][]pdf
 
 // sideFigure draws the side view: reflector, support rod, feed cable and
 // the wire, with the dimensions.
-func sideFigure(b *parts.BuildSheet) pdf.Figure {
+func sideFigure(b *sheet.BuildSheet) pdf.Figure {
 	v := b.View
 	rect := func(x0, y0, x1, y1 float64) geom.Polyline {
 		return geom.Polyline{{X: x0, Y: y0}, {X: x1, Y: y0}, {X: x1, Y: y1}, {X: x0, Y: y1}}

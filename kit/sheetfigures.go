@@ -15,6 +15,9 @@ import (
 	"coilwright/cam/pdf"
 	"coilwright/jig"
 	"coilwright/parts"
+	"coilwright/parts/cutlist"
+	"coilwright/parts/flat"
+	"coilwright/parts/sheet"
 	"coilwright/parts/spec"
 )
 
@@ -23,7 +26,7 @@ const stepFigureHeight = 62.0
 
 // stepFigures returns the figures to print after the steps with the
 // given titles, in the order the steps come.
-func (k *Kit) stepFigures(b *parts.BuildSheet) map[string][]pdf.Figure {
+func (k *Kit) stepFigures(b *sheet.BuildSheet) map[string][]pdf.Figure {
 	d, cl := k.Design, k.cutList
 	out := map[string][]pdf.Figure{}
 	add := func(title string, f pdf.Figure, ok bool) {
@@ -183,7 +186,7 @@ func windingFigure(d *parts.Design) pdf.Figure {
 // stripFigure draws the matching strip's flat pattern with its feed end
 // marked, and under it the strip's rise above the plate along its length
 // as it follows the first part of the turn.
-func stripFigure(w *parts.Wedge) pdf.Figure {
+func stripFigure(w *flat.Wedge) pdf.Figure {
 	outline := w.Outline.Flatten(0.02)
 	paths := []pdf.FigurePath{{Points: outline, Closed: true, Fill: true, FillGray: 0.2, Gray: 1}}
 	box := geom.EmptyBox2()
@@ -224,7 +227,7 @@ func stripFigure(w *parts.Wedge) pdf.Figure {
 		Caption: fmt.Sprintf("Matching strip (mm): above, the flat pattern as cut, feed end at the left (the tick on the template); below, its underside's height above the plate along its length, at the same length scale. Bend it by hand to follow the underside of the first %.0f° of wire as the wire rises, its flat face parallel to the plate, the feed end at the feed.", last.Phi*180/math.Pi)}
 }
 
-func maxHeight(w *parts.Wedge) float64 {
+func maxHeight(w *flat.Wedge) float64 {
 	h := 0.0
 	for _, st := range w.Stations {
 		h = math.Max(h, st.Height)
@@ -239,7 +242,7 @@ func reflectorFigure(d *parts.Design) pdf.Figure {
 	r := d.Patterns.Reflector
 	in := r.Input
 	var paths []pdf.FigurePath
-	if l, ok := r.Drawing.Layer(parts.LayerCut); ok {
+	if l, ok := r.Drawing.Layer(flat.LayerCut); ok {
 		for _, e := range l.Entities {
 			switch e := e.(type) {
 			case geom.Circle:
@@ -296,7 +299,7 @@ func reflectorFigure(d *parts.Design) pdf.Figure {
 
 // feedFigure draws the feed in section at the plate: the cable (or the
 // jack's contact) through the feed hole with its stripped lengths.
-func feedFigure(d *parts.Design, cl *parts.CutList) pdf.Figure {
+func feedFigure(d *parts.Design, cl *cutlist.CutList) pdf.Figure {
 	cx := cl.Coax
 	t := d.Spec.Reflector.ThicknessMM
 	cab := cx.Cable

@@ -7,6 +7,7 @@ import (
 	"testing"
 
 	"coilwright/cam/checktool"
+	"coilwright/parts/sheet"
 	"coilwright/templates"
 )
 
@@ -48,7 +49,7 @@ func TestStepFiguresCarryTheirDimensions(t *testing.T) {
 				"reflector": {"Reflector top face, seen from the coil side", "0°", fmt.Sprintf("%.2f centre to feed", in.FeedRadius), fmt.Sprintf("%.1f across", in.Size), "ground joint"},
 				"feed": {"Feed in section at the plate", fmt.Sprintf("%.2f wire centre", d.Coil.Z0), fmt.Sprintf("hole Ø%.2f", cl.Coax.FeedHoleMM),
 					fmt.Sprintf("bare centre %.1f", cl.Coax.CentreMM), fmt.Sprintf("dielectric %.1f", cl.Coax.DielectricMM)},
-				"side view": {"near half of each turn dark", fmt.Sprintf("%.1f plate to top wire centre", d.Heights().TopCentre)},
+				"side view": {"near half of each turn dark", fmt.Sprintf("%.1f plate to top wire centre", sheet.Heights(d).TopCentre)},
 			}
 			for fig, ws := range want {
 				for _, s := range ws {
@@ -71,7 +72,7 @@ func TestStepFiguresCarryTheirDimensions(t *testing.T) {
 func TestSideViewShowsTheHand(t *testing.T) {
 	for _, demo := range templates.Demos() {
 		k := demoKit(t, demo, Options{Version: "test"})
-		v := k.Design.SideView(k.cutList)
+		v := sheet.NewSideView(k.Design, k.cutList)
 		if len(v.Near) == 0 || len(v.Far) == 0 {
 			t.Fatalf("%s: %d near and %d far runs", demo, len(v.Near), len(v.Far))
 		}

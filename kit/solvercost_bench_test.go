@@ -4,6 +4,7 @@ import (
 	"testing"
 
 	"coilwright/parts"
+	"coilwright/parts/report"
 	"coilwright/templates"
 )
 
@@ -12,7 +13,7 @@ import (
 func resetSolverMemos() {
 	fieldMemo = newMemo[*parts.FieldSolution](16)
 	stripMemo = newMemo[*parts.StripSearch](16)
-	toleranceMemo = newMemo[*parts.ToleranceReport](8)
+	toleranceMemo = newMemo[*report.ToleranceReport](8)
 }
 
 // BenchmarkSolverCost plans each demo with empty solver caches: the strip

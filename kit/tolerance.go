@@ -9,7 +9,7 @@ import (
 	"strconv"
 
 	"coilwright/cam/plot"
-	"coilwright/parts"
+	"coilwright/parts/report"
 	"coilwright/parts/spec"
 	"coilwright/parts/tolerance"
 )
@@ -64,11 +64,11 @@ func (k *Kit) analyseTolerance() error {
 // calibration (the analysis is a pure function of them, seed included), so a process that builds the
 // same design again (check then build, tests) does not run it again.
 // The reports are shared and never modified.
-var toleranceMemo = newMemo[*parts.ToleranceReport](8)
+var toleranceMemo = newMemo[*report.ToleranceReport](8)
 
 // Tolerance returns the batch tolerance analysis, or nil when it did not
 // run. The same value is in Report.Tolerance.
-func (k *Kit) Tolerance() *parts.ToleranceReport { return k.tolerance }
+func (k *Kit) Tolerance() *report.ToleranceReport { return k.tolerance }
 
 // writeTolerance writes tolerance.csv (every simulated kit) and the
 // histograms of the matched-band centre and the worst VSWR in the band.
@@ -100,7 +100,7 @@ type toleranceChart struct {
 }
 
 // toleranceHistograms returns the charts of the tolerance analysis.
-func toleranceHistograms(rep *parts.ToleranceReport) []toleranceChart {
+func toleranceHistograms(rep *report.ToleranceReport) []toleranceChart {
 	var out []toleranceChart
 	note := fmt.Sprintf("%d simulated kits, %.0f %% meet VSWR ≤ %g across %g–%g MHz", rep.Samples, 100*rep.Share, rep.VSWRTarget, rep.BandLowMHz, rep.BandHighMHz)
 	for _, f := range rep.Figures {
@@ -134,7 +134,7 @@ func toleranceHistograms(rep *parts.ToleranceReport) []toleranceChart {
 // writeToleranceCSV writes one row per simulated kit: its sampled inputs
 // (deviations in mm, the yield as a factor), released turn diameters and
 // figures. Units are in the header.
-func writeToleranceCSV(w io.Writer, rep *parts.ToleranceReport) error {
+func writeToleranceCSV(w io.Writer, rep *report.ToleranceReport) error {
 	cw := csv.NewWriter(w)
 	head := []string{"kit", "buildable", "meets_target"}
 	for _, in := range rep.Inputs {

@@ -10,6 +10,7 @@ import (
 	"coilwright/cam/plot"
 	"coilwright/cam/svg"
 	"coilwright/parts"
+	"coilwright/parts/sheet"
 )
 
 // Layers of the side and plan view drawings.
@@ -124,7 +125,7 @@ func addDimensions(d *geom.Drawing, dims []geom.Dimension, textH float64) {
 // sideDrawing draws the side view of v: reflector, support rod, feed
 // cable, the wire's centreline and the dimensions, dimension text sized
 // for printing at scale.
-func sideDrawing(v parts.SideView, scale float64) geom.Drawing {
+func sideDrawing(v sheet.SideView, scale float64) geom.Drawing {
 	var d geom.Drawing
 	d.Add(layerReflector, rectContour(-v.ReflectorWidth/2, -v.ReflectorThick, v.ReflectorWidth/2, 0))
 	if v.RodDiameter > 0 {
@@ -207,7 +208,7 @@ func (k *Kit) viewPlots() ([]plotFile, error) {
 	// The views carry dimension text sized for their scale, and where the
 	// text goes depends on its size: take the largest scale at which the
 	// view, text and all, fits.
-	sv := d.SideView(k.cutList)
+	sv := sheet.NewSideView(d, k.cutList)
 	s := fitWithText(func(s float64) geom.Drawing { return sideDrawing(sv, s) })
 	with := "with the support rod and the feed cable"
 	if sv.RodDiameter == 0 {

@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	"coilwright/parts"
+	"coilwright/parts/cutlist"
 )
 
 // wireAgreeMM is how closely the released-coil model, the former's groove,
@@ -39,7 +40,7 @@ func grooveLength(t *testing.T, k *Kit) float64 {
 // distance between the marks and the cut list's winding.
 func checkWireAgrees(t *testing.T, name string, d *parts.Design, k *Kit) {
 	t.Helper()
-	cl, err := parts.NewCutList(d)
+	cl, err := cutlist.NewCutList(d)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -54,7 +55,7 @@ func checkWireAgrees(t *testing.T, name string, d *parts.Design, k *Kit) {
 			t.Errorf("%s: %s %.2f mm, groove %.2f mm", name, c.what, c.v, groove)
 		}
 	}
-	if math.Abs(w.LengthMM-(w.MarkBMM+parts.TrimPerEndMM)) > 1e-9 {
+	if math.Abs(w.LengthMM-(w.MarkBMM+cutlist.TrimPerEndMM)) > 1e-9 {
 		t.Errorf("%s: blank %.2f mm, mark B %.2f mm + trim", name, w.LengthMM, w.MarkBMM)
 	}
 }
@@ -131,7 +132,7 @@ func TestLockHoleTakesTheTail(t *testing.T) {
 			if !ok {
 				continue
 			}
-			cl, err := parts.NewCutList(d)
+			cl, err := cutlist.NewCutList(d)
 			if err != nil {
 				t.Fatal(err)
 			}

@@ -1,6 +1,9 @@
 package parts
 
-import "strconv"
+import (
+	"fmt"
+	"strconv"
+)
 
 // num formats a number as a spec would write it: the shortest form that
 // reads back exactly.
@@ -14,3 +17,6 @@ func TurnsText(n float64) string {
 	}
 	return num(n) + " turns"
 }
+
+// mm formats a length in mm to a tenth.
+func mm(v float64) string { return fmt.Sprintf("%.1f mm", v) }

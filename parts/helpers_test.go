@@ -29,3 +29,12 @@ func mustParse(t *testing.T, b []byte) *spec.Spec {
 // base is a valid spec the bad-input cases edit; line numbers in the cases
 // below count from its first line.
 const base = spectest.Base
+
+func demoDesign(t *testing.T, name string, edit func(string) string) *Design {
+	t.Helper()
+	text := string(demoSpec(t, name))
+	if edit != nil {
+		text = edit(text)
+	}
+	return mustDesign(t, text)
+}

@@ -1,7 +1,6 @@
 package parts
 
 import (
-	"strings"
 	"testing"
 )
 
@@ -25,13 +24,6 @@ func TestUseInspectionTolerances(t *testing.T) {
 		if r.ToleranceMM != tol[i] {
 			t.Errorf("turn %d: ±%g mm on the inspection table, want ±%g", r.Turn, r.ToleranceMM, tol[i])
 		}
-	}
-	cl, err := NewCutList(d)
-	if err != nil {
-		t.Fatal(err)
-	}
-	if b := NewBuildSheet(d, cl, ""); !strings.Contains(b.InspectionNote, basis) {
-		t.Errorf("build sheet note %q does not give the basis", b.InspectionNote)
 	}
 	// A tolerance set in the spec wins over the analysis.
 	s := mustParse(t, append(demoSpec(t, "demo-5g8-cone.toml"), "\n[tolerance]\n"...))

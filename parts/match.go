@@ -19,6 +19,8 @@ import (
 	"math"
 	"math/cmplx"
 
+	"coilwright/parts/flat"
+	"coilwright/parts/line"
 	"coilwright/parts/spec"
 )
 
@@ -87,7 +89,7 @@ const lineProfileSamples = 400
 
 // lineMatch evaluates the line model of strip w (with the centre feed's
 // horizontal lead in front of it when lead.Run > 0) across freqs (MHz).
-func lineMatch(d *Design, w *Wedge, freqs []float64) []MatchPoint {
+func lineMatch(d *Design, w *flat.Wedge, freqs []float64) []MatchPoint {
 	a := d.Spec.Wire.DiameterMM / 2
 	zLead := 0.0
 	rise := stripFeedHeight(d, w)
@@ -106,22 +108,22 @@ func lineMatch(d *Design, w *Wedge, freqs []float64) []MatchPoint {
 			prof[i] = zLead
 			continue
 		}
-		prof[i] = w.impedanceAt(s - run)
+		prof[i] = impedanceAt(w, s-run)
 	}
 	first := d.Turns[0].DiameterMM * math.Pi
 	out := make([]MatchPoint, len(freqs))
 	for i, f := range freqs {
 		lambda := spec.Wavelength(f)
 		zl := KrausInputResistance(first/lambda, !d.CentreFed())
-		g := cmplx.Abs(Reflection(spec.WedgeFeedOhm, zl, prof, 2*math.Pi*total/lambda))
-		out[i] = MatchPoint{FrequencyMHz: f, LoadOhm: zl, Reflection: g, VSWR: VSWR(math.Min(g, 0.999999))}
+		g := cmplx.Abs(line.Reflection(spec.WedgeFeedOhm, zl, prof, 2*math.Pi*total/lambda))
+		out[i] = MatchPoint{FrequencyMHz: f, LoadOhm: zl, Reflection: g, VSWR: line.VSWR(math.Min(g, 0.999999))}
 	}
 	return out
 }
 
-// impedanceAt interpolates the strip's realised impedance at arc length s
+// impedanceAt interpolates the realised impedance of strip w at arc length s
 // from its feed end.
-func (w *Wedge) impedanceAt(s float64) float64 {
+func impedanceAt(w *flat.Wedge, s float64) float64 {
 	st := w.Stations
 	for j := 1; j < len(st); j++ {
 		if s <= st[j].S || j == len(st)-1 {
@@ -133,8 +135,8 @@ func (w *Wedge) impedanceAt(s float64) float64 {
 	return st[0].Ohm
 }
 
-// worstVSWR returns the largest VSWR of pts.
-func worstVSWR(pts []MatchPoint) float64 {
+// WorstVSWR returns the largest VSWR of pts.
+func WorstVSWR(pts []MatchPoint) float64 {
 	worst := 0.0
 	for _, p := range pts {
 		worst = math.Max(worst, p.VSWR)
@@ -147,10 +149,10 @@ func worstVSWR(pts []MatchPoint) float64 {
 // the band on the line model (the span with the lowest worst VSWR when
 // none does). It also returns the line model's band figures and a warning
 // when the target is not met.
-func sizeWedge(d *Design, zl float64) (*Wedge, []MatchPoint, *Warning, error) {
+func sizeWedge(d *Design, zl float64) (*flat.Wedge, []MatchPoint, *Warning, error) {
 	s := d.Spec
 	freqs := bandFrequencies(s)
-	in := WedgeInput{
+	in := flat.WedgeInput{
 		Path:         d.Coil.Point,
 		WireDiameter: s.Wire.DiameterMM,
 		Thickness:    s.Wedge.ThicknessMM,
@@ -166,12 +168,12 @@ func sizeWedge(d *Design, zl float64) (*Wedge, []MatchPoint, *Warning, error) {
 			spans = append(spans, sp)
 		}
 	}
-	var best *Wedge
+	var best *flat.Wedge
 	var bestPts []MatchPoint
 	var firstErr error
 	for _, sp := range spans {
 		in.Span = sp * math.Pi / 180
-		w, err := NewWedge(in)
+		w, err := flat.NewWedge(in)
 		if err != nil {
 			if firstErr == nil {
 				firstErr = err
@@ -179,10 +181,10 @@ func sizeWedge(d *Design, zl float64) (*Wedge, []MatchPoint, *Warning, error) {
 			continue
 		}
 		pts := lineMatch(d, w, freqs)
-		if best == nil || worstVSWR(pts) < worstVSWR(bestPts) {
+		if best == nil || WorstVSWR(pts) < WorstVSWR(bestPts) {
 			best, bestPts = w, pts
 		}
-		if worstVSWR(pts) <= s.Wedge.MaxVSWR {
+		if WorstVSWR(pts) <= s.Wedge.MaxVSWR {
 			best, bestPts = w, pts
 			break
 		}
@@ -190,7 +192,7 @@ func sizeWedge(d *Design, zl float64) (*Wedge, []MatchPoint, *Warning, error) {
 	if best == nil {
 		return nil, nil, nil, firstErr
 	}
-	if wv := worstVSWR(bestPts); wv > s.Wedge.MaxVSWR {
+	if wv := WorstVSWR(bestPts); wv > s.Wedge.MaxVSWR {
 		lo, hi := BandMHz(s)
 		fix := "lengthen the strip (wedge.span_deg), narrow the band, or accept a higher wedge.max_vswr"
 		if rise := stripFeedHeight(d, best); d.CentreFed() && rise > s.Wire.DiameterMM/2 {
@@ -208,7 +210,7 @@ func sizeWedge(d *Design, zl float64) (*Wedge, []MatchPoint, *Warning, error) {
 // stripFeedHeight returns the height above the plate at which candidate
 // strip w starts: the height of the feed lead's horizontal run, the same
 // point StripCentreline gives once w is the design's strip.
-func stripFeedHeight(d *Design, w *Wedge) float64 {
+func stripFeedHeight(d *Design, w *flat.Wedge) float64 {
 	if len(w.Stations) == 0 {
 		return d.FeedRise()
 	}

@@ -30,7 +30,7 @@ func TestStripSizedToMaxVSWR(t *testing.T) {
 				return withFeed("periphery")(s) + "\n[wedge]\nspan_deg = 90.0\n"
 			})
 			ob := old.Patterns.LineBand
-			if w := worstVSWR(ob); w < 1.85 || w > 2.1 || ob[0].Reflection <= ob[len(ob)-1].Reflection {
+			if w := WorstVSWR(ob); w < 1.85 || w > 2.1 || ob[0].Reflection <= ob[len(ob)-1].Reflection {
 				t.Errorf("quarter-turn strip: worst VSWR %.3f, |Γ| %.3f → %.3f", w, ob[0].Reflection, ob[len(ob)-1].Reflection)
 			}
 			if !strings.Contains(warningCodes(old), "match") {
@@ -39,8 +39,8 @@ func TestStripSizedToMaxVSWR(t *testing.T) {
 			// Sized: the shortest span meeting the default 1.5 across the band.
 			d := demoDesign(t, name, withFeed("periphery"))
 			b := d.Patterns.LineBand
-			if len(b) != MatchPoints || worstVSWR(b) > d.Spec.Wedge.MaxVSWR {
-				t.Errorf("sized strip: worst VSWR %.3f over %d points", worstVSWR(b), len(b))
+			if len(b) != MatchPoints || WorstVSWR(b) > d.Spec.Wedge.MaxVSWR {
+				t.Errorf("sized strip: worst VSWR %.3f over %d points", WorstVSWR(b), len(b))
 			}
 			span := d.Patterns.Wedge.Span * 180 / math.Pi
 			if span <= 90 || strings.Contains(warningCodes(d), "match") {
@@ -50,7 +50,7 @@ func TestStripSizedToMaxVSWR(t *testing.T) {
 			shorter := demoDesign(t, name, func(s string) string {
 				return withFeed("periphery")(s) + "\n[wedge]\nspan_deg = " + num(span-SpanStepDeg) + "\n"
 			})
-			if worstVSWR(shorter.Patterns.LineBand) <= d.Spec.Wedge.MaxVSWR {
+			if WorstVSWR(shorter.Patterns.LineBand) <= d.Spec.Wedge.MaxVSWR {
 				t.Errorf("%.0f° already meets the target", span-SpanStepDeg)
 			}
 		})
@@ -66,8 +66,8 @@ func TestCentreFeedSaysWhyNotMatched(t *testing.T) {
 		for _, w := range d.Warnings {
 			found = found || w.Code == "match" && strings.Contains(w.Message, `coil.feed = "periphery"`)
 		}
-		if worstVSWR(d.Patterns.LineBand) > d.Spec.Wedge.MaxVSWR && !found {
-			t.Errorf("%s: worst VSWR %.2f without a match warning: %v", name, worstVSWR(d.Patterns.LineBand), d.Warnings)
+		if WorstVSWR(d.Patterns.LineBand) > d.Spec.Wedge.MaxVSWR && !found {
+			t.Errorf("%s: worst VSWR %.2f without a match warning: %v", name, WorstVSWR(d.Patterns.LineBand), d.Warnings)
 		}
 	}
 }

@@ -6,8 +6,9 @@ package parts
 
 import (
 	"fmt"
-	"math"
 
+	"coilwright/parts/flat"
+	"coilwright/parts/line"
 	"coilwright/parts/spec"
 )
 
@@ -16,8 +17,8 @@ import (
 type Patterns struct {
 	// Reflector is nil when the plate cannot hold its feed cut-out (see
 	// the "reflector-fit" warning).
-	Reflector *Reflector
-	Wedge     *Wedge
+	Reflector *flat.Reflector
+	Wedge     *flat.Wedge
 	// WedgeLoadOhm is the resistance the wedge tapers to: the Kraus input
 	// resistance on the first turn's circumference.
 	WedgeLoadOhm float64
@@ -87,7 +88,7 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 
 	size := rs.SizeMM(d.Wavelength)
 	feed, cable := specFeedHole(s)
-	in := ReflectorInput{
+	in := flat.ReflectorInput{
 		Size:     size,
 		Label:    s.Kit,
 		Hand:     d.Coil.Hand.String(),
@@ -96,9 +97,9 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 	}
 	in.FeedRadius, in.FeedAngle = feedPlacement(s, d.Coil)
 	if rs.Shape == "square" {
-		in.Shape, in.CornerRadius = ReflectorSquare, rs.CornerRadiusMM
+		in.Shape, in.CornerRadius = flat.ReflectorSquare, rs.CornerRadiusMM
 	}
-	dc, err := dowelCut(d)
+	dc, err := NewDowelCut(d)
 	if err != nil {
 		return nil, nil, err
 	}
@@ -109,7 +110,7 @@ func newPatterns(d *Design) (*Patterns, []Warning, error) {
 			in.FeedRadius, num(dowelDiametersMM[0]), num(FootprintClearMM))})
 	}
 	in.ScrewHole, in.RodFoot, in.RodFootFillet = p.Plate.ScrewHoleMM, p.Plate.RodMM, p.Plate.FootMM
-	refl, err := NewReflector(in)
+	refl, err := flat.NewReflector(in)
 	if err != nil {
 		// A plate too small for its feed cut-out is reported, not fatal:
 		// the rest of the design stands, and no plate files are written.
@@ -175,139 +176,11 @@ func methodName(m string) string {
 	return "milling"
 }
 
-// ReflectorReport is the reflector plate in design.json.
-type ReflectorReport struct {
-	Shape            string       `json:"shape"`
-	DiameterMM       *float64     `json:"diameter_mm,omitempty"`
-	SideMM           *float64     `json:"side_mm,omitempty"`
-	CornerRadiusMM   float64      `json:"corner_radius_mm,omitempty"`
-	SizeLambda       float64      `json:"size_lambda"`
-	ThicknessMM      float64      `json:"thickness_mm"`
-	Material         string       `json:"material"`
-	Connector        string       `json:"connector"`
-	FeedHoleMM       float64      `json:"feed_hole_mm"`
-	FeedRadiusMM     float64      `json:"feed_radius_mm"`
-	FeedAngleDeg     float64      `json:"feed_angle_deg"`
-	MountingHoles    int          `json:"mounting_holes"`
-	MountingHoleMM   float64      `json:"mounting_hole_mm,omitempty"`
-	MountingCircleMM float64      `json:"mounting_circle_mm,omitempty"`
-	Cutting          CutReport    `json:"cutting"`
-	Panel            *PanelReport `json:"panel,omitempty"`
-}
-
-// CutReport is how a part is cut.
-type CutReport struct {
-	Method string  `json:"method"`
-	KerfMM float64 `json:"kerf_mm"`
-	Label  string  `json:"label"`
-}
-
-// PanelReport is a batch nested on sheets; the command fills it from the
-// nesting.
-type PanelReport struct {
-	SheetWidthMM  float64 `json:"sheet_width_mm"`
-	SheetHeightMM float64 `json:"sheet_height_mm"`
-	MarginMM      float64 `json:"margin_mm"`
-	SpacingMM     float64 `json:"spacing_mm"`
-	Quantity      int     `json:"quantity"`
-	PartsPerSheet int     `json:"parts_per_sheet"`
-	Sheets        int     `json:"sheets"`
-}
-
-// WedgeReport is the matching wedge in design.json.
-type WedgeReport struct {
-	Material            string         `json:"material"`
-	ThicknessMM         float64        `json:"thickness_mm"`
-	Taper               string         `json:"taper"`
-	Ripple              float64        `json:"ripple,omitempty"`
-	KlopfensteinA       float64        `json:"klopfenstein_a,omitempty"`
-	SpanDeg             float64        `json:"span_deg"`
-	FeedOhm             float64        `json:"feed_ohm"`
-	LoadOhm             float64        `json:"load_ohm"`
-	LengthMM            float64        `json:"length_mm"`
-	FeedWidthMM         float64        `json:"feed_width_mm"`
-	EndWidthMM          float64        `json:"end_width_mm"`
-	ElectricalLengthRad float64        `json:"electrical_length_rad"`
-	Reflection          float64        `json:"reflection"`
-	VSWR                float64        `json:"vswr"`
-	ReturnLossDB        float64        `json:"return_loss_db"`
-	Method              string         `json:"method"`
-	Note                string         `json:"note"`
-	Widths              []WedgeStation `json:"widths"`
-	Cutting             CutReport      `json:"cutting"`
-	Panel               *PanelReport   `json:"panel,omitempty"`
-	// MaxVSWR is the target across the band; SpanSized says the span was
-	// chosen to meet it rather than given.
-	MaxVSWR   float64 `json:"max_vswr"`
-	SpanSized bool    `json:"span_sized"`
-	// LineBand is the line model across the band; LineWorstVSWR its worst.
-	LineBand      []MatchPoint `json:"line_band"`
-	LineWorstVSWR float64      `json:"line_worst_vswr"`
-	LineModel     string       `json:"line_model"`
-}
-
-// LineModelNote states what the line model across the band is.
-const LineModelNote = "Line model across the band: 50 Ω cable → the centre feed's horizontal lead as a round wire over the plate ((η0/2π)·acosh(h/a), if centre-fed) → the strip as cut (Hammerstad–Jensen per station) → the coil's input resistance by Kraus's formula on the first turn at each frequency (140·Cλ axial feed, 150/√Cλ peripheral); theory of small reflections with each frequency's phase. The vertical lead, the coil's reactance and coupling between turns are not in it."
-
-// WedgeNote states what the wedge figures are.
-const WedgeNote = "Widths from Hammerstad–Jensen (air, with thickness correction) along the strip's height above the reflector; mismatch from the theory of small reflections. Quasi-static line formulas applied to a strip of varying width and height: a first-order design aid."
-
-// patternReports fills the reflector and wedge sections of r.
-func (d *Design) patternReports(r *Report) {
-	p := d.Patterns
-	if p == nil {
-		return
-	}
-	s := d.Spec
-	rs := &s.Reflector
-	size := rs.SizeMM(d.Wavelength)
-	if p.Reflector != nil {
-		r.Reflector = reflectorReport(p, rs, size, d.Wavelength)
-	}
-	w := p.Wedge
-	wr := &WedgeReport{
-		Material: s.Wedge.Material, ThicknessMM: s.Wedge.ThicknessMM, Taper: s.Wedge.Taper, SpanDeg: w.Span * 180 / math.Pi,
-		MaxVSWR: s.Wedge.MaxVSWR, SpanSized: s.Line("wedge.span_deg") == 0, LineBand: p.LineBand, LineWorstVSWR: worstVSWR(p.LineBand), LineModel: LineModelNote,
-		FeedOhm: spec.WedgeFeedOhm, LoadOhm: p.WedgeLoadOhm, LengthMM: w.Length, FeedWidthMM: w.FeedWidth, EndWidthMM: w.EndWidth,
-		ElectricalLengthRad: w.ElectricalLength, Reflection: w.Reflection, VSWR: VSWR(w.Reflection),
-		Method: "Hammerstad–Jensen air microstrip; small-reflection mismatch", Note: WedgeNote, Widths: w.Stations,
-		Cutting: CutReport{Method: p.Method, KerfMM: p.Kerf, Label: p.WedgeLabel},
-	}
-	if w.Reflection > 0 {
-		wr.ReturnLossDB = ReturnLossDB(w.Reflection)
-	}
-	if s.Wedge.Taper == "klopfenstein" {
-		wr.Ripple = s.Wedge.Ripple
-		wr.KlopfensteinA = KlopfensteinA(spec.WedgeFeedOhm, p.WedgeLoadOhm, s.Wedge.Ripple)
-	}
-	r.Wedge = wr
-}
-
-// reflectorReport describes the plate of p for design.json.
-func reflectorReport(p *Patterns, rs *spec.ReflectorSpec, size, lambda float64) *ReflectorReport {
-	in := p.Reflector.Input
-	rr := &ReflectorReport{
-		Shape: rs.Shape, ThicknessMM: rs.ThicknessMM, Material: rs.Material, Connector: rs.Connector,
-		SizeLambda: size / lambda, FeedHoleMM: in.Feed.Diameter, FeedRadiusMM: in.FeedRadius,
-		FeedAngleDeg: in.FeedAngle * 180 / math.Pi, MountingHoles: in.Mounting.Count,
-		Cutting: CutReport{Method: p.Method, KerfMM: p.Kerf, Label: p.ReflectorLabel},
-	}
-	if in.Mounting.Count > 0 {
-		rr.MountingHoleMM, rr.MountingCircleMM = in.Mounting.Diameter, in.Mounting.PitchDiameter
-	}
-	if rs.Shape == "square" {
-		rr.SideMM, rr.CornerRadiusMM = &size, rs.CornerRadiusMM
-	} else {
-		rr.DiameterMM = &size
-	}
-	return rr
-}
-
 // wedgeTaper returns the wedge's impedance profile to load resistance zl.
-func wedgeTaper(w *spec.WedgeSpec, zl float64) Taper {
-	t := Taper{Kind: TaperExponential, Z0: spec.WedgeFeedOhm, ZL: zl}
+func wedgeTaper(w *spec.WedgeSpec, zl float64) line.Taper {
+	t := line.Taper{Kind: line.TaperExponential, Z0: spec.WedgeFeedOhm, ZL: zl}
 	if w.Taper == "klopfenstein" {
-		t.Kind, t.GammaMax = TaperKlopfenstein, w.Ripple
+		t.Kind, t.GammaMax = line.TaperKlopfenstein, w.Ripple
 	}
 	return t
 }

@@ -16,13 +16,14 @@ import (
 	"math"
 
 	"coilwright/cam/geom"
+	"coilwright/parts/flat"
 	"coilwright/parts/spec"
 )
 
 // PlateWebMM is the least web between two holes through the plate, mm.
 // Common practice (no published source): about one sheet thickness or
 // 1 mm, whichever is more; 1 mm is used (as for the plate's edge).
-const PlateWebMM = edgeClearance
+const PlateWebMM = flat.EdgeClearanceMM
 
 // FootprintClearMM is the least gap between a part resting on a face and a
 // hole or another part on that face, mm. Common practice (no published
@@ -196,7 +197,7 @@ func clearance(a, b PlateFeature) (float64, bool) {
 
 // PlateCollisions returns every pair of features closer than their
 // clearance, and every footprint that leaves the plate, in feature order.
-func PlateCollisions(fs []PlateFeature, in ReflectorInput) []PlateCollision {
+func PlateCollisions(fs []PlateFeature, in flat.ReflectorInput) []PlateCollision {
 	var out []PlateCollision
 	for i := range fs {
 		for j := i + 1; j < len(fs); j++ {
@@ -221,7 +222,7 @@ func PlateCollisions(fs []PlateFeature, in ReflectorInput) []PlateCollision {
 			continue
 		}
 		var g float64
-		if in.Shape == ReflectorSquare {
+		if in.Shape == flat.ReflectorSquare {
 			g = -squareDistance(f.Center, PlateFeature{Side: in.Size}) - f.Radius
 			if f.Side > 0 {
 				g = in.Size/2 - (math.Max(math.Abs(f.Center.X), math.Abs(f.Center.Y)) + f.Side/math.Sqrt2)
@@ -236,15 +237,21 @@ func PlateCollisions(fs []PlateFeature, in ReflectorInput) []PlateCollision {
 	return out
 }
 
+// polar returns the point at radius r and angle a.
+func polar(r, a float64) geom.Vec2 {
+	s, c := math.Sincos(a)
+	return geom.Vec2{X: r * c, Y: r * s}
+}
+
 // feedFeatures returns the feed cut-out's holes and the connector or
 // cable's footprint on the back, for a feed at radius r and angle a.
 // cableMM is the cable's outside diameter (coax feed).
-func feedFeatures(f FeedHole, r, a, cableMM float64) []PlateFeature {
-	f = f.withDefaults()
+func feedFeatures(f flat.FeedHole, r, a, cableMM float64) []PlateFeature {
+	f = f.WithDefaults()
 	c := polar(r, a)
 	pin := PlateFeature{Name: "feed hole", Part: PartFeed, Face: FaceThrough, Center: c, Radius: f.Diameter / 2, Joined: true}
 	switch f.Kind {
-	case FeedSMAFlange:
+	case flat.FeedSMAFlange:
 		out := []PlateFeature{pin}
 		place := geom.Placement{Angle: a, Offset: c}
 		for _, s := range []geom.Vec2{{X: 1, Y: 1}, {X: -1, Y: 1}, {X: -1, Y: -1}, {X: 1, Y: -1}} {
@@ -252,7 +259,7 @@ func feedFeatures(f FeedHole, r, a, cableMM float64) []PlateFeature {
 				Center: place.Apply(s.Scale(f.ScrewPitch / 2)), Radius: f.ScrewDiameter / 2})
 		}
 		return append(out, PlateFeature{Name: "connector flange", Part: PartFeed, Face: FaceBack, Center: c, Side: FlangeSideMM, Angle: a, Joined: true})
-	case FeedSMABulkhead:
+	case flat.FeedSMABulkhead:
 		return []PlateFeature{pin, {Name: "bulkhead jack's body", Part: PartFeed, Face: FaceBack, Center: c, Radius: BulkheadBodyMM / 2, Joined: true}}
 	}
 	return []PlateFeature{pin, {Name: "feed cable", Part: PartFeed, Face: FaceBack, Center: c, Radius: cableMM / 2, Joined: true}}
@@ -292,22 +299,22 @@ func feedPlacement(s *spec.Spec, c Coil) (r, a float64) {
 
 // specFeedHole returns the feed cut-out the spec asks for and the cable's
 // outside diameter.
-func specFeedHole(s *spec.Spec) (FeedHole, float64) {
+func specFeedHole(s *spec.Spec) (flat.FeedHole, float64) {
 	rs := &s.Reflector
-	var f FeedHole
-	f = FeedHole{Kind: FeedKindByConnector(rs.Connector)}
-	if f.Kind == FeedCoax {
+	var f flat.FeedHole
+	f = flat.FeedHole{Kind: flat.FeedKindByConnector(rs.Connector)}
+	if f.Kind == flat.FeedCoax {
 		f.Diameter = s.Coax.Cable().FeedHoleMM()
 	}
 	if rs.FeedHoleMM != nil {
 		f.Diameter = *rs.FeedHoleMM
 	}
-	return f.withDefaults(), s.Coax.Cable().Outer
+	return f.WithDefaults(), s.Coax.Cable().Outer
 }
 
 // mountingFeatures returns the mounting holes and their washers on both
 // faces.
-func mountingFeatures(m MountingHoles) []PlateFeature {
+func mountingFeatures(m flat.MountingHoles) []PlateFeature {
 	var fs []PlateFeature
 	for i := range m.Count {
 		ctr := polar(m.PitchDiameter/2, m.Angle+2*math.Pi*float64(i)/float64(m.Count))
@@ -322,9 +329,9 @@ func mountingFeatures(m MountingHoles) []PlateFeature {
 
 // specMounting returns the mounting holes the spec asks for on a plate of
 // the given size.
-func specMounting(s *spec.Spec, size float64) MountingHoles {
+func specMounting(s *spec.Spec, size float64) flat.MountingHoles {
 	rs := &s.Reflector
-	return MountingHoles{Count: rs.MountingHoles, Diameter: rs.MountingHoleMM,
+	return flat.MountingHoles{Count: rs.MountingHoles, Diameter: rs.MountingHoleMM,
 		PitchDiameter: rs.MountingCircle(size), Angle: rs.MountingAngleDeg * math.Pi / 180}
 }
 
@@ -359,7 +366,7 @@ type PlateLayout struct {
 
 // newPlateLayout lays out the plate of in with the rod dc and the strip
 // w (nil for none), on a coil c.
-func newPlateLayout(in ReflectorInput, dc DowelCut, w *Wedge, c Coil, cableMM float64) PlateLayout {
+func newPlateLayout(in flat.ReflectorInput, dc DowelCut, w *flat.Wedge, c Coil, cableMM float64) PlateLayout {
 	fs := append(feedFeatures(in.Feed, in.FeedRadius, in.FeedAngle, cableMM), mountingFeatures(in.Mounting)...)
 	if w != nil {
 		for _, st := range w.Stations {

@@ -41,23 +41,6 @@ func (d *Design) QuotedGain() (value float64, source string) {
 	return d.Estimates.Gain.Value, d.Estimates.Gain.Formula
 }
 
-// gainRow is the build sheet's gain row.
-func (d *Design) gainRow() SheetRow {
-	if d.Field != nil {
-		return SheetRow{"Gain (field solution)", fmt.Sprintf("%.1f dBic realised at %s MHz; textbook estimate %.1f dBic (%s)",
-			d.Field.QuotedDBic(), num(d.Spec.FrequencyMHz), d.Estimates.Gain.Value, d.Estimates.Gain.Formula)}
-	}
-	return SheetRow{"Gain (estimate)", fmt.Sprintf("%.1f dBic, %s", d.Estimates.Gain.Value, d.Estimates.Gain.Formula)}
-}
-
-// gainWord says how the quoted gain was found, for sentences.
-func (d *Design) gainWord() string {
-	if d.Field != nil {
-		return "computed"
-	}
-	return "estimated"
-}
-
 // eirpWarning is the warning every design with a transmitter power carries.
 func eirpWarning(e *EIRPFigure) Warning {
 	return Warning{Code: "eirp", Message: fmt.Sprintf("EIRP %.1f dBm (%.0f mW) with this antenna: check the limit that applies where you transmit and under your licence", e.EIRPDBm, e.EIRPmW)}

@@ -17,7 +17,6 @@ import (
 	"fmt"
 	"math"
 	"slices"
-	"strings"
 )
 
 // MaxRodSlenderness is the largest length-to-diameter ratio of a default
@@ -258,18 +257,9 @@ func mountFor(r SupportRod, maxWasherMM float64) RodMount {
 	return mt
 }
 
-// rodSize is the cut list's size column for the support: "Ø8 mm" or
-// "Ø8/6 mm tube".
-func rodSize(dc DowelCut) string {
-	if dc.BoreMM > 0 {
-		return fmt.Sprintf("Ø%s/%s mm tube", num(dc.DiameterMM), num(dc.BoreMM))
-	}
-	return fmt.Sprintf("Ø%s mm", num(dc.DiameterMM))
-}
-
-// rodNote is the cut list's note on the support: the rule that chose it,
+// RodNote is the cut list's note on the support: the rule that chose it,
 // its weight and mount, and the dielectric-loading estimate.
-func rodNote(dc DowelCut) string {
+func RodNote(dc DowelCut) string {
 	r := dc.Rod
 	why := "as the spec gives"
 	if dc.Automatic {
@@ -283,33 +273,9 @@ func rodNote(dc DowelCut) string {
 		why, dc.InnerTurnMM, num(dc.ClearanceMM), r.MassG, plug, r.Loading.FillRatio, r.Loading.EffectivePerm, 100*r.Loading.ShiftFraction, dc.MaterialAdvice)
 }
 
-// rodMountSteps returns the build sheet's words for the rod's mount: the
-// hole drilled in the reflector (with its leading space, or empty) and the
-// step that fixes the rod.
-func rodMountSteps(cl *CutList) (hole, fix string) {
-	dc := cl.Dowel
-	if dc.OverFeed {
-		return "", ""
-	}
-	mt := dc.Rod.Mount
-	plug := ""
-	if mt.PlugMM > 0 {
-		plug = fmt.Sprintf("Epoxy %s of Ø%s mm solid rod into the tube's foot, flush with its end, and let it cure. ", mm(mt.PlugMM), num(dc.BoreMM))
-	}
-	if mt.Screw == "" {
-		return "", fmt.Sprintf("%sLower the %s (about %.0f g) through the open top of the coil and epoxy its foot to the reflector's centre, in the inner circle marked there, with a fillet all round that stays inside the outer circle, clear of the feed hole.", plug, sectionWords(dc), dc.Rod.MassG)
-	}
-	item := mt.Screw + " screw"
-	for _, h := range cl.Hardware {
-		if strings.HasPrefix(h.Item, mt.Screw) {
-			item = h.Item
-		}
-	}
-	hole = fmt.Sprintf(" The %s mm hole at the centre is for the rod's %s screw.", num(mt.ClearMM), mt.Screw)
-	fix = fmt.Sprintf("%sDrill a %s mm pilot hole 8 mm deep in the centre of the %s's foot. Lower the %s (about %.0f g) through the open top of the coil onto the reflector's centre hole and fix it from behind with the %s.",
-		plug, num(mt.PilotMM), map[bool]string{true: "tube", false: "rod"}[dc.BoreMM > 0], sectionWords(dc), dc.Rod.MassG, item)
-	return hole, fix
-}
+// OutsideSupport says how a coil without a support rod is held. Common
+// practice (no published source).
+const OutsideSupport = "Hold the coil upright from outside, clear of the feed: low-loss spacers (offcuts of PTFE or glass-fibre) standing on the reflector against the outside of the turns, each turn fixed to them with a small bead of epoxy, or a sleeve of closed-cell foam round the coil. They are not in the cut list: cut them from what is to hand. Let the epoxy cure as the maker says."
 
 // Description returns the support in one paragraph for the cut list: the
 // section, its length, the rule that chose it, its mass and mount, and the
@@ -317,8 +283,106 @@ func rodMountSteps(cl *CutList) (hole, fix string) {
 // there is none and how the coil is held instead.
 func (dc DowelCut) Description() string {
 	if dc.OverFeed {
-		return "None: the feed hole leaves no room at the reflector's centre for a rod's foot (see the rod-over-feed warning), so this kit has no support rod. " + outsideSupport
+		return "None: the feed hole leaves no room at the reflector's centre for a rod's foot (see the rod-over-feed warning), so this kit has no support rod. " + OutsideSupport
 	}
 	return fmt.Sprintf("%s, %.1f mm long: %s. Mount: %s. The loading is a first-order estimate, εeff ≈ 1 + (εr − 1)·F with F the rod's share of the area inside the smallest turn; the field is weakest on the axis, so the true shift is smaller.",
-		sectionWords(dc), dc.LengthMM, rodNote(dc), dc.Rod.Mount.Basis)
+		SectionWords(dc), dc.LengthMM, RodNote(dc), dc.Rod.Mount.Basis)
+}
+
+// SectionWords names the support section of dc: "Ø8 mm ptfe rod" or "Ø8/6 mm
+// ptfe tube".
+func SectionWords(dc DowelCut) string {
+	if dc.BoreMM > 0 {
+		return fmt.Sprintf("Ø%s/%s mm %s tube", num(dc.DiameterMM), num(dc.BoreMM), dc.Material)
+	}
+	return fmt.Sprintf("Ø%s mm %s rod", num(dc.DiameterMM), dc.Material)
+}
+
+// Support-rod allowance in mm. Common practice (no published source).
+const (
+	// DowelOverhangMM is how far the rod stands above the top turn.
+	DowelOverhangMM = 5.0
+)
+
+// dowelDiametersMM are the support-rod diameters commonly stocked in
+// PTFE, nylon, glass-fibre and wood, in mm, ascending. Common practice (no
+// published source).
+var dowelDiametersMM = []float64{3, 4, 5, 6, 8, 10, 12, 15, 16, 20, 25, 30, 35, 40, 50, 60, 80, 100}
+
+// DowelDiametersMM returns the support-rod diameters commonly stocked, in
+// mm, smallest first, as a fresh slice.
+func DowelDiametersMM() []float64 { return slices.Clone(dowelDiametersMM) }
+
+// DowelCut is the support rod for one coil.
+type DowelCut struct {
+	Material    string
+	DiameterMM  float64
+	LengthMM    float64
+	ClearanceMM float64 // radial gap asked for
+	InnerTurnMM float64 // inside diameter of the smallest relaxed turn
+	Automatic   bool    // diameter chosen by ChooseSupportRod
+	BoreMM      float64 // bore of a tube, 0 for a solid rod
+	Rod         SupportRod
+	// OverFeed is set when no stock rod's foot clears the feed at the
+	// plate's centre (a small coil with a large feed hole): the kit has no
+	// support rod. The cut list, batch plan, plate, side view and steps
+	// leave it out and the coil is held from outside; the rod's sizes
+	// above are those a rod for the coil alone would have, for reference.
+	OverFeed       bool
+	SlotWidthMM    float64 // slot across the foot for a centre feed's lead, else 0
+	SlotDepthMM    float64
+	Foot           *RodFoot // the bored foot over a centre feed; nil for a plain foot
+	AbsorbsWater   bool     // wood: takes up water and detunes the coil
+	MaterialAdvice string   // a sentence on the material choice
+}
+
+// smallestTurnRadius returns the smallest centreline radius of the coil:
+// the radius is monotonic in azimuth, so it is at one of the two ends.
+func smallestTurnRadius(c Coil) float64 { return math.Min(c.StartRadius, c.EndRadius) }
+
+// NewDowelCut chooses the support rod of d: the stocked section that
+// carries the coil, passes inside the smallest turn with the clearance
+// asked for and whose foot clears the feed and mounting holes, its length,
+// mount and (over a centre feed) bored foot, and a sentence on the
+// material. It returns a spec error when no rod can clear a centre feed.
+func NewDowelCut(d *Design) (DowelCut, error) {
+	s := d.Spec
+	wd := s.Wire.DiameterMM
+	inner := 2*smallestTurnRadius(d.Coil) - wd
+	dc := DowelCut{Material: s.Dowel.Material, ClearanceMM: s.Dowel.ClearanceMM, InnerTurnMM: inner}
+	dc.LengthMM = d.Coil.Z0 + d.AxialLength + wd/2 + DowelOverhangMM
+	given := 0.0
+	if s.Dowel.DiameterMM != nil {
+		given = *s.Dowel.DiameterMM // checkFit checked that it fits
+	}
+	// The rod's foot, with the least fillet, must also clear the feed and
+	// mounting holes, and its screw's washer the parts on the back.
+	plate := specPlateFeatures(s, d.Coil)
+	room := inner - 2*dc.ClearanceMM
+	if pr := rodPlateRoomMM(plate); pr >= dowelDiametersMM[0]-1e-9 || given > 0 {
+		room = math.Min(room, pr)
+	} else {
+		dc.OverFeed = true
+	}
+	rod, err := ChooseSupportRod(s.Dowel.Material, room, dc.LengthMM, 2*smallestTurnRadius(d.Coil), given)
+	if err != nil {
+		return DowelCut{}, err
+	}
+	if w := 2 * roomAbout(plate, FaceThrough, FaceBack); washerODMM(rod.Mount.Screw) > w {
+		rod.Mount = mountFor(rod, w)
+	}
+	dc.Rod, dc.DiameterMM, dc.BoreMM, dc.Automatic = rod, rod.OuterMM, rod.BoreMM, given == 0
+	if err := fitCentreFeedRod(d, &dc, inner-2*dc.ClearanceMM); err != nil {
+		return DowelCut{}, err
+	}
+	switch s.Dowel.Material {
+	case "wood":
+		dc.AbsorbsWater = true
+		dc.MaterialAdvice = "wood takes up water, which raises its permittivity and loss and detunes the coil; use PTFE, nylon or glass-fibre rod, or seal the wood well"
+	case "nylon":
+		dc.MaterialAdvice = "nylon takes up a little water; PTFE or glass-fibre rod is steadier outdoors"
+	default:
+		dc.MaterialAdvice = "a low-loss rod that takes up little water"
+	}
+	return dc, nil
 }

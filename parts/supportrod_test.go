@@ -2,7 +2,6 @@ package parts
 
 import (
 	"math"
-	"strings"
 	"testing"
 )
 
@@ -54,8 +53,11 @@ func TestDefaultRodIsThinAndLoadsLittle(t *testing.T) {
 	for _, demo := range []string{"demo-2g4-cylinder.toml", "demo-5g8-cone.toml"} {
 		t.Run(demo, func(t *testing.T) {
 			d := demoDesign(t, demo, nil)
-			cl := mustCutList(t, d)
-			r := cl.Dowel.Rod
+			dc, err := NewDowelCut(d)
+			if err != nil {
+				t.Fatal(err)
+			}
+			r := dc.Rod
 			if r.OuterMM > math.Max(DowelDiametersMM()[0], r.LengthMM/MaxRodSlenderness)+8 {
 				t.Errorf("rod Ø%.1f mm for a %.0f mm length", r.OuterMM, r.LengthMM)
 			}
@@ -70,7 +72,7 @@ func TestDefaultRodIsThinAndLoadsLittle(t *testing.T) {
 				}
 			}
 			// The largest stock rod that fits, as chosen before.
-			room := cl.Dowel.InnerTurnMM - 2*cl.Dowel.ClearanceMM
+			room := dc.InnerTurnMM - 2*dc.ClearanceMM
 			largest := 0.0
 			for _, od := range DowelDiametersMM() {
 				if od <= room {
@@ -84,21 +86,5 @@ func TestDefaultRodIsThinAndLoadsLittle(t *testing.T) {
 			t.Logf("largest rod that fits: Ø%g mm, fill %.3f, shift %.2f %%", largest, old.FillRatio, 100*old.ShiftFraction)
 			t.Logf("%s: Ø%g/%g mm, %.0f mm, %.1f g, fill %.4f, shift %.2f %%, mount %q", demo, r.OuterMM, r.BoreMM, r.LengthMM, r.MassG, r.Loading.FillRatio, 100*r.Loading.ShiftFraction, r.Mount.Screw)
 		})
-	}
-}
-
-func TestRodLoadingWarns(t *testing.T) {
-	// A Ø30 mm glass-fibre rod in the 2.4 GHz demo's coil fills most of it.
-	d := demoDesign(t, "demo-2g4-cylinder.toml", func(s string) string {
-		s = strings.Replace(s, `material = "ptfe"`, "material = \"glass-fibre\"\ndiameter_mm = 30", 1)
-		return s
-	})
-	cl := mustCutList(t, d)
-	found := false
-	for _, w := range cl.Warnings {
-		found = found || w.Code == "rod-loading"
-	}
-	if !found {
-		t.Errorf("no rod-loading warning for a %.0f %% fill", 100*cl.Dowel.Rod.Loading.FillRatio)
 	}
 }

@@ -17,6 +17,7 @@ import (
 	"math"
 	"math/cmplx"
 
+	"coilwright/parts/line"
 	"coilwright/parts/spec"
 )
 
@@ -97,8 +98,8 @@ func (d *Design) TextbookSweep(freqsMHz []float64) []TextbookPoint {
 			p.RHCPDBic, p.LHCPDBic = cross, co
 		}
 		p.Reflection = d.stripReflection(k, peripheral)
-		p.VSWR = VSWR(p.Reflection)
-		p.ReturnLossDB = ReturnLossDB(p.Reflection)
+		p.VSWR = line.VSWR(p.Reflection)
+		p.ReturnLossDB = line.ReturnLossDB(p.Reflection)
 		out[i] = p
 	}
 	return out
@@ -114,7 +115,7 @@ func (d *Design) stripReflection(k float64, peripheral bool) float64 {
 		prof[i] = st.Ohm
 	}
 	load := KrausInputResistance(d.Turns[0].CircumferenceLambda*k, peripheral)
-	return cmplx.Abs(Reflection(spec.WedgeFeedOhm, load, prof, w.ElectricalLength*k))
+	return cmplx.Abs(line.Reflection(spec.WedgeFeedOhm, load, prof, w.ElectricalLength*k))
 }
 
 // TextbookPattern returns the co-polar and cross-polar levels in dBic at

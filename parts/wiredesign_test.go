@@ -1,7 +1,6 @@
 package parts
 
 import (
-	"encoding/json"
 	"errors"
 	"fmt"
 	"math"
@@ -255,10 +254,6 @@ calibration = "batch.toml"`)
 		if !(cal.EffectiveYield > m.Yield && d.Former.StartRadius < plain.Former.StartRadius) {
 			t.Errorf("former %g mm with yield %g, uncalibrated %g mm", d.Former.StartRadius, cal.EffectiveYield, plain.Former.StartRadius)
 		}
-		r := d.Report()
-		if !r.Wire.Calibrated || r.Wire.Calibration != "batch.toml" || r.Wire.YieldMPa != cal.EffectiveYield {
-			t.Errorf("report wire %+v", r.Wire)
-		}
 	})
 	mismatch := []struct {
 		name string
@@ -293,39 +288,6 @@ calibration = "batch.toml"`)
 			t.Errorf("warnings %v lack calibration-diameter", warningList(d))
 		}
 	})
-}
-
-func TestReportWireFields(t *testing.T) {
-	d := mustDesign(t, specText(5800, coneSpacing5800, `material = "copper-annealed"
-diameter_mm = 1.6
-inspection_tolerance_mm = 0.3`))
-	b, err := json.Marshal(d.Report())
-	if err != nil {
-		t.Fatal(err)
-	}
-	var r struct {
-		Wire struct {
-			Material   string  `json:"material"`
-			DiameterMM float64 `json:"diameter_mm"`
-		} `json:"wire"`
-		Turns []map[string]float64 `json:"turns"`
-	}
-	if err := json.Unmarshal(b, &r); err != nil {
-		t.Fatal(err)
-	}
-	if r.Wire.Material != "copper-annealed" || r.Wire.DiameterMM != 1.6 {
-		t.Errorf("wire = %+v", r.Wire)
-	}
-	for _, tr := range r.Turns {
-		for _, k := range []string{"target_diameter_mm", "former_diameter_mm", "springback_mm", "tolerance_mm", "predicted_diameter_mm"} {
-			if _, ok := tr[k]; !ok {
-				t.Errorf("turn lacks %s", k)
-			}
-		}
-		if tr["tolerance_mm"] != 0.3 || !(tr["former_diameter_mm"] < tr["target_diameter_mm"]) {
-			t.Errorf("turn %v", tr)
-		}
-	}
 }
 
 func TestInspectionTolerance(t *testing.T) {

@@ -13,17 +13,17 @@ import (
 	"testing"
 
 	"coilwright/cam/checktool"
-	"coilwright/parts"
+	designreport "coilwright/parts/report"
 	"coilwright/templates"
 )
 
-func readReport(t *testing.T, dir string) parts.Report {
+func readReport(t *testing.T, dir string) designreport.Report {
 	t.Helper()
 	b, err := os.ReadFile(filepath.Join(dir, "design.json"))
 	if err != nil {
 		t.Fatal(err)
 	}
-	var r parts.Report
+	var r designreport.Report
 	if err := json.Unmarshal(b, &r); err != nil {
 		t.Fatal(err)
 	}
@@ -58,7 +58,7 @@ func TestPatternOutputs(t *testing.T) {
 			if r.Reflector.DiameterMM == nil && r.Reflector.SideMM == nil {
 				t.Error("reflector has no size")
 			}
-			for _, p := range []*parts.PanelReport{r.Reflector.Panel, r.Wedge.Panel} {
+			for _, p := range []*designreport.PanelReport{r.Reflector.Panel, r.Wedge.Panel} {
 				if p == nil || p.PartsPerSheet < 1 || p.Sheets != (r.Quantity+p.PartsPerSheet-1)/p.PartsPerSheet {
 					t.Errorf("panel %+v for %d parts", p, r.Quantity)
 				}

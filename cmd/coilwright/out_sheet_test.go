@@ -16,7 +16,7 @@ import (
 	"time"
 
 	"coilwright/cam/checktool"
-	"coilwright/parts"
+	"coilwright/parts/cutlist"
 	"coilwright/parts/spec"
 	"coilwright/templates"
 )
@@ -257,12 +257,12 @@ func TestWireBlankMatchesDesignJSON(t *testing.T) {
 			if err != nil {
 				t.Fatal(err)
 			}
-			lead := dj.FirstTurnHeightMM - parts.FeedStandoffMM
+			lead := dj.FirstTurnHeightMM - cutlist.FeedStandoffMM
 			if dj.Feed == "centre" {
 				// A centre feed's lead runs in from the start to the axis.
 				lead = dj.BaseDiameterMM / 2
 			}
-			want := dj.WireLengthMM + math.Max(k.Former.LockHoleMM, lead) + parts.TrimPerEndMM
+			want := dj.WireLengthMM + math.Max(k.Former.LockHoleMM, lead) + cutlist.TrimPerEndMM
 			if got := atof(t, blank["length_mm"]); math.Abs(got-want) > csvTol {
 				t.Errorf("blank %.1f mm, design.json arc %.3f mm + allowances = %.3f mm", got, dj.WireLengthMM, want)
 			}

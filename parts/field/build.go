@@ -7,6 +7,7 @@ import (
 	"coilwright/cam/geom"
 	"coilwright/parts"
 	"coilwright/parts/em"
+	"coilwright/parts/flat"
 	"coilwright/parts/spec"
 )
 
@@ -185,7 +186,7 @@ func (c *chain) straight(name string, p geom.Vec3, r float64, whole bool) {
 // with equal segments in arc length, each of radius w/4 from the width at
 // its middle. Source: Butler, IEEE Trans. AP-30(4), 1982 (equivalent
 // radius of a thin strip, w/4).
-func (c *chain) strip(line geom.Path3, sts []parts.WedgeStation) {
+func (c *chain) strip(line geom.Path3, sts []flat.WedgeStation) {
 	cum := make([]float64, len(line))
 	for i := 1; i < len(line); i++ {
 		cum[i] = cum[i-1] + line[i].Sub(line[i-1]).Len()

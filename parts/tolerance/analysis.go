@@ -10,6 +10,7 @@ import (
 	"sync"
 
 	"coilwright/parts"
+	"coilwright/parts/report"
 )
 
 // Options tunes Run. The zero value takes everything from the spec.
@@ -33,7 +34,7 @@ const streamSalt = 0x9e3779b97f4a7c15
 // returns the report. It fails when the nominal design cannot be solved;
 // kits that cannot be built or solved count as not meeting the target.
 // The result is the same on any number of cores.
-func Run(d *parts.Design, ev Evaluator, opt Options) (*parts.ToleranceReport, error) {
+func Run(d *parts.Design, ev Evaluator, opt Options) (*report.ToleranceReport, error) {
 	if d == nil || ev == nil {
 		return nil, errors.New("tolerance: nil design or evaluator")
 	}
@@ -54,10 +55,10 @@ func Run(d *parts.Design, ev Evaluator, opt Options) (*parts.ToleranceReport, er
 		return nil, fmt.Errorf("tolerance: nominal design: %w", err)
 	}
 	seed := d.Spec.Tolerance.SeedValue()
-	kits := make([]parts.ToleranceKit, n)
+	kits := make([]report.ToleranceKit, n)
 	parallelFor(n, func(i int) {
 		vals := draw(ins, seed, i)
-		k := parts.ToleranceKit{Index: i + 1, Inputs: vals}
+		k := report.ToleranceKit{Index: i + 1, Inputs: vals}
 		b, err := chain(d, ins, vals)
 		if err == nil {
 			k.DiametersMM = b.DiametersMM
@@ -70,7 +71,7 @@ func Run(d *parts.Design, ev Evaluator, opt Options) (*parts.ToleranceReport, er
 		k.Meets = k.Buildable && k.Figures.WorstVSWR <= band.VSWRTarget
 		kits[i] = k
 	})
-	rep := &parts.ToleranceReport{Samples: n, Seed: seed, VSWRTarget: band.VSWRTarget,
+	rep := &report.ToleranceReport{Samples: n, Seed: seed, VSWRTarget: band.VSWRTarget,
 		BandLowMHz: band.LowMHz, BandHighMHz: band.HighMHz, Nominal: nominal.fig, Kits: kits}
 	for _, in := range ins {
 		rep.Inputs = append(rep.Inputs, in.info)
@@ -98,7 +99,7 @@ func Run(d *parts.Design, ev Evaluator, opt Options) (*parts.ToleranceReport, er
 
 // describer is an Evaluator that can state its model and accuracy.
 type describer interface {
-	Describe(b Band) parts.ToleranceModel
+	Describe(b Band) report.ToleranceModel
 }
 
 // bandOf returns the band and target a kit must meet: the spec's band
@@ -124,7 +125,7 @@ func bandOf(d *parts.Design, opt Options) Band {
 // solved is a kit's build and figures.
 type solved struct {
 	build Build
-	fig   parts.ToleranceFigures
+	fig   report.ToleranceFigures
 }
 
 // solveAt builds and solves the kit with input values vals.
@@ -182,20 +183,20 @@ func parallelFor(n int, f func(i int)) {
 }
 
 // distributions summarises the buildable kits' figures.
-func distributions(kits []parts.ToleranceKit, nominal parts.ToleranceFigures) []parts.ToleranceDistribution {
+func distributions(kits []report.ToleranceKit, nominal report.ToleranceFigures) []report.ToleranceDistribution {
 	type fig struct {
 		name, unit string
-		get        func(parts.ToleranceFigures) float64
+		get        func(report.ToleranceFigures) float64
 	}
 	figs := []fig{
-		{"matched-band centre", "MHz", func(f parts.ToleranceFigures) float64 { return f.CentreMHz }},
-		{"lowest VSWR", "", func(f parts.ToleranceFigures) float64 { return f.MinVSWR }},
-		{"band-edge VSWR", "", func(f parts.ToleranceFigures) float64 { return f.EdgeVSWR }},
-		{"worst VSWR in band", "", func(f parts.ToleranceFigures) float64 { return f.WorstVSWR }},
-		{"gain on axis", "dBic", func(f parts.ToleranceFigures) float64 { return f.GainDBic }},
-		{"axial ratio on axis", "dB", func(f parts.ToleranceFigures) float64 { return f.AxialRatioDB }},
+		{"matched-band centre", "MHz", func(f report.ToleranceFigures) float64 { return f.CentreMHz }},
+		{"lowest VSWR", "", func(f report.ToleranceFigures) float64 { return f.MinVSWR }},
+		{"band-edge VSWR", "", func(f report.ToleranceFigures) float64 { return f.EdgeVSWR }},
+		{"worst VSWR in band", "", func(f report.ToleranceFigures) float64 { return f.WorstVSWR }},
+		{"gain on axis", "dBic", func(f report.ToleranceFigures) float64 { return f.GainDBic }},
+		{"axial ratio on axis", "dB", func(f report.ToleranceFigures) float64 { return f.AxialRatioDB }},
 	}
-	out := make([]parts.ToleranceDistribution, len(figs))
+	out := make([]report.ToleranceDistribution, len(figs))
 	for i, f := range figs {
 		var v []float64
 		for _, k := range kits {
@@ -212,8 +213,8 @@ func distributions(kits []parts.ToleranceKit, nominal parts.ToleranceFigures) []
 // summarise returns the mean, sample standard deviation and percentiles
 // of v (linear interpolation between order statistics, Hyndman and Fan's
 // definition 7).
-func summarise(name, unit string, v []float64) parts.ToleranceDistribution {
-	d := parts.ToleranceDistribution{Name: name, Unit: unit, Values: v}
+func summarise(name, unit string, v []float64) report.ToleranceDistribution {
+	d := report.ToleranceDistribution{Name: name, Unit: unit, Values: v}
 	if len(v) == 0 {
 		return d
 	}

@@ -8,7 +8,7 @@ import (
 	"runtime"
 	"testing"
 
-	"coilwright/parts"
+	"coilwright/parts/report"
 )
 
 // zeroSpread sets every spread of the [tolerance] table to zero.
@@ -172,7 +172,7 @@ func TestSensitivityMatchesDirectDifference(t *testing.T) {
 
 func TestInspectionNarrowsWithTighterTarget(t *testing.T) {
 	d := demoDesign(t, "demo-5g8-cone.toml", "[tolerance]\nsamples = 400\n")
-	band := func(target float64) parts.ToleranceInspection {
+	band := func(target float64) report.ToleranceInspection {
 		rep, err := Run(d, resonator{d}, Options{VSWRTarget: target})
 		if err != nil {
 			t.Fatal(err)

@@ -5,6 +5,7 @@ import (
 	"math"
 
 	"coilwright/parts"
+	"coilwright/parts/report"
 	"coilwright/parts/spec"
 	"coilwright/parts/wire"
 )
@@ -35,7 +36,7 @@ type input struct {
 	kind  kind
 	turn  int // 0-based turn for the per-turn kinds
 	sigma float64
-	info  parts.ToleranceInput
+	info  report.ToleranceInput
 }
 
 // value returns the input's value for the standard-normal draw z: a
@@ -66,7 +67,7 @@ func inputs(d *parts.Design) ([]input, error) {
 	var in []input
 	add := func(k kind, turn int, limit float64, name, key, unit, source string) {
 		in = append(in, input{kind: k, turn: turn, sigma: limit / limitSigmas,
-			info: parts.ToleranceInput{Name: name, Key: key, Limit: limit, Unit: unit, Source: source}})
+			info: report.ToleranceInput{Name: name, Key: key, Limit: limit, Unit: unit, Source: source}})
 	}
 	cv, src := 0.0, ""
 	if t.YieldCV != nil {
@@ -78,7 +79,7 @@ func inputs(d *parts.Design) ([]input, error) {
 	if !(cv >= 0) {
 		return nil, fmt.Errorf("yield scatter %g must be zero or positive", cv)
 	}
-	in = append(in, input{kind: kindYield, sigma: cv, info: parts.ToleranceInput{Name: "wire yield", Key: "tolerance.yield_cv",
+	in = append(in, input{kind: kindYield, sigma: cv, info: report.ToleranceInput{Name: "wire yield", Key: "tolerance.yield_cv",
 		Limit: 100 * limitSigmas * cv, Unit: "%", Source: src}})
 	wsrc := "wire standard (ASTM B3: ±1 % of the diameter; from memory)"
 	if t.WireDiameterMM != nil {

@@ -7,6 +7,7 @@ import (
 	"strconv"
 
 	"coilwright/parts"
+	"coilwright/parts/report"
 )
 
 // Inspection band search. The band on turn i is k·w_i mm, with weights w_i
@@ -30,10 +31,10 @@ const (
 // which the share of accepted simulated kits meeting the target is at
 // least share: the widest such band, or the band with the best share when
 // none reaches it.
-func inspection(d *parts.Design, kits []parts.ToleranceKit, sens []parts.ToleranceSensitivity, share float64) parts.ToleranceInspection {
+func inspection(d *parts.Design, kits []report.ToleranceKit, sens []report.ToleranceSensitivity, share float64) report.ToleranceInspection {
 	n := len(d.Turns)
 	w := bandWeights(n, sens)
-	out := parts.ToleranceInspection{Share: share, ToleranceMM: make([]float64, n)}
+	out := report.ToleranceInspection{Share: share, ToleranceMM: make([]float64, n)}
 	kMax := 0.0
 	for _, k := range kits {
 		if !k.Buildable {
@@ -80,7 +81,7 @@ func inspection(d *parts.Design, kits []parts.ToleranceKit, sens []parts.Toleran
 
 // accepted reports whether every turn of kit lies within k·w_i of its
 // target diameter. An unbuildable kit is never accepted.
-func accepted(d *parts.Design, kit parts.ToleranceKit, w []float64, k float64) bool {
+func accepted(d *parts.Design, kit report.ToleranceKit, w []float64, k float64) bool {
 	if !kit.Buildable {
 		return false
 	}
@@ -95,7 +96,7 @@ func accepted(d *parts.Design, kit parts.ToleranceKit, w []float64, k float64) b
 // bandWeights returns each turn's band weight from the turn-diameter
 // effects on the worst VSWR: inverse to the effect, RMS-normalised, held within
 // weightSpan of the smallest. Turns without a sensitivity weigh 1.
-func bandWeights(n int, sens []parts.ToleranceSensitivity) []float64 {
+func bandWeights(n int, sens []report.ToleranceSensitivity) []float64 {
 	g := make([]float64, n)
 	for _, s := range sens {
 		var t int
@@ -135,7 +136,7 @@ func bandWeights(n int, sens []parts.ToleranceSensitivity) []float64 {
 }
 
 // inspectionNote explains the derived tolerances for the build sheet.
-func inspectionNote(in parts.ToleranceInspection, d *parts.Design) string {
+func inspectionNote(in report.ToleranceInspection, d *parts.Design) string {
 	if !in.Reached {
 		return fmt.Sprintf("No diameter band makes %.0f %% of the inspected kits meet the VSWR target (the best reaches %.0f %%): the nominal design or the other spreads (strip, height, spacing) limit the batch, so the turns keep the fixed tolerance.",
 			100*in.Share, 100*in.Achieved)

@@ -8,7 +8,7 @@ import (
 
 	"gonum.org/v1/gonum/interp"
 
-	"coilwright/parts"
+	"coilwright/parts/report"
 )
 
 // Evaluator solves one kit as built at the frequencies it was made for.
@@ -53,13 +53,13 @@ const vswrCeiling = 99.0
 // interpolated by natural cubic splines (real and imaginary parts) across
 // the swept range, the VSWR read on a fine grid; gain and axial ratio are
 // interpolated linearly at the band centre.
-func figures(r Response, b Band) (parts.ToleranceFigures, error) {
+func figures(r Response, b Band) (report.ToleranceFigures, error) {
 	n := len(r.FrequencyMHz)
 	if n < 3 || len(r.Impedance) != n || len(r.GainDBic) != n || len(r.AxialRatioDB) != n {
-		return parts.ToleranceFigures{}, fmt.Errorf("response needs at least 3 frequencies with every figure, got %d", n)
+		return report.ToleranceFigures{}, fmt.Errorf("response needs at least 3 frequencies with every figure, got %d", n)
 	}
 	if !sort.Float64sAreSorted(r.FrequencyMHz) {
-		return parts.ToleranceFigures{}, fmt.Errorf("response frequencies are not increasing")
+		return report.ToleranceFigures{}, fmt.Errorf("response frequencies are not increasing")
 	}
 	re, im := make([]float64, n), make([]float64, n)
 	for i, z := range r.Impedance {
@@ -67,10 +67,10 @@ func figures(r Response, b Band) (parts.ToleranceFigures, error) {
 	}
 	var sr, si interp.NaturalCubic
 	if err := sr.Fit(r.FrequencyMHz, re); err != nil {
-		return parts.ToleranceFigures{}, err
+		return report.ToleranceFigures{}, err
 	}
 	if err := si.Fit(r.FrequencyMHz, im); err != nil {
-		return parts.ToleranceFigures{}, err
+		return report.ToleranceFigures{}, err
 	}
 	vswr := func(f float64) float64 {
 		z := complex(sr.Predict(f), si.Predict(f))
@@ -81,7 +81,7 @@ func figures(r Response, b Band) (parts.ToleranceFigures, error) {
 		return math.Min((1+g)/(1-g), vswrCeiling)
 	}
 	lo, hi := r.FrequencyMHz[0], r.FrequencyMHz[n-1]
-	out := parts.ToleranceFigures{MinVSWR: math.Inf(1)}
+	out := report.ToleranceFigures{MinVSWR: math.Inf(1)}
 	for k := 0; k <= fineSteps; k++ {
 		f := lo + (hi-lo)*float64(k)/fineSteps
 		v := vswr(f)

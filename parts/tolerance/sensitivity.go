@@ -7,6 +7,7 @@ import (
 	"slices"
 
 	"coilwright/parts"
+	"coilwright/parts/report"
 )
 
 // sensitivities returns the inputs' effects by one-at-a-time central
@@ -15,14 +16,14 @@ import (
 // VSWR in the band, which decides whether a kit passes (the squared 1σ
 // effect over the sum of them: the first-order variance of a sum of
 // independent effects). Inputs with no spread are left out.
-func sensitivities(d *parts.Design, ev Evaluator, band Band, ins []input, nominal parts.ToleranceFigures) ([]parts.ToleranceSensitivity, error) {
+func sensitivities(d *parts.Design, ev Evaluator, band Band, ins []input, nominal report.ToleranceFigures) ([]report.ToleranceSensitivity, error) {
 	var idx []int
 	for i, in := range ins {
 		if in.sigma > 0 {
 			idx = append(idx, i)
 		}
 	}
-	type pair struct{ up, down parts.ToleranceFigures }
+	type pair struct{ up, down report.ToleranceFigures }
 	res := make([]pair, len(idx))
 	errs := make([]error, 2*len(idx))
 	parallelFor(2*len(idx), func(j int) {
@@ -46,13 +47,13 @@ func sensitivities(d *parts.Design, ev Evaluator, band Band, ins []input, nomina
 			return nil, fmt.Errorf("tolerance: sensitivity of %s: %w", ins[idx[j/2]].info.Name, err)
 		}
 	}
-	out := make([]parts.ToleranceSensitivity, len(idx))
+	out := make([]report.ToleranceSensitivity, len(idx))
 	total, totalC := 0.0, 0.0
 	for j, i := range idx {
 		dc := (res[j].up.CentreMHz - res[j].down.CentreMHz) / 2
 		de := (res[j].up.EdgeVSWR - res[j].down.EdgeVSWR) / 2
 		dw := (res[j].up.WorstVSWR - res[j].down.WorstVSWR) / 2
-		out[j] = parts.ToleranceSensitivity{Name: ins[i].info.Name,
+		out[j] = report.ToleranceSensitivity{Name: ins[i].info.Name,
 			CentreMHz: limitSigmas * dc, EdgeVSWR: limitSigmas * de, WorstVSWR: limitSigmas * dw, Share: dw * dw, CentreShare: dc * dc}
 		total += dw * dw
 		totalC += dc * dc
@@ -67,7 +68,7 @@ func sensitivities(d *parts.Design, ev Evaluator, band Band, ins []input, nomina
 		}
 		out[j].Words = words(ins[i].info, out[j], inside)
 	}
-	slices.SortStableFunc(out, func(a, b parts.ToleranceSensitivity) int { return cmp.Compare(b.Share, a.Share) })
+	slices.SortStableFunc(out, func(a, b report.ToleranceSensitivity) int { return cmp.Compare(b.Share, a.Share) })
 	return out, nil
 }
 
@@ -76,7 +77,7 @@ func sensitivities(d *parts.Design, ev Evaluator, band Band, ins []input, nomina
 // +0.15 (30 % of its spread)". The band's move is left out when the
 // nominal design's best match lies at the edge of the swept range, where
 // it cannot be read.
-func words(in parts.ToleranceInput, s parts.ToleranceSensitivity, centreInside bool) string {
+func words(in report.ToleranceInput, s report.ToleranceSensitivity, centreInside bool) string {
 	amount := fmt.Sprintf("%+.2f mm", in.Limit)
 	if in.Unit == "%" {
 		amount = fmt.Sprintf("%+.0f %%", in.Limit)

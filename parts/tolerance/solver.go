@@ -9,6 +9,7 @@ import (
 	"coilwright/parts"
 	"coilwright/parts/em"
 	"coilwright/parts/field"
+	"coilwright/parts/report"
 )
 
 // The loop model. Each kit is solved over an ideal ground at LoopPoints
@@ -184,8 +185,8 @@ func loopFrequencies(all []float64, centre float64) []float64 {
 // full model on the nominal design; after the correction the two agree at
 // the loop's frequencies and differ only by the interpolation between
 // them, also stated.
-func (e *SolverEvaluator) Describe(b Band) parts.ToleranceModel {
-	m := parts.ToleranceModel{Points: len(e.loop.FrequencyMHz)}
+func (e *SolverEvaluator) Describe(b Band) report.ToleranceModel {
+	m := report.ToleranceModel{Points: len(e.loop.FrequencyMHz)}
 	m.Description = fmt.Sprintf("ideal ground, %d frequencies (%s MHz), about %g segments per wavelength (%d unknowns), impedance interpolated by splines",
 		m.Points, joinMHz(e.loop.FrequencyMHz), LoopSegmentsPerWavelength, e.unknowns)
 	if e.full == nil {

@@ -9,8 +9,8 @@ import (
 	"runtime"
 	"testing"
 
-	"coilwright/parts"
 	"coilwright/parts/field"
+	"coilwright/parts/report"
 )
 
 // samePointsRelTol is how closely the nominal geometry, moved by nothing,
@@ -145,7 +145,7 @@ func TestSolverSensitivityMatchesDirectDifference(t *testing.T) {
 	ins, _ := inputs(d)
 	sigma := d.Spec.Tolerance.TurnDiameterMM / limitSigmas
 	band := bandOf(d, Options{})
-	at := func(delta float64) parts.ToleranceFigures {
+	at := func(delta float64) report.ToleranceFigures {
 		b, err := chain(d, ins, nominalValues(ins))
 		if err != nil {
 			t.Fatal(err)

@@ -3,17 +3,20 @@
 // which coil height is meant) follows the values rather than a fixed
 // wording.
 
-package parts
+package sheet
 
 import (
 	"fmt"
 	"strings"
+
+	"coilwright/parts"
+	"coilwright/parts/flat"
 )
 
-// StripShapeText describes the matching strip's widths as cut: the feed
+// stripShapeText describes the matching strip's widths as cut: the feed
 // end, the far end, and the widest or narrowest point between them when
 // that lies beyond both ends.
-func StripShapeText(w *Wedge) string {
+func stripShapeText(w *flat.Wedge) string {
 	text := fmt.Sprintf("%s wide at the feed end and %s at the far end", mm2(w.FeedWidth), mm2(w.EndWidth))
 	if len(w.Stations) < 3 {
 		return text
@@ -42,10 +45,10 @@ func StripShapeText(w *Wedge) string {
 // stroke. Common practice (no published source).
 const stripWidthNoteMM = 0.05
 
-// InspectionNoteText says how to measure the turns and which tolerance
+// inspectionNoteText says how to measure the turns and which tolerance
 // governs each: the spec's, the per cent of the diameter, or the caliper
 // floor.
-func InspectionNoteText(d *Design) string {
+func inspectionNoteText(d *parts.Design) string {
 	note := "Measure each turn across its middle with calipers over the outside of the wire, at two places 90° apart, and write the mean in the blank column. "
 	if t := d.Spec.Wire.InspectionToleranceMM; t != nil {
 		return note + fmt.Sprintf("The tolerance, ±%s mm, is set in the spec.", num(*t))
@@ -55,22 +58,22 @@ func InspectionNoteText(d *Design) string {
 	}
 	var floor, frac []string
 	for _, t := range d.Turns {
-		if InspectionFraction*t.DiameterMM <= InspectionFloorMM {
+		if parts.InspectionFraction*t.DiameterMM <= parts.InspectionFloorMM {
 			floor = append(floor, fmt.Sprint(t.Index))
 		} else {
 			frac = append(frac, fmt.Sprint(t.Index))
 		}
 	}
-	pct := num(100 * InspectionFraction)
-	why := fmt.Sprintf(" A turn 1 %% too large tunes about 1 %% low; calipers on a springy coil read no better than about %s mm.", num(InspectionFloorMM))
+	pct := num(100 * parts.InspectionFraction)
+	why := fmt.Sprintf(" A turn 1 %% too large tunes about 1 %% low; calipers on a springy coil read no better than about %s mm.", num(parts.InspectionFloorMM))
 	switch {
 	case len(frac) == 0:
-		return note + fmt.Sprintf("The tolerance is ±%s mm on every turn: %s %% of these small turns would be less than calipers can hold, so the %s mm floor governs.", num(InspectionFloorMM), pct, num(InspectionFloorMM)) + why
+		return note + fmt.Sprintf("The tolerance is ±%s mm on every turn: %s %% of these small turns would be less than calipers can hold, so the %s mm floor governs.", num(parts.InspectionFloorMM), pct, num(parts.InspectionFloorMM)) + why
 	case len(floor) == 0:
-		return note + fmt.Sprintf("The tolerance is ±%s %% of each turn's diameter (more than the %s mm floor on every turn).", pct, num(InspectionFloorMM)) + why
+		return note + fmt.Sprintf("The tolerance is ±%s %% of each turn's diameter (more than the %s mm floor on every turn).", pct, num(parts.InspectionFloorMM)) + why
 	}
 	return note + fmt.Sprintf("The tolerance is ±%s %% of the turn's diameter on turns %s, and the %s mm floor on turns %s, where %s %% would be smaller.",
-		pct, strings.Join(frac, ", "), num(InspectionFloorMM), strings.Join(floor, ", "), pct) + why
+		pct, strings.Join(frac, ", "), num(parts.InspectionFloorMM), strings.Join(floor, ", "), pct) + why
 }
 
 // CoilHeights are the three heights of the coil the sheet quotes, each
@@ -87,8 +90,8 @@ type CoilHeights struct {
 	Overall float64
 }
 
-// Heights returns the coil's three heights.
-func (d *Design) Heights() CoilHeights {
+// Heights returns the three heights of the coil of d.
+func Heights(d *parts.Design) CoilHeights {
 	top := d.Coil.Z0 + d.AxialLength
 	return CoilHeights{Axial: d.AxialLength, TopCentre: top, Overall: top + d.Spec.Wire.DiameterMM/2}
 }
@@ -97,4 +100,21 @@ func (d *Design) Heights() CoilHeights {
 func (h CoilHeights) Text() string {
 	return fmt.Sprintf("axial length %s (first to last wire centre); %s from the reflector's top face to the top turn's wire centre; overall %s from the reflector's top face to the top of the wire",
 		mm(h.Axial), mm(h.TopCentre), mm(h.Overall))
+}
+
+// gainRow is the build sheet's gain row for d.
+func gainRow(d *parts.Design) SheetRow {
+	if d.Field != nil {
+		return SheetRow{"Gain (field solution)", fmt.Sprintf("%.1f dBic realised at %s MHz; textbook estimate %.1f dBic (%s)",
+			d.Field.QuotedDBic(), num(d.Spec.FrequencyMHz), d.Estimates.Gain.Value, d.Estimates.Gain.Formula)}
+	}
+	return SheetRow{"Gain (estimate)", fmt.Sprintf("%.1f dBic, %s", d.Estimates.Gain.Value, d.Estimates.Gain.Formula)}
+}
+
+// gainWord says how the quoted gain of d was found, for sentences.
+func gainWord(d *parts.Design) string {
+	if d.Field != nil {
+		return "computed"
+	}
+	return "estimated"
 }

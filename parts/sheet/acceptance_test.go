@@ -1,4 +1,4 @@
-package parts
+package sheet
 
 import (
 	"fmt"
@@ -12,13 +12,13 @@ func TestSeenThroughFeeder(t *testing.T) {
 	// |Γ_L|·e^(−2αℓ). 10 dB return loss is |Γ| = 0.3162, VSWR 1.925;
 	// through 1 dB of feeder, 12 dB: |Γ| = 0.2512, VSWR 1.671.
 	for _, c := range []struct{ rl, loss, want float64 }{{10, 0, 1.925}, {10, 1, 1.671}} {
-		if got := SeenThroughFeeder(c.rl, c.loss); math.Abs(got-c.want) > 0.001 {
-			t.Errorf("SeenThroughFeeder(%g, %g) = %.4f, want %.3f", c.rl, c.loss, got, c.want)
+		if got := seenThroughFeeder(c.rl, c.loss); math.Abs(got-c.want) > 0.001 {
+			t.Errorf("seenThroughFeeder(%g, %g) = %.4f, want %.3f", c.rl, c.loss, got, c.want)
 		}
 	}
 	// Source: Balanis §2.2.4: 2D²/λ; D = 100 mm at λ = 50 mm is 400 mm.
-	if got := FarFieldMM(100, 50); got != 400 {
-		t.Errorf("FarFieldMM = %g", got)
+	if got := farFieldMM(100, 50); got != 400 {
+		t.Errorf("farFieldMM = %g", got)
 	}
 }
 

@@ -9,7 +9,7 @@
 // All are quasi-static line formulas: a first-order design aid for a strip
 // whose width and height vary slowly along its length.
 
-package parts
+package line
 
 import (
 	"fmt"

@@ -1,4 +1,4 @@
-package parts
+package report
 
 // ToleranceReport is the outcome of a batch tolerance analysis: the
 // spreads simulated, the distribution of each antenna figure over the

@@ -1,10 +1,12 @@
-package parts
+package sheet
 
 import (
 	"fmt"
 	"math"
 
 	"coilwright/cam/geom"
+	"coilwright/parts"
+	"coilwright/parts/cutlist"
 )
 
 // SideView is the antenna seen from the side, from the −y side looking along +y (x to the right, so the view is not mirrored), in mm:
@@ -31,8 +33,8 @@ type SideView struct {
 // sideSamples is the number of straight steps per turn in the side view.
 const sideSamples = 96
 
-// SideView returns the side view of the design with its cut list.
-func (d *Design) SideView(cl *CutList) SideView {
+// NewSideView returns the side view of design d with its cut list cl.
+func NewSideView(d *parts.Design, cl *cutlist.CutList) SideView {
 	c := d.Coil
 	n := int(float64(sideSamples)*c.Turns) + 1
 	wire := make(geom.Polyline, n+1)

@@ -3,11 +3,14 @@
 // reference antenna, each with the reading to expect from this design and
 // what the other readings mean.
 
-package parts
+package sheet
 
 import (
 	"fmt"
 	"math"
+
+	"coilwright/parts"
+	"coilwright/parts/line"
 )
 
 // DipoleGainDBi is a half-wave dipole's gain over isotropic.
@@ -20,38 +23,38 @@ const DipoleGainDBi = 2.15
 // factor 0.5).
 const LinearToCircularLossDB = 3.0
 
-// SeenThroughFeeder returns the VSWR a meter reads at the transmitter end
+// seenThroughFeeder returns the VSWR a meter reads at the transmitter end
 // of a feeder of lossDB (one way) when the antenna's own return loss is
 // rlDB: the reflection crosses the feeder twice, so the return loss seen
 // is rlDB + 2·lossDB.
 // Source: Pozar, Microwave Engineering, 4th ed., §2.7 (lossy line: Γ at
 // the input is Γ_L·e^(−2αℓ)).
-func SeenThroughFeeder(rlDB, lossDB float64) float64 {
-	return VSWR(math.Pow(10, -(rlDB+2*lossDB)/20))
+func seenThroughFeeder(rlDB, lossDB float64) float64 {
+	return line.VSWR(math.Pow(10, -(rlDB+2*lossDB)/20))
 }
 
-// FarFieldMM is the far-field (Fraunhofer) distance 2D²/λ for an antenna
+// farFieldMM is the far-field (Fraunhofer) distance 2D²/λ for an antenna
 // of largest dimension dMM at wavelength lambdaMM.
 // Source: Balanis, Antenna Theory, 3rd ed., §2.2.4.
-func FarFieldMM(dMM, lambdaMM float64) float64 { return 2 * dMM * dMM / lambdaMM }
+func farFieldMM(dMM, lambdaMM float64) float64 { return 2 * dMM * dMM / lambdaMM }
 
 // acceptanceText returns the paragraphs of the no-analyser check.
-func acceptanceText(d *Design) []string {
+func acceptanceText(d *parts.Design) []string {
 	s := d.Spec
 	loss := 0.0
 	if s.RF.FeederLossDB > 0 {
 		loss = s.RF.FeederLossDB
 	}
-	vswr := VSWR(math.Pow(10, -ReturnLossTargetDB/20))
-	seen := SeenThroughFeeder(ReturnLossTargetDB, loss)
+	vswr := line.VSWR(math.Pow(10, -ReturnLossTargetDB/20))
+	seen := seenThroughFeeder(ReturnLossTargetDB, loss)
 	swr := fmt.Sprintf("SWR meter at the transmitter: put a through-line SWR meter rated for %s MHz between the transmitter and the antenna's cable, transmit at the lowest power that moves the meter, and read the SWR at the band's ends and centre. A good antenna reads below %.1f at the antenna", num(s.FrequencyMHz), vswr)
 	if loss > 0 {
 		swr += fmt.Sprintf("; through the %s dB feeder the meter reads lower, below %.2f, because the reflection crosses the feeder twice", num(loss), seen)
 	}
 	swr += ". Below 1.5: well matched. 1.5 to 2: usable. Above 2: look for a short at the feed, the strip touching the plate, a poor ground joint, or a coil tuned off the band. A reading that barely changes across the band, or a low reading that rises when the cable is shortened, means cable loss is hiding a mismatch."
 	lambda := d.Wavelength
-	size := math.Max(d.Heights().Overall, s.Reflector.SizeMM(lambda))
-	far := math.Max(FarFieldMM(size, lambda), 10*lambda)
+	size := math.Max(Heights(d).Overall, s.Reflector.SizeMM(lambda))
+	far := math.Max(farFieldMM(size, lambda), 10*lambda)
 	g, _ := d.QuotedGain()
 	lin := g - DipoleGainDBi - LinearToCircularLossDB
 	rss := fmt.Sprintf("Received signal against a reference antenna: set up a steady source in the band at least %.1f m away (the far-field distance 2D²/λ, and no less than ten wavelengths), in the open, antennas at the same height. Read its strength on a receiver with a signal-strength reading in dB, first with a half-wave dipole (%.2f dBi) parallel to the source's polarisation, then with this antenna pointed at the source. From a linearly polarised source, expect this antenna to read about %s the dipole (its %.1f dBic, less the dipole's %.2f dBi and the %.0f dB a circular antenna loses to a linear wave).",

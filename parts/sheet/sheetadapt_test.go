@@ -1,8 +1,11 @@
-package parts
+package sheet
 
 import (
 	"strings"
 	"testing"
+
+	"coilwright/parts"
+	"coilwright/parts/cutlist"
 )
 
 // combo is a 2.44 GHz cylinder on a 130 mm square plate; the test fills in
@@ -38,7 +41,7 @@ func comboSheet(t *testing.T, mat, conn, cable, method string) string {
 	t.Helper()
 	text := strings.NewReplacer("%MAT%", mat, "%CONN%", conn, "%CABLE%", cable, "%METHOD%", method).Replace(combo)
 	d := mustDesign(t, text)
-	cl, err := NewCutList(d)
+	cl, err := cutlist.NewCutList(d)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -119,11 +122,11 @@ func TestLaserMethodCautions(t *testing.T) {
 }
 
 func TestSupportWordingFollowsTheGap(t *testing.T) {
-	small := supportText(DowelCut{DiameterMM: 8, InnerTurnMM: 10})
+	small := supportText(parts.DowelCut{DiameterMM: 8, InnerTurnMM: 10})
 	if !strings.Contains(small, "by 1.0 mm") || strings.Contains(small, "spacers") {
 		t.Errorf("1 mm gap: %q", small)
 	}
-	big := supportText(DowelCut{DiameterMM: 10, InnerTurnMM: 60})
+	big := supportText(parts.DowelCut{DiameterMM: 10, InnerTurnMM: 60})
 	if !strings.Contains(big, "25.0 mm off") || !strings.Contains(big, "spacers") || strings.Contains(big, "about 1") {
 		t.Errorf("25 mm gap: %q", big)
 	}

@@ -9,7 +9,7 @@
 // summed with its round-trip phase, Γ ≈ Σ ρi·e^(−2jβℓ·xi). The same sum
 // serves the ideal profiles and a realised one (widths as cut).
 
-package parts
+package line
 
 import (
 	"fmt"

@@ -4,7 +4,7 @@
 // closing note. Numbers are written into the text here, once, so the
 // Markdown and PDF sheets say the same thing.
 
-package parts
+package sheet
 
 import (
 	"fmt"
@@ -12,6 +12,10 @@ import (
 	"slices"
 	"strings"
 
+	"coilwright/parts"
+	"coilwright/parts/cutlist"
+	"coilwright/parts/flat"
+	"coilwright/parts/line"
 	"coilwright/parts/spec"
 )
 
@@ -73,10 +77,10 @@ type BuildSheet struct {
 	Materials  []SheetRow
 	Cautions   []Hazard
 	Steps      []Step
-	Inspection []InspectionRow
+	Inspection []parts.InspectionRow
 	// InspectionNote says how to measure and where the tolerance comes from.
 	InspectionNote string
-	Warnings       []Warning
+	Warnings       []parts.Warning
 	Closing        []string
 
 	View SideView
@@ -89,24 +93,24 @@ const ReturnLossTargetDB = 10.0
 
 // NewBuildSheet assembles the build sheet of a design from its cut list.
 // specSHA256 is the hex hash of the spec's bytes, printed on the cover.
-func NewBuildSheet(d *Design, cl *CutList, specSHA256 string) *BuildSheet {
+func NewBuildSheet(d *parts.Design, cl *cutlist.CutList, specSHA256 string) *BuildSheet {
 	s := d.Spec
-	var strip *Wedge
+	var strip *flat.Wedge
 	if d.Patterns != nil {
 		strip = d.Patterns.Wedge
 	}
 	b := &BuildSheet{Kit: s.Kit, SpecSHA256: specSHA256, Hand: d.Coil.Hand.String(), Paper: s.Cutting.Paper,
 		Quantity: s.Quantity, Inspection: d.InspectionTable()}
 	b.HandWords = handWords(d.Coil.Hand)
-	b.View = d.SideView(cl)
-	b.Summary = fmt.Sprintf("%s MHz %s helix, %s, %s", num(s.FrequencyMHz), s.Coil.Shape, TurnsText(d.Coil.Turns), b.Hand)
+	b.View = NewSideView(d, cl)
+	b.Summary = fmt.Sprintf("%s MHz %s helix, %s, %s", num(s.FrequencyMHz), s.Coil.Shape, parts.TurnsText(d.Coil.Turns), b.Hand)
 	b.Design = designRows(d, cl)
 	b.Tools = tools(s, choiceOf(d, cl))
 	b.Materials = materials(s, cl)
 	b.Cautions = cautions(d, choiceOf(d, cl))
 	b.Steps = steps(d, cl, strip, b.Cautions)
-	b.InspectionNote = InspectionNoteText(d)
-	b.Warnings = append(append([]Warning{}, d.Warnings...), cl.Warnings...)
+	b.InspectionNote = inspectionNoteText(d)
+	b.Warnings = append(append([]parts.Warning{}, d.Warnings...), cl.Warnings...)
 	b.Closing = []string{
 		"This sheet is a guide for careful hobby construction, not professional advice. Follow the local regulations, electrical and workshop codes, and the conditions of any licence that apply where you build and transmit; where they differ from this sheet, they win.",
 		"Transmitting needs the right to use the band: check the power and EIRP limits for your country and licence class, or have a licensed operator check the station.",
@@ -115,8 +119,8 @@ func NewBuildSheet(d *Design, cl *CutList, specSHA256 string) *BuildSheet {
 	return b
 }
 
-func handWords(h Hand) string {
-	if h == LeftHand {
+func handWords(h parts.Hand) string {
+	if h == parts.LeftHand {
 		return "left-hand winding, against an ordinary screw thread: seen from the open end, looking down at the reflector, the wire turns clockwise as it rises"
 	}
 	return "right-hand winding, like an ordinary screw thread: seen from the open end, looking down at the reflector, the wire turns counter-clockwise as it rises"
@@ -125,7 +129,7 @@ func handWords(h Hand) string {
 func mm(v float64) string  { return fmt.Sprintf("%.1f mm", v) }
 func mm2(v float64) string { return fmt.Sprintf("%.2f mm", v) }
 
-func designRows(d *Design, cl *CutList) []SheetRow {
+func designRows(d *parts.Design, cl *cutlist.CutList) []SheetRow {
 	s := d.Spec
 	band := "not given"
 	if s.BandLowMHz != nil && s.BandHighMHz != nil {
@@ -134,17 +138,17 @@ func designRows(d *Design, cl *CutList) []SheetRow {
 	rows := []SheetRow{
 		{"Centre frequency", fmt.Sprintf("%s MHz (wavelength %.2f mm)", num(s.FrequencyMHz), d.Wavelength)},
 		{"Band", band},
-		{"Hand", fmt.Sprintf("%s (%s winding)", d.Coil.Hand, map[Hand]string{RightHand: "right-hand", LeftHand: "left-hand"}[d.Coil.Hand])},
-		{"Coil", fmt.Sprintf("%s, %s, %s feed", s.Coil.Shape, TurnsText(d.Coil.Turns), s.Coil.Feed)},
+		{"Hand", fmt.Sprintf("%s (%s winding)", d.Coil.Hand, map[parts.Hand]string{parts.RightHand: "right-hand", parts.LeftHand: "left-hand"}[d.Coil.Hand])},
+		{"Coil", fmt.Sprintf("%s, %s, %s feed", s.Coil.Shape, parts.TurnsText(d.Coil.Turns), s.Coil.Feed)},
 		{"Diameter (wire centre)", fmt.Sprintf("%s at the base, %s at the top", mm2(2*d.Coil.StartRadius), mm2(2*d.Coil.EndRadius))},
 		{"Pitch", fmt.Sprintf("%.1f° at the first turn, %.2f mm per turn at the first turn", d.Turns[0].PitchAngleDeg, d.Turns[0].SpacingMM)},
 		{"First turn height", fmt.Sprintf("%s, wire centre above the reflector", mm2(d.Coil.Z0))},
-		{"Coil height", d.Heights().Text()},
+		{"Coil height", Heights(d).Text()},
 		{"Wire", fmt.Sprintf("%s, Ø%s mm; winding %s, blank %s", s.Wire.Material, num(s.Wire.DiameterMM), mm(cl.Wire.ArcMM), mm(cl.Wire.LengthMM))},
 		{"Reflector", fmt.Sprintf("%s, %s across, %s mm thick", s.Reflector.Shape, mm(s.Reflector.SizeMM(d.Wavelength)), num(s.Reflector.ThicknessMM))},
 		{"Support rod", supportRow(cl.Dowel)},
 		{"Feed cable", feedRow(d, cl)},
-		d.gainRow(),
+		gainRow(d),
 		{"Half-power beamwidth (estimate)", fmt.Sprintf("%.0f°", d.Estimates.HPBW.Value)},
 	}
 	if d.EIRP != nil {
@@ -181,7 +185,7 @@ func tools(s *spec.Spec, c sheetChoice) []string {
 // supportSteps is the epoxy step's text: the rod's fixing (screw), how
 // the turns meet it and the rod's material advice, or for a kit without a
 // rod how the coil is held instead.
-func supportSteps(screw string, dc DowelCut) []string {
+func supportSteps(screw string, dc parts.DowelCut) []string {
 	if dc.OverFeed {
 		return []string{supportText(dc)}
 	}
@@ -190,17 +194,17 @@ func supportSteps(screw string, dc DowelCut) []string {
 
 // supportRow is the summary's support rod: the section and its length, or
 // none when the feed leaves it no room (OverFeed).
-func supportRow(dc DowelCut) string {
+func supportRow(dc parts.DowelCut) string {
 	if dc.OverFeed {
 		return "none: the feed hole leaves no room for its foot; the coil is held from outside"
 	}
-	return fmt.Sprintf("%s × %s", sectionWords(dc), mm(dc.LengthMM))
+	return fmt.Sprintf("%s × %s", parts.SectionWords(dc), mm(dc.LengthMM))
 }
 
-func materials(s *spec.Spec, cl *CutList) []SheetRow {
+func materials(s *spec.Spec, cl *cutlist.CutList) []SheetRow {
 	rows := []SheetRow{
 		{"Wire blank", fmt.Sprintf("%s, Ø%s mm, %s", cl.Wire.Material, num(cl.Wire.DiameterMM), mm(cl.Wire.LengthMM))},
-		{"Support rod", fmt.Sprintf("%s, %s", sectionWords(cl.Dowel), mm(cl.Dowel.LengthMM))},
+		{"Support rod", fmt.Sprintf("%s, %s", parts.SectionWords(cl.Dowel), mm(cl.Dowel.LengthMM))},
 		{"Feed cable", fmt.Sprintf("%s, cut %s", cl.Coax.Cable.Name, mm(cl.Coax.CutMM))},
 		{"Heat-shrink", fmt.Sprintf("2:1 sleeve Ø%s mm (shrinks to Ø%s mm), %s", num(cl.Sleeve.SuppliedMM), num(cl.Sleeve.RecoveredMM), mm(cl.Sleeve.LengthMM))},
 		{"Reflector", fmt.Sprintf("%s %s, %s mm thick, cut from the template", s.Reflector.Shape, plateName(s), num(s.Reflector.ThicknessMM))},
@@ -230,9 +234,9 @@ func plateName(s *spec.Spec) string {
 	return "sheet"
 }
 
-func cautions(d *Design, c sheetChoice) []Hazard {
+func cautions(d *parts.Design, c sheetChoice) []Hazard {
 	gain, _ := d.QuotedGain()
-	rf := fmt.Sprintf("This antenna concentrates power: its "+d.gainWord()+" gain is %.1f dBic, so EIRP (dBm) = transmitter power (dBm) − feeder loss (dB) + %.1f dB.", gain, gain)
+	rf := fmt.Sprintf("This antenna concentrates power: its "+gainWord(d)+" gain is %.1f dBic, so EIRP (dBm) = transmitter power (dBm) − feeder loss (dB) + %.1f dB.", gain, gain)
 	if e := d.EIRP; e != nil {
 		rf += fmt.Sprintf(" With %s dBm in and %s dB loss that is %.1f dBm (%.0f mW).", num(e.TxPowerDBm), num(e.FeederLossDB), e.EIRPDBm, e.EIRPmW)
 	}
@@ -280,7 +284,7 @@ func pick(all []Hazard, ids ...HazardID) []Hazard {
 	return out
 }
 
-func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
+func steps(d *parts.Design, cl *cutlist.CutList, strip *flat.Wedge, all []Hazard) []Step {
 	s := d.Spec
 	w := cl.Wire
 	cx := cl.Coax
@@ -289,7 +293,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 	// unless the coil widens away from the feed, when the former is printed
 	// the other way up.
 	marks := fmt.Sprintf("Mark the blank at %s from one end (mark A: the start of the winding; the end before it is the lock end, which goes into the former's lock hole and is later cut down to the feed lead) and at %s from the same end, %s further on: the length of the former's groove from the lock hole to the stop notch (mark B: the end of the winding, at the stop notch). The %s beyond mark B is trim.",
-		mm(w.MarkAMM), mm(w.MarkBMM), mm(w.ArcMM), mm(TrimPerEndMM))
+		mm(w.MarkAMM), mm(w.MarkBMM), mm(w.ArcMM), mm(cutlist.TrimPerEndMM))
 	lockText := fmt.Sprintf("Bend the lock end at a right angle at mark A, so that its %s stands straight out from the blank. Push it into the lock hole at the start of the groove, %%s, until the bend at mark A sits at the mouth of the hole and the blank lies along the groove.", mm(w.LockTailMM))
 	trimText := fmt.Sprintf("Cut the lock end off %s beyond mark A: that stub is the feed lead. Cut the other end at mark B. File the cut ends smooth.", mm(w.FeedLeadMM))
 	if w.CentreFed {
@@ -310,16 +314,16 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 	}
 	strip1 := "Cut the matching strip from its 1:1 template and file its edges smooth."
 	strip2 := "Tin the strip and the underside of the winding's start. Solder the strip along the underside of the winding's start, its wide end at the feed and its flat face parallel to the reflector."
-	expect := fmt.Sprintf("The matching strip is sized for a VSWR of at most %s (return loss at least %.1f dB) across the band; accept the antenna if the return loss is at least %s dB across it.", num(s.Wedge.MaxVSWR), ReturnLossDB((s.Wedge.MaxVSWR-1)/(s.Wedge.MaxVSWR+1)), num(ReturnLossTargetDB))
+	expect := fmt.Sprintf("The matching strip is sized for a VSWR of at most %s (return loss at least %.1f dB) across the band; accept the antenna if the return loss is at least %s dB across it.", num(s.Wedge.MaxVSWR), line.ReturnLossDB((s.Wedge.MaxVSWR-1)/(s.Wedge.MaxVSWR+1)), num(ReturnLossTargetDB))
 	clearance := ""
 	if strip != nil && len(strip.Stations) > 0 {
 		under := fmt.Sprintf("the first %.0f° of the winding", strip.Span*180/math.Pi)
 		strip2 = "Tin the strip and the underside of " + under + ". Solder the strip along the underside of " + under + ", its wide end at the feed and its flat face parallel to the reflector."
-		strip1 = fmt.Sprintf("Cut the matching strip from its 1:1 template: %s long, %s. File its edges smooth.", mm(strip.Length), StripShapeText(strip))
+		strip1 = fmt.Sprintf("Cut the matching strip from its 1:1 template: %s long, %s. File its edges smooth.", mm(strip.Length), stripShapeText(strip))
 		clearance = fmt.Sprintf(" The strip's underside is only %s above the reflector at the feed: keep the solder there flat.", mm2(strip.Stations[0].Height))
 		if band := d.Patterns.LineBand; len(band) > 1 {
 			lo, hi := band[0], band[len(band)-1]
-			expect += fmt.Sprintf(" The strip's line model gives VSWR %.2f at %s MHz and %.2f at %s MHz, worst %.2f in the band.", lo.VSWR, num(lo.FrequencyMHz), hi.VSWR, num(hi.FrequencyMHz), worstVSWR(band))
+			expect += fmt.Sprintf(" The strip's line model gives VSWR %.2f at %s MHz and %.2f at %s MHz, worst %.2f in the band.", lo.VSWR, num(lo.FrequencyMHz), hi.VSWR, num(hi.FrequencyMHz), parts.WorstVSWR(band))
 		}
 	}
 	expect += " If the best point is low in frequency, the turns are too large; if high, too small. If the return loss falls short across the band, raise or lower the strip's far end a fraction of a millimetre at a time and sweep again."
@@ -364,7 +368,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 			"Hold the wire at mark B for about ten seconds, then press every turn once more into its groove with a thumb, a little tighter than it lies, to set the bend.",
 		}},
 		{Title: "Release", Text: []string{
-			fmt.Sprintf("Let go of the end at mark B slowly and let the coil open up on the former: it springs out to its relaxed size and, keeping its length, unwinds by about %.0f° to %s. Free the lock end and twist the coil off along the groove.", unwind, TurnsText(d.Coil.Turns)),
+			fmt.Sprintf("Let go of the end at mark B slowly and let the coil open up on the former: it springs out to its relaxed size and, keeping its length, unwinds by about %.0f° to %s. Free the lock end and twist the coil off along the groove.", unwind, parts.TurnsText(d.Coil.Turns)),
 		}},
 		{Title: "Measure each turn against the inspection table", Text: []string{
 			"Measure every turn across its middle, over the outside of the wire, and write the reading in the inspection table at the end of this sheet.",
@@ -391,7 +395,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 			"Slide the sleeve up against the reflector's back face, over the cable's joint, and shrink it evenly with the hot-air tool. Fix the cable to the reflector with the cable tie.",
 		}, Cautions: pick(all, HazardBurns)},
 		{Title: "Final checks", Text: []string{
-			"Compare the antenna with the side view: hand, turn count, first turn height and overall height (" + mm(d.Heights().Overall) + " from the reflector's top face to the top of the wire).",
+			"Compare the antenna with the side view: hand, turn count, first turn height and overall height (" + mm(Heights(d).Overall) + " from the reflector's top face to the top of the wire).",
 			"With the multimeter, check there is no continuity between the connector's centre pin and its body: the coil and strip must not touch the reflector.",
 			fmt.Sprintf("Calibrate the vector network analyser (VNA) at the end of its test cable, connect the antenna, point it at open sky away from metal, and sweep the return loss (S11) across %s.", band),
 			expect,
@@ -445,7 +449,7 @@ func steps(d *Design, cl *CutList, strip *Wedge, all []Hazard) []Step {
 
 // feedRow is the design table's feed: the cable to the plate, or the
 // panel jack and its jumper.
-func feedRow(d *Design, cl *CutList) string {
+func feedRow(d *parts.Design, cl *cutlist.CutList) string {
 	if j, ok := spec.ConnectorByID(d.Spec.Reflector.Connector); ok && j.Mount != "pigtail" {
 		return fmt.Sprintf("%s on the reflector; %s jumper, %s", j.Name, cl.Coax.Cable.Name, mm(cl.Coax.FinishedMM))
 	}

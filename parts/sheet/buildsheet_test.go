@@ -1,4 +1,4 @@
-package parts
+package sheet
 
 import (
 	"fmt"
@@ -6,11 +6,12 @@ import (
 	"strings"
 	"testing"
 
+	"coilwright/parts"
 	"coilwright/parts/wire"
 	"coilwright/templates"
 )
 
-func demoSheet(t *testing.T, name string) (*Design, *BuildSheet) {
+func demoSheet(t *testing.T, name string) (*parts.Design, *BuildSheet) {
 	t.Helper()
 	d := demoDesign(t, name, nil)
 	cl := mustCutList(t, d)

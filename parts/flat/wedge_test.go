@@ -1,10 +1,11 @@
-package parts
+package flat
 
 import (
 	"math"
 	"testing"
 
 	"coilwright/cam/geom"
+	"coilwright/parts/line"
 )
 
 // helixPath returns a right-hand helix of radius r whose centreline starts
@@ -19,7 +20,7 @@ func helixPath(r, z0, rise float64) func(float64) geom.Vec3 {
 // circumference one wavelength, 1 mm wire, 0.2 mm sheet, strip 1 mm above
 // the reflector at the feed, a quarter-turn rise of a 12.5° helix
 // (Sλ = tan 12.5° = 0.2217) and a 140 Ω load (Kraus axial feed, Cλ = 1).
-func demoWedge(t *testing.T, kind TaperKind) *Wedge {
+func demoWedge(t *testing.T, kind line.TaperKind) *Wedge {
 	t.Helper()
 	const lambda = 51.6884
 	r := lambda / (2 * math.Pi)
@@ -28,7 +29,7 @@ func demoWedge(t *testing.T, kind TaperKind) *Wedge {
 		WireDiameter: 1,
 		Thickness:    0.2,
 		Wavelength:   lambda,
-		Taper:        Taper{Kind: kind, Z0: 50, ZL: 140, GammaMax: 0.05},
+		Taper:        line.Taper{Kind: kind, Z0: 50, ZL: 140, GammaMax: 0.05},
 	})
 	if err != nil {
 		t.Fatal(err)
@@ -37,7 +38,7 @@ func demoWedge(t *testing.T, kind TaperKind) *Wedge {
 }
 
 func TestWedgeWidthTable(t *testing.T) {
-	w := demoWedge(t, TaperExponential)
+	w := demoWedge(t, line.TaperExponential)
 	// ohmTol is the tolerance in ohms between the taper and the cut widths.
 	const ohmTol = 1e-6
 	for _, st := range w.Stations {
@@ -73,14 +74,14 @@ func TestWedgeResidualMatchesClosedForm(t *testing.T) {
 	// With every width cut as asked, the strip is an exact exponential taper,
 	// so the estimate must equal Pozar's closed form (Microwave Engineering,
 	// 4th ed., §5.9) for the same βℓ.
-	w := demoWedge(t, TaperExponential)
+	w := demoWedge(t, line.TaperExponential)
 	for _, st := range w.Stations {
 		if st.Clamped {
 			t.Skip("demo wedge clamps a width; closed form does not apply")
 		}
 	}
 	const gTol = 5e-3
-	want := ExponentialReflection(50, 140, w.ElectricalLength)
+	want := line.ExponentialReflection(50, 140, w.ElectricalLength)
 	if math.Abs(w.Reflection-want) > gTol {
 		t.Errorf("|Γ| = %.4f, closed form %.4f", w.Reflection, want)
 	}
@@ -93,7 +94,7 @@ func TestWedgeFlatPattern(t *testing.T) {
 		const r = 10.0
 		w, err := NewWedge(WedgeInput{
 			Path: helixPath(r, 2, 0), WireDiameter: 1, Thickness: 0.1, Wavelength: 100,
-			Taper: Taper{Kind: TaperExponential, Z0: 50, ZL: 100},
+			Taper: line.Taper{Kind: line.TaperExponential, Z0: 50, ZL: 100},
 		})
 		if err != nil {
 			t.Fatal(err)
@@ -115,7 +116,7 @@ func TestWedgeFlatPattern(t *testing.T) {
 		}
 	})
 	t.Run("area equals the integral of width", func(t *testing.T) {
-		w := demoWedge(t, TaperKlopfenstein)
+		w := demoWedge(t, line.TaperKlopfenstein)
 		var integral float64
 		for i := 1; i < len(w.Stations); i++ {
 			a, b := w.Stations[i-1], w.Stations[i]
@@ -131,7 +132,7 @@ func TestWedgeFlatPattern(t *testing.T) {
 func TestWedgeRejects(t *testing.T) {
 	base := WedgeInput{
 		Path: helixPath(8, 1.7, 2.8), WireDiameter: 1, Thickness: 0.2, Wavelength: 51.7,
-		Taper: Taper{Kind: TaperExponential, Z0: 50, ZL: 140},
+		Taper: line.Taper{Kind: line.TaperExponential, Z0: 50, ZL: 140},
 	}
 	tests := []struct {
 		name string

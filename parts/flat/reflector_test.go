@@ -1,4 +1,4 @@
-package parts
+package flat
 
 import (
 	"math"
@@ -103,5 +103,19 @@ func TestReflectorRejects(t *testing.T) {
 				t.Error("accepted")
 			}
 		})
+	}
+}
+
+func TestJoinLabelNamesHandOnce(t *testing.T) {
+	for _, c := range []struct{ kit, hand, want string }{
+		{"Test 10G LHCP", "LHCP", "Test 10G LHCP"},
+		{"Club (RHCP)", "RHCP", "Club (RHCP)"},
+		{"Club 5G8", "RHCP", "Club 5G8 RHCP"},
+		{"RHCPish", "RHCP", "RHCPish RHCP"},
+		{"", "LHCP", "LHCP"},
+	} {
+		if got := joinLabel(c.kit, c.hand); got != c.want {
+			t.Errorf("joinLabel(%q, %q) = %q, want %q", c.kit, c.hand, got, c.want)
+		}
 	}
 }

@@ -16,7 +16,7 @@
 // half to each side. The real strip is a gently twisted ribbon; sheet this
 // thin follows it when soldered.
 
-package parts
+package flat
 
 import (
 	"fmt"
@@ -24,6 +24,7 @@ import (
 	"math/cmplx"
 
 	"coilwright/cam/geom"
+	"coilwright/parts/line"
 )
 
 // WedgeInput describes the wire segment a wedge follows and the line it
@@ -41,7 +42,7 @@ type WedgeInput struct {
 	// Wavelength is the free-space design wavelength (> 0).
 	Wavelength float64
 	// Taper is the impedance profile: Z0 at the feed, ZL at the far end.
-	Taper Taper
+	Taper line.Taper
 	// Stations is the number of width stations (≥ 2; 33 when zero).
 	Stations int
 }
@@ -139,7 +140,7 @@ func NewWedge(in WedgeInput) (*Wedge, error) {
 			return nil, fmt.Errorf("wedge: at %.2f mm from the feed the strip would sit %.3f mm above the reflector; raise the wire's start height", s, h)
 		}
 		target := in.Taper.Impedance(float64(i) / float64(n))
-		u, err := StripWidthRatio(target, in.Thickness/h)
+		u, err := line.StripWidthRatio(target, in.Thickness/h)
 		if err != nil {
 			return nil, fmt.Errorf("wedge: at %.2f mm from the feed: %w", s, err)
 		}
@@ -147,13 +148,13 @@ func NewWedge(in WedgeInput) (*Wedge, error) {
 		if st.Width < in.WireDiameter {
 			st.Width, st.Clamped = in.WireDiameter, true
 		}
-		st.Ohm = AirStripImpedance(st.Width, h, in.Thickness)
+		st.Ohm = line.AirStripImpedance(st.Width, h, in.Thickness)
 		prof[i] = st.Ohm
 		w.Stations = append(w.Stations, st)
 	}
 	w.FeedWidth = w.Stations[0].Width
 	w.EndWidth = w.Stations[n].Width
-	w.Reflection = cmplx.Abs(Reflection(in.Taper.Z0, in.Taper.ZL, prof, w.ElectricalLength))
+	w.Reflection = cmplx.Abs(line.Reflection(in.Taper.Z0, in.Taper.ZL, prof, w.ElectricalLength))
 	for _, st := range w.Stations {
 		if st.Clamped {
 			w.Warnings = append(w.Warnings, fmt.Sprintf("wedge widths from %.2f mm along are held at the wire diameter %.2f mm: the strip line there is higher in impedance than the taper asks", st.S, in.WireDiameter))

@@ -5,7 +5,7 @@
 // is the origin and the coil axis; angles run counter-clockwise from +x
 // seen from the coil side.
 
-package parts
+package flat
 
 import (
 	"fmt"
@@ -132,8 +132,8 @@ func DefaultFeedHole(k FeedKind) FeedHole {
 	}
 }
 
-// withDefaults fills zero fields from the kind's defaults.
-func (f FeedHole) withDefaults() FeedHole {
+// WithDefaults fills zero fields from the kind's defaults.
+func (f FeedHole) WithDefaults() FeedHole {
 	d := DefaultFeedHole(f.Kind)
 	if f.Diameter == 0 {
 		f.Diameter = d.Diameter
@@ -199,16 +199,16 @@ type Reflector struct {
 	Drawing geom.Drawing
 }
 
-// edgeClearance is the least web left between any hole and the plate's
+// EdgeClearanceMM is the least web left between any hole and the plate's
 // edge or another hole, in mm.
 // Common practice (no published source): about one sheet thickness or
 // 1 mm, whichever is more; 1 mm is used.
-const edgeClearance = 1.0
+const EdgeClearanceMM = 1.0
 
 // NewReflector validates in and draws the plate. It returns an error when a
 // hole falls outside the plate or two holes crowd each other.
 func NewReflector(in ReflectorInput) (*Reflector, error) {
-	in.Feed = in.Feed.withDefaults()
+	in.Feed = in.Feed.WithDefaults()
 	if !(in.Size > 0) {
 		return nil, fmt.Errorf("reflector: size %g mm must be positive", in.Size)
 	}
@@ -222,15 +222,15 @@ func NewReflector(in ReflectorInput) (*Reflector, error) {
 	// fits inside the plate.
 	inscribed := in.Size / 2
 	feed := polar(in.FeedRadius, in.FeedAngle)
-	if r := in.FeedRadius + in.Feed.extent(); r > inscribed-edgeClearance {
-		return nil, fmt.Errorf("reflector: the feed cut-out reaches %.2f mm from the centre, past the %.2f mm the plate allows; enlarge the plate", r, inscribed-edgeClearance)
+	if r := in.FeedRadius + in.Feed.extent(); r > inscribed-EdgeClearanceMM {
+		return nil, fmt.Errorf("reflector: the feed cut-out reaches %.2f mm from the centre, past the %.2f mm the plate allows; enlarge the plate", r, inscribed-EdgeClearanceMM)
 	}
 	if in.ScrewHole < 0 || in.RodFoot < 0 || in.RodFootFillet < 0 {
 		return nil, fmt.Errorf("reflector: screw hole %g mm, rod %g mm and fillet %g mm must not be negative", in.ScrewHole, in.RodFoot, in.RodFootFillet)
 	}
 	if in.ScrewHole > 0 {
-		if web := feed.Len() - in.Feed.extent() - in.ScrewHole/2; web < edgeClearance {
-			return nil, fmt.Errorf("reflector: the %.2f mm screw hole at the centre leaves %.2f mm of web to the feed cut-out; at least %g mm is needed", in.ScrewHole, web, edgeClearance)
+		if web := feed.Len() - in.Feed.extent() - in.ScrewHole/2; web < EdgeClearanceMM {
+			return nil, fmt.Errorf("reflector: the %.2f mm screw hole at the centre leaves %.2f mm of web to the feed cut-out; at least %g mm is needed", in.ScrewHole, web, EdgeClearanceMM)
 		}
 	}
 	m := in.Mounting
@@ -241,18 +241,18 @@ func NewReflector(in ReflectorInput) (*Reflector, error) {
 		if !(m.Diameter > 0) || !(m.PitchDiameter > 0) {
 			return nil, fmt.Errorf("reflector: mounting holes need a positive diameter and pitch diameter")
 		}
-		if m.PitchDiameter/2+m.Diameter/2 > inscribed-edgeClearance {
+		if m.PitchDiameter/2+m.Diameter/2 > inscribed-EdgeClearanceMM {
 			return nil, fmt.Errorf("reflector: mounting holes on Ø %.2f mm reach past the plate's edge", m.PitchDiameter)
 		}
 		if m.Count > 1 {
 			gap := m.PitchDiameter*math.Sin(math.Pi/float64(m.Count)) - m.Diameter
-			if gap < edgeClearance {
+			if gap < EdgeClearanceMM {
 				return nil, fmt.Errorf("reflector: %d mounting holes of Ø %.2f mm overlap on Ø %.2f mm", m.Count, m.Diameter, m.PitchDiameter)
 			}
 		}
 		for i := range m.Count {
 			c := polar(m.PitchDiameter/2, m.Angle+2*math.Pi*float64(i)/float64(m.Count))
-			if c.Sub(feed).Len() < m.Diameter/2+in.Feed.extent()+edgeClearance {
+			if c.Sub(feed).Len() < m.Diameter/2+in.Feed.extent()+EdgeClearanceMM {
 				return nil, fmt.Errorf("reflector: mounting hole %d at %.1f° crowds the feed; turn the pattern (mounting angle) or change its diameter", i+1, (m.Angle+2*math.Pi*float64(i)/float64(m.Count))*180/math.Pi)
 			}
 		}
@@ -311,7 +311,7 @@ func (r *Reflector) draw() {
 		geom.Line{A: geom.Vec2{X: -cross}, B: geom.Vec2{X: cross}},
 		geom.Line{A: geom.Vec2{Y: -cross}, B: geom.Vec2{Y: cross}})
 	tickIn := in.FeedRadius + in.Feed.extent() + 1
-	tickOut := math.Min(tickIn+2*cross, in.Size/2-edgeClearance)
+	tickOut := math.Min(tickIn+2*cross, in.Size/2-EdgeClearanceMM)
 	if tickOut > tickIn {
 		d.Add(LayerMark, geom.Line{A: polar(tickIn, in.FeedAngle), B: polar(tickOut, in.FeedAngle)})
 	}

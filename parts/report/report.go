@@ -1,6 +1,10 @@
-package parts
+package report
 
-import "math"
+import (
+	"math"
+
+	"coilwright/parts"
+)
 
 // Report is the design summary written to design.json and design.md. Field
 // names carry their units; it is a plain value derived from a Design.
@@ -30,16 +34,16 @@ type Report struct {
 	EIRP                    *EIRPReport      `json:"eirp,omitempty"`
 	Reflector               *ReflectorReport `json:"reflector,omitempty"`
 	Wedge                   *WedgeReport     `json:"wedge,omitempty"`
-	Warnings                []Warning        `json:"warnings"`
+	Warnings                []parts.Warning  `json:"warnings"`
 	// QuotedGainDBic is the gain the report leads with (the field
 	// solution's realised gain in dBic when it ran, else the textbook
 	// estimate) and QuotedGainSource says which.
-	QuotedGainDBic   float64        `json:"quoted_gain_dbic"`
-	QuotedGainSource string         `json:"quoted_gain_source"`
-	Field            *FieldSolution `json:"field,omitempty"`
+	QuotedGainDBic   float64              `json:"quoted_gain_dbic"`
+	QuotedGainSource string               `json:"quoted_gain_source"`
+	Field            *parts.FieldSolution `json:"field,omitempty"`
 	// Tolerance is the batch tolerance analysis; nil when it did not run.
-	Tolerance   *ToleranceReport `json:"tolerance,omitempty"`
-	StripSearch *StripSearch     `json:"strip_search,omitempty"`
+	Tolerance   *ToleranceReport   `json:"tolerance,omitempty"`
+	StripSearch *parts.StripSearch `json:"strip_search,omitempty"`
 }
 
 // TurnReport is one row of the per-turn table in the report.
@@ -62,16 +66,16 @@ type TurnReport struct {
 // Estimates is the report's electrical summary: the headline figures a
 // script reads, and every formula with its source and validity.
 type Estimates struct {
-	InputResistanceOhm float64    `json:"input_resistance_ohm"`
-	HPBWDeg            float64    `json:"hpbw_deg"`
-	FNBWDeg            float64    `json:"fnbw_deg"`
-	GainDBic           float64    `json:"gain_dbic"`
-	GainFormula        string     `json:"gain_formula"`
-	Directivity15DBic  float64    `json:"directivity_15_dbic"`
-	Directivity12DBic  float64    `json:"directivity_12_dbic"`
-	AxialRatio         float64    `json:"axial_ratio"`
-	AxialRatioDB       float64    `json:"axial_ratio_db"`
-	Formulas           []Estimate `json:"formulas"`
+	InputResistanceOhm float64          `json:"input_resistance_ohm"`
+	HPBWDeg            float64          `json:"hpbw_deg"`
+	FNBWDeg            float64          `json:"fnbw_deg"`
+	GainDBic           float64          `json:"gain_dbic"`
+	GainFormula        string           `json:"gain_formula"`
+	Directivity15DBic  float64          `json:"directivity_15_dbic"`
+	Directivity12DBic  float64          `json:"directivity_12_dbic"`
+	AxialRatio         float64          `json:"axial_ratio"`
+	AxialRatioDB       float64          `json:"axial_ratio_db"`
+	Formulas           []parts.Estimate `json:"formulas"`
 }
 
 // EIRPReport is the radiated-power figure with its inputs and caution.
@@ -84,11 +88,11 @@ type EIRPReport struct {
 	Caution      string  `json:"caution"`
 }
 
-// EIRPCaution is the regulatory caution printed with every EIRP figure.
-const EIRPCaution = "EIRP limits depend on the band, the country and your licence. Check the rules that apply where you transmit, stay within them, and keep people out of the main beam while transmitting."
+// eirpCaution is the regulatory caution printed with every EIRP figure.
+const eirpCaution = "EIRP limits depend on the band, the country and your licence. Check the rules that apply where you transmit, stay within them, and keep people out of the main beam while transmitting."
 
-// Report returns the design summary for design.json and design.md.
-func (d *Design) Report() Report {
+// New returns the design summary of d for design.json and design.md.
+func New(d *parts.Design) Report {
 	s := d.Spec
 	e := d.Estimates
 	r := Report{
@@ -115,12 +119,12 @@ func (d *Design) Report() Report {
 			AxialRatioDB:       20 * math.Log10(e.AxialRatio.Value),
 			Formulas:           e.All(),
 		},
-		Wire:     d.wireReport(),
-		Former:   d.formerReport(),
+		Wire:     wireReport(d),
+		Former:   formerReport(d),
 		Warnings: d.Warnings,
 	}
 	if r.Warnings == nil {
-		r.Warnings = []Warning{}
+		r.Warnings = []parts.Warning{}
 	}
 	for _, t := range d.Turns {
 		r.Turns = append(r.Turns, TurnReport{
@@ -131,10 +135,10 @@ func (d *Design) Report() Report {
 			SpringbackMM: t.SpringbackMM, ToleranceMM: t.ToleranceMM,
 		})
 	}
-	d.patternReports(&r)
+	patternReports(d, &r)
 	if d.EIRP != nil {
 		f := d.EIRP
-		r.EIRP = &EIRPReport{TxPowerDBm: f.TxPowerDBm, FeederLossDB: f.FeederLossDB, GainDBic: f.GainDBic, EIRPDBm: f.EIRPDBm, EIRPmW: f.EIRPmW, Caution: EIRPCaution}
+		r.EIRP = &EIRPReport{TxPowerDBm: f.TxPowerDBm, FeederLossDB: f.FeederLossDB, GainDBic: f.GainDBic, EIRPDBm: f.EIRPDBm, EIRPmW: f.EIRPmW, Caution: eirpCaution}
 	}
 	r.QuotedGainDBic, r.QuotedGainSource = d.QuotedGain()
 	r.Field = d.Field

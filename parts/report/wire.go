@@ -1,6 +1,10 @@
-package parts
+package report
 
-import "math"
+import (
+	"math"
+
+	"coilwright/parts"
+)
 
 // WireReport is the wire and springback section of the design report.
 type WireReport struct {
@@ -33,7 +37,7 @@ type FormerReport struct {
 }
 
 // wireReport fills the report's wire section.
-func (d *Design) wireReport() WireReport {
+func wireReport(d *parts.Design) WireReport {
 	w, m := d.Wire, d.Wire.Material
 	r := WireReport{
 		Material: m.ID, MaterialName: m.Name, DiameterMM: w.Diameter,
@@ -53,10 +57,10 @@ func (d *Design) wireReport() WireReport {
 }
 
 // formerReport fills the report's former section.
-func (d *Design) formerReport() FormerReport {
+func formerReport(d *parts.Design) FormerReport {
 	f := d.Former
 	mode := "constant_spacing"
-	if f.Mode == ConstantAngle {
+	if f.Mode == parts.ConstantAngle {
 		mode = "constant_angle"
 	}
 	return FormerReport{

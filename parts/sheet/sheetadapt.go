@@ -4,11 +4,14 @@
 // (solid or braided outer), the support rod's real gap and the cutting
 // method's cautions.
 
-package parts
+package sheet
 
 import (
 	"fmt"
+	"strings"
 
+	"coilwright/parts"
+	"coilwright/parts/cutlist"
 	"coilwright/parts/spec"
 )
 
@@ -27,7 +30,7 @@ type sheetChoice struct {
 	method    string
 }
 
-func choiceOf(d *Design, cl *CutList) sheetChoice {
+func choiceOf(d *parts.Design, cl *cutlist.CutList) sheetChoice {
 	s := d.Spec
 	c := sheetChoice{cable: cl.Coax.Cable, method: s.Cutting.Method}
 	c.plate, _ = spec.SheetMaterialByID(s.Reflector.Material)
@@ -72,7 +75,7 @@ func (c sheetChoice) clampJoint() string {
 // feedSteps returns the paragraphs of the feed step: strip and solder a
 // pigtail, or mount a panel jack. clearance is appended to the joint's
 // paragraph.
-func (c sheetChoice) feedSteps(cx CoaxCut, clearance string) []string {
+func (c sheetChoice) feedSteps(cx cutlist.CoaxCut, clearance string) []string {
 	if !c.pigtail() {
 		mount := fmt.Sprintf("Fit the %s in the feed cut-out from behind, its mating face under the plate and its rear contact up through the hole.", c.connector.Name)
 		switch c.connector.Mount {
@@ -113,9 +116,9 @@ func (c sheetChoice) feedSteps(cx CoaxCut, clearance string) []string {
 
 // supportText is the epoxy step's paragraph on how the turns meet the
 // rod, worded from the real radial gap.
-func supportText(dw DowelCut) string {
+func supportText(dw parts.DowelCut) string {
 	if dw.OverFeed {
-		return "This kit has no support rod: the feed hole leaves no room for a rod's foot at the reflector's centre. " + outsideSupport
+		return "This kit has no support rod: the feed hole leaves no room for a rod's foot at the reflector's centre. " + parts.OutsideSupport
 	}
 	gap := (dw.InnerTurnMM - dw.DiameterMM) / 2
 	if gap <= epoxyBridgeMM {
@@ -123,10 +126,6 @@ func supportText(dw DowelCut) string {
 	}
 	return fmt.Sprintf("The turns stand %s off the Ø%s mm rod all round: too far for an epoxy bead to bridge. Cut two spacers per turn from offcut rod or PTFE, %s long, and epoxy each between the rod and the wire, on opposite sides, without moving the turns. Let it cure as the maker says.", mm(gap), num(dw.DiameterMM), mm(gap))
 }
-
-// outsideSupport says how a coil without a support rod is held. Common
-// practice (no published source).
-const outsideSupport = "Hold the coil upright from outside, clear of the feed: low-loss spacers (offcuts of PTFE or glass-fibre) standing on the reflector against the outside of the turns, each turn fixed to them with a small bead of epoxy, or a sleeve of closed-cell foam round the coil. They are not in the cut list: cut them from what is to hand. Let the epoxy cure as the maker says."
 
 // epoxyBridgeMM is the widest gap a bead of thickened epoxy bridges
 // without sagging. Common practice (no published source).
@@ -154,4 +153,32 @@ func (c sheetChoice) laserMetalHazard() (Hazard, bool) {
 		text = "This kit is set for laser cutting: cut " + what + " on a fibre laser only. Copper, brass and aluminium reflect a hobby CO2 laser's beam, which does not cut them and can reflect back into the laser."
 	}
 	return Hazard{HazardLaserMetal, "Laser-cutting metal needs a fibre laser", text}, true
+}
+
+// rodMountSteps returns the build sheet's words for the rod's mount: the
+// hole drilled in the reflector (with its leading space, or empty) and the
+// step that fixes the rod.
+func rodMountSteps(cl *cutlist.CutList) (hole, fix string) {
+	dc := cl.Dowel
+	if dc.OverFeed {
+		return "", ""
+	}
+	mt := dc.Rod.Mount
+	plug := ""
+	if mt.PlugMM > 0 {
+		plug = fmt.Sprintf("Epoxy %s of Ø%s mm solid rod into the tube's foot, flush with its end, and let it cure. ", mm(mt.PlugMM), num(dc.BoreMM))
+	}
+	if mt.Screw == "" {
+		return "", fmt.Sprintf("%sLower the %s (about %.0f g) through the open top of the coil and epoxy its foot to the reflector's centre, in the inner circle marked there, with a fillet all round that stays inside the outer circle, clear of the feed hole.", plug, parts.SectionWords(dc), dc.Rod.MassG)
+	}
+	item := mt.Screw + " screw"
+	for _, h := range cl.Hardware {
+		if strings.HasPrefix(h.Item, mt.Screw) {
+			item = h.Item
+		}
+	}
+	hole = fmt.Sprintf(" The %s mm hole at the centre is for the rod's %s screw.", num(mt.ClearMM), mt.Screw)
+	fix = fmt.Sprintf("%sDrill a %s mm pilot hole 8 mm deep in the centre of the %s's foot. Lower the %s (about %.0f g) through the open top of the coil onto the reflector's centre hole and fix it from behind with the %s.",
+		plug, num(mt.PilotMM), map[bool]string{true: "tube", false: "rod"}[dc.BoreMM > 0], parts.SectionWords(dc), dc.Rod.MassG, item)
+	return hole, fix
 }

@@ -17,13 +17,15 @@
 // and the centre conductor runs on up to the wire's centre height, where
 // it is soldered beside the feed lead.
 
-package parts
+package cutlist
 
 import (
 	"fmt"
 	"math"
 	"slices"
 
+	"coilwright/parts"
+	"coilwright/parts/flat"
 	"coilwright/parts/spec"
 )
 
@@ -45,8 +47,6 @@ const (
 	// BraidFlareMM is the braid fanned out flat round the hole on the
 	// reflector's back face (braided cable only).
 	BraidFlareMM = 4.0
-	// DowelOverhangMM is how far the rod stands above the top turn.
-	DowelOverhangMM = 5.0
 	// SleeveLengthMM is the heat-shrink sleeve over the cable where it
 	// leaves the reflector's back face.
 	SleeveLengthMM = 25.0
@@ -57,15 +57,6 @@ const (
 // rounding of the figures the cut list prints.
 const leadChannelSlackMM = 0.05
 
-// dowelDiametersMM are the support-rod diameters commonly stocked in
-// PTFE, nylon, glass-fibre and wood, in mm, ascending. Common practice (no
-// published source).
-var dowelDiametersMM = []float64{3, 4, 5, 6, 8, 10, 12, 15, 16, 20, 25, 30, 35, 40, 50, 60, 80, 100}
-
-// DowelDiametersMM returns the support-rod diameters commonly stocked, in
-// mm, smallest first, as a fresh slice.
-func DowelDiametersMM() []float64 { return slices.Clone(dowelDiametersMM) }
-
 // sleeveDiametersMM are the supplied diameters of 2:1 heat-shrink sleeving
 // (1/16 to 1 in), in mm, ascending. Common practice (no published source).
 var sleeveDiametersMM = []float64{1.6, 2.4, 3.2, 4.8, 6.4, 9.5, 12.7, 19.1, 25.4}
@@ -74,13 +65,13 @@ var sleeveDiametersMM = []float64{1.6, 2.4, 3.2, 4.8, 6.4, 9.5, 12.7, 19.1, 25.4
 // It is a plain value built by NewCutList.
 type CutList struct {
 	Wire     WireBlank
-	Dowel    DowelCut
+	Dowel    parts.DowelCut
 	Coax     CoaxCut
 	Sleeve   SleeveCut
 	Solder   Consumable
 	Epoxy    Consumable
 	Hardware []HardwareItem
-	Warnings []Warning
+	Warnings []parts.Warning
 	Quantity int // kits in the batch
 }
 
@@ -101,29 +92,6 @@ type WireBlank struct {
 	// feed lead's channel, so the lock end, bent at mark A, is the feed
 	// lead as built and is not cut down.
 	CentreFed bool
-}
-
-// DowelCut is the support rod for one coil.
-type DowelCut struct {
-	Material    string
-	DiameterMM  float64
-	LengthMM    float64
-	ClearanceMM float64 // radial gap asked for
-	InnerTurnMM float64 // inside diameter of the smallest relaxed turn
-	Automatic   bool    // diameter chosen by ChooseSupportRod
-	BoreMM      float64 // bore of a tube, 0 for a solid rod
-	Rod         SupportRod
-	// OverFeed is set when no stock rod's foot clears the feed at the
-	// plate's centre (a small coil with a large feed hole): the kit has no
-	// support rod. The cut list, batch plan, plate, side view and steps
-	// leave it out and the coil is held from outside; the rod's sizes
-	// above are those a rod for the coil alone would have, for reference.
-	OverFeed       bool
-	SlotWidthMM    float64 // slot across the foot for a centre feed's lead, else 0
-	SlotDepthMM    float64
-	Foot           *RodFoot // the bored foot over a centre feed; nil for a plain foot
-	AbsorbsWater   bool     // wood: takes up water and detunes the coil
-	MaterialAdvice string   // a sentence on the material choice
 }
 
 // CoaxCut is the feed cable for one kit: the length to cut and the strip
@@ -181,12 +149,12 @@ func (cl *CutList) FitLockTail(holeMM float64) {
 	if w.CentreFed {
 		w.LockTailMM = w.FeedLeadMM
 		if holeMM < w.FeedLeadMM-leadChannelSlackMM {
-			cl.Warnings = append(cl.Warnings, Warning{Code: "lock-hole-short",
+			cl.Warnings = append(cl.Warnings, parts.Warning{Code: "lock-hole-short",
 				Message: fmt.Sprintf("the former's lead channel is %.1f mm deep but the feed lead runs %.1f mm in to the axis: the channel does not set the lead's length; cut the lock end to %.1f mm after release", holeMM, w.FeedLeadMM, w.FeedLeadMM)})
 		}
 	} else if w.FeedLeadMM > holeMM {
 		w.LockTailMM = w.FeedLeadMM
-		cl.Warnings = append(cl.Warnings, Warning{Code: "lock-hole-short",
+		cl.Warnings = append(cl.Warnings, parts.Warning{Code: "lock-hole-short",
 			Message: fmt.Sprintf("the former's lock hole is %.1f mm deep but the feed lead is cut %.1f mm from the lock end: deepen former.lock_hole_depth_mm or use a thinner drive", holeMM, w.FeedLeadMM)})
 	}
 	w.TrimMM = TrimPerEndMM
@@ -196,7 +164,7 @@ func (cl *CutList) FitLockTail(holeMM float64) {
 }
 
 // NewCutList works out the cut list of one kit from a design.
-func NewCutList(d *Design) (*CutList, error) {
+func NewCutList(d *parts.Design) (*CutList, error) {
 	s := d.Spec
 	if s == nil {
 		return nil, fmt.Errorf("design without a spec")
@@ -220,7 +188,7 @@ func NewCutList(d *Design) (*CutList, error) {
 	if d.Patterns != nil {
 		cx.FeedHoleMM = d.Patterns.Reflector.Input.Feed.Diameter
 	}
-	if j := s.Reflector.Connector; FeedKindByConnector(j) != FeedCoax {
+	if j := s.Reflector.Connector; flat.FeedKindByConnector(j) != flat.FeedCoax {
 		cx = CoaxCut{Spec: s.Coax.Type, Cable: cable, FinishedMM: s.Coax.LengthMM, CutMM: s.Coax.LengthMM, ThroughMM: thick, CentreMM: drop + FeedStandoffMM, FeedHoleMM: cx.FeedHoleMM, Jack: j}
 	}
 	cl.Coax = cx
@@ -242,7 +210,7 @@ func NewCutList(d *Design) (*CutList, error) {
 		cl.FitLockTail(w.FeedLeadMM)
 	}
 
-	dw, err := dowelCut(d)
+	dw, err := parts.NewDowelCut(d)
 	if err != nil {
 		return nil, err
 	}
@@ -257,11 +225,11 @@ func NewCutList(d *Design) (*CutList, error) {
 	cl.Epoxy = epoxyEstimate(d, dw)
 	cl.Hardware = hardware(d, cl)
 	if drop < 2*wd && !d.CentreFed() {
-		cl.Warnings = append(cl.Warnings, Warning{Code: "short-feed-lead",
+		cl.Warnings = append(cl.Warnings, parts.Warning{Code: "short-feed-lead",
 			Message: fmt.Sprintf("the wire centre is only %.1f mm above the %s: too little to bend a lead down; solder the %s to the side of the wire's start", drop, feedStub(cx).stub, feedStub(cx).pin)})
 	}
 	if dw.AbsorbsWater && !dw.OverFeed {
-		cl.Warnings = append(cl.Warnings, Warning{Code: "wood-dowel", Message: dw.MaterialAdvice})
+		cl.Warnings = append(cl.Warnings, parts.Warning{Code: "wood-dowel", Message: dw.MaterialAdvice})
 	}
 	if !dw.OverFeed {
 		cl.Warnings = append(cl.Warnings, rodWarnings(d, dw)...)
@@ -269,59 +237,13 @@ func NewCutList(d *Design) (*CutList, error) {
 	return cl, nil
 }
 
-// smallestTurnRadius returns the smallest centreline radius of the coil:
-// the radius is monotonic in azimuth, so it is at one of the two ends.
-func smallestTurnRadius(c Coil) float64 { return math.Min(c.StartRadius, c.EndRadius) }
-
-func dowelCut(d *Design) (DowelCut, error) {
-	s := d.Spec
-	wd := s.Wire.DiameterMM
-	inner := 2*smallestTurnRadius(d.Coil) - wd
-	dc := DowelCut{Material: s.Dowel.Material, ClearanceMM: s.Dowel.ClearanceMM, InnerTurnMM: inner}
-	dc.LengthMM = d.Coil.Z0 + d.AxialLength + wd/2 + DowelOverhangMM
-	given := 0.0
-	if s.Dowel.DiameterMM != nil {
-		given = *s.Dowel.DiameterMM // checkFit checked that it fits
-	}
-	// The rod's foot, with the least fillet, must also clear the feed and
-	// mounting holes, and its screw's washer the parts on the back.
-	plate := specPlateFeatures(s, d.Coil)
-	room := inner - 2*dc.ClearanceMM
-	if pr := rodPlateRoomMM(plate); pr >= dowelDiametersMM[0]-1e-9 || given > 0 {
-		room = math.Min(room, pr)
-	} else {
-		dc.OverFeed = true
-	}
-	rod, err := ChooseSupportRod(s.Dowel.Material, room, dc.LengthMM, 2*smallestTurnRadius(d.Coil), given)
-	if err != nil {
-		return DowelCut{}, err
-	}
-	if w := 2 * roomAbout(plate, FaceThrough, FaceBack); washerODMM(rod.Mount.Screw) > w {
-		rod.Mount = mountFor(rod, w)
-	}
-	dc.Rod, dc.DiameterMM, dc.BoreMM, dc.Automatic = rod, rod.OuterMM, rod.BoreMM, given == 0
-	if err := fitCentreFeedRod(d, &dc, inner-2*dc.ClearanceMM); err != nil {
-		return DowelCut{}, err
-	}
-	switch s.Dowel.Material {
-	case "wood":
-		dc.AbsorbsWater = true
-		dc.MaterialAdvice = "wood takes up water, which raises its permittivity and loss and detunes the coil; use PTFE, nylon or glass-fibre rod, or seal the wood well"
-	case "nylon":
-		dc.MaterialAdvice = "nylon takes up a little water; PTFE or glass-fibre rod is steadier outdoors"
-	default:
-		dc.MaterialAdvice = "a low-loss rod that takes up little water"
-	}
-	return dc, nil
-}
-
 // rodWarnings returns the warnings the support rod raises: dielectric
 // loading above RodShiftWarnFraction, a default rod more slender than
 // MaxRodSlenderness, and a rod too heavy for any mount sized here.
-func rodWarnings(d *Design, dc DowelCut) []Warning {
-	var w []Warning
+func rodWarnings(d *parts.Design, dc parts.DowelCut) []parts.Warning {
+	var w []parts.Warning
 	r := dc.Rod
-	if l := r.Loading; l.ShiftFraction > RodShiftWarnFraction {
+	if l := r.Loading; l.ShiftFraction > parts.RodShiftWarnFraction {
 		fix := "give a thinner dowel.diameter_mm, or hold the coil with thin low-loss spacers outside the winding"
 		if dc.Automatic {
 			fix = "this is the thinnest stocked section that carries the coil: hold the coil with thin low-loss spacers outside the winding instead, or check where the best match falls with a sweep"
@@ -329,25 +251,16 @@ func rodWarnings(d *Design, dc DowelCut) []Warning {
 		if d.Spec.Dowel.Material != "ptfe" {
 			fix = "PTFE has the lowest permittivity of the rod materials; or " + fix
 		}
-		w = append(w, Warning{Code: "rod-loading", Message: fmt.Sprintf("the %s fills %.1f %% of the area inside the smallest turn (εr %.1f): a first-order estimate lowers the frequency by about %.1f %% (%.0f MHz); %s",
-			sectionWords(dc), 100*l.FillRatio, l.Permittivity, 100*l.ShiftFraction, l.ShiftFraction*d.Spec.FrequencyMHz, fix)})
+		w = append(w, parts.Warning{Code: "rod-loading", Message: fmt.Sprintf("the %s fills %.1f %% of the area inside the smallest turn (εr %.1f): a first-order estimate lowers the frequency by about %.1f %% (%.0f MHz); %s",
+			parts.SectionWords(dc), 100*l.FillRatio, l.Permittivity, 100*l.ShiftFraction, l.ShiftFraction*d.Spec.FrequencyMHz, fix)})
 	}
 	if r.Slender {
-		w = append(w, Warning{Code: "rod-slender", Message: fmt.Sprintf("a rod %s long needs about Ø%.0f mm to stay straight (%g diameters long at most), but only Ø%s mm passes inside the smallest turn: support the coil from outside as well", mm(r.LengthMM), r.MinOuterMM, MaxRodSlenderness, num(r.OuterMM))})
+		w = append(w, parts.Warning{Code: "rod-slender", Message: fmt.Sprintf("a rod %s long needs about Ø%.0f mm to stay straight (%g diameters long at most), but only Ø%s mm passes inside the smallest turn: support the coil from outside as well", mm(r.LengthMM), r.MinOuterMM, parts.MaxRodSlenderness, num(r.OuterMM))})
 	}
 	if r.Mount.Overloaded {
-		w = append(w, Warning{Code: "rod-heavy", Message: fmt.Sprintf("the support rod weighs about %.0f g: %s; use a tube or a thinner rod, or mount it in a collar bolted to the reflector", r.MassG, r.Mount.Basis)})
+		w = append(w, parts.Warning{Code: "rod-heavy", Message: fmt.Sprintf("the support rod weighs about %.0f g: %s; use a tube or a thinner rod, or mount it in a collar bolted to the reflector", r.MassG, r.Mount.Basis)})
 	}
 	return w
-}
-
-// sectionWords names the support section: "Ø8 mm ptfe rod" or "Ø8/6 mm
-// ptfe tube".
-func sectionWords(dc DowelCut) string {
-	if dc.BoreMM > 0 {
-		return fmt.Sprintf("Ø%s/%s mm %s tube", num(dc.DiameterMM), num(dc.BoreMM), dc.Material)
-	}
-	return fmt.Sprintf("Ø%s mm %s rod", num(dc.DiameterMM), dc.Material)
 }
 
 // sleeveFor picks the smallest 2:1 sleeve whose supplied bore is at least
@@ -370,7 +283,7 @@ func sleeveFor(outer float64) (SleeveCut, error) {
 // wire diameter along both sides of the first quarter turn on the
 // matching strip, a half-section lap at the centre-conductor joint, and a
 // 1 mm leg round the outer conductor at the reflector.
-func solderEstimate(d *Design, cx CoaxCut, solderWire float64) Consumable {
+func solderEstimate(d *parts.Design, cx CoaxCut, solderWire float64) Consumable {
 	wd := d.Spec.Wire.DiameterMM
 	strip := d.Coil.LengthBetween(0, math.Pi/2)
 	leg := wd / 4
@@ -390,7 +303,7 @@ func solderEstimate(d *Design, cx CoaxCut, solderWire float64) Consumable {
 //
 // A kit without a rod (OverFeed) has the beads only, from the outside
 // supports to the wire, each two wire diameters long.
-func epoxyEstimate(d *Design, dw DowelCut) Consumable {
+func epoxyEstimate(d *parts.Design, dw parts.DowelCut) Consumable {
 	wd := d.Spec.Wire.DiameterMM
 	beads := 2 * len(d.Turns)
 	if dw.OverFeed {
@@ -411,7 +324,7 @@ func epoxyEstimate(d *Design, dw DowelCut) Consumable {
 // practice (no published source; ISO 4762 and ISO 7045 list these lengths).
 var screwLengthsMM = []float64{6, 8, 10, 12, 16, 20, 25, 30}
 
-func hardware(d *Design, cl *CutList) []HardwareItem {
+func hardware(d *parts.Design, cl *CutList) []HardwareItem {
 	s := d.Spec
 	var hw []HardwareItem
 	cable := cl.Coax.Cable
@@ -463,7 +376,7 @@ func (cl *CutList) Rows() []CutRow {
 		{Item: "wire blank", Material: w.Material, Size: fmt.Sprintf("Ø%s mm", num(w.DiameterMM)), Count: 1, LengthMM: w.LengthMM,
 			Note: blankNote(w)},
 		{Item: "support rod", Material: dw.Material, Size: rodSize(dw), Count: 1, LengthMM: dw.LengthMM,
-			Note: rodNote(dw)},
+			Note: parts.RodNote(dw)},
 		{Item: "feed cable", Material: cx.Cable.Name, Size: fmt.Sprintf("Ø%s mm", num(cx.Cable.Outer)), Count: 1, LengthMM: cx.CutMM,
 			Note: coaxNote(cx)},
 		{Item: "solder", Material: "solder wire", Size: "", Amount: cl.Solder.Amount, Unit: cl.Solder.Unit, Note: cl.Solder.Basis},
@@ -514,4 +427,13 @@ func feedStub(cx CoaxCut) struct{ stub, pin string } {
 		return struct{ stub, pin string }{"connector's insulator", "connector's rear contact"}
 	}
 	return struct{ stub, pin string }{"dielectric stub", "centre conductor"}
+}
+
+// rodSize is the cut list's size column for the support: "Ø8 mm" or
+// "Ø8/6 mm tube".
+func rodSize(dc parts.DowelCut) string {
+	if dc.BoreMM > 0 {
+		return fmt.Sprintf("Ø%s/%s mm tube", num(dc.DiameterMM), num(dc.BoreMM))
+	}
+	return fmt.Sprintf("Ø%s mm", num(dc.DiameterMM))
 }

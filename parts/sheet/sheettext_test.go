@@ -1,4 +1,4 @@
-package parts
+package sheet
 
 import (
 	"math"
@@ -7,6 +7,9 @@ import (
 	"testing"
 
 	"coilwright/cam/geom"
+	"coilwright/parts"
+	"coilwright/parts/cutlist"
+	"coilwright/parts/flat"
 )
 
 // xband is a one-turn 10 GHz coil (λ = 29.98 mm): every turn is under
@@ -28,12 +31,12 @@ diameter_mm = 1.0
 
 func TestTurnsText(t *testing.T) {
 	for n, want := range map[float64]string{1: "1 turn", 5: "5 turns", 1.5: "1.5 turns", 0.75: "0.75 turns"} {
-		if got := TurnsText(n); got != want {
+		if got := parts.TurnsText(n); got != want {
 			t.Errorf("TurnsText(%g) = %q, want %q", n, got, want)
 		}
 	}
 	d := mustDesign(t, xband)
-	cl, err := NewCutList(d)
+	cl, err := cutlist.NewCutList(d)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -66,19 +69,8 @@ func sheetText(b *BuildSheet) string {
 }
 
 func TestReflectorLabelHandOnce(t *testing.T) {
-	for _, c := range []struct{ kit, hand, want string }{
-		{"Test 10G LHCP", "LHCP", "Test 10G LHCP"},
-		{"Club (RHCP)", "RHCP", "Club (RHCP)"},
-		{"Club 5G8", "RHCP", "Club 5G8 RHCP"},
-		{"RHCPish", "RHCP", "RHCPish RHCP"},
-		{"", "LHCP", "LHCP"},
-	} {
-		if got := joinLabel(c.kit, c.hand); got != c.want {
-			t.Errorf("joinLabel(%q, %q) = %q, want %q", c.kit, c.hand, got, c.want)
-		}
-	}
 	d := mustDesign(t, xband)
-	l, _ := d.Patterns.Reflector.Drawing.Layer(LayerMark)
+	l, _ := d.Patterns.Reflector.Drawing.Layer(flat.LayerMark)
 	found := false
 	for _, e := range l.Entities {
 		if tx, ok := e.(geom.Text); ok && strings.Contains(tx.Value, "Test 10G") {
@@ -96,9 +88,9 @@ func TestReflectorLabelHandOnce(t *testing.T) {
 func TestStripShapeText(t *testing.T) {
 	// A strip that widens between its ends: 1.90 mm at the feed, 4.29 mm
 	// mid-length, 2.00 mm at the far end.
-	w := &Wedge{FeedWidth: 1.9, EndWidth: 2.0, Length: 14, Stations: []WedgeStation{
+	w := &flat.Wedge{FeedWidth: 1.9, EndWidth: 2.0, Length: 14, Stations: []flat.WedgeStation{
 		{S: 0, Width: 1.9}, {S: 7, Width: 4.29}, {S: 14, Width: 2.0}}}
-	got := StripShapeText(w)
+	got := stripShapeText(w)
 	for _, want := range []string{"1.90 mm wide at the feed end", "2.00 mm at the far end", "widest (4.29 mm) 7.0 mm from the feed end"} {
 		if !strings.Contains(got, want) {
 			t.Errorf("%q lacks %q", got, want)
@@ -108,8 +100,8 @@ func TestStripShapeText(t *testing.T) {
 		t.Errorf("%q says the strip narrows", got)
 	}
 	// A plain taper gets no middle figure.
-	w = &Wedge{FeedWidth: 3, EndWidth: 2, Stations: []WedgeStation{{S: 0, Width: 3}, {S: 5, Width: 2.5}, {S: 10, Width: 2}}}
-	if got := StripShapeText(w); strings.Contains(got, "widest") || strings.Contains(got, "narrowest") {
+	w = &flat.Wedge{FeedWidth: 3, EndWidth: 2, Stations: []flat.WedgeStation{{S: 0, Width: 3}, {S: 5, Width: 2.5}, {S: 10, Width: 2}}}
+	if got := stripShapeText(w); strings.Contains(got, "widest") || strings.Contains(got, "narrowest") {
 		t.Errorf("a monotone taper is described as %q", got)
 	}
 }
@@ -117,12 +109,12 @@ func TestStripShapeText(t *testing.T) {
 func TestInspectionNoteNamesTheGoverningTolerance(t *testing.T) {
 	// 10 GHz: 1 % of a 9.5 mm turn is 0.095 mm, under the 0.2 mm floor.
 	d := mustDesign(t, xband)
-	note := InspectionNoteText(d)
+	note := inspectionNoteText(d)
 	if !strings.Contains(note, "±0.2 mm on every turn") || !strings.Contains(note, "floor governs") {
 		t.Errorf("10 GHz note does not say the floor governs: %q", note)
 	}
 	for _, row := range d.InspectionTable() {
-		if row.ToleranceMM != InspectionFloorMM {
+		if row.ToleranceMM != parts.InspectionFloorMM {
 			t.Errorf("turn %d tolerance %.3f, want the floor", row.Turn, row.ToleranceMM)
 		}
 	}
@@ -130,7 +122,7 @@ func TestInspectionNoteNamesTheGoverningTolerance(t *testing.T) {
 	// 2.2 mm, so the per cent governs every turn.
 	big := strings.Replace(strings.Replace(xband, "10000.0", "435.0", 1), "diameter_mm = 1.0", "diameter_mm = 4.0", 1)
 	big = strings.Replace(big, "turns = 1.0", "turns = 3.0", 1)
-	note = InspectionNoteText(mustDesign(t, big))
+	note = inspectionNoteText(mustDesign(t, big))
 	if !strings.Contains(note, "±1 % of each turn's diameter") || strings.Contains(note, "governs") {
 		t.Errorf("435 MHz note: %q", note)
 	}
@@ -138,7 +130,7 @@ func TestInspectionNoteNamesTheGoverningTolerance(t *testing.T) {
 
 func TestCoilHeightsDefined(t *testing.T) {
 	d := mustDesign(t, xband)
-	h := d.Heights()
+	h := Heights(d)
 	const tol = 1e-9
 	if math.Abs(h.TopCentre-h.Axial-d.Coil.Z0) > tol || math.Abs(h.Overall-h.TopCentre-d.Spec.Wire.DiameterMM/2) > tol {
 		t.Errorf("heights %+v do not step by the first turn height %.3f and half the wire %.3f", h, d.Coil.Z0, d.Spec.Wire.DiameterMM/2)
@@ -154,8 +146,8 @@ func TestCoilHeightsDefined(t *testing.T) {
 			t.Errorf("%q lacks %s", text, mm(v))
 		}
 	}
-	cl, _ := NewCutList(d)
-	for _, dim := range d.SideView(cl).Dimensions {
+	cl, _ := cutlist.NewCutList(d)
+	for _, dim := range NewSideView(d, cl).Dimensions {
 		if strings.Contains(dim.Text, "top") && !strings.Contains(dim.Text, "wire centre") && !strings.Contains(dim.Text, "Ø") {
 			t.Errorf("side-view height %q does not say what it measures to", dim.Text)
 		}
