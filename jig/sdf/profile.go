@@ -89,8 +89,8 @@ func NewPolygon(pts geom.Polyline) (*Polygon, error) {
 // Each edge gives a squared distance, d is their minimum, and the edges
 // whose end points straddle p's height (c1 = c2) flip the sign when p lies
 // on their inner side. A run of edges is passed over when neither part can
-// change: its end points all lie at or above p's height or all below it,
-// so no edge in it straddles, and its box, narrowed on each side by a
+// change: its end points all lie above p's height or all at or below it,
+// so no edge in it straddles, and its box, widened on each side by a
 // margin m, is farther than √d. The computed offset from an edge's nearest
 // point differs from the exact one by far less than m in each coordinate
 // (a few roundings of numbers no larger than the coordinates), and the
