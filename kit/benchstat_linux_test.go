@@ -32,3 +32,12 @@ func peakRSSKB() int {
 	}
 	return 0
 }
+
+// resetPeakRSS resets the process's peak resident set size (VmHWM) to the
+// current size, so peakRSSKB then reports the peak since this call. Linux
+// 4.0 and later: writing 5 to /proc/self/clear_refs.
+// Source: Linux kernel documentation, Documentation/filesystems/proc.rst,
+// "clear_refs".
+func resetPeakRSS() {
+	_ = os.WriteFile("/proc/self/clear_refs", []byte("5"), 0)
+}

@@ -54,8 +54,15 @@ func OutlineText(t geom.Text) ([]geom.Contour, error) {
 	if err != nil {
 		return nil, err
 	}
+	// Each letter contour is flattened on its own: flattening a whole line
+	// at once rebuilds the rest of the path after every curve, which costs
+	// time and memory growing with the square of the text's length.
+	var flat []*canvas.Path
+	for _, sub := range p.Split() {
+		flat = append(flat, sub.Flatten(TextTolerance).Split()...)
+	}
 	var out []geom.Contour
-	for _, sub := range p.Flatten(TextTolerance).Split() {
+	for _, sub := range flat {
 		var c geom.Contour
 		c.Closed = true
 		for _, pt := range sub.Coords() {

@@ -198,6 +198,7 @@ type decimator struct {
 	dead   []bool    // per face
 	vfaces [][]int32 // per vertex: its faces, dead ones dropped lazily
 	q      []quadric
+	own    []float64 // per vertex v: q[v].eval(pos[v]), kept with q[v]
 	fixed  []bool    // per vertex: a crease or corner vertex
 	gone   []bool    // per vertex: collapsed away
 	slabOf []uint8   // per vertex
@@ -241,6 +242,7 @@ func decimate(m *geom.Mesh, fixed []bool, s sdf.SDF3, tol float64, workers int) 
 		faces:  m.Faces,
 		dead:   make([]bool, nf),
 		q:      make([]quadric, nv),
+		own:    make([]float64, nv),
 		fixed:  fixed,
 		gone:   make([]bool, nv),
 		slabOf: make([]uint8, nv),
@@ -288,6 +290,7 @@ func decimate(m *geom.Mesh, fixed []bool, s sdf.SDF3, tol float64, workers int) 
 	for v := range nv {
 		d.vfaces[v] = back[count[v]:fill[v]:count[v+1]]
 		d.at[v] = -1
+		d.own[v] = d.q[v].eval(d.pos[v])
 	}
 	d.cutSlabs(m)
 	if workers <= 0 {
@@ -368,14 +371,15 @@ func (d *worker) run() {
 }
 
 // cost returns the error of moving r onto k and whether that move is
-// allowed at all.
+// allowed at all: the quadric error of Q_r + Q_k at k (Q_k's own share is
+// kept per vertex, as k does not move) plus the length term.
 func (d *decimator) cost(r, k uint32) (float64, bool) {
 	if d.fixed[r] && !d.fixed[k] {
 		return 0, false
 	}
 	p := d.pos[k]
 	e := d.pos[r].Sub(p)
-	return max(d.q[r].eval(p)+d.q[k].eval(p), 0) + lengthWeight*e.Dot(e), true
+	return max(d.q[r].eval(p)+d.own[k], 0) + lengthWeight*e.Dot(e), true
 }
 
 // option is a vertex r may be moved onto and the cost of that move.
@@ -411,9 +415,20 @@ func (d *worker) update(v uint32) {
 	if d.slab >= 0 && (int(d.slabOf[v]) != d.slab || d.locked[v]) {
 		return // another slab's, or on the border
 	}
-	best := math.Inf(1)
 	if !d.gone[v] {
 		d.neighbours(v)
+	}
+	d.updateRing(v)
+}
+
+// updateRing is update for a vertex v of this worker whose neighbours
+// d.ring already holds (any ring for a vertex that is gone).
+func (d *worker) updateRing(v uint32) {
+	if d.slab >= 0 && (int(d.slabOf[v]) != d.slab || d.locked[v]) {
+		return
+	}
+	best := math.Inf(1)
+	if !d.gone[v] {
 		for _, k := range d.ring {
 			if c, ok := d.cost(v, k); ok && c < best {
 				best = c
@@ -594,12 +609,13 @@ func (d *worker) collapse(r, k uint32) bool {
 	d.gone[r] = true
 	d.vfaces[r] = nil
 	d.q[k].add(&d.q[r])
+	d.own[k] = d.q[k].eval(d.pos[k])
 	d.liveFaces(opp[0])
 	d.liveFaces(opp[1])
 	d.neighbours(k)
 	ring := append(d.ringK[:0], d.ring...)
 	d.ringK = ring
-	d.update(k)
+	d.updateRing(k) // d.ring is k's
 	for _, v := range ring {
 		d.movedNext(v, r, k)
 	}

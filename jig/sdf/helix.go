@@ -60,10 +60,11 @@ type HelixSweep struct {
 	zs, rs     []float64 // tabulated z and r, one entry per dphi from Start
 	dphi       float64
 	rmin, rmax float64
-	zslope     float64 // largest |dz/dφ| in the table, mm/rad
-	zlinErr    float64 // bound on |z − linear interpolation of the table|, mm
-	zfirst     []int32 // per height bucket: first table entry at or above the bucket's floor
-	zbucket    float64 // buckets per mm of height
+	zslope     float64        // largest |dz/dφ| in the table, mm/rad
+	zlinErr    float64        // bound on |z − linear interpolation of the table|, mm
+	zfirst     []int32        // per height bucket: first table entry at or above the bucket's floor
+	zbucket    float64        // buckets per mm of height
+	segs       []cubicSegment // per table step: the cubics curve reads
 	b          geom.Box3
 }
 
@@ -120,6 +121,10 @@ func NewHelixSweep(h Helix, prof SDF2) (*HelixSweep, error) {
 	}
 	s.zlinErr += 1e-9
 	s.indexHeights()
+	s.segs = make([]cubicSegment, n-1)
+	for i := range s.segs {
+		s.segs[i] = cubicSegment{catmullRom(s.rs, i), catmullRom(s.zs, i)}
+	}
 	if s.extent >= s.reach {
 		return nil, &ArgError{"helix sweep", "profile extent", s.extent,
 			"profile must fit within half the rise per turn and half the radius"}
@@ -257,21 +262,34 @@ func (s *HelixSweep) near(q geom.Vec3, rho, theta, k float64) float64 {
 
 // curve returns r and z with their first and second derivatives at phi from
 // the Catmull–Rom cubic through the four table entries around it; past the
-// table's ends the end segments are extended.
+// table's ends the end segments are extended. The cubics' coefficients are
+// worked out once per segment when the sweep is made (cubicSegment).
 func (s *HelixSweep) curve(phi float64) (r, r1, r2, z, z1, z2 float64) {
 	x := (phi - s.h.Start) / s.dphi
-	n := len(s.zs)
-	i := max(0, min(n-2, int(math.Floor(x))))
+	i := max(0, min(len(s.segs)-1, int(math.Floor(x))))
 	t := x - float64(i)
-	r, r1, r2 = catmullRom(s.rs, i, t, s.dphi)
-	z, z1, z2 = catmullRom(s.zs, i, t, s.dphi)
+	g := &s.segs[i]
+	h := s.dphi
+	r = ((g.r[0]*t+g.r[1])*t+g.r[2])*t + g.r[3]
+	r1 = ((3*g.r[0]*t+2*g.r[1])*t + g.r[2]) / h
+	r2 = (6*g.r[0]*t + 2*g.r[1]) / (h * h)
+	z = ((g.z[0]*t+g.z[1])*t+g.z[2])*t + g.z[3]
+	z1 = ((3*g.z[0]*t+2*g.z[1])*t + g.z[2]) / h
+	z2 = (6*g.z[0]*t + 2*g.z[1]) / (h * h)
 	return
 }
 
-// catmullRom evaluates the Catmull–Rom cubic of tab between entries i and
-// i+1 at fraction t of the step h, with its first and second derivatives.
-// A missing neighbour at either end is extrapolated linearly.
-func catmullRom(tab []float64, i int, t, h float64) (v, d1, d2 float64) {
+// cubicSegment holds the Catmull–Rom cubics of r and z between two table
+// entries as a, b, c and the value at the segment's start: v(t) =
+// ((a·t + b)·t + c)·t + v₀ at fraction t of the step.
+type cubicSegment struct {
+	r, z [4]float64
+}
+
+// catmullRom returns the coefficients a, b, c and the start value of the
+// Catmull–Rom cubic of tab between entries i and i+1. A missing neighbour
+// at either end is extrapolated linearly.
+func catmullRom(tab []float64, i int) [4]float64 {
 	p1, p2 := tab[i], tab[i+1]
 	p0 := 2*p1 - p2
 	if i > 0 {
@@ -284,10 +302,7 @@ func catmullRom(tab []float64, i int, t, h float64) (v, d1, d2 float64) {
 	a := -0.5*p0 + 1.5*p1 - 1.5*p2 + 0.5*p3
 	b := p0 - 2.5*p1 + 2*p2 - 0.5*p3
 	c := -0.5*p0 + 0.5*p2
-	v = ((a*t+b)*t+c)*t + p1
-	d1 = ((3*a*t+2*b)*t + c) / h
-	d2 = (6*a*t + 2*b) / (h * h)
-	return
+	return [4]float64{a, b, c, p1}
 }
 
 // foot runs Newton's method on g(φ) = ½|C(φ) − q|² from phi, keeping φ in
