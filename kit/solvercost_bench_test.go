@@ -3,18 +3,8 @@ package kit
 import (
 	"testing"
 
-	"coilwright/parts"
-	"coilwright/parts/report"
 	"coilwright/templates"
 )
-
-// resetSolverMemos empties the per-process caches of field solutions,
-// strip searches and tolerance analyses, so the next New solves cold.
-func resetSolverMemos() {
-	fieldMemo = newMemo[*parts.FieldSolution](16)
-	stripMemo = newMemo[*parts.StripSearch](16)
-	toleranceMemo = newMemo[*report.ToleranceReport](8)
-}
 
 // BenchmarkSolverCost plans each demo with empty solver caches: the strip
 // search, the field sweep and (where the spec asks) the tolerance analysis
@@ -28,11 +18,11 @@ func BenchmarkSolverCost(b *testing.B) {
 			b.ReportAllocs()
 			cpu0 := cpuTime()
 			for b.Loop() {
-				resetSolverMemos()
+				resetMemos()
 				demoKit(b, demo, Options{Version: "bench"})
 			}
 			b.ReportMetric(float64(cpuTime()-cpu0)/float64(b.N), "cpu-ns/op")
 		})
 	}
-	resetSolverMemos()
+	resetMemos()
 }
