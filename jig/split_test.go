@@ -2,6 +2,7 @@ package jig
 
 import (
 	"bytes"
+	"errors"
 	"math"
 	"os"
 	"os/exec"
@@ -143,7 +144,14 @@ func checkSplit(t *testing.T, f *Former, p FormerParams, rod float64) *SplitPlan
 	for phi := 0.0; phi <= f.path.Span(); phi += 0.01 {
 		psi = math.Min(psi, math.Atan(math.Abs(slope(f.path.Z, phi))/f.path.Radius(phi)))
 	}
-	rCore := math.Min(f.path.Radius(0), f.path.Radius(f.path.Span())) - p.Wire/2 + p.GrooveDepth - 0.05
+	// The core is a solid of revolution: at the joint plane its radius
+	// is the outline's largest, on a cone too, and outline points inside
+	// it lie in the groove's notch.
+	rCore := 0.0
+	for _, q := range truth {
+		rCore = math.Max(rCore, math.Hypot(q.X, q.Y))
+	}
+	rCore -= 0.05
 	worst := 0.0
 	for i, s := range sp.Sections {
 		m := meshes[i]
@@ -317,4 +325,32 @@ func triDist(p, a, b, c geom.Vec3) float64 {
 	}
 	den := 1 / (va + vb + vc)
 	return p.Sub(a.Add(ab.Scale(vb * den)).Add(ac.Scale(vc * den))).Len()
+}
+
+// TestSplitRefusesShortRodEngagement cuts the centre-fed 2.4 GHz demo's
+// former into sections so short that the blind rod bore, stopping a wall
+// short of the lead channel, enters the section holding the channel less
+// than a bore diameter: Split refuses it with a FitRodEngagement problem,
+// and accepts the same former in two sections.
+func TestSplitRefusesShortRodEngagement(t *testing.T) {
+	const rod = 8.0 // mm
+	pl := Plan(demoDesign(t, "demo-2g4-cylinder.toml", "centre")).OnRod(rod)
+	f, err := pl.Former()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if _, err := f.Split(130, rod, pl.Params); err != nil {
+		t.Fatalf("two sections: %v", err)
+	}
+	// Sections a little taller than twice the 8 mm key peg (the shortest
+	// Split makes) leave the bore less than a bore diameter in the first.
+	_, err = f.Split(28, rod, pl.Params)
+	var fp FitProblem
+	if !errors.As(err, &fp) || fp.Kind != FitRodEngagement {
+		t.Fatalf("28 mm sections: want a FitRodEngagement problem, got %v", err)
+	}
+	if fp.Available >= fp.Needed {
+		t.Errorf("refused with %.2f mm of the %.2f mm needed", fp.Available, fp.Needed)
+	}
+	t.Log(err)
 }
