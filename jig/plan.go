@@ -30,6 +30,7 @@ const (
 	FitGrooveSweep                  // groove section wider than the winding leaves room for, lead-in and run-out included
 	FitFeedChannel                  // centre feed: the lead channel crosses the axis too far for a wall under the groove opposite
 	FitDriveDepth                   // centre feed: the drive cut from the far end reaches too close to the lead channel
+	FitRodEngagement                // centre feed, split: the rod's blind bore enters the section holding the lead channel too little
 )
 
 // FitProblem is one size the former cannot be made with: which size, what
@@ -60,6 +61,8 @@ func (p FitProblem) Error() string {
 		return fmt.Sprintf("the flange leaves room for %.1f mm letters; at least %.1f mm is needed", p.Available, p.Needed)
 	case FitFeedChannel:
 		return fmt.Sprintf("the feed lead's channel with its end wall reaches %.2f mm past the axis; the groove bottom opposite is %.2f mm from it", p.Needed, p.Available)
+	case FitRodEngagement:
+		return fmt.Sprintf("the support rod's blind bore enters the section holding the feed lead's channel %.1f mm; at least %.1f mm is needed to hold the rod and clear the key peg", p.Available, p.Needed)
 	case FitDriveDepth:
 		return fmt.Sprintf("the drive cut with its roof reaches %.1f mm from the end away from the feed; %.1f mm fits before the feed lead's channel and its wall", p.Needed, p.Available)
 	}
@@ -157,15 +160,49 @@ func Plan(d *parts.Design) FormerPlan {
 		pl.Problems = append(pl.Problems, FitProblem{Kind: FitGrooveRadius, Needed: 3.5 * a, Available: rmin, Groove: 2 * a})
 		return pl
 	}
+	return planDrive(pl, e, s.Line("former.drive") != 0, s.Line("former.bore_diameter_mm") != 0)
+}
+
+// OnRod returns the plan of the same former printed in sections that stack
+// on a support rod rodMM thick (Former.Split): its drive cut is the rod's
+// bore, rodMM plus twice JointClearanceMM wide, and the wire-lock hole,
+// the drive's reach and the fit problems are planned again around it. A
+// periphery feed's bore runs through every section and its lock hole stops
+// a wall short of it. A centre feed's bore is blind from the end away from
+// the feed and stops a wall short of the lead channel, so the channel keeps
+// the whole feed lead and the rod ends in the section that holds it.
+func (pl FormerPlan) OnRod(rodMM float64) FormerPlan {
+	q := pl
+	q.Params.Drive, q.Params.BoreDiameter, q.Params.BoreDepth = ThroughBore, rodMM+2*JointClearanceMM, 0
+	q.DriveChanged, q.LockHoleMM, q.DriveMM = false, 0, 0
+	q.Problems = nil
+	for _, p := range pl.Problems {
+		if p.Kind == FitGrooveSpacing || p.Kind == FitGrooveRadius {
+			q.Problems = append(q.Problems, p)
+		}
+	}
+	if len(q.Problems) > 0 {
+		return q
+	}
+	return planDrive(q, envelope(q.Path, q.Params), true, true)
+}
+
+// planDrive plans the drive cut and the wire-lock hole of a former whose
+// groove fits, then the groove sweep and the lettering. driveNamed and
+// boreNamed report that the spec names the drive and the bore's diameter,
+// which are then kept; otherwise a hex socket that does not fit the walls
+// falls back to a bore as wide as they allow.
+func planDrive(pl FormerPlan, e extent, driveNamed, boreNamed bool) FormerPlan {
+	p, wire := pl.Params, pl.Params.Wire
 	if p.CentreFeed {
-		return planCentreFeed(pl, e, s.Line("former.drive") != 0, s.Line("former.bore_diameter_mm") != 0)
+		return planCentreFeed(pl, e, driveNamed, boreNamed)
 	}
 	// Room for the drive: a wall under the groove everywhere and a
 	// wire-lock hole of at least one wire diameter at the start.
 	room := math.Min(e.floor-MinWallMM, e.startBottom-MinWallMM-wire)
-	if p.Drive == HexSocket && s.Line("former.drive") == 0 && p.driveRadius() > room {
+	if p.Drive == HexSocket && !driveNamed && p.driveRadius() > room {
 		pl.Params.Drive, pl.DriveChanged = ThroughBore, true
-		if s.Line("former.bore_diameter_mm") == 0 {
+		if !boreNamed {
 			// Half a millimetre inside the limit, on a 0.1 mm step.
 			pl.Params.BoreDiameter = math.Max(1, math.Min(p.BoreDiameter, math.Floor(20*(room-0.5))/10))
 		}

@@ -1,10 +1,18 @@
 // Splitting a former too tall for the printer into sections that stack on
 // the support rod: the former is cut by planes across its axis, each
 // section keeps its part of the groove (so the groove runs on across each
-// joint as the one model's surface), a through-bore takes the rod, and an
+// joint as the one model's surface), a bore takes the rod, and an
 // off-axis peg on each section's top face fits a socket in the next one's
 // bottom face so the sections can only go together one way round. Each
 // section's number is engraved on its top face beside the bore.
+//
+// A centre-fed former's lock hole is the feed lead's channel, in to the
+// axis and perhaps past it, so the rod cannot pass the section that holds
+// the channel: the former's own bore (FormerPlan.OnRod) is blind from the
+// end away from the feed and stops a wall short of the channel. The rod
+// runs through every other section and ends in that one's blind bore,
+// which must be deep enough to hold it and to keep the channel clear of
+// the key peg and its socket at the joint.
 
 package jig
 
@@ -35,7 +43,7 @@ type Section struct {
 	// Solid is the piece in its own print coordinates: its bottom face
 	// on z = 0. Its top peg stands PegHeight above Z1 − Z0.
 	Solid sdf.SDF3
-	Genus int // through-holes: 1 (the rod's bore)
+	Genus int // through-holes: 1 (the rod's bore), 0 for the section a blind bore ends in
 }
 
 // SplitPlan is how a former is cut into sections.
@@ -49,8 +57,11 @@ type SplitPlan struct {
 
 // Split cuts the former into the fewest sections of equal height that
 // each print within maxHeight (the peg included), on a rod of rodDiameter
-// mm. It refuses a rod that leaves no wall under the groove and a former
-// already short enough.
+// mm; p are the former's sizes, its drive the rod's bore (FormerPlan.OnRod).
+// It refuses a rod that leaves no wall under the groove and a former
+// already short enough, and for a centre feed's blind bore, one that enters
+// the section holding the lead channel too little (a FitProblem of kind
+// FitRodEngagement).
 func (f *Former) Split(maxHeight, rodDiameter float64, p FormerParams) (*SplitPlan, error) {
 	if !(maxHeight > 0) || !(rodDiameter > 0) {
 		return nil, formerError("split: print height %g mm and rod %g mm must be above 0", maxHeight, rodDiameter)
@@ -79,6 +90,14 @@ func (f *Former) Split(maxHeight, rodDiameter float64, p FormerParams) (*SplitPl
 	bore, err := sdf.NewCylinder(boreR, 2*f.Height+10)
 	if err != nil {
 		return nil, err
+	}
+	// A blind bore (a centre feed) is the former's own; it ends in the
+	// section at the feed end, feed.
+	feed, blind := -1, p.CentreFeed && !p.throughBore()
+	if blind {
+		if feed, err = blindBoreSection(f, p, n, h, sp); err != nil {
+			return nil, err
+		}
 	}
 	// The key sits on the side away from the coil's start, clear of the
 	// lock hole at the flange end.
@@ -109,7 +128,10 @@ func (f *Former) Split(maxHeight, rodDiameter float64, p FormerParams) (*SplitPl
 				return nil, err
 			}
 		}
-		cuts := []sdf.Cut{{Shape: bore}}
+		var cuts []sdf.Cut
+		if !blind {
+			cuts = append(cuts, sdf.Cut{Shape: bore})
+		}
 		if i > 0 {
 			depth := sp.PegHeight + JointClearanceMM
 			socket, err := sdf.NewCylinder(sp.PegRadius+JointClearanceMM, 2*depth)
@@ -127,10 +149,35 @@ func (f *Former) Split(maxHeight, rodDiameter float64, p FormerParams) (*SplitPl
 		if err != nil {
 			return nil, err
 		}
-		sp.Sections = append(sp.Sections, Section{Number: i + 1, Z0: z0, Z1: z1, Genus: 1,
+		genus := 1
+		if i == feed {
+			genus = 0
+		}
+		sp.Sections = append(sp.Sections, Section{Number: i + 1, Z0: z0, Z1: z1, Genus: genus,
 			Solid: sdf.Move(solid, sdf.Translation(geom.Vec3{Z: -z0}))})
 	}
 	return sp, nil
+}
+
+// blindBoreSection returns the index of the section a centre feed's blind
+// rod bore ends in, the one at the feed end, among n sections h mm tall,
+// after checking that the bore enters it, to the foot of its roof, at
+// least a bore diameter (to hold the rod; common practice, no published
+// source) and at least the key peg's socket depth, so that the peg and
+// its socket at the joint stay on the rod's side of the bore's end, clear
+// of the channel beyond it.
+func blindBoreSection(f *Former, p FormerParams, n int, h float64, sp *SplitPlan) (int, error) {
+	// The bore enters from the end away from the feed: the top in print
+	// coordinates unless the former is flipped.
+	feed, enter := 0, h-(f.Height-p.BoreDepth)
+	if f.Flipped {
+		feed, enter = n-1, p.BoreDepth-(f.Height-h)
+	}
+	need := math.Max(sp.RodBore, sp.PegHeight+JointClearanceMM)
+	if enter < need {
+		return 0, FitProblem{Kind: FitRodEngagement, Needed: need, Available: enter}
+	}
+	return feed, nil
 }
 
 // sectionNumber returns the V-engraved cuts of a section's number on its

@@ -2,35 +2,81 @@ package jig
 
 import (
 	"bytes"
+	"errors"
 	"math"
 	"os"
 	"os/exec"
 	"path/filepath"
 	"regexp"
+	"strings"
 	"testing"
 
 	"coilwright/cam/checktool"
 	"coilwright/cam/geom"
 	"coilwright/cam/stl"
 	"coilwright/jig/mesh"
+	"coilwright/parts"
+	"coilwright/parts/spec"
+	"coilwright/templates"
 )
 
 // splitTol is the mesh tolerance of the split test, mm: coarser than the
 // default to keep the test quick; every check below scales with it.
 const splitTol = 0.1
 
-// TestSplitSectionsMeshAndJoin splits the 2.4 GHz demo's former as if the
-// printer took only 130 mm, meshes each section, checks each with
+// TestSplitSectionsMeshAndJoin splits formers of the 2.4 GHz demo as if
+// the printer took only 130 mm, meshes each section, checks each with
 // CheckMesh and admesh, and checks that the outline of each joint face of
 // the lower section lies on the upper section's within the tolerance, so
-// the groove runs on across the joint.
+// the groove runs on across the joint: fed at the periphery (bored
+// through for the rod), and fed at the centre, straight and widening
+// upward (the former then prints flipped), each bored blind for the rod
+// short of the lead channel (checkBlindSplit).
 func TestSplitSectionsMeshAndJoin(t *testing.T) {
 	if testing.Short() {
-		t.Skip("meshes two former sections")
+		t.Skip("meshes former sections")
 	}
-	d, f := demoFormer(t, "demo-2g4-cylinder.toml")
-	p := Plan(d).Params
-	sp, err := f.Split(130, 8, p)
+	const rod = 8.0 // mm
+	t.Run("periphery feed", func(t *testing.T) {
+		d, f := demoFormer(t, "demo-2g4-cylinder.toml")
+		checkSplit(t, f, Plan(d).Params, rod)
+	})
+	for _, c := range []struct{ name, from, to string }{
+		{"centre feed", "", ""},
+		{"centre feed, widening upward", `shape = "cylindrical"`, "shape = \"conical\"\ntop_circumference_lambda = 1.15"},
+	} {
+		t.Run(c.name, func(t *testing.T) {
+			d := demoDesign(t, "demo-2g4-cylinder.toml", "centre")
+			if c.from != "" {
+				b, _ := templates.Demo("demo-2g4-cylinder.toml")
+				src := strings.Replace(strings.Replace(string(b), `feed = "periphery"`, `feed = "centre"`, 1), c.from, c.to, 1)
+				s, err := spec.ParseSpec([]byte(src))
+				if err != nil {
+					t.Fatal(err)
+				}
+				if d, err = parts.NewDesign(s); err != nil {
+					t.Fatal(err)
+				}
+			}
+			pl := Plan(d).OnRod(rod)
+			f, err := pl.Former()
+			if err != nil {
+				t.Fatal(err)
+			}
+			if f.Flipped != (c.from != "") {
+				t.Fatalf("flipped %v", f.Flipped)
+			}
+			sp := checkSplit(t, f, pl.Params, rod)
+			checkBlindSplit(t, f, pl, sp)
+		})
+	}
+}
+
+// checkSplit splits f, with sizes p, for a 130 mm print height on a rod
+// of rod mm into two sections and checks their meshes and the joint.
+func checkSplit(t *testing.T, f *Former, p FormerParams, rod float64) *SplitPlan {
+	t.Helper()
+	sp, err := f.Split(130, rod, p)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -98,7 +144,14 @@ func TestSplitSectionsMeshAndJoin(t *testing.T) {
 	for phi := 0.0; phi <= f.path.Span(); phi += 0.01 {
 		psi = math.Min(psi, math.Atan(math.Abs(slope(f.path.Z, phi))/f.path.Radius(phi)))
 	}
-	rCore := math.Min(f.path.Radius(0), f.path.Radius(f.path.Span())) - p.Wire/2 + p.GrooveDepth - 0.05
+	// The core is a solid of revolution: at the joint plane its radius
+	// is the outline's largest, on a cone too, and outline points inside
+	// it lie in the groove's notch.
+	rCore := 0.0
+	for _, q := range truth {
+		rCore = math.Max(rCore, math.Hypot(q.X, q.Y))
+	}
+	rCore -= 0.05
 	worst := 0.0
 	for i, s := range sp.Sections {
 		m := meshes[i]
@@ -146,6 +199,72 @@ func TestSplitSectionsMeshAndJoin(t *testing.T) {
 		}
 	}
 	t.Logf("%d sections, rod bore %.1f mm, key peg r %.2f mm at %.2f mm; joint outline within %.3f mm of both meshes (groove limit %.3f mm at ψ = %.1f°)", len(sp.Sections), sp.RodBore, sp.PegRadius, sp.PegAt, worst, splitTol/math.Sin(psi), psi*180/math.Pi)
+	return sp
+}
+
+// checkBlindSplit checks a centre-fed former split on its rod, probing
+// the sections' solids: the section holding the start of the groove keeps
+// the whole lead channel (empty from the wire centre to the lead's
+// length, pl.LockHoleMM below the groove bottom); the rod's bore is open
+// along the axis through every other section and into that one from the
+// joint for at least a bore diameter, and stops with MinWall of solid
+// before the channel.
+func checkBlindSplit(t *testing.T, f *Former, pl FormerPlan, sp *SplitPlan) {
+	t.Helper()
+	const step = 0.05 // mm between probes
+	p := pl.Params
+	c := f.Centreline(0)
+	feed := sp.Sections[0]
+	if f.Flipped {
+		feed = sp.Sections[len(sp.Sections)-1]
+	}
+	if c.Z < feed.Z0 || c.Z > feed.Z1 {
+		t.Fatalf("the groove starts at z %.2f mm, outside section %d (%.2f–%.2f mm)", c.Z, feed.Number, feed.Z0, feed.Z1)
+	}
+	if feed.Genus != 0 {
+		t.Errorf("section %d holds the channel but has genus %d", feed.Number, feed.Genus)
+	}
+	local := func(sec Section, q geom.Vec3) float64 { return sec.Solid.Eval(q.Sub(geom.Vec3{Z: sec.Z0})) }
+	in := geom.Vec3{X: -c.X, Y: -c.Y}.Scale(1 / math.Hypot(c.X, c.Y))
+	lead := p.Wire/2 + pl.LockHoleMM
+	for s := 0.0; s <= lead-step; s += step {
+		if v := local(feed, c.Add(in.Scale(s))); v <= 0 {
+			t.Fatalf("the channel in section %d is blocked %.2f mm in from the wire centre (distance %.3f); the lock end reaches %.2f mm", feed.Number, s, v, lead)
+		}
+	}
+	// Along the axis: open through the other sections (away from the
+	// joints' peg sockets, which lie off the axis) and into the feed
+	// section for a bore diameter; solid for MinWall before the channel.
+	a := (p.Wire + p.Clearance) / 2
+	dir, near := 1.0, c.Z+a*math.Sqrt2 // from the channel towards the bore
+	if f.Flipped {
+		dir, near = -1, c.Z-a
+	}
+	for _, sec := range sp.Sections {
+		if sec.Number == feed.Number {
+			continue
+		}
+		for z := sec.Z0 + step; z < sec.Z1-step; z += step {
+			if v := local(sec, geom.Vec3{Z: z}); v <= 0 {
+				t.Fatalf("section %d is solid on the axis at z %.2f mm: the rod cannot pass", sec.Number, z)
+			}
+		}
+	}
+	joint := feed.Z1
+	if f.Flipped {
+		joint = feed.Z0
+	}
+	for s := step; s < sp.RodBore; s += step {
+		if v := local(feed, geom.Vec3{Z: joint - dir*s}); v <= 0 {
+			t.Fatalf("the rod's bore enters section %d only %.2f mm; it must hold the rod for %.1f mm", feed.Number, s, sp.RodBore)
+		}
+	}
+	for s := step; s < p.MinWall-step; s += step {
+		if v := local(feed, geom.Vec3{Z: near + dir*s}); v >= 0 {
+			t.Fatalf("the rod's bore reaches %.2f mm from the channel (distance %.3f); the wall is %.1f mm", s, v, p.MinWall)
+		}
+	}
+	t.Logf("section %d: channel %.2f mm from the wire centre, blind bore %.1f mm from the far end", feed.Number, lead, p.BoreDepth)
 }
 
 // admeshClean writes m as STL and holds admesh's report to no repairs and
@@ -206,4 +325,32 @@ func triDist(p, a, b, c geom.Vec3) float64 {
 	}
 	den := 1 / (va + vb + vc)
 	return p.Sub(a.Add(ab.Scale(vb * den)).Add(ac.Scale(vc * den))).Len()
+}
+
+// TestSplitRefusesShortRodEngagement cuts the centre-fed 2.4 GHz demo's
+// former into sections so short that the blind rod bore, stopping a wall
+// short of the lead channel, enters the section holding the channel less
+// than a bore diameter: Split refuses it with a FitRodEngagement problem,
+// and accepts the same former in two sections.
+func TestSplitRefusesShortRodEngagement(t *testing.T) {
+	const rod = 8.0 // mm
+	pl := Plan(demoDesign(t, "demo-2g4-cylinder.toml", "centre")).OnRod(rod)
+	f, err := pl.Former()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if _, err := f.Split(130, rod, pl.Params); err != nil {
+		t.Fatalf("two sections: %v", err)
+	}
+	// Sections a little taller than twice the 8 mm key peg (the shortest
+	// Split makes) leave the bore less than a bore diameter in the first.
+	_, err = f.Split(28, rod, pl.Params)
+	var fp FitProblem
+	if !errors.As(err, &fp) || fp.Kind != FitRodEngagement {
+		t.Fatalf("28 mm sections: want a FitRodEngagement problem, got %v", err)
+	}
+	if fp.Available >= fp.Needed {
+		t.Errorf("refused with %.2f mm of the %.2f mm needed", fp.Available, fp.Needed)
+	}
+	t.Log(err)
 }

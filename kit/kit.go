@@ -57,14 +57,14 @@ type Kit struct {
 	Former jig.FormerPlan // the former's sizes, drive and envelope
 	Report report.Report  // as in design.json and check --json
 
-	opt         Options
-	parts       []cutPart
-	cutList     *cutlist.CutList
-	batch       *batchPlan       // nil for one kit
-	templates   []pdf.Page       // the 1:1 template pages, laid out once
-	split       *jig.SplitPlan   // sections of a former taller than the printer; nil when it fits or cannot be split
-	formerObj   *jig.Former      // the former split, when split is set
-	splitParams jig.FormerParams // its sizes: bored through for the rod
+	opt       Options
+	parts     []cutPart
+	cutList   *cutlist.CutList
+	batch     *batchPlan     // nil for one kit
+	templates []pdf.Page     // the 1:1 template pages, laid out once
+	split     *jig.SplitPlan // sections of a former taller than the printer; nil when it fits or cannot be split
+	formerObj *jig.Former    // the former split, when split is set
+	onRod     jig.FormerPlan // its plan, bored for the support rod (FormerPlan.OnRod), when split is set
 
 	// tolerance is the batch tolerance analysis; nil when it did not run.
 	tolerance *report.ToleranceReport
@@ -96,7 +96,10 @@ func New(src Source, opt Options) (*Kit, error) {
 	if k.cutList, err = cutlist.NewCutList(d); err != nil {
 		return nil, err
 	}
-	k.cutList.FitLockTail(k.Former.LockHoleMM)
+	// A former split onto the support rod is bored for it: the lock end
+	// is fitted to the hole as printed.
+	k.planSplit()
+	k.cutList.FitLockTail(k.printed().LockHoleMM)
 	// The batch plan also checks that each piece fits its stock rod, so
 	// one kit is planned too, and its plan kept only for a batch.
 	bp, err := newBatchPlan(d, k.cutList, k.parts)
@@ -106,7 +109,6 @@ func New(src Source, opt Options) (*Kit, error) {
 	if src.Spec.Quantity > 1 {
 		k.batch = bp
 	}
-	k.planSplit()
 	if err := k.analyseTolerance(); err != nil {
 		return nil, err
 	}

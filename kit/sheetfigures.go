@@ -13,7 +13,6 @@ import (
 
 	"coilwright/cam/geom"
 	"coilwright/cam/pdf"
-	"coilwright/jig"
 	"coilwright/parts"
 	"coilwright/parts/cutlist"
 	"coilwright/parts/flat"
@@ -91,10 +90,7 @@ func handTurn(d *parts.Design) string {
 // the core, the radial lock hole, the wire in the groove and its lock tail
 // bent at a right angle into the hole, mark A at the mouth.
 func (k *Kit) lockFigure() pdf.Figure {
-	d, p, w := k.Design, k.Former.Params, k.cutList.Wire
-	if k.formerObj != nil {
-		p = k.splitParams
-	}
+	d, p, w := k.Design, k.printed().Params, k.cutList.Wire
 	wd := p.Wire
 	r := k.Former.Path.StartRadius // wire centre in the groove
 	bottom := r - wd/2
@@ -364,30 +360,13 @@ func feedFigure(d *parts.Design, cl *cutlist.CutList) pdf.Figure {
 		Caption: "Feed in section at the plate (mm): what is stripped to which length, and where the wire's start sits above it."}
 }
 
-// lockParams returns the sizes of the former as printed: bored through
-// for the rod when it is split.
-func (k *Kit) lockParams() jig.FormerParams {
-	if k.formerObj != nil {
-		return k.splitParams
-	}
-	return k.Former.Params
-}
-
 // lockRoom returns how far the lock tail can reach from the wire's centre
-// at the hole's mouth to the hole's bottom, which stops a wall short of
-// the drive cut (as jig's lockHole does), mm.
+// at the hole's mouth to the hole's bottom: half the wire and the hole's
+// depth below the groove bottom as planned for the former as printed
+// (jig.FormerPlan.LockHoleMM), mm.
 func (k *Kit) lockRoom() float64 {
-	p := k.lockParams()
-	if p.CentreFeed && k.formerObj == nil {
-		// The feed lead's channel, as planned.
-		return p.Wire/2 + k.Former.LockHoleMM
-	}
-	bottom := k.Former.Path.StartRadius - p.Wire/2
-	driveR := p.BoreDiameter / 2
-	if p.Drive == jig.HexSocket {
-		driveR = p.HexAcrossFlats / math.Sqrt(3)
-	}
-	return k.Former.Path.StartRadius - math.Max(bottom-p.LockDepth, driveR+p.MinWall)
+	pl := k.printed()
+	return pl.Params.Wire/2 + pl.LockHoleMM
 }
 
 // lockCut returns the instruction to cut the lock end shorter when the

@@ -24,21 +24,21 @@ func (k *Kit) planSplit() {
 		k.Design.Warnings = append(k.Design.Warnings, parts.Warning{Code: "former-split", Message: "the former could not be split into sections: they stack on the support rod, and this kit has none (see rod-over-feed)"})
 		return
 	}
-	// The sections ride on the rod: the former is bored through for it,
-	// so the lock hole and stop notch keep their wall from the rod.
+	// The sections ride on the rod: the former is bored for it, so the
+	// lock hole and stop notch keep their wall from the rod; a centre
+	// feed's bore is blind short of the lead channel (jig.FormerPlan.OnRod).
 	rod := k.cutList.Dowel.DiameterMM
-	params := pl.Params
-	params.Drive, params.BoreDiameter, params.BoreDepth = jig.ThroughBore, rod+2*jig.JointClearanceMM, 0
-	f, err := jig.NewFormer(pl.Path, params)
+	onRod := pl.OnRod(rod)
+	f, err := onRod.Former()
+	var sp *jig.SplitPlan
 	if err == nil {
-		k.split, err = f.Split(s.Former.PrintHeightMM, rod, params)
+		sp, err = f.Split(s.Former.PrintHeightMM, rod, onRod.Params)
 	}
-	sp := k.split
 	if err != nil {
 		k.Design.Warnings = append(k.Design.Warnings, parts.Warning{Code: "former-split", Message: "the former could not be split into sections: " + err.Error()})
 		return
 	}
-	k.formerObj, k.splitParams = f, params
+	k.split, k.formerObj, k.onRod = sp, f, onRod
 	for i, w := range k.Design.Warnings {
 		if w.Code == "former-size" {
 			k.Design.Warnings[i] = parts.Warning{Code: "former-size", Message: fmt.Sprintf(
@@ -90,8 +90,25 @@ func (k *Kit) writeSections(out Sink) error {
 func (k *Kit) sectionAssembly() string {
 	sp := k.split
 	n := len(sp.Sections)
-	return fmt.Sprintf("This former is printed as %d sections, numbered on their top faces. Slide them onto the Ø%s mm support rod in order, section 1 (the flange) first, turning each until its socket drops over the key peg of the one below, and clamp the stack so the joints close: the groove runs on across each joint. Wind over the joints as if the former were one piece.",
-		n, num(k.cutList.Dowel.DiameterMM))
+	rod := ""
+	for _, sec := range sp.Sections {
+		if sec.Genus == 0 {
+			// A centre feed's blind bore: the rod stops short of the
+			// lead channel.
+			rod = fmt.Sprintf(" The rod ends in section %d, which holds the feed lead's channel: its bore there is blind and stops a wall short of the channel, so push the rod home until it bottoms.", sec.Number)
+		}
+	}
+	return fmt.Sprintf("This former is printed as %d sections, numbered on their top faces. Slide them onto the Ø%s mm support rod in order, section 1 (the flange) first, turning each until its socket drops over the key peg of the one below, and clamp the stack so the joints close: the groove runs on across each joint.%s Wind over the joints as if the former were one piece.",
+		n, num(k.cutList.Dowel.DiameterMM), rod)
+}
+
+// printed returns the plan of the former as printed: bored for the
+// support rod when it is split into sections.
+func (k *Kit) printed() jig.FormerPlan {
+	if k.split != nil {
+		return k.onRod
+	}
+	return k.Former
 }
 
 // formerLead is the paragraph the lock step opens with when the former is
