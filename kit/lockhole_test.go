@@ -7,7 +7,6 @@ import (
 	"strings"
 	"testing"
 
-	"coilwright/parts"
 )
 
 // holeAgreeMM is how closely the build sheet's and the cut list's hole
