@@ -6,7 +6,6 @@ import (
 	"math/rand/v2"
 	"strings"
 	"testing"
-
 )
 
 // holeAgreeMM is how closely the build sheet's and the cut list's hole
