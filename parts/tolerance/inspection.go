@@ -36,7 +36,7 @@ func inspection(d *parts.Design, kits []parts.ToleranceKit, sens []parts.Toleran
 	out := parts.ToleranceInspection{Share: share, ToleranceMM: make([]float64, n)}
 	kMax := 0.0
 	for _, k := range kits {
-		if !k.Buildable {
+		if !k.Solved() {
 			continue
 		}
 		for i, t := range d.Turns {
@@ -79,9 +79,10 @@ func inspection(d *parts.Design, kits []parts.ToleranceKit, sens []parts.Toleran
 }
 
 // accepted reports whether every turn of kit lies within k·w_i of its
-// target diameter. An unbuildable kit is never accepted.
+// target diameter. A kit that could not be built or solved is never
+// accepted.
 func accepted(d *parts.Design, kit parts.ToleranceKit, w []float64, k float64) bool {
-	if !kit.Buildable {
+	if !kit.Solved() {
 		return false
 	}
 	for i, t := range d.Turns {

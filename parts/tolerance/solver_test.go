@@ -7,10 +7,12 @@ import (
 	"math"
 	"math/cmplx"
 	"runtime"
+	"slices"
 	"testing"
 
 	"coilwright/parts"
 	"coilwright/parts/field"
+	"coilwright/parts/spec"
 )
 
 // samePointsRelTol is how closely the nominal geometry, moved by nothing,
@@ -176,4 +178,49 @@ func TestSolverSensitivityMatchesDirectDifference(t *testing.T) {
 		}
 	}
 	t.Error("no sensitivity for turn 1 diameter")
+}
+
+func TestSolverEvaluatorThinsAShortPin(t *testing.T) {
+	// A 12 GHz coil of 0.5 mm wire whose first turn sits 0.7 mm up has a
+	// feed pin that the full model already thins to stay within the
+	// kernel's limit (field.KernelMinSegmentRadii); a kit whose first turn
+	// is lower still must be modelled the same way, not refused.
+	s, err := spec.ParseSpec([]byte(`kit = "Short pin"
+frequency_mhz = 12000.0
+[coil]
+shape = "cylindrical"
+turns = 7.0
+feed = "periphery"
+base_circumference_lambda = 1.0
+pitch_angle_deg = 12.5
+first_turn_height_mm = 0.7
+[wire]
+material = "copper-annealed"
+diameter_mm = 0.5
+[reflector]
+shape = "disc"
+`))
+	if err != nil {
+		t.Fatal(err)
+	}
+	d, err := parts.NewDesign(s)
+	if err != nil {
+		t.Fatal(err)
+	}
+	e, err := NewSolverEvaluator(d, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	ins, _ := inputs(d)
+	b, err := chain(d, ins, nominalValues(ins))
+	if err != nil {
+		t.Fatal(err)
+	}
+	b.HeightDeltasMM = slices.Clone(b.HeightDeltasMM)
+	for i := range b.HeightDeltasMM {
+		b.HeightDeltasMM[i] -= d.Spec.Tolerance.FirstTurnMM / limitSigmas
+	}
+	if _, err := e.Evaluate(b); err != nil {
+		t.Fatalf("a first turn 1σ lower: %v", err)
+	}
 }
