@@ -117,17 +117,12 @@ type describer interface {
 	Describe(b Band) parts.ToleranceModel
 }
 
-// bandOf returns the band and target a kit must meet: the spec's band
-// edges, or the centre frequency alone when it gives none.
+// bandOf returns the band and target a kit must meet: the design's band
+// (parts.BandOf: the spec's edges, or the centre frequency ± 3 %).
 func bandOf(d *parts.Design, opt Options) Band {
 	s := d.Spec
-	b := Band{LowMHz: s.FrequencyMHz, CentreMHz: s.FrequencyMHz, HighMHz: s.FrequencyMHz, RefOhm: defaultRefOhm, VSWRTarget: specTarget(s)}
-	if s.BandLowMHz != nil {
-		b.LowMHz = *s.BandLowMHz
-	}
-	if s.BandHighMHz != nil {
-		b.HighMHz = *s.BandHighMHz
-	}
+	b := Band{CentreMHz: s.FrequencyMHz, RefOhm: defaultRefOhm, VSWRTarget: specTarget(s)}
+	b.LowMHz, b.HighMHz = parts.BandMHz(s)
 	if opt.RefOhm > 0 {
 		b.RefOhm = opt.RefOhm
 	}
