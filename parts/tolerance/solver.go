@@ -272,7 +272,11 @@ func (e *SolverEvaluator) Evaluate(b Build) (Response, error) {
 		// thinner as field.Build models a short pin, so that its one
 		// segment stays within the kernel's limits.
 		l := w.Points[s+1].Sub(w.Points[s]).Len()
-		w.Radius[s] = math.Min(e.pinRadius, l/field.KernelMinSegmentRadii)
+		r := math.Min(e.pinRadius, l/field.KernelMinSegmentRadii)
+		if r*field.KernelMinSegmentRadii > l { // rounding: keep l ≥ the kernel's limit
+			r = math.Nextafter(r, 0)
+		}
+		w.Radius[s] = r
 	}
 	st := *e.st
 	st.Model.Wires = append([]em.Wire{w}, e.st.Model.Wires[1:]...)

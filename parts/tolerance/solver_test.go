@@ -216,11 +216,17 @@ shape = "disc"
 	if err != nil {
 		t.Fatal(err)
 	}
-	b.HeightDeltasMM = slices.Clone(b.HeightDeltasMM)
-	for i := range b.HeightDeltasMM {
-		b.HeightDeltasMM[i] -= d.Spec.Tolerance.FirstTurnMM / limitSigmas
-	}
-	if _, err := e.Evaluate(b); err != nil {
-		t.Fatalf("a first turn 1σ lower: %v", err)
+	// The whole coil moved from 1σ lower to 1σ higher in 0.1σ steps: the
+	// pin shortens and lengthens, its modelled radius following.
+	sigma := d.Spec.Tolerance.FirstTurnMM / limitSigmas
+	for k := -10; k <= 10; k++ {
+		kb := b
+		kb.HeightDeltasMM = slices.Clone(b.HeightDeltasMM)
+		for i := range kb.HeightDeltasMM {
+			kb.HeightDeltasMM[i] += float64(k) / 10 * sigma
+		}
+		if _, err := e.Evaluate(kb); err != nil {
+			t.Errorf("the first turn %+.1fσ: %v", float64(k)/10, err)
+		}
 	}
 }
