@@ -21,7 +21,7 @@ type electrical struct {
 	Short string
 
 	LowMHz, HighMHz float64 // the plotted frequency range
-	Band            *band   // the spec's band; nil when it sets none
+	Band            *band   // the design's band (parts.BandOf); nil for no band
 	TargetVSWR      float64 // the matching target drawn on the match plot
 
 	FreqMHz      []float64
@@ -36,8 +36,11 @@ type electrical struct {
 	CutNote   string       // how the cuts were made
 }
 
-// band is the spec's operating band.
-type band struct{ LowMHz, HighMHz float64 }
+// band is the design's operating band.
+type band struct {
+	LowMHz, HighMHz float64
+	Text            string // parts.Band.Text
+}
 
 // patternCut is one plane through the coil's axis: the level of each
 // circular component against the angle from the axis, −π to π.
@@ -70,17 +73,17 @@ const (
 )
 
 // plotRange returns the frequency range the electrical plots cover and the
-// spec's band (nil when unset): the band widened by half its width on each
-// side, and at least ±5 % of the centre frequency.
+// design's band (parts.BandOf: the spec's edges, or the centre frequency
+// ± 3 %): the band widened by half its width on each side, and at least
+// ±5 % of the centre frequency.
 func plotRange(d *parts.Design) (lo, hi float64, b *band) {
 	f0 := d.Spec.FrequencyMHz
 	lo, hi = f0*(1-rangeMargin), f0*(1+rangeMargin)
 	s := d.Spec
-	if s.BandLowMHz != nil && s.BandHighMHz != nil {
-		b = &band{LowMHz: *s.BandLowMHz, HighMHz: *s.BandHighMHz}
-		w := b.HighMHz - b.LowMHz
-		lo, hi = math.Min(lo, b.LowMHz-bandMargin*w), math.Max(hi, b.HighMHz+bandMargin*w)
-	}
+	pb := parts.BandOf(s)
+	b = &band{LowMHz: pb.LowMHz, HighMHz: pb.HighMHz, Text: pb.Text(f0)}
+	w := b.HighMHz - b.LowMHz
+	lo, hi = math.Min(lo, b.LowMHz-bandMargin*w), math.Max(hi, b.HighMHz+bandMargin*w)
 	return lo, hi, b
 }
 

@@ -98,6 +98,9 @@ func toleranceSection(rep *report.ToleranceReport) (html.Section, error) {
 	if rep.Unbuildable > 0 {
 		yield += fmt.Sprintf(" %d of them could not be built and count as failing.", rep.Unbuildable)
 	}
+	if rep.Unmodelled > 0 {
+		yield += fmt.Sprintf(" %d could not be solved because the field model cannot represent them, and are left out of the share (the first: %s).", rep.Unmodelled, rep.UnmodelledProblem)
+	}
 	blocks := []html.Block{
 		html.Paragraph{Text: yield},
 		html.Paragraph{Text: "Model inside the loop: " + rep.Model.Description + "."},

@@ -61,7 +61,7 @@ func (k *Kit) reportDocument(rec *recorder) (html.Document, error) {
 		{Term: "Hand", Detail: r.Hand + ": " + bs.HandWords + "."},
 	}
 	if e.Band != nil {
-		sum = append(sum, html.Definition{Term: "Band", Detail: fmt.Sprintf("%s–%s MHz, centre %s MHz; designed at %s MHz", num(e.Band.LowMHz), num(e.Band.HighMHz), num(e.CentreMHz), num(r.FrequencyMHz))})
+		sum = append(sum, html.Definition{Term: "Band", Detail: fmt.Sprintf("%s, centre %s MHz; designed at %s MHz", e.Band.Text, num(e.CentreMHz), num(r.FrequencyMHz))})
 	} else {
 		sum = append(sum, html.Definition{Term: "Band", Detail: fmt.Sprintf("designed at %s MHz; the spec sets no band", num(r.FrequencyMHz))})
 	}

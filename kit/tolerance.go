@@ -170,7 +170,7 @@ func writeToleranceCSV(w io.Writer, rep *report.ToleranceReport) error {
 				row = append(row, "")
 			}
 		}
-		if k.Buildable {
+		if k.Solved() {
 			f := k.Figures
 			row = append(row, g(f.CentreMHz, 1), g(f.MinVSWR, 3), g(f.EdgeVSWR, 3), g(f.WorstVSWR, 3), g(f.GainDBic, 2), g(f.AxialRatioDB, 2))
 		} else {

@@ -103,8 +103,8 @@ type FieldCutSample struct {
 
 // FieldSummary condenses the sweep for the report and check.
 type FieldSummary struct {
-	// BandLowMHz and BandHighMHz are the spec's band (both the centre
-	// frequency when it gives none).
+	// BandLowMHz and BandHighMHz are the design's band (BandOf: the
+	// spec's edges, or the centre frequency ± DefaultBandFraction).
 	BandLowMHz  float64    `json:"band_low_mhz"`
 	BandHighMHz float64    `json:"band_high_mhz"`
 	Matched     FieldRange `json:"vswr_2"`

@@ -54,13 +54,52 @@ type MatchPoint struct {
 	VSWR         float64 `json:"vswr"`
 }
 
-// BandMHz returns the matching band's edges in MHz: the spec's band, or
-// the centre frequency ± DefaultBandFraction.
-func BandMHz(s *spec.Spec) (lo, hi float64) {
-	if s.BandLowMHz != nil && s.BandHighMHz != nil {
-		return *s.BandLowMHz, *s.BandHighMHz
+// Band is the band a design is matched for and judged over, MHz: the one
+// definition the strip's sizing, the field solution's summary, the
+// tolerance analysis, check, design.md and the build sheet share.
+type Band struct {
+	LowMHz, HighMHz float64
+	// LowGiven and HighGiven say the spec sets band_low_mhz and
+	// band_high_mhz; an edge it leaves out is the centre frequency ∓
+	// DefaultBandFraction.
+	LowGiven, HighGiven bool
+}
+
+// BandOf returns the band of spec s: each edge the spec gives, the other
+// the centre frequency ∓ DefaultBandFraction.
+func BandOf(s *spec.Spec) Band {
+	b := Band{LowMHz: s.FrequencyMHz * (1 - DefaultBandFraction), HighMHz: s.FrequencyMHz * (1 + DefaultBandFraction)}
+	if s.BandLowMHz != nil {
+		b.LowMHz, b.LowGiven = *s.BandLowMHz, true
 	}
-	return s.FrequencyMHz * (1 - DefaultBandFraction), s.FrequencyMHz * (1 + DefaultBandFraction)
+	if s.BandHighMHz != nil {
+		b.HighMHz, b.HighGiven = *s.BandHighMHz, true
+	}
+	return b
+}
+
+// BandMHz returns the edges of BandOf(s) in MHz.
+func BandMHz(s *spec.Spec) (lo, hi float64) {
+	b := BandOf(s)
+	return b.LowMHz, b.HighMHz
+}
+
+// Text says the band for reports and the build sheet: "5650–5950 MHz"
+// when the spec gives both edges, else with where the default edges come
+// from, e.g. "12000 MHz ± 3 % (11640–12360 MHz; the spec sets no
+// band_low_mhz or band_high_mhz)". f0 is the centre frequency, MHz.
+func (b Band) Text(f0 float64) string {
+	edges := fmt.Sprintf("%s–%s MHz", num(b.LowMHz), num(b.HighMHz))
+	pct := num(100 * DefaultBandFraction)
+	switch {
+	case b.LowGiven && b.HighGiven:
+		return edges
+	case b.LowGiven:
+		return fmt.Sprintf("%s (band_high_mhz not set: frequency_mhz + %s %%)", edges, pct)
+	case b.HighGiven:
+		return fmt.Sprintf("%s (band_low_mhz not set: frequency_mhz − %s %%)", edges, pct)
+	}
+	return fmt.Sprintf("%s MHz ± %s %% (%s; the spec sets no band_low_mhz or band_high_mhz)", num(f0), pct, edges)
 }
 
 // bandFrequencies returns MatchPoints frequencies in MHz evenly across the

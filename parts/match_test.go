@@ -4,6 +4,8 @@ import (
 	"math"
 	"strings"
 	"testing"
+
+	"coilwright/parts/spec"
 )
 
 func TestWireOverGroundOhm(t *testing.T) {
@@ -69,5 +71,34 @@ func TestCentreFeedSaysWhyNotMatched(t *testing.T) {
 		if WorstVSWR(d.Patterns.LineBand) > d.Spec.Wedge.MaxVSWR && !found {
 			t.Errorf("%s: worst VSWR %.2f without a match warning: %v", name, WorstVSWR(d.Patterns.LineBand), d.Warnings)
 		}
+	}
+}
+
+func TestBandOf(t *testing.T) {
+	// The band rule the reference spec documents (wedge.max_vswr: "across
+	// the band, band_low_mhz to band_high_mhz, or ±3 % of the frequency"),
+	// each edge on its own.
+	f := func(v float64) *float64 { return &v }
+	for _, c := range []struct {
+		name     string
+		low, hi  *float64
+		lo, high float64
+		text     string
+	}{
+		{"no edges", nil, nil, 11640, 12360, "12000 MHz ± 3 % (11640–12360 MHz; the spec sets no band_low_mhz or band_high_mhz)"},
+		{"both edges", f(11700), f(12500), 11700, 12500, "11700–12500 MHz"},
+		{"low edge only", f(11900), nil, 11900, 12360, "11900–12360 MHz (band_high_mhz not set: frequency_mhz + 3 %)"},
+		{"high edge only", nil, f(12100), 11640, 12100, "11640–12100 MHz (band_low_mhz not set: frequency_mhz − 3 %)"},
+	} {
+		t.Run(c.name, func(t *testing.T) {
+			s := &spec.Spec{FrequencyMHz: 12000, BandLowMHz: c.low, BandHighMHz: c.hi}
+			b := BandOf(s)
+			if math.Abs(b.LowMHz-c.lo) > 1e-9 || math.Abs(b.HighMHz-c.high) > 1e-9 {
+				t.Errorf("band %g–%g MHz, want %g–%g", b.LowMHz, b.HighMHz, c.lo, c.high)
+			}
+			if got := b.Text(s.FrequencyMHz); got != c.text {
+				t.Errorf("text %q, want %q", got, c.text)
+			}
+		})
 	}
 }

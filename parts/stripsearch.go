@@ -23,6 +23,14 @@ type StripSearch struct {
 	// search's model (ideal ground); WorstVSWR that of the chosen strip.
 	StartVSWR float64 `json:"start_worst_vswr"`
 	WorstVSWR float64 `json:"worst_vswr"`
+	// Limits names the search's bounds the chosen values sit on (each
+	// with the spec key that moves past it); empty when the search stopped
+	// between its bounds, at the best point of its grid.
+	Limits []string `json:"limits,omitempty"`
+	// SpanStepDeg and HeightStep are the search's grid: the span's step in
+	// degrees and the first turn's height factor per step.
+	SpanStepDeg float64 `json:"span_step_deg,omitempty"`
+	HeightStep  float64 `json:"height_step,omitempty"`
 	// Evaluations is the number of field solutions the search ran.
 	Evaluations int `json:"evaluations"`
 	// Model states the search's model.

@@ -287,3 +287,34 @@ func TestImpossibleGeometryIsASpecError(t *testing.T) {
 		t.Errorf("the solver's own error leaks through: %v", ge)
 	}
 }
+
+func TestSummaryBandWithoutEdges(t *testing.T) {
+	// Without band edges the band is the centre frequency ± 3 % (the rule
+	// the reference spec documents for wedge.max_vswr), the same band the
+	// strip is sized for: the summary's edges are distinct and its worst
+	// point is the largest VSWR of the edges, the centre and the sweep
+	// points between the edges.
+	d := demoDesign(t, "demo-5g8-cone", "band_low_mhz = 5650.0\n", "", "band_high_mhz = 5950.0\n", "")
+	r, err := Sweep(d, Options{Reflector: IdealGround, Points: 9, AxisOnly: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	sm := r.Summary
+	lo, hi := parts.BandMHz(d.Spec)
+	f0 := d.Spec.FrequencyMHz
+	if math.Abs(lo-0.97*f0) > 1e-9 || math.Abs(hi-1.03*f0) > 1e-9 || sm.BandLowMHz != lo || sm.BandHighMHz != hi {
+		t.Fatalf("summary band %g–%g MHz, parts band %g–%g MHz, want %g–%g", sm.BandLowMHz, sm.BandHighMHz, lo, hi, 0.97*f0, 1.03*f0)
+	}
+	if sm.Low.FrequencyMHz != lo || sm.High.FrequencyMHz != hi || sm.Centre.FrequencyMHz != f0 {
+		t.Errorf("rows at %g, %g, %g MHz, want %g, %g, %g", sm.Low.FrequencyMHz, sm.Centre.FrequencyMHz, sm.High.FrequencyMHz, lo, f0, hi)
+	}
+	worst := math.Max(math.Max(sm.Low.VSWR, sm.High.VSWR), sm.Centre.VSWR)
+	for _, p := range r.Points {
+		if p.FrequencyMHz > lo && p.FrequencyMHz < hi {
+			worst = math.Max(worst, p.VSWR)
+		}
+	}
+	if sm.Worst.VSWR != worst {
+		t.Errorf("worst in band VSWR %g, want %g", sm.Worst.VSWR, worst)
+	}
+}

@@ -5,6 +5,8 @@ import (
 	"encoding/binary"
 	"hash"
 	"math"
+
+	"coilwright/parts"
 )
 
 // Key returns a digest of everything a sweep of st with opt depends on:
@@ -32,13 +34,7 @@ func (st *Structure) Key(opt Options) [32]byte {
 	}
 	f(opt.Frequencies(s)...)
 	f(s.FrequencyMHz, float64(d.Coil.Hand), float64(st.Reflector), b2f(opt.AxisOnly), st.PlateSpacing, st.MaxSegment)
-	lo, hi := s.FrequencyMHz, s.FrequencyMHz
-	if s.BandLowMHz != nil {
-		lo = *s.BandLowMHz
-	}
-	if s.BandHighMHz != nil {
-		hi = *s.BandHighMHz
-	}
+	lo, hi := parts.BandMHz(s)
 	e := d.Estimates
 	f(lo, hi, e.Gain.Value, e.HPBW.Value, e.AxialRatio.Value, e.InputResistance.Value)
 	var k [32]byte

@@ -122,6 +122,8 @@ func SearchStrip(s *spec.Spec) (*spec.Spec, *parts.StripSearch, error) {
 		rec.StartVSWR = 0 // the line model's strip could not be solved
 	}
 	rec.SpanDeg, rec.FirstTurnHeightMM, rec.WorstVSWR = sp, h, v
+	rec.SpanStepDeg, rec.HeightStep = searchSpanStepDeg, searchHeightStep
+	rec.Limits = searchLimits(s, rec, h0)
 	rec.SuggestedSpanDeg, rec.SuggestedHeightMM, rec.SuggestedVSWR = sp, h, v
 	if (rec.SpanGiven || rec.HeightGiven) && v > s.Wedge.MaxVSWR {
 		if a, b, c := search(true, true); !math.IsInf(c, 1) {
@@ -138,6 +140,38 @@ func SearchStrip(s *spec.Spec) (*spec.Spec, *parts.StripSearch, error) {
 	return &c, rec, nil
 }
 
+// searchLimits names the bounds of the search that the chosen values of
+// rec sit on: the span's ends, and the first turn's lowest (one wire
+// diameter or −40 % of the default h0) and highest (+40 %) heights.
+// Values the spec gives are not searched and have no bound.
+func searchLimits(s *spec.Spec, rec *parts.StripSearch, h0 float64) []string {
+	var out []string
+	const eps = 1e-9
+	if !rec.SpanGiven {
+		switch {
+		case rec.SpanDeg <= searchMinSpanDeg+eps:
+			out = append(out, fmt.Sprintf("the shortest span it tries, %.0f° (wedge.span_deg)", searchMinSpanDeg))
+		case rec.SpanDeg >= searchMaxSpanDeg-eps:
+			out = append(out, fmt.Sprintf("the longest span it tries, %.0f° (wedge.span_deg)", searchMaxSpanDeg))
+		}
+	}
+	if !rec.HeightGiven {
+		h := rec.FirstTurnHeightMM
+		// The next steps the search would take (it rounds after
+		// checking the bounds).
+		lower := h / searchHeightStep
+		switch {
+		case lower < s.Wire.DiameterMM:
+			out = append(out, fmt.Sprintf("the lowest first turn it tries, one wire diameter above the plate (%s mm; coil.first_turn_height_mm)", num(s.Wire.DiameterMM)))
+		case lower < h0/searchHeightRange-eps:
+			out = append(out, fmt.Sprintf("the lowest first turn it tries, %.0f %% below the default %s mm (coil.first_turn_height_mm)", 100*(1-1/searchHeightRange), num(h0)))
+		case h*searchHeightStep > h0*searchHeightRange+eps:
+			out = append(out, fmt.Sprintf("the highest first turn it tries, %.0f %% above the default %s mm (coil.first_turn_height_mm)", 100*(searchHeightRange-1), num(h0)))
+		}
+	}
+	return out
+}
+
 // StripSearchWarning returns the warning for a search that did not reach
 // the target, with a concrete fix, or nil.
 func StripSearchWarning(s *spec.Spec, r *parts.StripSearch) *parts.Warning {
@@ -148,9 +182,22 @@ func StripSearchWarning(s *spec.Spec, r *parts.StripSearch) *parts.Warning {
 	if s.Coil.Feed == "centre" {
 		fix = "set coil.feed = \"periphery\" (the centre feed's horizontal lead is a high-impedance line in front of the strip), or " + fix
 	}
-	if (r.SpanGiven || r.HeightGiven) && r.SuggestedVSWR < r.WorstVSWR-searchImprovedVSWR {
-		fix = fmt.Sprintf("remove the given wedge.span_deg / coil.first_turn_height_mm or set span_deg = %.0f and first_turn_height_mm = %.1f (worst VSWR %.2f on the same model)", r.SuggestedSpanDeg, r.SuggestedHeightMM, r.SuggestedVSWR)
+	if given := givenStripKeys(r); given != "" && r.SuggestedVSWR < r.WorstVSWR-searchImprovedVSWR {
+		fix = fmt.Sprintf("remove the given %s or set span_deg = %.0f and first_turn_height_mm = %.1f (worst VSWR %.2f on the same model)", given, r.SuggestedSpanDeg, r.SuggestedHeightMM, r.SuggestedVSWR)
 	}
 	return &parts.Warning{Code: "match", Message: fmt.Sprintf("the whole-antenna solution's best matching strip (span %.0f°, first turn %.1f mm up) reaches VSWR %.2f at worst in the band over an ideal ground, above wedge.max_vswr = %g; %s",
 		r.SpanDeg, r.FirstTurnHeightMM, r.WorstVSWR, s.Wedge.MaxVSWR, fix)}
+}
+
+// givenStripKeys names the strip keys the spec gives ("" for none).
+func givenStripKeys(r *parts.StripSearch) string {
+	switch {
+	case r.SpanGiven && r.HeightGiven:
+		return "wedge.span_deg and coil.first_turn_height_mm"
+	case r.SpanGiven:
+		return "wedge.span_deg"
+	case r.HeightGiven:
+		return "coil.first_turn_height_mm"
+	}
+	return ""
 }

@@ -26,13 +26,8 @@ const (
 // summarise works out the Summary of r for design d.
 func summarise(r *Result, d *parts.Design) Summary {
 	s := d.Spec
-	sm := Summary{BandLowMHz: s.FrequencyMHz, BandHighMHz: s.FrequencyMHz}
-	if s.BandLowMHz != nil {
-		sm.BandLowMHz = *s.BandLowMHz
-	}
-	if s.BandHighMHz != nil {
-		sm.BandHighMHz = *s.BandHighMHz
-	}
+	var sm Summary
+	sm.BandLowMHz, sm.BandHighMHz = parts.BandMHz(s)
 	sm.Matched = matchedRange(r.Points, MatchedVSWR, sm.BandLowMHz, sm.BandHighMHz)
 	sm.Good = matchedRange(r.Points, GoodVSWR, sm.BandLowMHz, sm.BandHighMHz)
 	fig := func(f float64) BandFigures { return figuresAt(r.Points, f, r.RHCP) }

@@ -9,10 +9,13 @@ import (
 // Report is the design summary written to design.json and design.md. Field
 // names carry their units; it is a plain value derived from a Design.
 type Report struct {
-	Kit                     string           `json:"kit"`
-	FrequencyMHz            float64          `json:"frequency_mhz"`
-	BandLowMHz              *float64         `json:"band_low_mhz,omitempty"`
-	BandHighMHz             *float64         `json:"band_high_mhz,omitempty"`
+	Kit          string   `json:"kit"`
+	FrequencyMHz float64  `json:"frequency_mhz"`
+	BandLowMHz   *float64 `json:"band_low_mhz,omitempty"`
+	BandHighMHz  *float64 `json:"band_high_mhz,omitempty"`
+	// Band says the band the design is matched and judged over (BandOf),
+	// for design.md; design.json carries the spec's edges above.
+	Band                    string           `json:"-"`
 	WavelengthMM            float64          `json:"wavelength_mm"`
 	Quantity                int              `json:"quantity"`
 	Shape                   string           `json:"shape"`
@@ -97,6 +100,7 @@ func New(d *parts.Design) Report {
 	e := d.Estimates
 	r := Report{
 		Kit: s.Kit, FrequencyMHz: s.FrequencyMHz, BandLowMHz: s.BandLowMHz, BandHighMHz: s.BandHighMHz,
+		Band:         parts.BandOf(s).Text(s.FrequencyMHz),
 		WavelengthMM: d.Wavelength, Quantity: s.Quantity,
 		Shape: s.Coil.Shape, Hand: d.Coil.Hand.String(), Feed: s.Coil.Feed, PitchMode: s.Coil.PitchMode,
 		TurnCount:               d.Coil.Turns,

@@ -15,9 +15,15 @@ type ToleranceReport struct {
 	// Share is the fraction of simulated kits whose VSWR stays at or below
 	// VSWRTarget across the whole band.
 	Share float64 `json:"share_meeting_target"`
-	// Unbuildable counts kits whose sampled wire takes no set on the former
-	// or whose solve failed; they count as not meeting the target.
+	// Unbuildable counts kits whose sampled wire takes no set on the
+	// former; they count as not meeting the target.
 	Unbuildable int `json:"unbuildable"`
+	// Unmodelled counts kits the field model cannot represent (a sampled
+	// geometry outside the thin-wire kernel's limits, such as a feed pin
+	// too short to segment); they are left out of Share.
+	// UnmodelledProblem is the first such kit's problem.
+	Unmodelled        int    `json:"unmodelled,omitempty"`
+	UnmodelledProblem string `json:"unmodelled_problem,omitempty"`
 	// Nominal is the loop model's figures for the nominal design.
 	Nominal ToleranceFigures `json:"nominal"`
 	// Figures lists each antenna figure's distribution over the batch.
@@ -102,6 +108,12 @@ type ToleranceSensitivity struct {
 	// CentreShare is its share of the linearised variance of the
 	// matched-band centre, 0–1.
 	CentreShare float64 `json:"centre_variance_share"`
+	// Step is empty for a central difference; otherwise it says which
+	// one-sided difference was taken and why.
+	Step string `json:"step,omitempty"`
+	// Unmodelled says why neither side could be solved (the effects are
+	// then zero and not known).
+	Unmodelled string `json:"unmodelled,omitempty"`
 	// Words says it for a builder.
 	Words string `json:"words"`
 }
@@ -156,5 +168,12 @@ type ToleranceKit struct {
 	DiametersMM []float64 // released centreline diameter per turn
 	Figures     ToleranceFigures
 	Buildable   bool
-	Meets       bool
+	// Unmodelled says why the field model could not solve the built kit
+	// ("" when it did).
+	Unmodelled string
+	Meets      bool
 }
+
+// Solved reports whether the kit was built and solved, so that its
+// Figures hold.
+func (k ToleranceKit) Solved() bool { return k.Buildable && k.Unmodelled == "" }

@@ -131,10 +131,7 @@ func mm2(v float64) string { return fmt.Sprintf("%.2f mm", v) }
 
 func designRows(d *parts.Design, cl *cutlist.CutList) []SheetRow {
 	s := d.Spec
-	band := "not given"
-	if s.BandLowMHz != nil && s.BandHighMHz != nil {
-		band = fmt.Sprintf("%s–%s MHz", num(*s.BandLowMHz), num(*s.BandHighMHz))
-	}
+	band := parts.BandOf(s).Text(s.FrequencyMHz)
 	rows := []SheetRow{
 		{"Centre frequency", fmt.Sprintf("%s MHz (wavelength %.2f mm)", num(s.FrequencyMHz), d.Wavelength)},
 		{"Band", band},
@@ -308,10 +305,7 @@ func steps(d *parts.Design, cl *cutlist.CutList, strip *flat.Wedge, all []Hazard
 	if d.Former.EndRadius > d.Former.StartRadius {
 		lockAt, windTo = "at the free end of the former, away from the flange: this coil widens away from its feed, so the former is printed feed end up", "towards the flange"
 	}
-	band := fmt.Sprintf("%s MHz ± 3 %%", num(s.FrequencyMHz))
-	if s.BandLowMHz != nil && s.BandHighMHz != nil {
-		band = fmt.Sprintf("%s–%s MHz", num(*s.BandLowMHz), num(*s.BandHighMHz))
-	}
+	band := parts.BandOf(s).Text(s.FrequencyMHz)
 	strip1 := "Cut the matching strip from its 1:1 template and file its edges smooth."
 	strip2 := "Tin the strip and the underside of the winding's start. Solder the strip along the underside of the winding's start, its wide end at the feed and its flat face parallel to the reflector."
 	expect := fmt.Sprintf("The matching strip is sized for a VSWR of at most %s (return loss at least %.1f dB) across the band; accept the antenna if the return loss is at least %s dB across it.", num(s.Wedge.MaxVSWR), line.ReturnLossDB((s.Wedge.MaxVSWR-1)/(s.Wedge.MaxVSWR+1)), num(ReturnLossTargetDB))

@@ -11,6 +11,7 @@ import (
 
 	"coilwright/parts"
 	"coilwright/parts/report"
+	"coilwright/parts/spec"
 )
 
 // Options tunes Run. The zero value takes everything from the spec.
@@ -31,9 +32,12 @@ const defaultRefOhm = 50.0
 const streamSalt = 0x9e3779b97f4a7c15
 
 // Run simulates the batch of design d, solving each kit with ev, and
-// returns the report. It fails when the nominal design cannot be solved;
-// kits that cannot be built or solved count as not meeting the target.
-// The result is the same on any number of cores.
+// returns the report. It fails when the nominal design cannot be solved.
+// Kits whose wire takes no set on the former count as not meeting the
+// target; kits the field model cannot represent (a geometry outside the
+// thin-wire kernel's limits) are counted apart and left out of the share,
+// and an input whose ±1σ step the model cannot represent on one side is
+// differenced on the other. The result is the same on any number of cores.
 func Run(d *parts.Design, ev Evaluator, opt Options) (*report.ToleranceReport, error) {
 	if d == nil || ev == nil {
 		return nil, errors.New("tolerance: nil design or evaluator")
@@ -60,15 +64,18 @@ func Run(d *parts.Design, ev Evaluator, opt Options) (*report.ToleranceReport, e
 		vals := draw(ins, seed, i)
 		k := report.ToleranceKit{Index: i + 1, Inputs: vals}
 		b, err := chain(d, ins, vals)
+		k.Buildable = err == nil
 		if err == nil {
 			k.DiametersMM = b.DiametersMM
 			var r Response
 			if r, err = ev.Evaluate(b); err == nil {
 				k.Figures, err = figures(r, band)
 			}
+			if err != nil {
+				k.Unmodelled = modelProblem(err)
+			}
 		}
-		k.Buildable = err == nil
-		k.Meets = k.Buildable && k.Figures.WorstVSWR <= band.VSWRTarget
+		k.Meets = k.Solved() && k.Figures.WorstVSWR <= band.VSWRTarget
 		kits[i] = k
 	})
 	rep := &report.ToleranceReport{Samples: n, Seed: seed, VSWRTarget: band.VSWRTarget,
@@ -81,18 +88,27 @@ func Run(d *parts.Design, ev Evaluator, opt Options) (*report.ToleranceReport, e
 		if k.Meets {
 			met++
 		}
-		if !k.Buildable {
+		switch {
+		case !k.Buildable:
 			rep.Unbuildable++
+		case k.Unmodelled != "":
+			rep.Unmodelled++
+			if rep.UnmodelledProblem == "" {
+				rep.UnmodelledProblem = k.Unmodelled
+			}
 		}
 	}
-	rep.Share = float64(met) / float64(n)
+	// A kit the field model cannot represent is neither a pass nor a
+	// failure: the share is of the kits that were built and solved or
+	// could not be built.
+	if judged := n - rep.Unmodelled; judged > 0 {
+		rep.Share = float64(met) / float64(judged)
+	}
 	if m, ok := ev.(describer); ok {
 		rep.Model = m.Describe(band)
 	}
 	rep.Figures = distributions(kits, nominal.fig)
-	if rep.Sensitivities, err = sensitivities(d, ev, band, ins, nominal.fig); err != nil {
-		return nil, err
-	}
+	rep.Sensitivities = sensitivities(d, ev, band, ins, nominal.fig)
 	rep.Inspection = inspection(d, kits, rep.Sensitivities, d.Spec.Tolerance.InspectionShare)
 	return rep, nil
 }
@@ -102,17 +118,12 @@ type describer interface {
 	Describe(b Band) report.ToleranceModel
 }
 
-// bandOf returns the band and target a kit must meet: the spec's band
-// edges, or the centre frequency alone when it gives none.
+// bandOf returns the band and target a kit must meet: the design's band
+// (parts.BandOf: the spec's edges, or the centre frequency ± 3 %).
 func bandOf(d *parts.Design, opt Options) Band {
 	s := d.Spec
-	b := Band{LowMHz: s.FrequencyMHz, CentreMHz: s.FrequencyMHz, HighMHz: s.FrequencyMHz, RefOhm: defaultRefOhm, VSWRTarget: specTarget(s)}
-	if s.BandLowMHz != nil {
-		b.LowMHz = *s.BandLowMHz
-	}
-	if s.BandHighMHz != nil {
-		b.HighMHz = *s.BandHighMHz
-	}
+	b := Band{CentreMHz: s.FrequencyMHz, RefOhm: defaultRefOhm, VSWRTarget: specTarget(s)}
+	b.LowMHz, b.HighMHz = parts.BandMHz(s)
 	if opt.RefOhm > 0 {
 		b.RefOhm = opt.RefOhm
 	}
@@ -182,7 +193,17 @@ func parallelFor(n int, f func(i int)) {
 	wg.Wait()
 }
 
-// distributions summarises the buildable kits' figures.
+// modelProblem says why the field model could not solve a kit, without
+// naming a spec key: the kit's geometry is a sampled one, not the spec's.
+func modelProblem(err error) string {
+	var se *spec.SpecError
+	if errors.As(err, &se) {
+		return se.Problem
+	}
+	return err.Error()
+}
+
+// distributions summarises the solved kits' figures.
 func distributions(kits []report.ToleranceKit, nominal report.ToleranceFigures) []report.ToleranceDistribution {
 	type fig struct {
 		name, unit string
@@ -200,7 +221,7 @@ func distributions(kits []report.ToleranceKit, nominal report.ToleranceFigures) 
 	for i, f := range figs {
 		var v []float64
 		for _, k := range kits {
-			if k.Buildable {
+			if k.Solved() {
 				v = append(v, f.get(k.Figures))
 			}
 		}

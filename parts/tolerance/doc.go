@@ -16,9 +16,13 @@
 // at the centre frequency. Kits are evaluated in parallel into
 // pre-indexed slots.
 //
+// A kit the field model cannot represent (a sampled geometry outside the
+// thin-wire kernel's limits) is counted apart and left out of the share;
+// it is a limit of the model, not of the spec, so it never refuses one.
+//
 // Sensitivities are one-at-a-time central differences of ±1σ about the
-// nominal design, ranked by their share of the linearised variance of the
-// matched-band centre. The inspection tolerance per turn is the widest
+// nominal design (one-sided where one side cannot be solved), ranked by
+// their share of the linearised variance of the worst VSWR in the band. The inspection tolerance per turn is the widest
 // diameter band, allotted between turns inversely to their sensitivity,
 // within which the wanted share of the simulated kits passing inspection
 // meets the VSWR target.

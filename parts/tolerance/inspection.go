@@ -37,7 +37,7 @@ func inspection(d *parts.Design, kits []report.ToleranceKit, sens []report.Toler
 	out := report.ToleranceInspection{Share: share, ToleranceMM: make([]float64, n)}
 	kMax := 0.0
 	for _, k := range kits {
-		if !k.Buildable {
+		if !k.Solved() {
 			continue
 		}
 		for i, t := range d.Turns {
@@ -80,9 +80,10 @@ func inspection(d *parts.Design, kits []report.ToleranceKit, sens []report.Toler
 }
 
 // accepted reports whether every turn of kit lies within k·w_i of its
-// target diameter. An unbuildable kit is never accepted.
+// target diameter. A kit that could not be built or solved is never
+// accepted.
 func accepted(d *parts.Design, kit report.ToleranceKit, w []float64, k float64) bool {
-	if !kit.Buildable {
+	if !kit.Solved() {
 		return false
 	}
 	for i, t := range d.Turns {

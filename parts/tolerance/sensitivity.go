@@ -15,17 +15,22 @@ import (
 // (3σ), ranked by their share of the linearised variance of the worst
 // VSWR in the band, which decides whether a kit passes (the squared 1σ
 // effect over the sum of them: the first-order variance of a sum of
-// independent effects). Inputs with no spread are left out.
-func sensitivities(d *parts.Design, ev Evaluator, band Band, ins []input, nominal report.ToleranceFigures) ([]report.ToleranceSensitivity, error) {
+// independent effects). Inputs with no spread are left out. Where the kit
+// one side of the nominal cannot be built or modelled, the difference is
+// taken one-sided, from the nominal to the other side, and the input says
+// so; where neither side can, the input carries no effect and says why.
+func sensitivities(d *parts.Design, ev Evaluator, band Band, ins []input, nominal report.ToleranceFigures) []report.ToleranceSensitivity {
 	var idx []int
 	for i, in := range ins {
 		if in.sigma > 0 {
 			idx = append(idx, i)
 		}
 	}
-	type pair struct{ up, down report.ToleranceFigures }
-	res := make([]pair, len(idx))
-	errs := make([]error, 2*len(idx))
+	type side struct {
+		fig report.ToleranceFigures
+		err error
+	}
+	res := make([]side, 2*len(idx))
 	parallelFor(2*len(idx), func(j int) {
 		i := idx[j/2]
 		z := 1.0
@@ -35,26 +40,37 @@ func sensitivities(d *parts.Design, ev Evaluator, band Band, ins []input, nomina
 		vals := nominalValues(ins)
 		vals[i] = ins[i].value(z)
 		s, err := solveAt(d, ev, band, ins, vals)
-		errs[j] = err
-		if j%2 == 0 {
-			res[j/2].up = s.fig
-		} else {
-			res[j/2].down = s.fig
-		}
+		res[j] = side{fig: s.fig, err: err}
 	})
-	for j, err := range errs {
-		if err != nil {
-			return nil, fmt.Errorf("tolerance: sensitivity of %s: %w", ins[idx[j/2]].info.Name, err)
-		}
-	}
 	out := make([]report.ToleranceSensitivity, len(idx))
 	total, totalC := 0.0, 0.0
 	for j, i := range idx {
-		dc := (res[j].up.CentreMHz - res[j].down.CentreMHz) / 2
-		de := (res[j].up.EdgeVSWR - res[j].down.EdgeVSWR) / 2
-		dw := (res[j].up.WorstVSWR - res[j].down.WorstVSWR) / 2
-		out[j] = report.ToleranceSensitivity{Name: ins[i].info.Name,
-			CentreMHz: limitSigmas * dc, EdgeVSWR: limitSigmas * de, WorstVSWR: limitSigmas * dw, Share: dw * dw, CentreShare: dc * dc}
+		up, down := res[2*j], res[2*j+1]
+		out[j].Name = ins[i].info.Name
+		var hi, lo report.ToleranceFigures
+		switch {
+		case up.err == nil && down.err == nil:
+			hi, lo = up.fig, down.fig
+		case up.err == nil:
+			hi, lo = up.fig, nominal
+			out[j].Step = "one-sided (nominal to +1σ): the −1σ kit cannot be solved: " + modelProblem(down.err)
+		case down.err == nil:
+			hi, lo = nominal, down.fig
+			out[j].Step = "one-sided (−1σ to nominal): the +1σ kit cannot be solved: " + modelProblem(up.err)
+		default:
+			out[j].Unmodelled = modelProblem(up.err)
+			continue
+		}
+		// A central difference spans 2σ, a one-sided one σ.
+		span := 2.0
+		if out[j].Step != "" {
+			span = 1
+		}
+		dc := (hi.CentreMHz - lo.CentreMHz) / span
+		de := (hi.EdgeVSWR - lo.EdgeVSWR) / span
+		dw := (hi.WorstVSWR - lo.WorstVSWR) / span
+		out[j].CentreMHz, out[j].EdgeVSWR, out[j].WorstVSWR = limitSigmas*dc, limitSigmas*de, limitSigmas*dw
+		out[j].Share, out[j].CentreShare = dw*dw, dc*dc
 		total += dw * dw
 		totalC += dc * dc
 	}
@@ -69,7 +85,7 @@ func sensitivities(d *parts.Design, ev Evaluator, band Band, ins []input, nomina
 		out[j].Words = words(ins[i].info, out[j], inside)
 	}
 	slices.SortStableFunc(out, func(a, b report.ToleranceSensitivity) int { return cmp.Compare(b.Share, a.Share) })
-	return out, nil
+	return out
 }
 
 // words says an input's effect for a builder: "turn 1 diameter: +0.20 mm
@@ -90,6 +106,13 @@ func words(in report.ToleranceInput, s report.ToleranceSensitivity, centreInside
 		}
 		move = fmt.Sprintf(" moves the matched band %.0f MHz %s and", math.Abs(s.CentreMHz), dir)
 	}
-	return fmt.Sprintf("%s: %s%s changes the worst VSWR in the band by %+.2f (%.0f %% of its spread)",
+	if s.Unmodelled != "" {
+		return fmt.Sprintf("%s: not found: neither the −1σ nor the +1σ kit can be solved (%s)", in.Name, s.Unmodelled)
+	}
+	w := fmt.Sprintf("%s: %s%s changes the worst VSWR in the band by %+.2f (%.0f %% of its spread)",
 		in.Name, amount, move, s.WorstVSWR, 100*s.Share)
+	if s.Step != "" {
+		w += "; " + s.Step
+	}
+	return w
 }

@@ -51,8 +51,12 @@ type SolverEvaluator struct {
 	leadFrac []float64
 	leadEnd  int
 	// wireSeg and stripSeg list the segments of the wire's radius (lead,
-	// link, coil) and of the strip.
+	// link, coil) and of the strip; pinSeg is the feed pin's one segment
+	// (-1 when there is none) and pinRadius the cable's centre conductor's
+	// radius, which the model thins on a short pin as field.Build does.
 	wireSeg, stripSeg []int
+	pinSeg            int
+	pinRadius         float64
 	// mids and bounds are the turns' middle and boundary azimuths.
 	mids, bounds []float64
 	// full is the full model's response of the nominal design (nil when
@@ -84,7 +88,10 @@ func NewSolverEvaluator(d *parts.Design, full *field.Result) (*SolverEvaluator, 
 	if err != nil {
 		return nil, err
 	}
-	e := &SolverEvaluator{d: d, st: st, opt: opt, rhcp: rhcp, leadEnd: -1}
+	e := &SolverEvaluator{d: d, st: st, opt: opt, rhcp: rhcp, leadEnd: -1, pinSeg: -1, pinRadius: st.PinRadius}
+	if st.CablePinRadius > 0 {
+		e.pinRadius = st.CablePinRadius
+	}
 	w := st.Conductor()
 	hand := float64(d.Coil.Hand)
 	prev, last := 0.0, -1
@@ -101,6 +108,9 @@ func NewSolverEvaluator(d *parts.Design, full *field.Result) (*SolverEvaluator, 
 		switch p.Name {
 		case field.PartPin:
 			leadFrom = p.To
+			if p.To == p.From+1 {
+				e.pinSeg = p.From
+			}
 		case field.PartLead:
 			for i := p.From + 1; i <= p.To; i++ {
 				e.lead = append(e.lead, i)
@@ -257,6 +267,17 @@ func (e *SolverEvaluator) Evaluate(b Build) (Response, error) {
 	}
 	for _, s := range e.stripSeg {
 		w.Radius[s] += b.StripWidthDeltaMM / 4
+	}
+	if s := e.pinSeg; s >= 0 {
+		// A kit whose first turn sits lower has a shorter pin: model it
+		// thinner as field.Build models a short pin, so that its one
+		// segment stays within the kernel's limits.
+		l := w.Points[s+1].Sub(w.Points[s]).Len()
+		r := math.Min(e.pinRadius, l/field.KernelMinSegmentRadii)
+		if r*field.KernelMinSegmentRadii > l { // rounding: keep l ≥ the kernel's limit
+			r = math.Nextafter(r, 0)
+		}
+		w.Radius[s] = r
 	}
 	st := *e.st
 	st.Model.Wires = append([]em.Wire{w}, e.st.Model.Wires[1:]...)

@@ -7,10 +7,13 @@ import (
 	"math"
 	"math/cmplx"
 	"runtime"
+	"slices"
 	"testing"
 
+	"coilwright/parts"
 	"coilwright/parts/field"
 	"coilwright/parts/report"
+	"coilwright/parts/spec"
 )
 
 // samePointsRelTol is how closely the nominal geometry, moved by nothing,
@@ -176,4 +179,55 @@ func TestSolverSensitivityMatchesDirectDifference(t *testing.T) {
 		}
 	}
 	t.Error("no sensitivity for turn 1 diameter")
+}
+
+func TestSolverEvaluatorThinsAShortPin(t *testing.T) {
+	// A 12 GHz coil of 0.5 mm wire whose first turn sits 0.7 mm up has a
+	// feed pin that the full model already thins to stay within the
+	// kernel's limit (field.KernelMinSegmentRadii); a kit whose first turn
+	// is lower still must be modelled the same way, not refused.
+	s, err := spec.ParseSpec([]byte(`kit = "Short pin"
+frequency_mhz = 12000.0
+[coil]
+shape = "cylindrical"
+turns = 7.0
+feed = "periphery"
+base_circumference_lambda = 1.0
+pitch_angle_deg = 12.5
+first_turn_height_mm = 0.7
+[wire]
+material = "copper-annealed"
+diameter_mm = 0.5
+[reflector]
+shape = "disc"
+`))
+	if err != nil {
+		t.Fatal(err)
+	}
+	d, err := parts.NewDesign(s)
+	if err != nil {
+		t.Fatal(err)
+	}
+	e, err := NewSolverEvaluator(d, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	ins, _ := inputs(d)
+	b, err := chain(d, ins, nominalValues(ins))
+	if err != nil {
+		t.Fatal(err)
+	}
+	// The whole coil moved from 1σ lower to 1σ higher in 0.1σ steps: the
+	// pin shortens and lengthens, its modelled radius following.
+	sigma := d.Spec.Tolerance.FirstTurnMM / limitSigmas
+	for k := -10; k <= 10; k++ {
+		kb := b
+		kb.HeightDeltasMM = slices.Clone(b.HeightDeltasMM)
+		for i := range kb.HeightDeltasMM {
+			kb.HeightDeltasMM[i] += float64(k) / 10 * sigma
+		}
+		if _, err := e.Evaluate(kb); err != nil {
+			t.Errorf("the first turn %+.1fσ: %v", float64(k)/10, err)
+		}
+	}
 }
