@@ -8,25 +8,13 @@ import (
 	"testing"
 
 	"coilwright/parts"
+	"coilwright/parts/designtest"
 	"coilwright/parts/spec"
 	"coilwright/parts/wire"
 	"coilwright/templates"
 )
 
-// mustDesign parses text and works out its design, failing the test on
-// any error.
-func mustDesign(t *testing.T, text string) *parts.Design {
-	t.Helper()
-	s, err := spec.ParseSpec([]byte(text))
-	if err != nil {
-		t.Fatalf("ParseSpec: %v", err)
-	}
-	d, err := parts.NewDesign(s)
-	if err != nil {
-		t.Fatal(err)
-	}
-	return d
-}
+var mustDesign = designtest.MustDesign
 
 // specText is a spec at freqMHz with the given [coil] and [wire] bodies.
 func specText(freqMHz float64, coil, wire string) string {
