@@ -63,7 +63,7 @@ func (m *Mesh) fillMany(zs [][]complex128, omegas []float64) {
 	}
 	for p0 := 0; p0 < ns; p0 += fillBlock {
 		p1 := min(p0+fillBlock, ns)
-		parallelFor(p1-p0, func(i int) {
+		parallelFor(m.workers, p1-p0, func(i int) {
 			p := p0 + i
 			w := plan.scratch()
 			m.row(direct[i*ns*nf:(i+1)*ns*nf], p, m.segs, &m.near, plan, w)

@@ -9,38 +9,59 @@ import (
 	"coilwright/parts"
 )
 
-// sensitivities returns the inputs' effects by one-at-a-time central
-// differences of ±1σ about the nominal design, scaled to the ± limit
-// (3σ), ranked by their share of the linearised variance of the worst
-// VSWR in the band, which decides whether a kit passes (the squared 1σ
-// effect over the sum of them: the first-order variance of a sum of
-// independent effects). Inputs with no spread are left out.
-func sensitivities(d *parts.Design, ev Evaluator, band Band, ins []input, nominal parts.ToleranceFigures) ([]parts.ToleranceSensitivity, error) {
+// sensitivityRuns holds the one-at-a-time solves behind the inputs'
+// sensitivities: for each input with a spread (idx), the nominal design
+// with that input moved +1σ and −1σ. Its jobs are run by the caller's
+// pool, each writing only its own slot.
+type sensitivityRuns struct {
+	idx  []int
+	res  []sensitivityPair
+	errs []error
+}
+
+type sensitivityPair struct{ up, down parts.ToleranceFigures }
+
+// newSensitivityRuns lists the inputs with a spread.
+func newSensitivityRuns(ins []input) *sensitivityRuns {
 	var idx []int
 	for i, in := range ins {
 		if in.sigma > 0 {
 			idx = append(idx, i)
 		}
 	}
-	type pair struct{ up, down parts.ToleranceFigures }
-	res := make([]pair, len(idx))
-	errs := make([]error, 2*len(idx))
-	parallelFor(2*len(idx), func(j int) {
-		i := idx[j/2]
-		z := 1.0
-		if j%2 == 1 {
-			z = -1
-		}
-		vals := nominalValues(ins)
-		vals[i] = ins[i].value(z)
-		s, err := solveAt(d, ev, band, ins, vals)
-		errs[j] = err
-		if j%2 == 0 {
-			res[j/2].up = s.fig
-		} else {
-			res[j/2].down = s.fig
-		}
-	})
+	return &sensitivityRuns{idx: idx, res: make([]sensitivityPair, len(idx)), errs: make([]error, 2*len(idx))}
+}
+
+// jobs returns the number of solves: two per input with a spread.
+func (s *sensitivityRuns) jobs() int { return 2 * len(s.idx) }
+
+// run solves job j: input idx[j/2] moved +1σ (j even) or −1σ (j odd).
+func (s *sensitivityRuns) run(d *parts.Design, ev Evaluator, band Band, ins []input, j int) {
+	i := s.idx[j/2]
+	z := 1.0
+	if j%2 == 1 {
+		z = -1
+	}
+	vals := nominalValues(ins)
+	vals[i] = ins[i].value(z)
+	sol, err := solveAt(d, ev, band, ins, vals)
+	s.errs[j] = err
+	if j%2 == 0 {
+		s.res[j/2].up = sol.fig
+	} else {
+		s.res[j/2].down = sol.fig
+	}
+}
+
+// result returns the inputs' effects by one-at-a-time central
+// differences of ±1σ about the nominal design, scaled to the ± limit
+// (3σ), ranked by their share of the linearised variance of the worst
+// VSWR in the band, which decides whether a kit passes (the squared 1σ
+// effect over the sum of them: the first-order variance of a sum of
+// independent effects). Inputs with no spread are left out. Every job
+// must have run.
+func (s *sensitivityRuns) result(ins []input, nominal parts.ToleranceFigures) ([]parts.ToleranceSensitivity, error) {
+	idx, res, errs := s.idx, s.res, s.errs
 	for j, err := range errs {
 		if err != nil {
 			return nil, fmt.Errorf("tolerance: sensitivity of %s: %w", ins[idx[j/2]].info.Name, err)
