@@ -29,18 +29,30 @@ const (
 
 const fillBlock = 32
 
+// pairMemory returns the bytes fillMany's block storage takes per
+// frequency.
+func (m *Mesh) pairMemory() int {
+	b := fillBlock * len(m.segs) * 4 * 16 // moments: four complex128
+	if m.ground {
+		b *= 2
+	}
+	return b
+}
+
 // fill writes the n×n impedance matrix at angular frequency omega into z
 // (row-major, overwritten).
 func (m *Mesh) fill(z []complex128, omega float64) {
-	m.fillMany([][]complex128{z}, []float64{omega})
+	m.fillMany([][]complex128{z}, []float64{omega}, nil)
 }
 
 // fillMany writes the impedance matrices at the angular frequencies omegas
 // into zs (one n×n row-major matrix each, overwritten). The frequencies
 // share each pair's geometry, and the kernel's phase across a run of
 // equally spaced frequencies is stepped by one rotation per frequency
-// (see phasePlan) instead of a sine and cosine each.
-func (m *Mesh) fillMany(zs [][]complex128, omegas []float64) {
+// (see phasePlan) instead of a sine and cosine each. buf, when not nil,
+// holds the storage for one block's pair entries (pairMemory bytes per
+// frequency) and is kept across calls, grown as needed.
+func (m *Mesh) fillMany(zs [][]complex128, omegas []float64, buf *[]moments) {
 	n := m.nBasis
 	nf := len(omegas)
 	for _, z := range zs {
@@ -56,11 +68,21 @@ func (m *Mesh) fillMany(zs [][]complex128, omegas []float64) {
 	}
 	plan := newPhasePlan(ks)
 	ns := len(m.segs)
-	direct := make([]moments, fillBlock*ns*nf)
-	var image []moments
-	if m.ground {
-		image = make([]moments, fillBlock*ns*nf)
+	per := fillBlock * ns * nf
+	var b []moments
+	if buf != nil {
+		b = *buf
 	}
+	if m.ground {
+		per *= 2
+	}
+	if cap(b) < per {
+		b = make([]moments, per)
+		if buf != nil {
+			*buf = b
+		}
+	}
+	direct, image := b[:fillBlock*ns*nf], b[fillBlock*ns*nf:per]
 	for p0 := 0; p0 < ns; p0 += fillBlock {
 		p1 := min(p0+fillBlock, ns)
 		parallelFor(m.workers, p1-p0, func(i int) {

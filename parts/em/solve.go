@@ -38,7 +38,8 @@ func (m *Mesh) Solve(freq float64) (*Solution, error) {
 }
 
 // sweepMemory bounds the matrix storage of one group of a sweep's
-// frequencies, bytes (see Sweep).
+// frequencies, bytes (see Sweep). The fill's block storage, kept across
+// the groups, adds pairMemory per frequency of a group.
 const sweepMemory = 48 << 20
 
 // Sweep solves at each frequency (Hz). The frequencies are filled in
@@ -58,6 +59,7 @@ func (m *Mesh) Sweep(freqs []float64) ([]*Solution, error) {
 	per := max(1, sweepMemory/(16*n*n))
 	groups := (len(freqs) + per - 1) / max(per, 1)
 	var zs [][]complex128
+	var buf []moments
 	piv := make([][]int, 0, per)
 	for g := range groups {
 		// Spread the frequencies evenly over the groups.
@@ -76,7 +78,7 @@ func (m *Mesh) Sweep(freqs []float64) ([]*Solution, error) {
 			ok = append(ok, i)
 			omegas = append(omegas, 2*math.Pi*freqs[i])
 		}
-		m.fillMany(zs[:len(ok)], omegas)
+		m.fillMany(zs[:len(ok)], omegas, &buf)
 		outer, inner := m.workerCount(), 1
 		if len(ok) < outer {
 			outer, inner = 1, outer
