@@ -39,8 +39,11 @@ func (m *Mesh) Solve(freq float64) (*Solution, error) {
 
 // sweepMemory bounds the matrix storage of one group of a sweep's
 // frequencies, bytes (see Sweep). The fill's block storage, kept across
-// the groups, adds pairMemory per frequency of a group.
-const sweepMemory = 48 << 20
+// the groups, adds pairMemory per frequency of a group. The size trades
+// the geometry the frequencies of a group share against the peak memory
+// of a build (kit's benchmarks and the build's peak resident size show
+// both).
+const sweepMemory = 24 << 20
 
 // Sweep solves at each frequency (Hz). The frequencies are filled in
 // groups, as many at a time as sweepMemory holds matrices for, sharing
