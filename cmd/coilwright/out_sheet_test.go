@@ -343,11 +343,15 @@ func TestNoBatchForOneKit(t *testing.T) {
 }
 
 // TestSheetGolden compares the text outputs of the default demo with the
-// files in testdata/golden; run with -update to rewrite them.
+// files in testdata/golden: the cut list, batch plan and build sheet, and
+// the field solver's numbers (the sweep, the centre-frequency pattern cuts,
+// the Touchstone file and the tolerance batch), so a change to any of them
+// shows as a diff. Run with -update to rewrite them.
 func TestSheetGolden(t *testing.T) {
 	dir := t.TempDir()
 	buildDemo(t, templates.DefaultDemo, dir)
-	for _, name := range []string{"cutlist.csv", "cutlist.md", "batch.csv", "batch.md", "build-sheet.md"} {
+	for _, name := range []string{"cutlist.csv", "cutlist.md", "batch.csv", "batch.md", "build-sheet.md",
+		"sweep.csv", "pattern.csv", "sweep.s1p", "tolerance.csv"} {
 		t.Run(name, func(t *testing.T) {
 			got, err := os.ReadFile(filepath.Join(dir, name))
 			if err != nil {

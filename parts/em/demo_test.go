@@ -170,7 +170,7 @@ func BenchmarkDemoStages(b *testing.B) {
 		b.ReportAllocs()
 		for b.Loop() {
 			copy(w, z)
-			luFactor(w, n, piv, 0)
+			luFactor(w, n, piv, 0, 0)
 		}
 	})
 	b.Run("mesh", func(b *testing.B) {

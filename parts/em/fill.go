@@ -1,10 +1,12 @@
 package em
 
 // Filling the impedance matrix. Segment pairs (p, q ≥ p) are integrated in
-// parallel a block of test segments at a time into pre-indexed storage;
-// one goroutine then scatters each pair's moments into the basis functions
-// that live on p and q, in a fixed order, so the matrix is the same bit for
-// bit on any number of cores and exactly symmetric.
+// parallel a block of test segments at a time into pre-indexed storage,
+// and each pair's moments are turned there into its four entries between
+// the rising and falling halves on p and q; then each frequency's matrix
+// takes those entries into the basis functions that live on p and q on one
+// goroutine (the matrices in parallel), in a fixed order, so the matrix is
+// the same bit for bit on any number of cores.
 //
 // Z_mn = jωμ ∫∫ f_m·f_n G − (j/ωε) ∫∫ (∇·f_m)(∇·f_n) G (+ surface impedance
 // on the diagonal blocks), plus, over a ground plane, the same with the
@@ -15,8 +17,6 @@ package em
 import (
 	"math"
 	"math/cmplx"
-
-	"coilwright/cam/geom"
 )
 
 // Physical constants (SI). Source: CODATA 2018 (c exact; μ0 measured).
@@ -29,18 +29,30 @@ const (
 
 const fillBlock = 32
 
+// pairMemory returns the bytes fillMany's block storage takes per
+// frequency.
+func (m *Mesh) pairMemory() int {
+	b := fillBlock * len(m.segs) * 4 * 16 // moments: four complex128
+	if m.ground {
+		b *= 2
+	}
+	return b
+}
+
 // fill writes the n×n impedance matrix at angular frequency omega into z
 // (row-major, overwritten).
 func (m *Mesh) fill(z []complex128, omega float64) {
-	m.fillMany([][]complex128{z}, []float64{omega})
+	m.fillMany([][]complex128{z}, []float64{omega}, nil)
 }
 
 // fillMany writes the impedance matrices at the angular frequencies omegas
 // into zs (one n×n row-major matrix each, overwritten). The frequencies
 // share each pair's geometry, and the kernel's phase across a run of
 // equally spaced frequencies is stepped by one rotation per frequency
-// (see phasePlan) instead of a sine and cosine each.
-func (m *Mesh) fillMany(zs [][]complex128, omegas []float64) {
+// (see phasePlan) instead of a sine and cosine each. buf, when not nil,
+// holds the storage for one block's pair entries (pairMemory bytes per
+// frequency) and is kept across calls, grown as needed.
+func (m *Mesh) fillMany(zs [][]complex128, omegas []float64, buf *[]moments) {
 	n := m.nBasis
 	nf := len(omegas)
 	for _, z := range zs {
@@ -56,38 +68,53 @@ func (m *Mesh) fillMany(zs [][]complex128, omegas []float64) {
 	}
 	plan := newPhasePlan(ks)
 	ns := len(m.segs)
-	direct := make([]moments, fillBlock*ns*nf)
-	var image []moments
-	if m.ground {
-		image = make([]moments, fillBlock*ns*nf)
+	per := fillBlock * ns * nf
+	var b []moments
+	if buf != nil {
+		b = *buf
 	}
+	if m.ground {
+		per *= 2
+	}
+	if cap(b) < per {
+		b = make([]moments, per)
+		if buf != nil {
+			*buf = b
+		}
+	}
+	direct, image := b[:fillBlock*ns*nf], b[fillBlock*ns*nf:per]
 	for p0 := 0; p0 < ns; p0 += fillBlock {
 		p1 := min(p0+fillBlock, ns)
-		parallelFor(p1-p0, func(i int) {
+		parallelFor(m.workers, p1-p0, func(i int) {
 			p := p0 + i
 			w := plan.scratch()
-			m.row(direct[i*ns*nf:(i+1)*ns*nf], p, m.segs, &m.near, plan, w)
+			d := direct[i*ns*nf : (i+1)*ns*nf]
+			m.row(d, p, m.segs, &m.near, plan, w)
+			m.entries(d, p, m.segs, 1, vec, sca)
 			if m.ground {
-				m.row(image[i*ns*nf:(i+1)*ns*nf], p, m.img, &m.nearImg, plan, w)
+				g := image[i*ns*nf : (i+1)*ns*nf]
+				m.row(g, p, m.img, &m.nearImg, plan, w)
+				m.entries(g, p, m.img, -1, vec, sca)
 			}
 		})
-		for p := p0; p < p1; p++ {
-			i := p - p0
-			for q := p; q < ns; q++ {
-				at := (i*ns + q) * nf
-				for f, z := range zs {
-					m.scatter(z, p, q, direct[at+f], m.segs[q].t, 1, vec[f], sca[f])
+		// Each matrix takes the block's entries on one goroutine, in the
+		// same order whatever the number of them.
+		parallelFor(m.workers, nf, func(f int) {
+			z := zs[f]
+			for p := p0; p < p1; p++ {
+				i := p - p0
+				for q := p; q < ns; q++ {
+					at := (i*ns+q)*nf + f
+					m.scatter(z, p, q, &direct[at])
 					if m.ground {
-						m.scatter(z, p, q, image[at+f], m.img[q].t, -1, vec[f], sca[f])
+						m.scatter(z, p, q, &image[at])
 					}
 				}
-			}
-			if s := m.segs[p]; s.sigma > 0 {
-				for f, z := range zs {
+				if m.segs[p].sigma > 0 {
 					m.addLoss(z, p, omegas[f])
 				}
 			}
-		}
+		})
 	}
 }
 
@@ -122,30 +149,52 @@ func (m *Mesh) row(out []moments, p int, src []segment, near *pairList, plan *ph
 	}
 }
 
-// scatter adds one pair's contribution to z: sign is +1 for the direct
-// source and −1 for its image; tq is the source segment's direction and
-// pi4 the Green's function's 1/(4π) is applied here.
-func (m *Mesh) scatter(z []complex128, p, q int, mo moments, tq geom.Vec3, sign float64, vec, sca complex128) {
-	n := m.nBasis
-	sp, sq := &m.segs[p], &m.segs[q]
-	for j := range mo {
-		mo[j] = scale(mo[j], sign/(4*math.Pi))
+// entries turns test segment p's moments against sources src[q], q ≥ p,
+// at every frequency (out[q·nf + f], as row wrote them) into the pairs'
+// entries, in place: entry 2a + b is the term between the half on p that
+// rises (a = 1) or falls (a = 0) and the half on q that rises (b = 1) or
+// falls. sign is +1 for the direct sources and −1 for their images; vec
+// and sca are the vector- and scalar-potential factors jωμ and −j/(ωε)
+// per frequency; the Green's function's 1/(4π) is applied here.
+func (m *Mesh) entries(out []moments, p int, src []segment, sign float64, vec, sca []complex128) {
+	nf := len(vec)
+	sp := &m.segs[p]
+	for q := p; q < len(src); q++ {
+		sq := &m.segs[q]
+		lp, lq := sp.l, sq.l
+		dot := sp.t.Dot(src[q].t)
+		for f := range nf {
+			mo := &out[q*nf+f]
+			for j := range mo {
+				mo[j] = scale(mo[j], sign/(4*math.Pi))
+			}
+			var shape [2][2]complex128 // [rising on p][rising on q]
+			shape[1][1] = divReal(mo[3], lp*lq)
+			shape[1][0] = divReal(mo[1]-divReal(mo[3], lq), lp)
+			shape[0][1] = divReal(mo[2]-divReal(mo[3], lp), lq)
+			shape[0][0] = mo[0] - divReal(mo[1], lp) - divReal(mo[2], lq) + divReal(mo[3], lp*lq)
+			v := scale(vec[f], dot)
+			s := divReal(sca[f]*mo[0], lp*lq)
+			for a := range 2 {
+				for b := range 2 {
+					ds := s
+					if a != b {
+						ds = -s
+					}
+					mo[2*a+b] = v*shape[a][b] + ds
+				}
+			}
+		}
 	}
-	lp, lq := sp.l, sq.l
-	var shape [2][2]complex128 // [rising on p][rising on q]
-	shape[1][1] = divReal(mo[3], lp*lq)
-	shape[1][0] = divReal(mo[1]-divReal(mo[3], lq), lp)
-	shape[0][1] = divReal(mo[2]-divReal(mo[3], lp), lq)
-	shape[0][0] = mo[0] - divReal(mo[1], lp) - divReal(mo[2], lq) + divReal(mo[3], lp*lq)
-	v := scale(vec, sp.t.Dot(tq))
-	s := divReal(sca*mo[0], lp*lq)
+}
+
+// scatter adds one pair's entries (see entries) to z, times the halves'
+// signs.
+func (m *Mesh) scatter(z []complex128, p, q int, e *moments) {
+	n := m.nBasis
 	for _, h := range m.halves[p] {
 		for _, g := range m.halves[q] {
-			ds := s
-			if h.rising != g.rising {
-				ds = -s
-			}
-			val := scale(v*shape[b2i(h.rising)][b2i(g.rising)]+ds, h.sign*g.sign)
+			val := scale(e[2*b2i(h.rising)+b2i(g.rising)], h.sign*g.sign)
 			z[h.basis*n+g.basis] += val
 			if p != q {
 				z[g.basis*n+h.basis] += val

@@ -84,7 +84,7 @@ func farPair(out []moments, p, q *segment, a2 float64, plan *phasePlan, w *phase
 			d := ri.Sub(q.p0.Add(q.t.Scale(xj)))
 			R := math.Sqrt(d.Dot(d) + a2)
 			g := r.W[j] * q.l / R
-			e := plan.phases(w.e, R)
+			e := plan.phases(w, R)
 			for f, ef := range e {
 				v := scale(ef, g)
 				s0[f] += v
@@ -122,7 +122,7 @@ func remainderPair(out []moments, p, q *segment, a2 float64, plan *phasePlan, w 
 			R := math.Sqrt(d.Dot(d) + a2)
 			wj := r.W[j] * q.l
 			g := wj / R
-			e := plan.phases(w.e, 0.5*R)
+			e := plan.phases(w, 0.5*R)
 			for f, ef := range e {
 				c, sn := real(ef), -imag(ef)
 				v := complex(-2*sn*sn*g+0.5*plan.k[f]*plan.k[f]*R*wj, -2*sn*c*g)
@@ -140,46 +140,53 @@ func remainderPair(out []moments, p, q *segment, a2 float64, plan *phasePlan, w 
 	}
 }
 
-// phasePlan evaluates e^{−jk_f R} for a list of wavenumbers k_f. Runs of
-// equally spaced wavenumbers (k_f = k_0 + fΔ) take one sine and cosine for
-// the run's first phase and one for the step e^{−jΔR}, then a complex
-// rotation per frequency; the rounding this adds grows by about one unit
-// in the last place per step (under 1e-14 over a run of any length the
-// sweeps use). Other wavenumbers take a sine and cosine each.
+// phasePlan evaluates e^{−jk_f R} for a list of wavenumbers k_f. A run of
+// wavenumbers whose steps k_{f+1} − k_f take few distinct values (an
+// equally spaced sweep takes one; a few points picked from a sweep, a
+// couple) takes one sine and cosine for the run's first phase and one per
+// distinct step e^{−jΔR}, then a complex rotation per frequency; the
+// rounding this adds grows by about one unit in the last place per step
+// (under 1e-14 over a run of any length the sweeps use). Other wavenumbers
+// take a sine and cosine each. (Rotating by powers of one small step
+// instead costs more than the sines it saves: the multiplications form one
+// long dependent chain.)
 type phasePlan struct {
 	k    []float64
 	runs []phaseRun
 }
 
-// phaseRun is a run of wavenumbers k[from:to] spaced by step.
+// phaseRun is a run of wavenumbers k[from:to]: k[from+i+1] lies
+// steps[which[i]] above k[from+i].
 type phaseRun struct {
 	from, to int
-	step     float64
+	steps    []float64
+	which    []int
 }
 
-// phaseStepTol is the relative difference within which consecutive
-// wavenumber steps count as equal (a sweep's frequencies are computed as
+// phaseStepTol is the relative difference within which two wavenumber
+// steps count as equal (a sweep's frequencies are computed as
 // lo + (hi − lo)·i/(n − 1), equal steps up to rounding).
 const phaseStepTol = 1e-9
 
-// newPhasePlan splits ks into runs of equal steps.
+// newPhasePlan splits ks into runs, each as long as saves the most sines
+// and cosines (the shortest of equals).
 func newPhasePlan(ks []float64) *phasePlan {
 	p := &phasePlan{k: ks}
 	for i := 0; i < len(ks); {
-		j := i + 1
-		if j < len(ks) {
-			d := (ks[j] - ks[i])
-			for j+1 < len(ks) && math.Abs(ks[j+1]-ks[j]-d) <= phaseStepTol*math.Abs(d) {
-				j++
-			}
-			j++
-			if j-i == 2 {
-				j = i + 1 // a pair costs two sines either way
+		j, saved := i+1, 0
+		for end := i + 2; end <= len(ks); end++ {
+			steps, _ := distinctSteps(ks[i:end])
+			if s := (end - i) - (1 + len(steps)); s > saved {
+				j, saved = end, s
 			}
 		}
 		r := phaseRun{from: i, to: j}
 		if j-i > 1 {
-			r.step = (ks[j-1] - ks[i]) / float64(j-1-i)
+			r.steps, r.which = distinctSteps(ks[i:j])
+			if len(r.steps) == 1 {
+				// Equal steps: the run's mean, from its ends.
+				r.steps[0] = (ks[j-1] - ks[i]) / float64(j-1-i)
+			}
 		}
 		p.runs = append(p.runs, r)
 		i = j
@@ -187,28 +194,74 @@ func newPhasePlan(ks []float64) *phasePlan {
 	return p
 }
 
-// phaseScratch is one worker's storage for a plan: the phases and the
-// per-frequency sums of one quadrature row.
+// distinctSteps returns the distinct steps between consecutive ks (each
+// the mean of the steps equal to it within phaseStepTol, in order of first
+// appearance) and, for each step, which of them it is.
+func distinctSteps(ks []float64) (steps []float64, which []int) {
+	var first []float64
+	var count []int
+	for i := 0; i+1 < len(ks); i++ {
+		d := ks[i+1] - ks[i]
+		u := -1
+		for v, f := range first {
+			if math.Abs(d-f) <= phaseStepTol*math.Abs(f) {
+				u = v
+				break
+			}
+		}
+		if u < 0 {
+			u = len(first)
+			first = append(first, d)
+			steps = append(steps, 0)
+			count = append(count, 0)
+		}
+		steps[u] += d
+		count[u]++
+		which = append(which, u)
+	}
+	for u := range steps {
+		steps[u] /= float64(count[u])
+	}
+	return steps, which
+}
+
+// phaseScratch is one worker's storage for a plan: the phases, the
+// per-frequency sums of one quadrature row and the rotations of a run's
+// steps.
 type phaseScratch struct {
-	e, s0, s2 []complex128
+	e, s0, s2, rot []complex128
 }
 
 func (p *phasePlan) scratch() *phaseScratch {
 	n := len(p.k)
-	return &phaseScratch{e: make([]complex128, n), s0: make([]complex128, n), s2: make([]complex128, n)}
+	return &phaseScratch{e: make([]complex128, n), s0: make([]complex128, n), s2: make([]complex128, n), rot: make([]complex128, n)}
 }
 
-// phases writes e^{−jk_f R} for every f into e and returns it.
-func (p *phasePlan) phases(e []complex128, R float64) []complex128 {
-	for _, r := range p.runs {
+// phases writes e^{−jk_f R} for every f into w.e and returns it.
+func (p *phasePlan) phases(w *phaseScratch, R float64) []complex128 {
+	e := w.e
+	for ri := range p.runs {
+		r := &p.runs[ri]
 		v := expj(-p.k[r.from] * R)
 		e[r.from] = v
-		if r.to-r.from > 1 {
-			w := expj(-r.step * R)
+		if r.to-r.from < 2 {
+			continue
+		}
+		if len(r.steps) == 1 {
+			st := expj(-r.steps[0] * R)
 			for f := r.from + 1; f < r.to; f++ {
-				v *= w
+				v *= st
 				e[f] = v
 			}
+			continue
+		}
+		rot := w.rot[:len(r.steps)]
+		for u, d := range r.steps {
+			rot[u] = expj(-d * R)
+		}
+		for i, u := range r.which {
+			v *= rot[u]
+			e[r.from+1+i] = v
 		}
 	}
 	return e

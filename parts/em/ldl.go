@@ -22,8 +22,9 @@ const ldlResidualTol = 1e-12
 // triangles filled) and returns false, with z restored to the full matrix,
 // when the LDLᵀ factorisation is not accurate enough. b is overwritten by
 // x on success and left alone otherwise. tiny is the smallest pivot
-// accepted (in |re|+|im|).
-func ldlSolve(z []complex128, n int, b []complex128, tiny float64) bool {
+// accepted (in |re|+|im|); workers bounds the goroutines of the trailing
+// updates (see parallelFor), which do not change the result.
+func ldlSolve(z []complex128, n int, b []complex128, tiny float64, workers int) bool {
 	diag := make([]complex128, n)
 	for i := range n {
 		diag[i] = z[i*n+i]
@@ -36,7 +37,7 @@ func ldlSolve(z []complex128, n int, b []complex128, tiny float64) bool {
 			}
 		}
 	}
-	if !ldlFactor(z, n, tiny) {
+	if !ldlFactor(z, n, tiny, workers) {
 		restore()
 		return false
 	}
@@ -88,8 +89,10 @@ func ldlSolve(z []complex128, n int, b []complex128, tiny float64) bool {
 
 // ldlFactor overwrites the lower triangle of a with L (unit diagonal not
 // stored) and the diagonal with D. It returns false at a pivot not above
-// tiny.
-func ldlFactor(a []complex128, n int, tiny float64) bool {
+// tiny. The trailing updates run on at most workers goroutines; each
+// element sees the same operations in the same order whatever their
+// number.
+func ldlFactor(a []complex128, n int, tiny float64, workers int) bool {
 	t := make([]complex128, luBlock)
 	u := make([]complex128, luBlock*n)
 	for k := 0; k < n; k += luBlock {
@@ -127,7 +130,7 @@ func ldlFactor(a []complex128, n int, tiny float64) bool {
 			}
 		}
 		// Trailing update of the lower triangle: a_ic −= Σ_j l_ij u_j[c].
-		parallelFor(w, func(r int) {
+		parallelFor(workers, w, func(r int) {
 			i := kb + r
 			dst := a[i*n+kb : i*n+i+1]
 			m := len(dst)

@@ -24,12 +24,12 @@ func TestLDLMatchesLU(t *testing.T) {
 			b[i] = complex(math.Cos(float64(i)), math.Sin(float64(3*i)))
 		}
 		x := slices.Clone(b)
-		if !ldlSolve(slices.Clone(z), n, x, 0) {
+		if !ldlSolve(slices.Clone(z), n, x, 0, 0) {
 			t.Fatalf("plate %v: LDLᵀ refused the impedance matrix", plate)
 		}
 		y := slices.Clone(b)
 		piv := make([]int, n)
-		if col := luFactor(z, n, piv, 0); col >= 0 {
+		if col := luFactor(z, n, piv, 0, 0); col >= 0 {
 			t.Fatal("LU: singular")
 		}
 		luSolve(z, n, piv, y)
@@ -55,7 +55,7 @@ func TestLDLFallsBackOnZeroPivot(t *testing.T) {
 	}
 	orig := slices.Clone(z)
 	b := []complex128{1, 2, 3}
-	if ldlSolve(z, 3, b, 1e-12) {
+	if ldlSolve(z, 3, b, 1e-12, 0) {
 		t.Fatal("LDLᵀ accepted a zero pivot")
 	}
 	if !slices.Equal(z, orig) || !slices.Equal(b, []complex128{1, 2, 3}) {
@@ -70,12 +70,12 @@ func TestLDLFallsBackOnZeroPivot(t *testing.T) {
 	}
 	orig = slices.Clone(z)
 	x := []complex128{1, 0, 0}
-	if !ldlSolve(z, 3, x, 0) {
+	if !ldlSolve(z, 3, x, 0, 0) {
 		if !slices.Equal(z, orig) {
 			t.Fatal("matrix not restored")
 		}
 		piv := make([]int, 3)
-		luFactor(z, 3, piv, 0)
+		luFactor(z, 3, piv, 0, 0)
 		luSolve(z, 3, piv, x)
 	}
 	for i := range 3 {

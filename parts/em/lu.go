@@ -12,8 +12,9 @@ const luBlock = 48
 
 // luFactor factors the n×n row-major matrix a in place as P·A = L·U (unit
 // lower L) and records the row interchanges in piv. It returns the first
-// column whose pivot is not above tiny (in |re|+|im|), or −1.
-func luFactor(a []complex128, n int, piv []int, tiny float64) int {
+// column whose pivot is not above tiny (in |re|+|im|), or −1. The
+// trailing updates run on at most workers goroutines (see parallelFor).
+func luFactor(a []complex128, n int, piv []int, tiny float64, workers int) int {
 	for k := 0; k < n; k += luBlock {
 		kb := min(k+luBlock, n)
 		// Panel: columns k..kb−1, rows k..n−1.
@@ -61,7 +62,7 @@ func luFactor(a []complex128, n int, piv []int, tiny float64) int {
 		}
 		// Trailing update A22 −= L21 U12, two rows per task.
 		rows := n - kb
-		parallelFor((rows+1)/2, func(t int) {
+		parallelFor(workers, (rows+1)/2, func(t int) {
 			for i := kb + 2*t; i < min(kb+2*t+2, n); i++ {
 				dst := a[i*n+kb : (i+1)*n]
 				c := k

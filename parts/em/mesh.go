@@ -45,6 +45,7 @@ type Mesh struct {
 	near    pairList
 	nearImg pairList
 	wires   int
+	workers int // MeshOptions.Workers; 0 means GOMAXPROCS
 }
 
 // Unknowns returns the number of basis functions (the matrix order).
@@ -68,7 +69,7 @@ func NewMesh(model Model, opt MeshOptions) (*Mesh, error) {
 	if len(model.Wires) == 0 {
 		return nil, &GeometryError{Kind: NoWires, Wire: -1, Segment: -1}
 	}
-	m := &Mesh{ground: model.Ground == PerfectGround, rules: newRules(opt.Quadrature), wires: len(model.Wires)}
+	m := &Mesh{ground: model.Ground == PerfectGround, rules: newRules(opt.Quadrature), wires: len(model.Wires), workers: max(opt.Workers, 0)}
 	const mm = 1e-3
 	type end struct {
 		seg, end int
@@ -264,7 +265,7 @@ func (m *Mesh) nearPairs(src []segment) pairList {
 		pl.start[p+1] = len(pl.q)
 	}
 	pl.st = make([]staticMoments, len(pl.q))
-	parallelFor(n, func(p int) {
+	parallelFor(m.workers, n, func(p int) {
 		for i := pl.start[p]; i < pl.start[p+1]; i++ {
 			q := &src[pl.q[i]]
 			pl.st[i] = staticPair(&m.segs[p], q, pairA2(&m.segs[p], q), &m.rules.de)
@@ -273,11 +274,15 @@ func (m *Mesh) nearPairs(src []segment) pairList {
 	return pl
 }
 
-// parallelFor calls fn(i) for i in [0, n) on GOMAXPROCS goroutines. Each
-// call must write only to its own pre-indexed output, so results do not
-// depend on the number of cores.
-func parallelFor(n int, fn func(i int)) {
-	workers := min(runtime.GOMAXPROCS(0), n)
+// parallelFor calls fn(i) for i in [0, n) on at most workers goroutines
+// (zero: GOMAXPROCS); with one it calls them in order on the calling
+// goroutine. Each call must write only to its own pre-indexed output, so
+// results do not depend on the number of cores.
+func parallelFor(workers, n int, fn func(i int)) {
+	if workers <= 0 {
+		workers = runtime.GOMAXPROCS(0)
+	}
+	workers = min(workers, n)
 	if workers <= 1 {
 		for i := range n {
 			fn(i)

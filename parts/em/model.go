@@ -48,6 +48,12 @@ type MeshOptions struct {
 	// Quadrature raises every integration rule by this many levels (0 is
 	// the default rule set; used to show the rules have converged).
 	Quadrature int
+	// Workers is the most goroutines the mesh's work (building it, filling,
+	// factoring, pattern searches) runs on at one time: 1 runs it all on
+	// the calling goroutine, for callers that solve many meshes in
+	// parallel themselves; zero means GOMAXPROCS. The results do not
+	// depend on it.
+	Workers int
 }
 
 // DefaultMinSegmentRadii is the shortest segment NewMesh accepts, in

@@ -39,7 +39,7 @@ func (s *Solution) RadiatedPower(nTheta int) float64 {
 	quad.Legendre{}.FixedLocations(u, w, lo, 1)
 	nPhi := 2 * nTheta
 	rows := make([]float64, nTheta)
-	parallelFor(nTheta, func(i int) {
+	parallelFor(s.mesh.workers, nTheta, func(i int) {
 		th := math.Acos(u[i])
 		var sum float64
 		for j := range nPhi {
@@ -66,7 +66,7 @@ func (s *Solution) Peak(c Component) (Direction, float64) {
 	nt := int(math.Round(thMax/step)) + 1
 	np := int(math.Round(2 * math.Pi / step))
 	vals := make([]float64, nt*np)
-	parallelFor(nt, func(i int) {
+	parallelFor(s.mesh.workers, nt, func(i int) {
 		for j := range np {
 			vals[i*np+j] = s.Gain(Direction{float64(i) * step, float64(j) * step}, c)
 		}
@@ -121,7 +121,7 @@ func (s *Solution) Cut(phi, step float64) []CutPoint {
 	}
 	n := int(math.Floor(2*lim/step+1e-9)) + 1
 	out := make([]CutPoint, n)
-	parallelFor(n, func(i int) {
+	parallelFor(s.mesh.workers, n, func(i int) {
 		a := -lim + float64(i)*step
 		f := s.Field(inCut(a, phi))
 		p := s.InputPower()
@@ -142,7 +142,7 @@ func (s *Solution) Beamwidth(c Component, phi float64) (width float64, ok bool) 
 	step := 0.5 * math.Pi / 180
 	n := int(math.Floor(2*lim/step+1e-9)) + 1
 	g := make([]float64, n)
-	parallelFor(n, func(i int) { g[i] = s.Gain(inCut(-lim+float64(i)*step, phi), c) })
+	parallelFor(s.mesh.workers, n, func(i int) { g[i] = s.Gain(inCut(-lim+float64(i)*step, phi), c) })
 	best := 0
 	for i, v := range g {
 		if v > g[best] {

@@ -3,6 +3,7 @@ package em
 import (
 	"math"
 	"math/cmplx"
+	"runtime"
 )
 
 // singularPivot is the pivot size, relative to the largest matrix entry,
@@ -37,16 +38,23 @@ func (m *Mesh) Solve(freq float64) (*Solution, error) {
 }
 
 // sweepMemory bounds the matrix storage of one group of a sweep's
-// frequencies, bytes (see Sweep).
-const sweepMemory = 48 << 20
+// frequencies, bytes (see Sweep). The fill's block storage, kept across
+// the groups, adds pairMemory per frequency of a group. The size trades
+// the geometry the frequencies of a group share against the peak memory
+// of a build (kit's benchmarks and the build's peak resident size show
+// both).
+const sweepMemory = 24 << 20
 
 // Sweep solves at each frequency (Hz). The frequencies are filled in
 // groups, as many at a time as sweepMemory holds matrices for, sharing
 // each segment pair's geometry and phases (fillMany); each group's
-// matrices are then factored GOMAXPROCS at a time. The groups depend only
-// on the frequencies and the matrix order, so the results are in the order
-// of freqs and do not depend on the number of cores; the first error in
-// that order is returned.
+// matrices are then factored one per worker, each on its own goroutine,
+// or, in a group with fewer matrices than workers, one after the other
+// with the workers sharing each factorisation: the work runs in parallel
+// at one level only. The groups depend only on the frequencies and the
+// matrix order, and a factorisation is the same whoever runs it, so the
+// results are in the order of freqs and do not depend on the number of
+// cores; the first error in that order is returned.
 func (m *Mesh) Sweep(freqs []float64) ([]*Solution, error) {
 	out := make([]*Solution, len(freqs))
 	errs := make([]error, len(freqs))
@@ -54,6 +62,7 @@ func (m *Mesh) Sweep(freqs []float64) ([]*Solution, error) {
 	per := max(1, sweepMemory/(16*n*n))
 	groups := (len(freqs) + per - 1) / max(per, 1)
 	var zs [][]complex128
+	var buf []moments
 	piv := make([][]int, 0, per)
 	for g := range groups {
 		// Spread the frequencies evenly over the groups.
@@ -72,10 +81,14 @@ func (m *Mesh) Sweep(freqs []float64) ([]*Solution, error) {
 			ok = append(ok, i)
 			omegas = append(omegas, 2*math.Pi*freqs[i])
 		}
-		m.fillMany(zs[:len(ok)], omegas)
-		parallelFor(len(ok), func(j int) {
+		m.fillMany(zs[:len(ok)], omegas, &buf)
+		outer, inner := m.workerCount(), 1
+		if len(ok) < outer {
+			outer, inner = 1, outer
+		}
+		parallelFor(outer, len(ok), func(j int) {
 			i := ok[j]
-			out[i], errs[i] = m.solveFilled(freqs[i], zs[j], piv[j])
+			out[i], errs[i] = m.solveFilled(freqs[i], zs[j], piv[j], inner)
 		})
 	}
 	for _, err := range errs {
@@ -99,7 +112,15 @@ func (m *Mesh) solve(freq float64, z []complex128, piv []int) (*Solution, error)
 		return nil, err
 	}
 	m.fill(z, 2*math.Pi*freq)
-	return m.solveFilled(freq, z, piv)
+	return m.solveFilled(freq, z, piv, m.workers)
+}
+
+// workerCount returns the number of goroutines the mesh's work may use.
+func (m *Mesh) workerCount() int {
+	if m.workers > 0 {
+		return m.workers
+	}
+	return runtime.GOMAXPROCS(0)
 }
 
 // checkFrequency refuses a frequency that is not positive and finite.
@@ -110,9 +131,9 @@ func checkFrequency(freq float64) error {
 	return nil
 }
 
-// solveFilled factors the matrix z, filled at freq, and solves for the
-// feed.
-func (m *Mesh) solveFilled(freq float64, z []complex128, piv []int) (*Solution, error) {
+// solveFilled factors the matrix z, filled at freq, on at most workers
+// goroutines and solves for the feed.
+func (m *Mesh) solveFilled(freq float64, z []complex128, piv []int, workers int) (*Solution, error) {
 	n := m.nBasis
 	omega := 2 * math.Pi * freq
 	scale := 0.0
@@ -129,8 +150,8 @@ func (m *Mesh) solveFilled(freq float64, z []complex128, piv []int) (*Solution, 
 	for _, g := range gw {
 		x[g.basis] = m.voltage * complex(g.w, 0)
 	}
-	if !ldlSolve(z, n, x, singularPivot*scale) {
-		if col := luFactor(z, n, piv, singularPivot*scale); col >= 0 {
+	if !ldlSolve(z, n, x, singularPivot*scale, workers) {
+		if col := luFactor(z, n, piv, singularPivot*scale, workers); col >= 0 {
 			return nil, &SingularMatrixError{Frequency: freq, Column: col}
 		}
 		luSolve(z, n, piv, x)

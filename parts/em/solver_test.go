@@ -74,6 +74,48 @@ func TestSameResultOnOneAndTwoCores(t *testing.T) {
 	}
 }
 
+func TestSweepSameOnAnyWorkers(t *testing.T) {
+	// A sweep factors its matrices one per worker, or shares the workers
+	// in each factorisation when it has fewer matrices than workers, and
+	// a caller may run it all on one goroutine (Workers: 1): every way
+	// must give the same bits. (A run of equally spaced frequencies steps
+	// its phases, so only a one-frequency sweep matches Solve's bits.)
+	md := dipoleModel(1500, 1, 150)
+	md.Wires[0].Conductivity = 5.8e7
+	freqs := []float64{0.9 * lambda1m, 0.95 * lambda1m, lambda1m, 1.05 * lambda1m, 1.13 * lambda1m}
+	sweep := func(procs, workers int, fs []float64) []*Solution {
+		defer runtime.GOMAXPROCS(runtime.GOMAXPROCS(procs))
+		m, err := NewMesh(md, MeshOptions{Workers: workers})
+		if err != nil {
+			t.Fatal(err)
+		}
+		s, err := m.Sweep(fs)
+		if err != nil {
+			t.Fatal(err)
+		}
+		return s
+	}
+	same := func(name string, a, b []*Solution) {
+		t.Helper()
+		for i := range a {
+			for j := range a[i].Coefficients {
+				if a[i].Coefficients[j] != b[i].Coefficients[j] {
+					t.Fatalf("%s: frequency %d, coefficient %d differs", name, i, j)
+				}
+			}
+		}
+	}
+	ref := sweep(1, 0, freqs)
+	same("2 cores", ref, sweep(2, 0, freqs))
+	same("2 cores, 1 worker", ref, sweep(2, 1, freqs))
+	same("3 workers on 2 cores", ref, sweep(2, 3, freqs))
+	for _, f := range freqs[:2] {
+		one := []*Solution{mustSolve(t, md, MeshOptions{Workers: 1}, f)}
+		same("one frequency, 2 workers", one, sweep(2, 2, []float64{f}))
+		same("one frequency, 1 core", one, sweep(1, 0, []float64{f}))
+	}
+}
+
 func TestFinerQuadratureLeavesImpedance(t *testing.T) {
 	// The rules, not the mesh, must have converged (EM.md §4).
 	for name, md := range map[string]Model{

@@ -51,6 +51,11 @@ type Options struct {
 	// centre-frequency cuts): each point then carries the network figures,
 	// the on-axis gains and axial ratio, and the efficiency.
 	AxisOnly bool
+	// Workers is the most goroutines one Sweep runs on at a time: 1 solves
+	// on the calling goroutine, for callers that run many sweeps in
+	// parallel themselves; zero means GOMAXPROCS. The result does not
+	// depend on it (Key leaves it out).
+	Workers int
 }
 
 // Defaults of Options.

@@ -6,10 +6,21 @@ import (
 	"sync/atomic"
 )
 
-// parallel runs fn(0..n−1) on GOMAXPROCS goroutines; each call writes only
-// its own pre-indexed result, so the outcome does not depend on the cores.
-func parallel(n int, fn func(i int)) {
-	workers := min(runtime.GOMAXPROCS(0), n)
+// parallel runs fn(0..n−1) on at most workers goroutines (zero:
+// GOMAXPROCS; one: in order on the calling goroutine); each call writes
+// only its own pre-indexed result, so the outcome does not depend on the
+// cores.
+func parallel(workers, n int, fn func(i int)) {
+	if workers <= 0 {
+		workers = runtime.GOMAXPROCS(0)
+	}
+	workers = min(workers, n)
+	if workers <= 1 {
+		for i := range n {
+			fn(i)
+		}
+		return
+	}
 	var next atomic.Int64
 	var wg sync.WaitGroup
 	for range workers {

@@ -31,7 +31,7 @@ func Sweep(d *parts.Design, opt Options) (*Result, error) {
 func (st *Structure) Sweep(opt Options) (*Result, error) {
 	opt = opt.withDefaults()
 	d := st.design
-	m, err := em.NewMesh(st.Model, em.MeshOptions{MinSegmentRadii: KernelMinSegmentRadii})
+	m, err := em.NewMesh(st.Model, em.MeshOptions{MinSegmentRadii: KernelMinSegmentRadii, Workers: opt.Workers})
 	if err != nil {
 		return nil, st.specError(err)
 	}
@@ -50,7 +50,7 @@ func (st *Structure) Sweep(opt Options) (*Result, error) {
 	r := &Result{Reflector: st.Reflector.String(), Unknowns: m.Unknowns(), Segments: m.Segments(), CableOhm: CableOhm, RHCP: rhcp,
 		PlateSpacingMM: st.PlateSpacing, MaxSegmentMM: st.MaxSegment, Assumptions: st.Assumptions()}
 	pts := make([]Point, len(sols))
-	parallel(len(sols), func(i int) {
+	parallel(opt.Workers, len(sols), func(i int) {
 		pts[i] = networkPoint(sols[i], CableOhm)
 		if !opt.AxisOnly {
 			patternPoint(&pts[i], sols[i], rhcp, back)

@@ -54,30 +54,27 @@ func Run(d *parts.Design, ev Evaluator, opt Options) (*report.ToleranceReport, e
 	if n < 1 {
 		return nil, fmt.Errorf("tolerance: %d samples", n)
 	}
-	nominal, err := solveAt(d, ev, band, ins, nominalValues(ins))
-	if err != nil {
-		return nil, fmt.Errorf("tolerance: nominal design: %w", err)
-	}
 	seed := d.Spec.Tolerance.SeedValue()
 	kits := make([]report.ToleranceKit, n)
-	parallelFor(n, func(i int) {
-		vals := draw(ins, seed, i)
-		k := report.ToleranceKit{Index: i + 1, Inputs: vals}
-		b, err := chain(d, ins, vals)
-		k.Buildable = err == nil
-		if err == nil {
-			k.DiametersMM = b.DiametersMM
-			var r Response
-			if r, err = ev.Evaluate(b); err == nil {
-				k.Figures, err = figures(r, band)
-			}
-			if err != nil {
-				k.Unmodelled = modelProblem(err)
-			}
+	sens := newSensitivityRuns(ins)
+	// Every solve of the analysis (the nominal design, the kits, the
+	// sensitivities' ±1σ designs) is one job of one pool, so the
+	// evaluator's solves can each run on one goroutine.
+	var nominal solved
+	var nominalErr error
+	parallelFor(1+n+sens.jobs(), func(j int) {
+		switch {
+		case j == 0:
+			nominal, nominalErr = solveAt(d, ev, band, ins, nominalValues(ins))
+		case j <= n:
+			kits[j-1] = solveKit(d, ev, band, ins, seed, j-1)
+		default:
+			sens.run(d, ev, band, ins, j-1-n)
 		}
-		k.Meets = k.Solved() && k.Figures.WorstVSWR <= band.VSWRTarget
-		kits[i] = k
 	})
+	if nominalErr != nil {
+		return nil, fmt.Errorf("tolerance: nominal design: %w", nominalErr)
+	}
 	rep := &report.ToleranceReport{Samples: n, Seed: seed, VSWRTarget: band.VSWRTarget,
 		BandLowMHz: band.LowMHz, BandHighMHz: band.HighMHz, Nominal: nominal.fig, Kits: kits}
 	for _, in := range ins {
@@ -108,7 +105,7 @@ func Run(d *parts.Design, ev Evaluator, opt Options) (*report.ToleranceReport, e
 		rep.Model = m.Describe(band)
 	}
 	rep.Figures = distributions(kits, nominal.fig)
-	rep.Sensitivities = sensitivities(d, ev, band, ins, nominal.fig)
+	rep.Sensitivities = sens.result(ins, nominal.fig)
 	rep.Inspection = inspection(d, kits, rep.Sensitivities, d.Spec.Tolerance.InspectionShare)
 	return rep, nil
 }
@@ -131,6 +128,27 @@ func bandOf(d *parts.Design, opt Options) Band {
 		b.VSWRTarget = opt.VSWRTarget
 	}
 	return b
+}
+
+// solveKit draws kit i's inputs, builds and solves it; a kit that cannot
+// be built or solved is marked so.
+func solveKit(d *parts.Design, ev Evaluator, band Band, ins []input, seed uint64, i int) report.ToleranceKit {
+	vals := draw(ins, seed, i)
+	k := report.ToleranceKit{Index: i + 1, Inputs: vals}
+	b, err := chain(d, ins, vals)
+	k.Buildable = err == nil
+	if err == nil {
+		k.DiametersMM = b.DiametersMM
+		var r Response
+		if r, err = ev.Evaluate(b); err == nil {
+			k.Figures, err = figures(r, band)
+		}
+		if err != nil {
+			k.Unmodelled = modelProblem(err)
+		}
+	}
+	k.Meets = k.Solved() && k.Figures.WorstVSWR <= band.VSWRTarget
+	return k
 }
 
 // solved is a kit's build and figures.

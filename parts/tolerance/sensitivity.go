@@ -10,7 +10,50 @@ import (
 	"coilwright/parts/report"
 )
 
-// sensitivities returns the inputs' effects by one-at-a-time central
+// sensitivityRuns holds the one-at-a-time solves behind the inputs'
+// sensitivities: for each input with a spread (idx), the nominal design
+// with that input moved +1σ (even slots) and −1σ (odd slots). Its jobs
+// are run by the caller's pool, each writing only its own slot.
+type sensitivityRuns struct {
+	idx []int
+	res []sensitivitySide
+}
+
+// sensitivitySide is one ±1σ solve: its figures, or why it could not be
+// built or solved.
+type sensitivitySide struct {
+	fig report.ToleranceFigures
+	err error
+}
+
+// newSensitivityRuns lists the inputs with a spread.
+func newSensitivityRuns(ins []input) *sensitivityRuns {
+	var idx []int
+	for i, in := range ins {
+		if in.sigma > 0 {
+			idx = append(idx, i)
+		}
+	}
+	return &sensitivityRuns{idx: idx, res: make([]sensitivitySide, 2*len(idx))}
+}
+
+// jobs returns the number of solves: two per input with a spread.
+func (s *sensitivityRuns) jobs() int { return len(s.res) }
+
+// run solves job j: input idx[j/2] moved +1σ (j even) or −1σ (j odd).
+func (s *sensitivityRuns) run(d *parts.Design, ev Evaluator, band Band, ins []input, j int) {
+	i := s.idx[j/2]
+	z := 1.0
+	if j%2 == 1 {
+		z = -1
+	}
+	vals := nominalValues(ins)
+	vals[i] = ins[i].value(z)
+	sol, err := solveAt(d, ev, band, ins, vals)
+	s.res[j] = sensitivitySide{fig: sol.fig, err: err}
+}
+
+// result returns the inputs' effects by one-at-a-time central
 // differences of ±1σ about the nominal design, scaled to the ± limit
 // (3σ), ranked by their share of the linearised variance of the worst
 // VSWR in the band, which decides whether a kit passes (the squared 1σ
@@ -19,29 +62,9 @@ import (
 // one side of the nominal cannot be built or modelled, the difference is
 // taken one-sided, from the nominal to the other side, and the input says
 // so; where neither side can, the input carries no effect and says why.
-func sensitivities(d *parts.Design, ev Evaluator, band Band, ins []input, nominal report.ToleranceFigures) []report.ToleranceSensitivity {
-	var idx []int
-	for i, in := range ins {
-		if in.sigma > 0 {
-			idx = append(idx, i)
-		}
-	}
-	type side struct {
-		fig report.ToleranceFigures
-		err error
-	}
-	res := make([]side, 2*len(idx))
-	parallelFor(2*len(idx), func(j int) {
-		i := idx[j/2]
-		z := 1.0
-		if j%2 == 1 {
-			z = -1
-		}
-		vals := nominalValues(ins)
-		vals[i] = ins[i].value(z)
-		s, err := solveAt(d, ev, band, ins, vals)
-		res[j] = side{fig: s.fig, err: err}
-	})
+// Every job must have run.
+func (s *sensitivityRuns) result(ins []input, nominal report.ToleranceFigures) []report.ToleranceSensitivity {
+	idx, res := s.idx, s.res
 	out := make([]report.ToleranceSensitivity, len(idx))
 	total, totalC := 0.0, 0.0
 	for j, i := range idx {

@@ -151,6 +151,10 @@ func NewSolverEvaluator(d *parts.Design, full *field.Result) (*SolverEvaluator, 
 	if err != nil {
 		return nil, err
 	}
+	// Run solves many kits in parallel: each kit's sweep then runs on
+	// the goroutine that asks for it, so the work is parallel at one
+	// level only (the result does not depend on it).
+	e.opt.Workers = 1
 	e.unknowns = r.Unknowns
 	loop := response(append(slices.Clone(r.Points), r.Centre), rhcp)
 	e.loop = &loop
@@ -240,7 +244,8 @@ func joinMHz(fs []float64) string {
 	return s
 }
 
-// Evaluate moves the nominal geometry to kit b and solves it.
+// Evaluate moves the nominal geometry to kit b and solves it on the
+// calling goroutine.
 func (e *SolverEvaluator) Evaluate(b Build) (Response, error) {
 	w0 := e.st.Conductor()
 	w := em.Wire{Points: slices.Clone(w0.Points), Radius: slices.Clone(w0.Radius), Conductivity: w0.Conductivity}
