@@ -208,29 +208,51 @@ func turned(outline geom.Polyline, a float64) member {
 
 // apart reports whether two polygons keep at least gap apart (and neither
 // holds the other).
-func apart(a, b member, gap float64) bool {
-	if a.box.Min.X-gap >= b.box.Max.X || b.box.Min.X-gap >= a.box.Max.X ||
-		a.box.Min.Y-gap >= b.box.Max.Y || b.box.Min.Y-gap >= a.box.Max.Y {
+func apart(a, b member, gap float64) bool { return apartMoved(a, b, geom.Vec2{}, gap) }
+
+// apartMoved reports whether a and b moved by v keep at least gap apart,
+// as apart(a, b.shift(v), gap) would, without building the moved copy.
+func apartMoved(a, b member, v geom.Vec2, gap float64) bool {
+	bMin, bMax := b.box.Min.Add(v), b.box.Max.Add(v)
+	if a.box.Min.X-gap >= bMax.X || bMin.X-gap >= a.box.Max.X ||
+		a.box.Min.Y-gap >= bMax.Y || bMin.Y-gap >= a.box.Max.Y {
 		return true
 	}
-	return polygonsApart(a.poly, b.poly, gap)
+	return polygonsApart(a.poly, b.poly, v, gap)
 }
 
-// polygonsApart reports whether two closed polygons keep at least gap
-// apart: no edge of one comes within gap of an edge of the other and
-// neither holds the other. Edge pairs whose boxes are further apart than
-// gap are skipped; distances are compared squared.
-func polygonsApart(a, b geom.Polyline, gap float64) bool {
-	if PointInPolygon(a[0], b) || PointInPolygon(b[0], a) {
+// polygonsApart reports whether closed polygon a and closed polygon b
+// moved by v keep at least gap apart: no edge of one comes within gap of
+// an edge of the other and neither holds the other. Edge pairs whose boxes
+// are further apart than gap are skipped, and so is every edge of a whose
+// box is further than gap from the whole of b; distances are compared
+// squared. Nothing is allocated.
+func polygonsApart(a, b geom.Polyline, v geom.Vec2, gap float64) bool {
+	ab := polyBox(a)
+	bb := geom.EmptyBox2()
+	for _, r := range b {
+		bb = bb.Extend(r.Add(v))
+	}
+	// A point outside a polygon's span in y crosses none of its edges.
+	if inYSpan(a[0], bb) && pointInMovedPolygon(a[0], b, v) {
 		return false
+	}
+	if b0 := b[0].Add(v); inYSpan(b0, ab) && PointInPolygon(b0, a) {
+		return false
+	}
+	if bb.Max.X < ab.Min.X-gap || bb.Min.X > ab.Max.X+gap || bb.Max.Y < ab.Min.Y-gap || bb.Min.Y > ab.Max.Y+gap {
+		return true // every edge pair below would be skipped
 	}
 	g2 := gap * gap
 	for i := range a {
 		p, q := a[i], a[(i+1)%len(a)]
 		minX, maxX := math.Min(p.X, q.X)-gap, math.Max(p.X, q.X)+gap
 		minY, maxY := math.Min(p.Y, q.Y)-gap, math.Max(p.Y, q.Y)+gap
+		if bb.Max.X < minX || bb.Min.X > maxX || bb.Max.Y < minY || bb.Min.Y > maxY {
+			continue // every edge of b is skipped below
+		}
 		for j := range b {
-			r, s := b[j], b[(j+1)%len(b)]
+			r, s := b[j].Add(v), b[(j+1)%len(b)].Add(v)
 			if (r.X < minX && s.X < minX) || (r.X > maxX && s.X > maxX) ||
 				(r.Y < minY && s.Y < minY) || (r.Y > maxY && s.Y > maxY) {
 				continue
@@ -242,6 +264,26 @@ func polygonsApart(a, b geom.Polyline, gap float64) bool {
 		}
 	}
 	return true
+}
+
+// inYSpan reports whether p.Y may lie in [b.Min.Y, b.Max.Y): only outside
+// it for certain does no edge of a polygon inside b straddle p's height
+// (PointInPolygon's test), so p is not inside. A NaN anywhere answers yes,
+// leaving the decision to the full test.
+func inYSpan(p geom.Vec2, b geom.Box2) bool { return !(p.Y < b.Min.Y || p.Y >= b.Max.Y) }
+
+// pointInMovedPolygon is PointInPolygon(p, poly moved by v), without
+// building the moved copy.
+func pointInMovedPolygon(p geom.Vec2, poly geom.Polyline, v geom.Vec2) bool {
+	in := false
+	n := len(poly)
+	for i, j := 0, n-1; i < n; j, i = i, i+1 {
+		a, b := poly[i].Add(v), poly[j].Add(v)
+		if (a.Y > p.Y) != (b.Y > p.Y) && p.X < (b.X-a.X)*(p.Y-a.Y)/(b.Y-a.Y)+a.X {
+			in = !in
+		}
+	}
+	return in
 }
 
 // pointSegment2 returns the squared distance from x to segment a–b.
@@ -265,7 +307,7 @@ func pointSegment2(x, a, b geom.Vec2) float64 {
 func unitClear(u []member, v geom.Vec2, gap float64) bool {
 	for _, a := range u {
 		for _, b := range u {
-			if !apart(a, b.shift(v), gap) {
+			if !apartMoved(a, b, v, gap) {
 				return false
 			}
 		}
@@ -319,7 +361,7 @@ func latticeLayout(outline geom.Polyline, a float64, interlock bool, gap float64
 		for k := 0; k <= heights; k++ {
 			dy := -other.box.Max.Y + (first.box.Max.Y+other.box.Max.Y)*float64(k)/heights
 			start := first.box.Max.X + gap
-			dx := slide(start, func(t float64) bool { return apart(first, other.shift(geom.Vec2{X: t, Y: dy}), gap) })
+			dx := slide(start, func(t float64) bool { return apartMoved(first, other, geom.Vec2{X: t, Y: dy}, gap) })
 			cand := []member{first, other.shift(geom.Vec2{X: dx, Y: dy})}
 			b := unitBox(cand)
 			if area := b.Size().X * b.Size().Y; area < bestArea-1e-9 {
