@@ -213,24 +213,73 @@ func apart(a, b member, gap float64) bool {
 		a.box.Min.Y-gap >= b.box.Max.Y || b.box.Min.Y-gap >= a.box.Max.Y {
 		return true
 	}
-	return polygonsApart(a.poly, b.poly, gap)
+	return polygonsApart(a.poly, b.poly, move{}, gap)
 }
 
-// polygonsApart reports whether two closed polygons keep at least gap
-// apart: no edge of one comes within gap of an edge of the other and
-// neither holds the other. Edge pairs whose boxes are further apart than
-// gap are skipped; distances are compared squared.
-func polygonsApart(a, b geom.Polyline, gap float64) bool {
-	if PointInPolygon(a[0], b) || PointInPolygon(b[0], a) {
+// apartMoved reports whether a and b moved by v keep at least gap apart,
+// as apart(a, b.shift(v), gap) would, without building the moved copy.
+func apartMoved(a, b member, v geom.Vec2, gap float64) bool {
+	bMin, bMax := b.box.Min.Add(v), b.box.Max.Add(v)
+	if a.box.Min.X-gap >= bMax.X || bMin.X-gap >= a.box.Max.X ||
+		a.box.Min.Y-gap >= bMax.Y || bMin.Y-gap >= a.box.Max.Y {
+		return true
+	}
+	return polygonsApart(a.poly, b.poly, move{v: v, on: true}, gap)
+}
+
+// move is an optional shift of a polygon's points, applied on the fly.
+type move struct {
+	v  geom.Vec2
+	on bool
+}
+
+// of returns p moved: exactly the point shift's placement (a turn by 0,
+// then v) gives, to the bit, or p itself when the move is off.
+func (m move) of(p geom.Vec2) geom.Vec2 {
+	if !m.on {
+		return p
+	}
+	// Rotate by 0: sin 0 = 0, cos 0 = 1, kept as products so that signed
+	// zeros and infinities come out as the placement's do.
+	const s, c = 0.0, 1.0
+	return geom.Vec2{X: c*p.X - s*p.Y + m.v.X, Y: s*p.X + c*p.Y + m.v.Y}
+}
+
+// polygonsApart reports whether closed polygon a and closed polygon b
+// moved by m keep at least gap apart: no edge of one comes within gap of
+// an edge of the other and neither holds the other. Edge pairs whose boxes
+// are further apart than gap are skipped, and so is every edge of a whose
+// box is further than gap from the whole of b; distances are compared
+// squared. Nothing is allocated.
+func polygonsApart(a, b geom.Polyline, m move, gap float64) bool {
+	ab, aOK := pointBox(a, move{})
+	bb, bOK := pointBox(b, m)
+	if !aOK || !bOK {
+		// A NaN: no pre-check can be trusted, so none prunes anything.
+		inf := math.Inf(1)
+		ab = geom.Box2{Min: geom.Vec2{X: -inf, Y: -inf}, Max: geom.Vec2{X: inf, Y: inf}}
+		bb = ab
+	}
+	// A point outside a polygon's span in y crosses none of its edges.
+	if inYSpan(a[0], bb) && pointInMovedPolygon(a[0], b, m) {
 		return false
+	}
+	if b0 := m.of(b[0]); inYSpan(b0, ab) && PointInPolygon(b0, a) {
+		return false
+	}
+	if bb.Max.X < ab.Min.X-gap || bb.Min.X > ab.Max.X+gap || bb.Max.Y < ab.Min.Y-gap || bb.Min.Y > ab.Max.Y+gap {
+		return true // every edge pair below would be skipped
 	}
 	g2 := gap * gap
 	for i := range a {
 		p, q := a[i], a[(i+1)%len(a)]
 		minX, maxX := math.Min(p.X, q.X)-gap, math.Max(p.X, q.X)+gap
 		minY, maxY := math.Min(p.Y, q.Y)-gap, math.Max(p.Y, q.Y)+gap
+		if bb.Max.X < minX || bb.Min.X > maxX || bb.Max.Y < minY || bb.Min.Y > maxY {
+			continue // every edge of b is skipped below
+		}
 		for j := range b {
-			r, s := b[j], b[(j+1)%len(b)]
+			r, s := m.of(b[j]), m.of(b[(j+1)%len(b)])
 			if (r.X < minX && s.X < minX) || (r.X > maxX && s.X > maxX) ||
 				(r.Y < minY && s.Y < minY) || (r.Y > maxY && s.Y > maxY) {
 				continue
@@ -242,6 +291,48 @@ func polygonsApart(a, b geom.Polyline, gap float64) bool {
 		}
 	}
 	return true
+}
+
+// inYSpan reports whether p.Y lies in [b.Min.Y, b.Max.Y): outside it, no
+// edge of a polygon inside b straddles p's height (PointInPolygon's test),
+// so p is not inside.
+func inYSpan(p geom.Vec2, b geom.Box2) bool { return p.Y >= b.Min.Y && p.Y < b.Max.Y }
+
+// pointBox returns the box round the points of poly moved by m, and false
+// when a coordinate is NaN (the box then means nothing).
+func pointBox(poly geom.Polyline, m move) (geom.Box2, bool) {
+	p0 := m.of(poly[0])
+	b := geom.Box2{Min: p0, Max: p0}
+	ok := true
+	for _, p := range poly {
+		p = m.of(p)
+		ok = ok && p.X == p.X && p.Y == p.Y
+		if p.X < b.Min.X {
+			b.Min.X = p.X
+		} else if p.X > b.Max.X {
+			b.Max.X = p.X
+		}
+		if p.Y < b.Min.Y {
+			b.Min.Y = p.Y
+		} else if p.Y > b.Max.Y {
+			b.Max.Y = p.Y
+		}
+	}
+	return b, ok
+}
+
+// pointInMovedPolygon is PointInPolygon(p, poly moved by m), without
+// building the moved copy.
+func pointInMovedPolygon(p geom.Vec2, poly geom.Polyline, m move) bool {
+	in := false
+	n := len(poly)
+	for i, j := 0, n-1; i < n; j, i = i, i+1 {
+		a, b := m.of(poly[i]), m.of(poly[j])
+		if (a.Y > p.Y) != (b.Y > p.Y) && p.X < (b.X-a.X)*(p.Y-a.Y)/(b.Y-a.Y)+a.X {
+			in = !in
+		}
+	}
+	return in
 }
 
 // pointSegment2 returns the squared distance from x to segment a–b.
@@ -265,7 +356,7 @@ func pointSegment2(x, a, b geom.Vec2) float64 {
 func unitClear(u []member, v geom.Vec2, gap float64) bool {
 	for _, a := range u {
 		for _, b := range u {
-			if !apart(a, b.shift(v), gap) {
+			if !apartMoved(a, b, v, gap) {
 				return false
 			}
 		}
@@ -319,7 +410,7 @@ func latticeLayout(outline geom.Polyline, a float64, interlock bool, gap float64
 		for k := 0; k <= heights; k++ {
 			dy := -other.box.Max.Y + (first.box.Max.Y+other.box.Max.Y)*float64(k)/heights
 			start := first.box.Max.X + gap
-			dx := slide(start, func(t float64) bool { return apart(first, other.shift(geom.Vec2{X: t, Y: dy}), gap) })
+			dx := slide(start, func(t float64) bool { return apartMoved(first, other, geom.Vec2{X: t, Y: dy}, gap) })
 			cand := []member{first, other.shift(geom.Vec2{X: dx, Y: dy})}
 			b := unitBox(cand)
 			if area := b.Size().X * b.Size().Y; area < bestArea-1e-9 {
@@ -381,9 +472,12 @@ func fillSheet(u []member, px, sx, py float64, s Sheet) []placedPoly {
 		for i := -1; area.Min.X+x0+float64(i)*px <= area.Max.X; i++ {
 			v := area.Min.Add(geom.Vec2{X: x0 + float64(i)*px, Y: float64(j) * py})
 			for _, m := range u {
-				mm := m.shift(v)
-				if mm.box.Min.X >= area.Min.X-1e-9 && mm.box.Min.Y >= area.Min.Y-1e-9 &&
-					mm.box.Max.X <= area.Max.X+1e-9 && mm.box.Max.Y <= area.Max.Y+1e-9 {
+				// The box first (as shift moves it), the outline only for a
+				// part that is kept.
+				bMin, bMax := m.box.Min.Add(v), m.box.Max.Add(v)
+				if bMin.X >= area.Min.X-1e-9 && bMin.Y >= area.Min.Y-1e-9 &&
+					bMax.X <= area.Max.X+1e-9 && bMax.Y <= area.Max.Y+1e-9 {
+					mm := m.shift(v)
 					out = append(out, placedPoly{poly: mm.poly, box: mm.box, pl: mm.pl})
 				}
 			}

@@ -10,7 +10,6 @@ import (
 	"encoding/xml"
 	"errors"
 	"io"
-	"regexp"
 	"strings"
 )
 
@@ -20,13 +19,6 @@ var forbiddenSVG = map[string]bool{
 	"script": true, "foreignObject": true, "iframe": true, "style": true,
 	"object": true, "embed": true, "audio": true, "video": true,
 }
-
-var (
-	idAttr      = regexp.MustCompile(`(\sid=")([^"]*)(")`)
-	labelAttrs  = regexp.MustCompile(`(\saria-(?:labelledby|describedby)=")([^"]*)(")`)
-	localHref   = regexp.MustCompile(`(\s(?:xlink:)?href="#)([^"]*)(")`)
-	localURLRef = regexp.MustCompile(`(url\(#)([^)]*)(\))`)
-)
 
 // inlineSVG returns doc ready to inline: from its root element on, with ids
 // prefixed by prefix, and the accessible name alt added to the root when
@@ -67,18 +59,7 @@ func inlineSVG(doc []byte, prefix, alt string) ([]byte, error) {
 					return nil, err
 				}
 			}
-			tag := string(raw)
-			tag = idAttr.ReplaceAllString(tag, "${1}"+prefix+"${2}${3}")
-			tag = localHref.ReplaceAllString(tag, "${1}"+prefix+"${2}${3}")
-			tag = localURLRef.ReplaceAllString(tag, "${1}"+prefix+"${2}${3}")
-			tag = labelAttrs.ReplaceAllStringFunc(tag, func(m string) string {
-				p := labelAttrs.FindStringSubmatch(m)
-				ids := strings.Fields(p[2])
-				for i := range ids {
-					ids[i] = prefix + ids[i]
-				}
-				return p[1] + strings.Join(ids, " ") + p[3]
-			})
+			tag := prefixIDs(string(raw), prefix)
 			if depth == 0 {
 				rootEnd = out.Len() + len(tag)
 				if strings.HasSuffix(tag, "/>") {
@@ -134,4 +115,94 @@ func checkAttr(a xml.Attr) error {
 		return errors.New("SVG refers outside itself: " + a.Name.Local + "=" + a.Value)
 	}
 	return nil
+}
+
+// The id rewriting below scans a raw start tag for four patterns, in this
+// order, each taken leftmost first and without overlap (the matches a
+// regular expression's replace-all would take), with \s the whitespace
+// class [\t\n\f\r ]:
+//
+//	\sid="VALUE"                          VALUE → prefix+VALUE
+//	\s(xlink:)?href="#VALUE"              VALUE → prefix+VALUE
+//	url(#VALUE)                           VALUE → prefix+VALUE
+//	\saria-(labelledby|describedby)="IDS"  each id in IDS → prefix+id
+//
+// where VALUE runs to the first closing quote (or parenthesis) and IDS is
+// split into ids by strings.Fields and joined again with single spaces.
+
+var (
+	idLeads    = []string{`id="`}
+	hrefLeads  = []string{`xlink:href="#`, `href="#`}
+	urlLeads   = []string{`url(#`}
+	labelLeads = []string{`aria-labelledby="`, `aria-describedby="`}
+)
+
+// prefixIDs returns the raw start tag with every id it defines or refers to
+// prefixed by prefix (taken literally). A tag with nothing to rewrite comes
+// back as it is, uncopied.
+func prefixIDs(tag, prefix string) string {
+	prefixed := func(v string) string { return prefix + v }
+	tag = rewriteValues(tag, true, idLeads, '"', prefixed)
+	tag = rewriteValues(tag, true, hrefLeads, '"', prefixed)
+	tag = rewriteValues(tag, false, urlLeads, ')', prefixed)
+	return rewriteValues(tag, true, labelLeads, '"', func(v string) string {
+		ids := strings.Fields(v)
+		for i := range ids {
+			ids[i] = prefix + ids[i]
+		}
+		return strings.Join(ids, " ")
+	})
+}
+
+// rewriteValues returns s with the value of each match replaced by
+// f(value). A match is, at some position, one whitespace byte of \s (when
+// ws is set), then the first of leads found there, then a value holding no
+// stop byte, then the stop byte. Matches are found left to right, the
+// search going on after each match's stop byte, as a regular expression's
+// replace-all does. s comes back unchanged, without copying, when nothing
+// matches.
+func rewriteValues(s string, ws bool, leads []string, stop byte, f func(string) string) string {
+	var out strings.Builder
+	last := 0 // s[:last] is written; stays 0 until the first match
+	for i := 0; i < len(s); i++ {
+		j := i
+		if ws {
+			if !isRESpace(s[i]) {
+				continue
+			}
+			j++
+		}
+		k := -1
+		for _, l := range leads {
+			if strings.HasPrefix(s[j:], l) {
+				k = j + len(l)
+				break
+			}
+		}
+		if k < 0 {
+			continue
+		}
+		e := strings.IndexByte(s[k:], stop)
+		if e < 0 {
+			continue
+		}
+		if last == 0 {
+			out.Grow(len(s) + 32)
+		}
+		out.WriteString(s[last:k])
+		out.WriteString(f(s[k : k+e]))
+		last = k + e // the stop byte is written with the next piece
+		i = k + e    // the loop's i++ steps past the stop byte
+	}
+	if last == 0 {
+		return s
+	}
+	out.WriteString(s[last:])
+	return out.String()
+}
+
+// isRESpace reports whether c is in the \s class of Go's regular
+// expressions: tab, newline, form feed, carriage return or space.
+func isRESpace(c byte) bool {
+	return c == ' ' || c == '\t' || c == '\n' || c == '\f' || c == '\r'
 }
