@@ -1,6 +1,7 @@
 package parts
 
 import (
+	"coilwright/parts/spec/spectest"
 	"errors"
 	"fmt"
 	"math"
@@ -12,48 +13,12 @@ import (
 	"coilwright/parts/wire"
 )
 
-// specText returns a complete spec with the given [coil] body and [wire]
-// body; the rest is an invented demo.
-func specText(freqMHz float64, coil, wire string) string {
-	return fmt.Sprintf(`kit = "Test Bench Kit"
-frequency_mhz = %g
-
-[coil]
-%s
-
-[wire]
-%s
-
-[reflector]
-shape = "disc"
-diameter_mm = 120.0
-thickness_mm = 1.6
-
-[dowel]
-material = "ptfe"
-
-[coax]
-type = "semi-rigid-141"
-length_mm = 100.0
-`, freqMHz, coil, wire)
-}
+var specText = spectest.SpecText
 
 const (
-	cylinder5800 = `shape = "cylindrical"
-turns = 6.0
-base_circumference_lambda = 1.0
-pitch_angle_deg = 12.5`
-	coneSpacing5800 = `shape = "conical"
-turns = 5.0
-base_diameter_mm = 17.5
-top_diameter_mm = 12.5
-pitch_angle_deg = 13.0`
-	coneAngle5800 = `shape = "conical"
-turns = 5.0
-base_diameter_mm = 17.5
-top_diameter_mm = 12.5
-pitch_angle_deg = 13.0
-pitch_mode = "constant_angle"`
+	cylinder5800    = spectest.Cylinder5800
+	coneSpacing5800 = spectest.ConeSpacing5800
+	coneAngle5800   = spectest.ConeSpacing5800 + "\npitch_mode = \"constant_angle\""
 )
 
 // mustDesign parses text and works out its design, failing the test on

@@ -1,8 +1,8 @@
 package report
 
 import (
+	"coilwright/parts/spec/spectest"
 	"encoding/json"
-	"fmt"
 	"math"
 	"strings"
 	"testing"
@@ -16,43 +16,11 @@ import (
 
 var mustDesign = designtest.MustDesign
 
-// specText is a spec at freqMHz with the given [coil] and [wire] bodies.
-func specText(freqMHz float64, coil, wire string) string {
-	return fmt.Sprintf(`kit = "Test Bench Kit"
-frequency_mhz = %g
+var specText = spectest.SpecText
 
-[coil]
-%s
-
-[wire]
-%s
-
-[reflector]
-shape = "disc"
-diameter_mm = 120.0
-thickness_mm = 1.6
-
-[dowel]
-material = "ptfe"
-
-[coax]
-type = "semi-rigid-141"
-length_mm = 100.0
-`, freqMHz, coil, wire)
-}
-
-// Coils at 5.8 GHz: a one-wavelength cylinder, and a cone given by its
-// diameters and pitch angle.
 const (
-	cylinder5800 = `shape = "cylindrical"
-turns = 6.0
-base_circumference_lambda = 1.0
-pitch_angle_deg = 12.5`
-	coneSpacing5800 = `shape = "conical"
-turns = 5.0
-base_diameter_mm = 17.5
-top_diameter_mm = 12.5
-pitch_angle_deg = 13.0`
+	cylinder5800    = spectest.Cylinder5800
+	coneSpacing5800 = spectest.ConeSpacing5800
 )
 
 func TestReportFromDemo(t *testing.T) {
