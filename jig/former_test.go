@@ -1,24 +1,17 @@
 package jig
 
 import (
-	"bytes"
 	"fmt"
 	"math"
 	"math/rand/v2"
-	"os"
-	"os/exec"
-	"path/filepath"
-	"regexp"
 	"slices"
 	"sort"
-	"strconv"
 	"testing"
 
 	"gonum.org/v1/gonum/mat"
 
 	"coilwright/cam/checktool"
 	"coilwright/cam/geom"
-	"coilwright/cam/stl"
 	"coilwright/jig/mesh"
 	"coilwright/parts"
 	"coilwright/parts/spec"
@@ -170,54 +163,13 @@ func TestDemoFormerAccuracy(t *testing.T) {
 // TestDemoFormerAdmesh writes the demo former as STL and reads admesh's
 // report: no repairs of any kind and one part.
 func TestDemoFormerAdmesh(t *testing.T) {
-	bin := checktool.Need(t, "admesh")
+	checktool.Need(t, "admesh")
 	d, f := demoFormer(t, templates.DefaultDemo)
 	m, err := f.Mesh(d.Spec.Former.ToleranceMM)
 	if err != nil {
 		t.Fatal(err)
 	}
-	path := filepath.Join(t.TempDir(), "former.stl")
-	var buf bytes.Buffer
-	if err := stl.WriteSTL(&buf, m, stl.STLOptions{}); err != nil {
-		t.Fatal(err)
-	}
-	if err := os.WriteFile(path, buf.Bytes(), 0o644); err != nil {
-		t.Fatal(err)
-	}
-	out, err := exec.Command(bin, path).CombinedOutput()
-	if err != nil {
-		t.Fatalf("admesh: %v\n%s", err, out)
-	}
-	// Source: admesh's report format; a clean mesh shows 0 in each repair
-	// counter and in the first column of disconnected facets.
-	want := map[string]string{
-		"Total disconnected facets": "0",
-		"Degenerate facets":         "0",
-		"Edges fixed":               "0",
-		"Facets removed":            "0",
-		"Facets added":              "0",
-		"Facets reversed":           "0",
-		"Backwards edges":           "0",
-		"Normals fixed":             "0",
-		"Number of parts":           "1",
-		"Number of facets":          strconv.Itoa(len(m.Faces)),
-	}
-	for key, v := range want {
-		re := regexp.MustCompile(regexp.QuoteMeta(key) + `\s*:\s*(\S+)`)
-		got := re.FindSubmatch(out)
-		if got == nil || string(got[1]) != v {
-			t.Errorf("admesh %q = %q, want %s", key, got, v)
-		}
-	}
-	vol := regexp.MustCompile(`Volume\s*:\s*(\S+)`).FindSubmatch(out)
-	if vol == nil {
-		t.Fatalf("no volume in admesh report:\n%s", out)
-	}
-	v, _ := strconv.ParseFloat(string(vol[1]), 64)
-	// admesh sums in float32 from float32 corners; 1e-4 relative covers it.
-	if math.Abs(v-m.Volume()) > 1e-4*m.Volume() {
-		t.Errorf("admesh volume %g, mesh volume %g", v, m.Volume())
-	}
+	admeshClean(t, m)
 }
 
 // meridian returns the points where the mesh crosses the half-plane through

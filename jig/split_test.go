@@ -8,6 +8,7 @@ import (
 	"os/exec"
 	"path/filepath"
 	"regexp"
+	"strconv"
 	"strings"
 	"testing"
 
@@ -267,12 +268,15 @@ func checkBlindSplit(t *testing.T, f *Former, pl FormerPlan, sp *SplitPlan) {
 	t.Logf("section %d: channel %.2f mm from the wire centre, blind bore %.1f mm from the far end", feed.Number, lead, p.BoreDepth)
 }
 
-// admeshClean writes m as STL and holds admesh's report to no repairs and
-// one part. Source: admesh's report format.
+// admeshClean writes m as STL and holds admesh's report to a clean,
+// closed mesh: no repairs of any kind, one part, every facet read, and
+// admesh's volume equal to the mesh's.
+// Source: admesh's report format; a clean mesh shows 0 in each repair
+// counter and in the first column of disconnected facets.
 func admeshClean(t *testing.T, m *geom.Mesh) {
 	t.Helper()
 	bin := checktool.Need(t, "admesh")
-	path := filepath.Join(t.TempDir(), "section.stl")
+	path := filepath.Join(t.TempDir(), "mesh.stl")
 	var buf bytes.Buffer
 	if err := stl.WriteSTL(&buf, m, stl.STLOptions{}); err != nil {
 		t.Fatal(err)
@@ -284,11 +288,32 @@ func admeshClean(t *testing.T, m *geom.Mesh) {
 	if err != nil {
 		t.Fatalf("admesh: %v\n%s", err, out)
 	}
-	for key, v := range map[string]string{"Edges fixed": "0", "Facets removed": "0", "Facets added": "0", "Facets reversed": "0", "Backwards edges": "0", "Number of parts": "1"} {
+	want := map[string]string{
+		"Total disconnected facets": "0",
+		"Degenerate facets":         "0",
+		"Edges fixed":               "0",
+		"Facets removed":            "0",
+		"Facets added":              "0",
+		"Facets reversed":           "0",
+		"Backwards edges":           "0",
+		"Normals fixed":             "0",
+		"Number of parts":           "1",
+		"Number of facets":          strconv.Itoa(len(m.Faces)),
+	}
+	for key, v := range want {
 		got := regexp.MustCompile(regexp.QuoteMeta(key) + `\s*:\s*(\S+)`).FindSubmatch(out)
 		if got == nil || string(got[1]) != v {
 			t.Errorf("admesh %q = %q, want %s", key, got, v)
 		}
+	}
+	vol := regexp.MustCompile(`Volume\s*:\s*(\S+)`).FindSubmatch(out)
+	if vol == nil {
+		t.Fatalf("no volume in admesh report:\n%s", out)
+	}
+	v, _ := strconv.ParseFloat(string(vol[1]), 64)
+	// admesh sums in float32 from float32 corners; 1e-4 relative covers it.
+	if math.Abs(v-m.Volume()) > 1e-4*m.Volume() {
+		t.Errorf("admesh volume %g, mesh volume %g", v, m.Volume())
 	}
 }
 
